@@ -1,0 +1,37 @@
+# Set-up is part of every target: a fresh clone needs only python3 (3.11+) and make.
+PYTHON ?= python3
+VENV := .venv
+PY := $(VENV)/bin/python
+STAMP := $(VENV)/.installed-stamp
+
+.PHONY: demo test bench lint format clean
+
+$(STAMP): pyproject.toml
+	$(PYTHON) -m venv $(VENV)
+	$(PY) -m pip install --quiet --upgrade pip
+	$(PY) -m pip install --quiet -e ".[dev]"
+	touch $(STAMP)
+
+## demo: write the demo calc sheet (HTML and PDF) into out/
+demo: $(STAMP)
+	$(PY) -m calcsheet.demo out
+
+## test: lint, then the whole test suite
+test: $(STAMP)
+	$(PY) -m ruff check .
+	$(PY) -m ruff format --check .
+	$(PY) -m pytest
+
+## bench: speed figures and ratios against the targets (not a test)
+bench: $(STAMP)
+	$(PY) bench/run.py
+
+lint: $(STAMP)
+	$(PY) -m ruff check .
+
+format: $(STAMP)
+	$(PY) -m ruff format .
+	$(PY) -m ruff check --fix .
+
+clean:
+	rm -rf $(VENV) out build dist *.egg-info .pytest_cache .ruff_cache

@@ -1,0 +1,116 @@
+"""Speed figures and ratios against the targets (``make bench``). Not a test: it prints.
+
+Targets (from the issues):
+- re-evaluate and re-print a 40-step sheet after one input change: under 20 ms.
+"""
+
+from __future__ import annotations
+
+import statistics
+import subprocess
+import sys
+import time
+from collections.abc import Callable
+from pathlib import Path
+
+from calcsheet.engine import Sheet
+from calcsheet.engine.functions import cos, sin, sqrt
+
+TARGETS = ("latex", "mathml", "typst")
+
+
+def forty_step_sheet() -> Sheet:
+    """A 40-step chain with fractions, powers, roots and trigonometry."""
+    sheet = Sheet("bench")
+    with sheet:
+        P = sheet.input("P", "6.5 kip", "Load", dimension="force")
+        theta = sheet.input("theta", "30 deg", "Angle", dimension="angle")
+        A = sheet.input("A", "7.58 in^2", "Area", dimension="area")
+        I = sheet.input("I_x", "39.5 in^4", "Inertia", dimension="moment of inertia")
+        c = sheet.input("c", "3 in", "Fibre", dimension="length")
+        e = sheet.input("e", "2 in", "Offset", dimension="length")
+        force = P * cos(theta)
+        for index in range(0, 40, 4):
+            stress = sheet.step(
+                f"s_{index}", force * e * c / I + P * sin(theta) / A, "Stress", unit="ksi"
+            )
+            root = sheet.step(f"s_{index + 1}", sqrt(stress**2 + (P / A) ** 2), "Root", unit="ksi")
+            total = sheet.step(f"s_{index + 2}", stress / 2 + root - P / A, "Sum", unit="ksi")
+            force = sheet.step(
+                f"s_{index + 3}", total * A - P * cos(theta) / 2, "Force", unit="kip"
+            )
+    return sheet
+
+
+def timed(action: Callable[[], object], repeat: int) -> float:
+    """Median wall time of ``action`` in milliseconds."""
+    samples = []
+    for _ in range(repeat):
+        start = time.perf_counter()
+        action()
+        samples.append((time.perf_counter() - start) * 1000)
+    return statistics.median(samples)
+
+
+def print_all(sheet: Sheet) -> None:
+    for target in TARGETS:
+        for step in sheet.steps:
+            sheet.equation(step, target).chain()
+
+
+def report(name: str, measured_ms: float, target_ms: float | None = None) -> None:
+    if target_ms is None:
+        print(f"{name:<58} {measured_ms:9.2f} ms")
+    else:
+        ratio = measured_ms / target_ms
+        verdict = "meets" if ratio <= 1 else "MISSES"
+        print(
+            f"{name:<58} {measured_ms:9.2f} ms  target {target_ms:7.1f} ms  "
+            f"ratio {ratio:5.2f}  {verdict}"
+        )
+
+
+def main() -> None:
+    print("calcsheet benchmark (median wall time)")
+    report("engine: build a 40-step sheet", timed(forty_step_sheet, 5))
+    sheet = forty_step_sheet()
+    first_print = timed(lambda: print_all(forty_step_sheet()), 3)
+    report("engine: build + first print of 40 steps to 3 targets", first_print)
+    print_all(sheet)
+    loads = iter(f"{6.5 + 0.01 * i} kip" for i in range(10_000))
+
+    def change_and_reprint() -> None:
+        sheet.set_input("P", next(loads))
+        print_all(sheet)
+
+    report(
+        "engine: one input change, re-evaluate + re-print 3 targets",
+        timed(change_and_reprint, 30),
+        20,
+    )
+    report(
+        "engine: one input change, re-evaluate only",
+        timed(lambda: sheet.set_input("P", next(loads)), 30),
+    )
+
+    from calcsheet.demo import outrigger_sheet
+    from calcsheet.export.files import pdf_bytes
+    from calcsheet.render.html import render_html
+
+    demo = outrigger_sheet()
+    render_html(demo)
+    pdf_bytes(demo)
+    report("document: demo sheet to HTML, warm", timed(lambda: render_html(demo), 10))
+    report("document: demo sheet to PDF, warm", timed(lambda: pdf_bytes(demo), 5), 150)
+    out = Path("out/bench")
+    cold = timed(
+        lambda: subprocess.run(
+            [sys.executable, "-m", "calcsheet.demo", str(out)], check=True, capture_output=True
+        ),
+        3,
+    )
+    report("document: cold command, start to PDF and HTML on disk", cold, 2500)
+
+
+if __name__ == "__main__":
+    main()

@@ -1,0 +1,27 @@
+"""The calc engine: write a formula once; it computes with units and prints three ways.
+
+Public API for calc authors (built-in calcs use nothing else)::
+
+    from calcsheet.engine import Sheet, as_written
+    from calcsheet.engine.functions import sqrt, sin, cos, tan, Min, Max, Abs, Piecewise
+"""
+
+from calcsheet.engine.parts import CAUTIONS, Check, Figure, Heading, Input, Prose, Step, TitleBlock
+from calcsheet.engine.printers import TARGETS, as_written
+from calcsheet.engine.sheet import CheckText, Equation, Sheet
+
+__all__ = [
+    "CAUTIONS",
+    "TARGETS",
+    "Check",
+    "CheckText",
+    "Equation",
+    "Figure",
+    "Heading",
+    "Input",
+    "Prose",
+    "Sheet",
+    "Step",
+    "TitleBlock",
+    "as_written",
+]

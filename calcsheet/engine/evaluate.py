@@ -1,0 +1,276 @@
+"""Evaluate a step's sympy expression with pint quantities.
+
+The expression tree is walked node by node, so that when two quantities do not
+fit together (a force added to a length, the sine of a stress) the error names
+the step, the sub-expression and the units that clash. Trigonometric functions
+take angles in any angle unit; inverse ones return radians.
+"""
+
+from __future__ import annotations
+
+import math
+from collections.abc import Callable, Mapping
+
+import pint
+import sympy as sp
+
+from calcsheet.errors import DefinitionError, DimensionError, EvaluationError
+from calcsheet.units import Quantity, ureg
+
+Value = pint.Quantity | float
+
+_RADIAN = ureg.radian
+
+
+class _ClashError(Exception):
+    """Raised inside the walk; turned into a DimensionError that names the step."""
+
+    def __init__(self, node: sp.Basic, detail: str) -> None:
+        self.node = node
+        self.detail = detail
+
+
+def evaluate(
+    expr: sp.Basic, values: Mapping[sp.Symbol, pint.Quantity], *, step: str
+) -> pint.Quantity:
+    """Evaluate ``expr`` with the quantities in ``values``; errors name ``step``."""
+    try:
+        result = _walk(expr, values)
+    except _ClashError as clash:
+        raise DimensionError(
+            f"step {step!r}: {clash.detail} in {sp.sstr(clash.node)} "
+            f"(whole expression: {sp.sstr(expr)})"
+        ) from None
+    except KeyError as missing:
+        raise DefinitionError(
+            f"step {step!r} uses {missing.args[0]} before it is defined"
+        ) from None
+    except (ZeroDivisionError, OverflowError, ValueError) as error:
+        raise EvaluationError(f"step {step!r}: {error} in {sp.sstr(expr)}") from None
+    quantity = result if isinstance(result, pint.Quantity) else Quantity(result)
+    magnitude = quantity.magnitude
+    if isinstance(magnitude, complex) or not math.isfinite(magnitude):
+        raise EvaluationError(
+            f"step {step!r}: the result {magnitude} is not a real, finite number "
+            f"(a square root of a negative value, or a division by zero?) in {sp.sstr(expr)}"
+        )
+    return quantity
+
+
+def chosen_branch(
+    expr: sp.Piecewise, values: Mapping[sp.Symbol, pint.Quantity], *, step: str
+) -> int:
+    """The index of the branch of ``expr`` that applies to ``values``."""
+    try:
+        for index, (_, condition) in enumerate(expr.args):
+            if _truth(condition, values):
+                return index
+    except _ClashError as clash:
+        raise DimensionError(f"step {step!r}: {clash.detail} in {sp.sstr(clash.node)}") from None
+    raise EvaluationError(f"step {step!r}: no branch of {sp.sstr(expr)} applies to these values")
+
+
+def _walk(node: sp.Basic, values: Mapping[sp.Symbol, pint.Quantity]) -> Value:
+    if node.is_Symbol:
+        return values[node]
+    if node.is_Number:
+        return float(node)
+    if node is sp.pi:
+        return math.pi
+    if node is sp.E:
+        return math.e
+    handler = _HANDLERS.get(type(node))
+    if handler is None:
+        for kind, candidate in _HANDLERS.items():
+            if isinstance(node, kind):
+                handler = candidate
+                break
+    if handler is None:
+        raise _ClashError(node, f"{type(node).__name__} is not a supported operation")
+    return handler(node, values)
+
+
+def _add(node: sp.Add, values: Mapping[sp.Symbol, pint.Quantity]) -> Value:
+    terms = [_walk(arg, values) for arg in node.args]
+    total = terms[0]
+    for term, arg in zip(terms[1:], node.args[1:], strict=True):
+        try:
+            total = total + term
+        except pint.DimensionalityError:
+            raise _ClashError(
+                node, f"cannot add {_describe(total)} and {_describe(term)} (term {sp.sstr(arg)})"
+            ) from None
+    return total
+
+
+def _mul(node: sp.Mul, values: Mapping[sp.Symbol, pint.Quantity]) -> Value:
+    product: Value = 1.0
+    for arg in node.args:
+        product = product * _walk(arg, values)
+    return product
+
+
+def _pow(node: sp.Pow, values: Mapping[sp.Symbol, pint.Quantity]) -> Value:
+    base = _walk(node.base, values)
+    exponent = _plain_number(_walk(node.exp, values), node, "an exponent")
+    if _magnitude(base) < 0 and not float(exponent).is_integer():
+        raise EvaluationError(
+            f"{sp.sstr(node)}: a fractional power of the negative value {_describe(base)}"
+        )
+    return base**exponent
+
+
+def _plain_number(value: Value, node: sp.Basic, role: str) -> float:
+    if isinstance(value, pint.Quantity):
+        if not value.dimensionless:
+            raise _ClashError(node, f"{role} must be a plain number, not {_describe(value)}")
+        return float(value.to("dimensionless").magnitude)
+    return float(value)
+
+
+def _angle_in_radians(value: Value, node: sp.Basic) -> float:
+    if isinstance(value, pint.Quantity):
+        if not value.dimensionless:
+            raise _ClashError(node, f"the argument must be an angle, not {_describe(value)}")
+        return float(value.to(_RADIAN).magnitude)
+    return float(value)
+
+
+def _trig(function: Callable[[float], float]) -> Callable[..., float]:
+    def handler(node: sp.Function, values: Mapping[sp.Symbol, pint.Quantity]) -> float:
+        return function(_angle_in_radians(_walk(node.args[0], values), node))
+
+    return handler
+
+
+def _inverse_trig(function: Callable[[float], float]) -> Callable[..., pint.Quantity]:
+    def handler(node: sp.Function, values: Mapping[sp.Symbol, pint.Quantity]) -> pint.Quantity:
+        argument = _plain_number(_walk(node.args[0], values), node, "the argument")
+        return Quantity(function(argument), _RADIAN)
+
+    return handler
+
+
+def _plain_function(function: Callable[[float], float]) -> Callable[..., float]:
+    def handler(node: sp.Function, values: Mapping[sp.Symbol, pint.Quantity]) -> float:
+        return function(_plain_number(_walk(node.args[0], values), node, "the argument"))
+
+    return handler
+
+
+def _atan2(node: sp.atan2, values: Mapping[sp.Symbol, pint.Quantity]) -> pint.Quantity:
+    y_value, x_value = (_walk(arg, values) for arg in node.args)
+    if isinstance(x_value, pint.Quantity) or isinstance(y_value, pint.Quantity):
+        y_quantity, x_quantity = Quantity(y_value), Quantity(x_value)
+        try:
+            x_magnitude = x_quantity.to(y_quantity.units).magnitude
+        except pint.DimensionalityError:
+            raise _ClashError(
+                node,
+                f"atan2 needs two values of one dimension, not {_describe(y_value)} "
+                f"and {_describe(x_value)}",
+            ) from None
+        return Quantity(math.atan2(y_quantity.magnitude, x_magnitude), _RADIAN)
+    return Quantity(math.atan2(y_value, x_value), _RADIAN)
+
+
+def _abs(node: sp.Abs, values: Mapping[sp.Symbol, pint.Quantity]) -> Value:
+    return abs(_walk(node.args[0], values))
+
+
+def _extreme(pick: Callable[..., Value]) -> Callable[..., Value]:
+    def handler(node: sp.Basic, values: Mapping[sp.Symbol, pint.Quantity]) -> Value:
+        candidates = [_walk(arg, values) for arg in node.args]
+        try:
+            return pick(candidates, key=_comparable(candidates[0], node))
+        except pint.DimensionalityError:
+            raise _ClashError(node, "cannot compare values of different dimensions") from None
+
+    return handler
+
+
+def _comparable(reference: Value, node: sp.Basic) -> Callable[[Value], float]:
+    unit = reference.units if isinstance(reference, pint.Quantity) else None
+
+    def key(value: Value) -> float:
+        if unit is None:
+            return _plain_number(value, node, "a compared value")
+        if not isinstance(value, pint.Quantity):
+            value = Quantity(value)
+        return float(value.to(unit).magnitude)
+
+    return key
+
+
+def _piecewise(node: sp.Piecewise, values: Mapping[sp.Symbol, pint.Quantity]) -> Value:
+    for branch_expr, condition in node.args:
+        if _truth(condition, values):
+            return _walk(branch_expr, values)
+    raise EvaluationError(f"no branch of {sp.sstr(node)} applies to these values")
+
+
+_COMPARISONS: dict[type, Callable[[float, float], bool]] = {
+    sp.StrictLessThan: lambda a, b: a < b,
+    sp.LessThan: lambda a, b: a <= b,
+    sp.StrictGreaterThan: lambda a, b: a > b,
+    sp.GreaterThan: lambda a, b: a >= b,
+    sp.Equality: lambda a, b: a == b,
+    sp.Unequality: lambda a, b: a != b,
+}
+
+
+def _truth(condition: sp.Basic, values: Mapping[sp.Symbol, pint.Quantity]) -> bool:
+    if condition is sp.true:
+        return True
+    if condition is sp.false:
+        return False
+    if isinstance(condition, sp.And):
+        return all(_truth(arg, values) for arg in condition.args)
+    if isinstance(condition, sp.Or):
+        return any(_truth(arg, values) for arg in condition.args)
+    if isinstance(condition, sp.Not):
+        return not _truth(condition.args[0], values)
+    compare = _COMPARISONS.get(type(condition))
+    if compare is None:
+        raise _ClashError(condition, f"{type(condition).__name__} is not a supported condition")
+    left = _walk(condition.lhs, values)
+    right = _walk(condition.rhs, values)
+    key = _comparable(left, condition)
+    try:
+        return compare(key(left), key(right))
+    except pint.DimensionalityError:
+        raise _ClashError(
+            condition, f"cannot compare {_describe(left)} with {_describe(right)}"
+        ) from None
+
+
+def _magnitude(value: Value) -> float:
+    return value.magnitude if isinstance(value, pint.Quantity) else value
+
+
+def _describe(value: Value) -> str:
+    if isinstance(value, pint.Quantity):
+        if value.unitless:
+            return f"the number {value.magnitude:.4g}"
+        return f"{value.magnitude:.4g} {value.units:~P} ({value.dimensionality})"
+    return f"the number {value:.4g}"
+
+
+_HANDLERS: dict[type, Callable[..., Value]] = {
+    sp.Add: _add,
+    sp.Mul: _mul,
+    sp.Pow: _pow,
+    sp.sin: _trig(math.sin),
+    sp.cos: _trig(math.cos),
+    sp.tan: _trig(math.tan),
+    sp.asin: _inverse_trig(math.asin),
+    sp.acos: _inverse_trig(math.acos),
+    sp.atan: _inverse_trig(math.atan),
+    sp.atan2: _atan2,
+    sp.exp: _plain_function(math.exp),
+    sp.log: _plain_function(math.log),
+    sp.Abs: _abs,
+    sp.Min: _extreme(min),
+    sp.Max: _extreme(max),
+    sp.Piecewise: _piecewise,
+}

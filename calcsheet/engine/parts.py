@@ -1,0 +1,139 @@
+"""The parts a sheet is made of: headings, prose, inputs, steps, checks and figures.
+
+Parts are plain data. The sheet fills in their values; renderers only read them.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass, field
+from typing import TYPE_CHECKING, Any
+
+import pint
+import sympy as sp
+
+if TYPE_CHECKING:
+    from calcsheet.engine.sheet import Sheet
+
+
+CAUTIONS: tuple[str, ...] = (
+    "Prepared for review by a qualified engineer; not valid until checked and sealed.",
+    "Verify every clause against the governing code edition and local amendments.",
+    "This tool does not replace engineering judgement: confirm loads, geometry, "
+    "connections and stability beyond what this sheet covers.",
+)
+
+
+@dataclass
+class TitleBlock:
+    """What a reviewer looks for at the top of every page of a calc package."""
+
+    project: str = ""
+    project_number: str = ""
+    subject: str = ""
+    calc_number: str = ""
+    prepared_by: str = ""
+    prepared_date: str = ""
+    checked_by: str = ""
+    checked_date: str = ""
+    revision: str = "0"
+
+
+@dataclass(eq=False)
+class Heading:
+    """A part title; level 1 starts a part of the calc, level 2 a subsection."""
+
+    text: str
+    level: int = 1
+
+
+@dataclass(eq=False)
+class Prose:
+    """A paragraph of explanation: assumptions, sign convention, notes to the checker."""
+
+    text: str
+
+
+@dataclass(eq=False)
+class Figure:
+    """An SVG drawing with a caption. The SVG is produced by calcsheet's own figure code."""
+
+    svg: str
+    caption: str = ""
+
+
+@dataclass(eq=False)
+class _Defined:
+    """Something that gives a symbol a value: an input or a step."""
+
+    symbol: sp.Symbol
+    description: str
+    reference: str
+    unit: pint.Unit | None
+    value: pint.Quantity | None = None
+    sheet: Sheet | None = field(default=None, repr=False)
+
+    @property
+    def name(self) -> str:
+        """The symbol's name as the calc author wrote it (``sigma_max``)."""
+        return self.symbol.name
+
+    def _repr_latex_(self) -> str:
+        if self.sheet is None:
+            return f"${self.name}$"
+        return "$$" + self.sheet.equation(self, "latex").chain() + "$$"
+
+    def _repr_html_(self) -> str:
+        if self.sheet is None:
+            return self.name
+        math = self.sheet.equation(self, "mathml").chain()
+        return f'<math display="block">{math}</math>'
+
+
+@dataclass(eq=False)
+class Input(_Defined):
+    """A value the engineer supplies, with the dimension it must have."""
+
+    dimension: str | None = None
+
+
+@dataclass(eq=False)
+class Step(_Defined):
+    """One line of the calc: symbol = expression, evaluated with units, with its reference."""
+
+    expr: sp.Basic = sp.S.Zero
+
+
+@dataclass(eq=False)
+class Check:
+    """Demand against capacity: utilization = demand / capacity, pass when it is at most 1."""
+
+    description: str
+    demand: sp.Basic
+    capacity: sp.Basic
+    reference: str = ""
+    demand_value: pint.Quantity | None = None
+    capacity_value: pint.Quantity | None = None
+    utilization: float | None = None
+    sheet: Sheet | None = field(default=None, repr=False)
+
+    @property
+    def passes(self) -> bool:
+        """True when the utilization is at most 1."""
+        return self.utilization is not None and self.utilization <= 1.0
+
+    @property
+    def status(self) -> str:
+        """OK or NOT OK, as written on a calc sheet."""
+        return "OK" if self.passes else "NOT OK"
+
+    def summary(self) -> dict[str, Any]:
+        """The check's result as plain data (for JSON and tables)."""
+        return {
+            "description": self.description,
+            "reference": self.reference,
+            "utilization": self.utilization,
+            "status": self.status,
+        }
+
+
+Part = Heading | Prose | Figure | Input | Step | Check

@@ -1,0 +1,478 @@
+"""The Sheet: an ordered calc of inputs, steps and checks, evaluated with units.
+
+Typical use, the same for built-in calcs and for a calc of one's own::
+
+    sheet = Sheet("Bracket check", units="US")
+    with sheet:                         # keep products in the order written
+        P = sheet.input("P", "6.5 kip", "Applied load", dimension="force")
+        A = sheet.input("A", "7.58 in^2", "Area", dimension="area")
+        f_a = sheet.step("f_a", P / A, "Axial stress", unit="ksi")
+
+Every step is evaluated when it is added, so a wrong unit fails at once with a
+message naming the step. Changing an input (:meth:`Sheet.set_input`)
+re-evaluates every step and re-fills the printed values, without re-printing the
+symbolic forms.
+"""
+
+from __future__ import annotations
+
+import math
+from collections.abc import Iterator
+from contextlib import ExitStack
+from dataclasses import dataclass
+
+import pint
+import sympy as sp
+
+from calcsheet.engine.evaluate import chosen_branch, evaluate
+from calcsheet.engine.names import parse_symbol_name
+from calcsheet.engine.parts import Check, Figure, Heading, Input, Part, Prose, Step, TitleBlock
+from calcsheet.engine.printers import PRINTERS, Quantityish, _ExpressionPrinter, as_written
+from calcsheet.errors import DefinitionError, DimensionError, EvaluationError, InputError
+from calcsheet.units import (
+    DEFAULT_STYLE,
+    NumberStyle,
+    UnitSystem,
+    describe_dimension,
+    format_number,
+    parse_quantity,
+    parse_unit,
+    unit_factors,
+    unit_system,
+    ureg,
+)
+
+_ANGLE_UNITS = {"radian", "degree"}
+
+
+@dataclass(frozen=True)
+class Equation:
+    """A step printed for one target: the symbol, the symbolic form, the numbers, the result.
+
+    ``substituted`` is ``None`` when it would only repeat the result (a step that
+    copies a symbol or a number).
+    """
+
+    target: str
+    symbol: str
+    symbolic: str | None
+    substituted: str | None
+    result: str
+    printer: _ExpressionPrinter
+
+    def chain(self) -> str:
+        """``symbol = symbolic = substituted = result`` in the target's markup."""
+        pieces = [self.symbol]
+        pieces += [piece for piece in (self.symbolic, self.substituted) if piece is not None]
+        pieces.append(self.result)
+        return self.printer.chain(pieces)
+
+
+@dataclass(frozen=True)
+class CheckText:
+    """A check printed for one target: demand vs capacity in symbols and in numbers."""
+
+    symbolic: str
+    numeric: str
+    utilization: str
+
+
+class Sheet:
+    """An ordered calc of headings, prose, inputs, steps, checks and figures."""
+
+    def __init__(
+        self,
+        title: str = "",
+        *,
+        units: str | UnitSystem = "US",
+        number_style: NumberStyle = DEFAULT_STYLE,
+        title_block: TitleBlock | None = None,
+    ) -> None:
+        self.title = title
+        self.title_block = title_block or TitleBlock(subject=title)
+        self.units = unit_system(units)
+        self.number_style = number_style
+        self.parts: list[Part] = []
+        self._defined: dict[str, Input | Step] = {}
+        self._values: dict[sp.Symbol, pint.Quantity] = {}
+        self._shown: dict[sp.Symbol, Quantityish] = {}
+        self._templates: dict[tuple[int, str], tuple] = {}
+        self._printers: dict[str, tuple[_ExpressionPrinter, _ExpressionPrinter]] = {}
+        self._written_order = ExitStack()
+
+    # -- writing the calc ------------------------------------------------------------
+
+    def __enter__(self) -> Sheet:
+        self._written_order.enter_context(as_written())
+        return self
+
+    def __exit__(self, *exc_info: object) -> None:
+        self._written_order.close()
+
+    def heading(self, text: str, level: int = 1) -> Heading:
+        """Start a part (level 1) or a subsection (level 2) of the calc."""
+        part = Heading(str(text), level)
+        self.parts.append(part)
+        return part
+
+    def text(self, text: str) -> Prose:
+        """A paragraph: an assumption, the sign convention, a note to the checker."""
+        part = Prose(str(text))
+        self.parts.append(part)
+        return part
+
+    def figure(self, svg: str, caption: str = "") -> Figure:
+        """An SVG drawing made by calcsheet's figure code (never user-supplied markup)."""
+        part = Figure(svg, str(caption))
+        self.parts.append(part)
+        return part
+
+    def input(
+        self,
+        name: str,
+        value: str | float | pint.Quantity,
+        description: str = "",
+        *,
+        dimension: str | None = None,
+        unit: str | None = None,
+        reference: str = "",
+    ) -> sp.Symbol:
+        """Add an input; returns its symbol for use in later steps.
+
+        ``value`` is a quantity or text such as ``"6.5 kip"`` (read by pint's unit
+        parser, never evaluated). ``dimension`` (force, length, stress, angle...)
+        is checked now and whenever the input changes.
+        """
+        symbol = self._new_symbol(name, "input")
+        quantity = parse_quantity(value, field=f"input {name}", dimension=dimension)
+        display = self._display_unit(quantity, unit, where=f"input {name!r}")
+        part = Input(
+            symbol, str(description), str(reference), display, sheet=self, dimension=dimension
+        )
+        self._store(part, quantity)
+        return symbol
+
+    def step(
+        self,
+        name: str,
+        expr: sp.Basic | float,
+        description: str = "",
+        *,
+        unit: str | None = None,
+        reference: str = "",
+    ) -> sp.Symbol:
+        """Add a step ``name = expr``; returns its symbol for use in later steps.
+
+        ``expr`` is a sympy expression over symbols this sheet defined earlier.
+        ``unit`` is the unit the result is shown in; without it the sheet's unit
+        preset chooses by dimension. ``reference`` cites the clause or equation.
+        """
+        symbol = self._new_symbol(name, "step")
+        if isinstance(expr, (int, float)) and not isinstance(expr, bool):
+            expr = sp.Integer(expr) if isinstance(expr, int) else sp.Float(expr)
+        if not isinstance(expr, sp.Basic):
+            raise DefinitionError(
+                f"step {name!r}: the expression must be built from this sheet's symbols, "
+                f"not a {type(expr).__name__}"
+            )
+        self._require_defined(expr, f"step {name!r}")
+        quantity = evaluate(expr, self._values, step=name)
+        display = self._display_unit(quantity, unit, where=f"step {name!r}")
+        part = Step(symbol, str(description), str(reference), display, sheet=self, expr=expr)
+        self._store(part, quantity)
+        return symbol
+
+    def check(
+        self,
+        description: str,
+        demand: sp.Basic,
+        capacity: sp.Basic,
+        *,
+        reference: str = "",
+    ) -> Check:
+        """Add a check ``demand <= capacity``; its utilization is demand / capacity."""
+        for role, expr in (("demand", demand), ("capacity", capacity)):
+            if not isinstance(expr, sp.Basic):
+                raise DefinitionError(
+                    f"check {description!r}: the {role} must be a sympy expression"
+                )
+            self._require_defined(expr, f"check {description!r}")
+        part = Check(str(description), demand, capacity, str(reference), sheet=self)
+        self._evaluate_check(part, self._values)
+        self.parts.append(part)
+        return part
+
+    # -- changing inputs --------------------------------------------------------------
+
+    def set_input(self, name: str, value: str | float | pint.Quantity) -> None:
+        """Change an input and re-evaluate the calc.
+
+        When a step fails with the new value, the sheet keeps every previous value
+        and the error says which step failed.
+        """
+        self.set_inputs({name: value})
+
+    def set_inputs(self, changes: dict[str, str | float | pint.Quantity]) -> None:
+        """Change several inputs at once, then re-evaluate the calc once."""
+        values = dict(self._values)
+        for name, value in changes.items():
+            part = self._defined.get(name)
+            if not isinstance(part, Input):
+                known = ", ".join(n for n, p in self._defined.items() if isinstance(p, Input))
+                raise InputError("input name", name, f"one of: {known}")
+            field = f"input {name}"
+            quantity = parse_quantity(value, field=field, dimension=part.dimension)
+            old = values[part.symbol]
+            if quantity.dimensionality != old.dimensionality:
+                raise InputError(
+                    field, value, f"{_article(describe_dimension(old))}, like {old:~P}"
+                )
+            values[part.symbol] = _to_display(quantity, part.unit, field)
+        checks: list[tuple[Check, tuple]] = []
+        for part in self.parts:
+            if isinstance(part, Step):
+                values[part.symbol] = _to_display(
+                    evaluate(part.expr, values, step=part.name), part.unit, f"step {part.name!r}"
+                )
+            elif isinstance(part, Check):
+                checks.append((part, self._check_values(part, values)))
+        self._values = values
+        for check, (demand, capacity, utilization) in checks:
+            check.demand_value, check.capacity_value, check.utilization = (
+                demand,
+                capacity,
+                utilization,
+            )
+        for part in self._defined.values():
+            part.value = values[part.symbol]
+        self._shown.clear()
+
+    # -- reading results -------------------------------------------------------------------
+
+    def __getitem__(self, name: str) -> Input | Step:
+        try:
+            return self._defined[name]
+        except KeyError:
+            raise KeyError(f"no input or step named {name!r}") from None
+
+    def value(self, name: str | sp.Symbol) -> pint.Quantity:
+        """The current value of an input or step, in its display unit."""
+        key = name.name if isinstance(name, sp.Symbol) else name
+        return self[key].value
+
+    @property
+    def checks(self) -> list[Check]:
+        """The checks in sheet order."""
+        return [part for part in self.parts if isinstance(part, Check)]
+
+    @property
+    def steps(self) -> list[Step]:
+        """The steps in sheet order."""
+        return [part for part in self.parts if isinstance(part, Step)]
+
+    @property
+    def inputs(self) -> list[Input]:
+        """The inputs in sheet order."""
+        return [part for part in self.parts if isinstance(part, Input)]
+
+    def governing_check(self) -> Check | None:
+        """The check with the highest utilization."""
+        checks = [check for check in self.checks if check.utilization is not None]
+        return max(checks, key=lambda check: check.utilization, default=None)
+
+    def iter_parts(self) -> Iterator[Part]:
+        """The parts in order, for renderers."""
+        return iter(self.parts)
+
+    # -- printing ------------------------------------------------------------------------
+
+    def equation(self, part: Input | Step, target: str) -> Equation:
+        """A step or input printed for ``target`` (latex, mathml, typst or plain)."""
+        symbolic_printer, slot_printer = self._printer_pair(target)
+        key = (id(part), target)
+        if key not in self._templates:
+            name = symbolic_printer.symbol_name(parse_symbol_name(part.name))
+            if isinstance(part, Step) and not (part.expr.is_Symbol or part.expr.is_Number):
+                slots = {symbol: index for index, symbol in enumerate(_ordered_symbols(part.expr))}
+                symbolic = symbolic_printer.print_expression(part.expr)
+                # For an "if" step only the branch that applies is worth substituting.
+                branches = (
+                    [value for value, _ in part.expr.args]
+                    if isinstance(part.expr, sp.Piecewise)
+                    else [part.expr]
+                )
+                substituted = tuple(
+                    type(slot_printer)(slots).print_expression(branch) for branch in branches
+                )
+                order = tuple(slots)
+            elif isinstance(part, Step) and part.expr.is_Symbol:
+                symbolic, substituted, order = (
+                    symbolic_printer.print_expression(part.expr),
+                    None,
+                    (),
+                )
+            else:
+                symbolic, substituted, order = None, None, ()
+            self._templates[key] = (name, symbolic, substituted, order)
+        name, symbolic, template, order = self._templates[key]
+        substituted = None
+        if template is not None:
+            branch = 0
+            if isinstance(part.expr, sp.Piecewise):
+                branch = chosen_branch(part.expr, self._values, step=part.name)
+            shown = [self._shown_value(symbol) for symbol in order]
+            substituted = slot_printer.fill(template[branch], shown)
+        result = slot_printer.quantity(self._shown_value(part.symbol), False, standalone=True)
+        return Equation(target, name, symbolic, substituted, result, slot_printer)
+
+    def check_text(self, check: Check, target: str) -> CheckText:
+        """A check printed for ``target``: symbols, numbers and the utilization."""
+        printer, slot_printer = self._printer_pair(target)
+        sign = "≤"
+        symbolic = printer.relation(
+            printer.print_expression(check.demand), sign, printer.print_expression(check.capacity)
+        )
+        numeric = printer.relation(
+            slot_printer.quantity(self._format(check.demand_value), False, standalone=True),
+            "≤" if check.passes else ">",
+            slot_printer.quantity(self._format(check.capacity_value), False, standalone=True),
+        )
+        utilization = slot_printer.quantity(
+            self._format(ureg.Quantity(check.utilization)), False, standalone=True
+        )
+        return CheckText(symbolic, numeric, utilization)
+
+    def format_value(self, quantity: pint.Quantity, target: str) -> str:
+        """A quantity typeset for ``target`` with the sheet's number style."""
+        _, slot_printer = self._printer_pair(target)
+        return slot_printer.quantity(self._format(quantity), False, standalone=True)
+
+    def _printer_pair(self, target: str) -> tuple[_ExpressionPrinter, _ExpressionPrinter]:
+        if target not in self._printers:
+            try:
+                printer_class = PRINTERS[target]
+            except KeyError:
+                raise ValueError(
+                    f"unknown print target {target!r}; known: {sorted(PRINTERS)}"
+                ) from None
+            self._printers[target] = (printer_class(), printer_class({}))
+        return self._printers[target]
+
+    def _shown_value(self, symbol: sp.Symbol) -> Quantityish:
+        shown = self._shown.get(symbol)
+        if shown is None:
+            shown = self._shown[symbol] = self._format(self._values[symbol])
+        return shown
+
+    def _format(self, quantity: pint.Quantity) -> Quantityish:
+        number = format_number(float(quantity.magnitude), self.number_style)
+        if quantity.unitless:
+            return Quantityish(number)
+        return Quantityish(number, unit_factors(quantity.units))
+
+    # -- internals -------------------------------------------------------------------------
+
+    def _new_symbol(self, name: str, kind: str) -> sp.Symbol:
+        parse_symbol_name(name)
+        if name in self._defined:
+            earlier = "an input" if isinstance(self._defined[name], Input) else "a step"
+            raise DefinitionError(f"{kind} {name!r}: the symbol is already defined by {earlier}")
+        return sp.Symbol(name)
+
+    def _require_defined(self, expr: sp.Basic, where: str) -> None:
+        for symbol in _ordered_symbols(expr):
+            known = self._defined.get(symbol.name)
+            if known is None or known.symbol != symbol:
+                raise DefinitionError(f"{where} uses {symbol.name!r} before it is defined")
+
+    def _display_unit(
+        self, quantity: pint.Quantity, unit: str | None, *, where: str
+    ) -> pint.Unit | None:
+        if unit is not None:
+            display = parse_unit(unit, field=f"{where} display unit")
+            if display.dimensionality != quantity.dimensionality:
+                raise DimensionError(
+                    f"{where}: the result is {_article(describe_dimension(quantity))} "
+                    f"({quantity.units:~P}) but the display unit {unit!r} is "
+                    f"{_article(describe_dimension(display))}"
+                )
+            return display
+        if str(quantity.units) in _ANGLE_UNITS:
+            return ureg.degree
+        if quantity.dimensionless:
+            return None
+        return self.units.unit_for(quantity) or quantity.to_reduced_units().units
+
+    def _store(self, part: Input | Step, quantity: pint.Quantity) -> None:
+        value = _to_display(quantity, part.unit, part.name)
+        part.value = value
+        self._values[part.symbol] = value
+        self._defined[part.name] = part
+        self.parts.append(part)
+
+    def _check_values(
+        self, check: Check, values: dict[sp.Symbol, pint.Quantity]
+    ) -> tuple[pint.Quantity, pint.Quantity, float]:
+        where = f"check {check.description!r}"
+        demand = evaluate(check.demand, values, step=where)
+        capacity = evaluate(check.capacity, values, step=where)
+        if demand.dimensionality != capacity.dimensionality:
+            raise DimensionError(
+                f"{where}: demand is {_article(describe_dimension(demand))} but capacity is "
+                f"{_article(describe_dimension(capacity))}"
+            )
+        capacity_in_demand_units = capacity.to(demand.units)
+        if capacity_in_demand_units.magnitude <= 0:
+            raise EvaluationError(f"{where}: the capacity {capacity:~P} must be positive")
+        utilization = float(abs(demand.magnitude) / capacity_in_demand_units.magnitude)
+        return demand, capacity_in_demand_units, utilization
+
+    def _evaluate_check(self, check: Check, values: dict[sp.Symbol, pint.Quantity]) -> None:
+        check.demand_value, check.capacity_value, check.utilization = self._check_values(
+            check, values
+        )
+
+    # -- notebook display ------------------------------------------------------------------
+
+    def _repr_html_(self) -> str:
+        # The engine knows no renderer; the notebook view is the one place that
+        # reaches forward, lazily, so that importing the engine stays light.
+        from calcsheet.render.html import render_fragment
+
+        return render_fragment(self)
+
+    def _repr_latex_(self) -> str:
+        lines = []
+        for part in self.parts:
+            if isinstance(part, (Input, Step)):
+                lines.append(self.equation(part, "latex").chain())
+        return (
+            "$$\\begin{aligned}"
+            + " \\\\ ".join(line.replace(" = ", " &= ", 1) for line in lines)
+            + "\\end{aligned}$$"
+        )
+
+
+def _to_display(quantity: pint.Quantity, unit: pint.Unit | None, where: str) -> pint.Quantity:
+    try:
+        converted = quantity.to(unit) if unit is not None else quantity.to("dimensionless")
+    except pint.DimensionalityError:
+        raise DimensionError(
+            f"{where}: cannot show {quantity:~P} in {unit if unit is not None else 'plain numbers'}"
+        ) from None
+    if not math.isfinite(float(converted.magnitude)):
+        raise EvaluationError(f"{where}: the value is not finite")
+    return converted
+
+
+def _ordered_symbols(expr: sp.Basic) -> list[sp.Symbol]:
+    """Free symbols in the order they first appear as written (stable slot numbering)."""
+    seen: dict[sp.Symbol, None] = {}
+    for node in sp.preorder_traversal(expr):
+        if isinstance(node, sp.Symbol):
+            seen.setdefault(node, None)
+    return list(seen)
+
+
+def _article(noun: str) -> str:
+    return f"{'an' if noun[:1] in 'aeiou' else 'a'} {noun}"

@@ -1,0 +1,1 @@
+"""Outputs written to disk: HTML and PDF files of a sheet."""

@@ -1,0 +1,60 @@
+"""Write a sheet's HTML and PDF so that a failure never leaves a half-written file.
+
+Each output is written to a temporary file in the same folder and renamed into
+place only when complete; the previous file stays until then.
+"""
+
+from __future__ import annotations
+
+import os
+import tempfile
+from pathlib import Path
+
+from calcsheet.engine import Sheet
+from calcsheet.errors import CalcsheetError
+from calcsheet.render.html import render_html
+from calcsheet.render.typst import render_typst
+
+
+class ExportError(CalcsheetError):
+    """The PDF engine failed, or a file could not be written."""
+
+
+def pdf_bytes(sheet: Sheet, *, paper: str = "letter") -> bytes:
+    """Compile the sheet's Typst markup to PDF in memory (fonts come with the typst wheel)."""
+    import typst  # imported here: the compiler is only needed for PDFs
+
+    source = render_typst(sheet, paper=paper).encode("utf-8")
+    try:
+        return typst.compile(source)
+    except Exception as error:  # typst raises its own error types per version
+        raise ExportError(f"the PDF engine failed: {error}") from None
+
+
+def write_atomically(path: Path, data: bytes) -> None:
+    """Write ``data`` to ``path`` through a temporary file renamed into place."""
+    path = Path(path)
+    handle, temporary = tempfile.mkstemp(prefix=f".{path.name}.", suffix=".part", dir=path.parent)
+    try:
+        with os.fdopen(handle, "wb") as stream:
+            stream.write(data)
+            stream.flush()
+            os.fsync(stream.fileno())
+        os.replace(temporary, path)
+    except BaseException:
+        Path(temporary).unlink(missing_ok=True)
+        raise
+
+
+def export_sheet(sheet: Sheet, folder: Path, stem: str, *, paper: str = "letter") -> list[Path]:
+    """Write ``stem``.html and ``stem``.pdf into ``folder``, both built before either is written."""
+    folder = Path(folder)
+    folder.mkdir(parents=True, exist_ok=True)
+    html = render_html(sheet).encode("utf-8")
+    pdf = pdf_bytes(sheet, paper=paper)
+    written = []
+    for suffix, data in ((".html", html), (".pdf", pdf)):
+        target = folder / f"{stem}{suffix}"
+        write_atomically(target, data)
+        written.append(target)
+    return written

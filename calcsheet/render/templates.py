@@ -1,0 +1,48 @@
+"""The jinja2 environments for the HTML and Typst templates shipped in calcsheet.templates."""
+
+from __future__ import annotations
+
+import re
+from functools import lru_cache
+
+import jinja2
+
+_CONTROL = re.compile(r"[\x00-\x08\x0b\x0c\x0e-\x1f\x7f]")
+
+
+def typst_string(value: object) -> str:
+    """User text as a Typst string literal, shown literally with ``#"..."`` in markup.
+
+    Inside a string literal only the backslash and the quote are special, so
+    markup characters (``#``, ``$``, ``*``, ``_``, ``@``, ``<``) stay text and no
+    code can run. Control characters are dropped; newlines are kept as ``\\n``.
+    """
+    text = _CONTROL.sub("", str(value))
+    text = text.replace("\\", "\\\\").replace('"', '\\"').replace("\r", "").replace("\n", "\\n")
+    return f'"{text}"'
+
+
+@lru_cache(maxsize=1)
+def html_environment() -> jinja2.Environment:
+    """HTML templates with autoescaping: user text can never become markup."""
+    return jinja2.Environment(
+        loader=jinja2.PackageLoader("calcsheet.templates", "."),
+        autoescape=True,
+        undefined=jinja2.StrictUndefined,
+        trim_blocks=True,
+        lstrip_blocks=True,
+    )
+
+
+@lru_cache(maxsize=1)
+def typst_environment() -> jinja2.Environment:
+    """Typst templates: every user value passes the ``text`` filter (a string literal)."""
+    environment = jinja2.Environment(
+        loader=jinja2.PackageLoader("calcsheet.templates", "."),
+        autoescape=False,
+        undefined=jinja2.StrictUndefined,
+        trim_blocks=True,
+        lstrip_blocks=True,
+    )
+    environment.filters["text"] = typst_string
+    return environment

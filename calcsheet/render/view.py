@@ -1,0 +1,108 @@
+"""A read-only view of a sheet for one print target: what the templates iterate over."""
+
+from __future__ import annotations
+
+from dataclasses import dataclass, field
+from typing import Any
+
+from calcsheet import __version__
+from calcsheet.engine import CAUTIONS, Check, Figure, Heading, Input, Prose, Sheet, Step
+
+
+@dataclass(frozen=True)
+class PartView:
+    """One part as the template needs it; ``kind`` picks the template block."""
+
+    kind: str
+    text: str = ""
+    level: int = 1
+    symbol: str = ""
+    math: str = ""
+    symbolic: str = ""
+    numeric: str = ""
+    value: str = ""
+    utilization: str = ""
+    status: str = ""
+    reference: str = ""
+    svg: str = ""
+    extra: dict[str, Any] = field(default_factory=dict)
+
+
+@dataclass(frozen=True)
+class SheetView:
+    """Everything a template shows, already printed for its target."""
+
+    title: str
+    title_block: Any
+    units: str
+    parts: list[PartView]
+    inputs: list[PartView]
+    checks: list[PartView]
+    governing: PartView | None
+    cautions: tuple[str, ...]
+    tool_version: str
+
+
+def build_view(sheet: Sheet, target: str) -> SheetView:
+    """Print every part of ``sheet`` for ``target`` (``mathml`` or ``typst``)."""
+    parts: list[PartView] = []
+    inputs: list[PartView] = []
+    checks: list[PartView] = []
+    check_views: dict[int, PartView] = {}
+    for part in sheet.parts:
+        if isinstance(part, Heading):
+            parts.append(PartView("heading", text=part.text, level=part.level))
+        elif isinstance(part, Prose):
+            parts.append(PartView("prose", text=part.text))
+        elif isinstance(part, Figure):
+            parts.append(PartView("figure", text=part.caption, svg=part.svg))
+        elif isinstance(part, Input):
+            equation = sheet.equation(part, target)
+            view = PartView(
+                "input",
+                text=part.description,
+                symbol=equation.symbol,
+                value=equation.result,
+                reference=part.reference,
+            )
+            inputs.append(view)
+            parts.append(view)
+        elif isinstance(part, Step):
+            equation = sheet.equation(part, target)
+            parts.append(
+                PartView(
+                    "step",
+                    text=part.description,
+                    symbol=equation.symbol,
+                    math=equation.chain(),
+                    value=equation.result,
+                    reference=part.reference,
+                )
+            )
+        elif isinstance(part, Check):
+            text = sheet.check_text(part, target)
+            view = PartView(
+                "check",
+                text=part.description,
+                symbolic=text.symbolic,
+                numeric=text.numeric,
+                utilization=text.utilization,
+                status=part.status,
+                reference=part.reference,
+            )
+            check_views[id(part)] = view
+            checks.append(view)
+            parts.append(view)
+    governing_check = sheet.governing_check()
+    governing = check_views.get(id(governing_check)) if governing_check is not None else None
+    return SheetView(
+        title=sheet.title,
+        title_block=sheet.title_block,
+        units=sheet.units.name,
+        parts=parts,
+        inputs=inputs,
+        checks=checks,
+        governing=governing,
+        cautions=CAUTIONS,
+        tool_version=__version__,
+    )

