@@ -1,0 +1,92 @@
+"""HTML and PDF files: content a reviewer looks for, determinism, nothing half-written."""
+
+from __future__ import annotations
+
+import io
+from pathlib import Path
+
+import pypdf
+import pytest
+
+from calcsheet.demo import outrigger_sheet
+from calcsheet.engine import CAUTIONS, Sheet, TitleBlock
+from calcsheet.export import files
+from calcsheet.export.files import ExportError, export_sheet, pdf_bytes
+from calcsheet.render.html import render_html
+
+
+def _pdf_pages(data: bytes) -> list[str]:
+    return [page.extract_text() for page in pypdf.PdfReader(io.BytesIO(data)).pages]
+
+
+def test_pdf_has_title_block_numbering_utilizations_and_cautions():
+    sheet = outrigger_sheet()
+    pages = _pdf_pages(pdf_bytes(sheet))
+    text = "\n".join(pages)
+    for field in ("Harbour Street retail", "DEMO-0142", "S-201", "A. Engineer", "OA-1"):
+        assert field in text
+    for number, page in enumerate(pages, start=1):
+        assert f"Sheet {number} of {len(pages)}" in page
+    for check in sheet.checks:
+        shown = f"{check.utilization:.4f}"[:5]
+        assert shown in text.replace(" ", ""), check.description
+    flat = " ".join(text.split())
+    for caution in CAUTIONS:
+        assert " ".join(caution.split())[:40] in flat
+
+
+def test_building_twice_gives_identical_bytes():
+    assert pdf_bytes(outrigger_sheet()) == pdf_bytes(outrigger_sheet())
+    assert render_html(outrigger_sheet()) == render_html(outrigger_sheet())
+
+
+def test_a4_and_letter_are_selectable():
+    letter = pypdf.PdfReader(io.BytesIO(pdf_bytes(outrigger_sheet(), paper="letter")))
+    a4 = pypdf.PdfReader(io.BytesIO(pdf_bytes(outrigger_sheet(), paper="a4")))
+    assert round(float(letter.pages[0].mediabox.width)) == 612  # 8.5 in x 72 pt
+    assert round(float(a4.pages[0].mediabox.width)) == 595  # 210 mm in pt
+
+
+PAYLOADS = [
+    '#read("/etc/passwd")',
+    "<script>alert(1)</script>",
+    "$x$",
+    "*bold*",
+    "\\",
+    "@ref",
+    '" onload="x',
+    "W" * 2000,
+]
+
+
+@pytest.mark.parametrize("payload", PAYLOADS)
+def test_user_text_comes_out_literally(payload):
+    sheet = Sheet(payload, title_block=TitleBlock(project=payload, subject=payload))
+    with sheet:
+        sheet.text(payload)
+        P = sheet.input("P", "1 kip", payload, dimension="force")
+        sheet.step("Q", 2 * P, payload, unit="kip", reference=payload)
+    html = render_html(sheet)
+    assert "<script>alert" not in html
+    assert "&lt;script&gt;" in html or "<script" not in payload
+    text = " ".join(_pdf_pages(pdf_bytes(sheet)))
+    squeezed = text.replace("\n", "").replace(" ", "")
+    if len(payload) < 100:
+        assert payload.replace(" ", "") in squeezed
+    assert "root:" not in text
+
+
+def test_a_failed_pdf_keeps_the_previous_files(tmp_path: Path, monkeypatch):
+    written = export_sheet(outrigger_sheet(), tmp_path, "sheet")
+    before = {path.name: path.read_bytes() for path in written}
+
+    def broken(*_args, **_kwargs):
+        raise ExportError("the PDF engine failed: simulated")
+
+    monkeypatch.setattr(files, "pdf_bytes", broken)
+    sheet = outrigger_sheet()
+    sheet.set_input("P", "3 kip")
+    with pytest.raises(ExportError):
+        export_sheet(sheet, tmp_path, "sheet")
+    after = {path.name: path.read_bytes() for path in tmp_path.iterdir()}
+    assert after == before
