@@ -11,6 +11,11 @@ from __future__ import annotations
 class CalcsheetError(Exception):
     """Base of every error calcsheet reports to a user."""
 
+    def _render_traceback_(self) -> list[str]:
+        # IPython calls this instead of printing a traceback: a notebook user sees
+        # one clear line, as on the command line.
+        return [f"{type(self).__name__}: {self}"]
+
 
 class InputError(CalcsheetError, ValueError):
     """A value typed by a user (form field, job-file key, input of a calc) is not usable."""
