@@ -1,0 +1,582 @@
+"""The member combined-stress calc: a cantilever under inclined, offset loads, checked at a station.
+
+:func:`member_sheet` writes, with the engine's public API only: the axis system
+and sign convention in words, the inputs, the resolution of each load, the
+internal forces at the station from statics of the free part, the section
+properties with their sources, the stresses at every stress point of the section
+(each term with its sign, then the sum), a per-point summary, the governing
+point for each measure and a generic allowable-stress check of the von Mises
+stress (not a specification check).
+"""
+
+from __future__ import annotations
+
+from collections.abc import Sequence
+from dataclasses import dataclass, field
+
+import pint
+import sympy as sp
+
+from calcsheet.engine import Sheet, TitleBlock
+from calcsheet.engine.functions import Abs, cos, sin, sqrt
+from calcsheet.errors import InputError
+from calcsheet.mechanics.loads import AXES, AppliedMoment, PointLoad, parse_signed_axis
+from calcsheet.mechanics.statics import loads_beyond, validate_loads
+from calcsheet.mechanics.stresses import MEASURES, StressModel, stress_model
+from calcsheet.mechanics.torsion import WARPING_NOTE
+from calcsheet.sections import Section
+from calcsheet.units import Quantity, parse_quantity
+
+AXIS_TEXT = (
+    "Axes: the member runs along z from the fixed support (z = 0) to the free end "
+    "(z = L). The cross-section lies in the x-y plane with x horizontal to the right "
+    "and y vertical upward, origin at the centroid; x, y, z are right-handed. Load "
+    "offsets e_x, e_y are measured from the centroid."
+)
+SIGN_TEXT = (
+    "Signs: internal forces are those on the cut face whose outward normal is +z "
+    "(the face of the support-side part), about the centroid of the cut. By "
+    "equilibrium of the free part beyond the cut they equal the resultant of the loads "
+    "on it: N = ΣF_z (tension positive), V_x = ΣF_x, V_y = ΣF_y, and the moments of those "
+    "loads about the cut centroid by the right-hand rule, with lever arm a = z − z_s. "
+    "Positive M_x puts the top (+y) fibres in tension; positive M_y puts the left (−x) "
+    "fibres in tension. Normal stress is positive in tension."
+)
+SHEAR_TEXT = (
+    "Shear: τ_zy is the average over the horizontal cut through the point and τ_zx the "
+    "average over the vertical cut (τ = V·Q/(I·b) in its general unsymmetric form, Q of "
+    "the part cut off). The torsional shear τ_T is added to the transverse shear by "
+    "magnitude because its direction along the wall is not tracked (conservative)."
+)
+NOT_A_SPEC_CHECK = (
+    "The check below is a generic allowable-stress check of the von Mises stress "
+    "against F_y/Ω. It is NOT a specification check: member stability (buckling, "
+    "lateral-torsional buckling), local buckling, connections and fatigue are not covered."
+)
+# Relative size below which a first moment is round-off of an exact zero.
+_ZERO_Q = 1e-9
+
+
+@dataclass
+class _PointSymbols:
+    """What the sheet defined for one stress point (for the summary and governing point)."""
+
+    index: int
+    label: str
+    terms: dict[str, sp.Symbol] = field(default_factory=dict)
+
+
+def _stress_unit(units: str) -> str:
+    return "MPa" if str(units).strip().upper() == "SI" else "ksi"
+
+
+def _length_unit(units: str) -> str:
+    return "mm" if str(units).strip().upper() == "SI" else "inch"
+
+
+def _force_unit(units: str) -> str:
+    return "kN" if str(units).strip().upper() == "SI" else "kip"
+
+
+def member_sheet(
+    section: Section,
+    loads: Sequence[PointLoad | AppliedMoment],
+    *,
+    length: pint.Quantity | str,
+    station: pint.Quantity | str = "0 in",
+    Fy: pint.Quantity | str = "50 ksi",
+    Omega: float = 1.67,
+    title: str = "Member combined stresses",
+    title_block: TitleBlock | None = None,
+    units: str = "US",
+) -> Sheet:
+    """Build the combined-stress sheet of a cantilever member at ``station``.
+
+    ``loads`` are :func:`~calcsheet.mechanics.point_load` and
+    :func:`~calcsheet.mechanics.applied_moment` results. Bad input raises
+    :class:`InputError` naming the field (``member length``, ``station z``,
+    ``load P1 z``, ``Fy``, ``Omega``).
+    """
+    length_q, station_q = validate_loads(length, loads, station)
+    fy_q = parse_quantity(Fy, field="Fy", dimension="stress")
+    if fy_q.m <= 0:
+        raise InputError("Fy", Fy, "a positive yield stress")
+    omega_q = parse_quantity(Omega, field="Omega", dimension="dimensionless")
+    if omega_q.m <= 0:
+        raise InputError("Omega", Omega, "a positive factor of safety")
+    if not loads:
+        raise InputError("loads", loads, "at least one load")
+    free = loads_beyond(loads, station_q)
+    if not free:
+        raise InputError(
+            "station z", f"{station_q:~P}", "a station with loads beyond it", "nothing to check"
+        )
+    stress = _stress_unit(units)
+    length_unit = _length_unit(units)
+    model = stress_model(section, section.length_unit)
+    sheet = Sheet(title, units=units, title_block=title_block)
+    with sheet:
+        _write_conventions(sheet)
+        symbols, free_suffixes = _write_inputs(
+            sheet, loads, free, length_q, station_q, fy_q, omega_q, length_unit
+        )
+        forces = _write_internal_forces(sheet, free_suffixes, symbols)
+        props = _write_section_properties(sheet, section, model)
+        points = _write_point_stresses(sheet, section, model, forces, props, stress)
+        _write_summary(sheet, points, stress)
+        _write_check(sheet, points, symbols, stress)
+    return sheet
+
+
+def _write_conventions(sheet: Sheet) -> None:
+    sheet.heading("Scope, axes and sign convention")
+    sheet.text(AXIS_TEXT)
+    sheet.text(SIGN_TEXT)
+    sheet.text(NOT_A_SPEC_CHECK)
+
+
+def _write_inputs(
+    sheet: Sheet,
+    loads: Sequence[PointLoad | AppliedMoment],
+    free: Sequence[PointLoad | AppliedMoment],
+    length: pint.Quantity,
+    station: pint.Quantity,
+    fy: pint.Quantity,
+    omega: pint.Quantity,
+    length_unit: str,
+) -> tuple[dict[str, sp.Symbol], list[str]]:
+    sheet.heading("Member, material and loads")
+    symbols: dict[str, sp.Symbol] = {}
+    free_suffixes: list[str] = []
+    symbols["L"] = sheet.input("L", length, "Member length, support to free end", unit=length_unit)
+    symbols["z_s"] = sheet.input(
+        "z_s", station, "Station checked, measured from the support", unit=length_unit
+    )
+    symbols["F_y"] = sheet.input("F_y", fy, "Yield stress of the material", dimension="stress")
+    symbols["Omega"] = sheet.input(
+        "Omega", omega, "Factor of safety (generic)", dimension="dimensionless"
+    )
+    free_ids = {id(load) for load in free}
+    for number, load in enumerate(loads, start=1):
+        beyond = id(load) in free_ids
+        if isinstance(load, PointLoad):
+            _write_point_load(sheet, number, load, beyond, symbols, length_unit)
+        else:
+            _write_couple(sheet, number, load, beyond, symbols, length_unit)
+        if beyond:
+            free_suffixes.append(str(number))
+    return symbols, free_suffixes
+
+
+def _write_point_load(
+    sheet: Sheet,
+    number: int,
+    load: PointLoad,
+    beyond: bool,
+    symbols: dict[str, sp.Symbol],
+    length_unit: str,
+) -> None:
+    sheet.heading(f"Load {number}: {load.name}", level=2)
+    suffix = str(number)
+    if load.direction is not None:
+        direction = load.direction
+        sheet.text(
+            f"The force points at angle θ_{suffix} from the {direction.from_axis} axis toward "
+            f"the {direction.toward_axis} axis: cos θ along {direction.from_axis}, sin θ "
+            f"along {direction.toward_axis}."
+        )
+        magnitude = sheet.input(f"P_{suffix}", load.magnitude, f"Magnitude of {load.name}")
+        angle = sheet.input(
+            f"theta_{suffix}", load.direction.angle, "Angle of the force", dimension="angle"
+        )
+        first, first_sign = parse_signed_axis(direction.from_axis, field="from_axis")
+        second, second_sign = parse_signed_axis(direction.toward_axis, field="toward_axis")
+        for axis in AXES:
+            name = f"F_{axis}{suffix}"
+            if axis == first:
+                expr = magnitude * cos(angle) if first_sign > 0 else -magnitude * cos(angle)
+            elif axis == second:
+                expr = magnitude * sin(angle) if second_sign > 0 else -magnitude * sin(angle)
+            else:
+                symbols[name] = sheet.input(
+                    name, Quantity(0.0, load.magnitude.units), f"Component along {axis} (none)"
+                )
+                continue
+            symbols[name] = sheet.step(name, expr, f"Component along {axis}")
+    else:
+        for axis in AXES:
+            name = f"F_{axis}{suffix}"
+            symbols[name] = sheet.input(
+                name, load.component(axis), f"Component of {load.name} along {axis}"
+            )
+    where = "beyond the station: included" if beyond else "between support and station: excluded"
+    symbols[f"z_{suffix}"] = sheet.input(
+        f"z_{suffix}", load.z, f"Position along the member ({where})", unit=length_unit
+    )
+    symbols[f"e_x{suffix}"] = sheet.input(
+        f"e_x{suffix}", load.ex, "Offset of the point of application in x", unit=length_unit
+    )
+    symbols[f"e_y{suffix}"] = sheet.input(
+        f"e_y{suffix}", load.ey, "Offset of the point of application in y", unit=length_unit
+    )
+    if beyond:
+        symbols[f"a_{suffix}"] = sheet.step(
+            f"a_{suffix}",
+            symbols[f"z_{suffix}"] - symbols["z_s"],
+            "Lever arm beyond the station",
+            unit=length_unit,
+        )
+
+
+def _write_couple(
+    sheet: Sheet,
+    number: int,
+    couple: AppliedMoment,
+    beyond: bool,
+    symbols: dict[str, sp.Symbol],
+    length_unit: str,
+) -> None:
+    sheet.heading(f"Load {number}: {couple.name} (concentrated couple)", level=2)
+    suffix = str(number)
+    for axis, value in zip(AXES, (couple.Mx, couple.My, couple.Mz), strict=True):
+        name = f"C_{axis}{suffix}"
+        symbols[name] = sheet.input(name, value, f"Couple about {axis} (right-hand rule)")
+    where = "beyond the station: included" if beyond else "between support and station: excluded"
+    symbols[f"z_{suffix}"] = sheet.input(
+        f"z_{suffix}", couple.z, f"Position along the member ({where})", unit=length_unit
+    )
+
+
+def _write_internal_forces(
+    sheet: Sheet, free_suffixes: Sequence[str], symbols: dict[str, sp.Symbol]
+) -> dict[str, sp.Symbol]:
+    sheet.heading("Internal forces at the station (statics of the free part)")
+    terms: dict[str, list[sp.Expr]] = {name: [] for name in ("N", "V_x", "V_y", "T", "M_x", "M_y")}
+    for suffix in free_suffixes:
+        if f"C_x{suffix}" in symbols:
+            terms["M_x"].append(symbols[f"C_x{suffix}"])
+            terms["M_y"].append(symbols[f"C_y{suffix}"])
+            terms["T"].append(symbols[f"C_z{suffix}"])
+            continue
+        fx, fy, fz = (symbols[f"F_{axis}{suffix}"] for axis in AXES)
+        ex, ey, a = symbols[f"e_x{suffix}"], symbols[f"e_y{suffix}"], symbols[f"a_{suffix}"]
+        terms["N"].append(fz)
+        terms["V_x"].append(fx)
+        terms["V_y"].append(fy)
+        terms["T"].append(ex * fy - ey * fx)
+        terms["M_x"].append(ey * fz - a * fy)
+        terms["M_y"].append(a * fx - ex * fz)
+    included = ", ".join(f"load {suffix}" for suffix in free_suffixes)
+    sheet.text(f"Loads at or beyond the station, carried by the cut: {included}.")
+    descriptions = {
+        "N": ("Axial force N = ΣF_z (tension positive)", "kip"),
+        "V_x": ("Shear along x, V_x = ΣF_x", "kip"),
+        "V_y": ("Shear along y, V_y = ΣF_y", "kip"),
+        "T": ("Torque T = Σ(e_x·F_y − e_y·F_x) + ΣC_z", "kip*ft"),
+        "M_x": ("Moment about x, M_x = Σ(e_y·F_z − a·F_y) + ΣC_x", "kip*ft"),
+        "M_y": ("Moment about y, M_y = Σ(a·F_x − e_x·F_z) + ΣC_y", "kip*ft"),
+    }
+    forces: dict[str, sp.Symbol] = {}
+    zero: dict[str, sp.Symbol] = {}
+    for name, (description, zero_unit) in descriptions.items():
+        if terms[name]:
+            expr: sp.Expr = sp.Add(*terms[name])
+        else:  # no load of this kind beyond the cut: a zero with the right unit
+            if zero_unit not in zero:
+                label = "F_0" if zero_unit == "kip" else "M_0"
+                zero[zero_unit] = sheet.input(
+                    label, f"0 {zero_unit}", "Zero: no load of this kind beyond the station"
+                )
+            expr = zero[zero_unit]
+        forces[name] = sheet.step(name, expr, description, reference="statics of the free part")
+    return forces
+
+
+def _write_section_properties(
+    sheet: Sheet, section: Section, model: StressModel
+) -> dict[str, sp.Symbol | None]:
+    sheet.heading("Section properties used")
+    sheet.text(
+        f"Section: {section.name} ({section.family}). Each property's source is given "
+        "beside it. Stress points are the labelled points of the section outline, with the "
+        "centroid added where it lies in the material."
+    )
+    props: dict[str, sp.Symbol | None] = {}
+    for name, key, description in (
+        ("A", "A", "Area"),
+        ("I_x", "Ix", "Second moment of area about the centroidal x axis"),
+        ("I_y", "Iy", "Second moment of area about the centroidal y axis"),
+        ("J", "J", "St Venant torsion constant"),
+    ):
+        props[name] = sheet.input(
+            name, section.properties[key], description, reference=section.sources.get(key, "")
+        )
+    if model.Ixy != 0.0:
+        props["I_xy"] = sheet.input(
+            "I_xy",
+            section.properties["Ixy"],
+            "Product of area, ∫x·y dA (the section is unsymmetric)",
+            reference=section.sources.get("Ixy", ""),
+        )
+        props["D"] = sheet.step(
+            "D", props["I_x"] * props["I_y"] - props["I_xy"] ** 2, "Ix·Iy − Ixy²"
+        )
+        sheet.text(
+            "Ixy ≠ 0: bending uses the unsymmetric formula "
+            "σ = [M_x·(I_y·y − I_xy·x) + M_y·(I_xy·y − I_x·x)] / D."
+        )
+    else:
+        props["I_xy"] = props["D"] = None
+        sheet.text("Ixy = 0 (a symmetry axis): σ = N/A + M_x·y/I_x − M_y·x/I_y.")
+    rule = model.torsion
+    sheet.text(f"Torsion: {rule.description}. {WARPING_NOTE}")
+    unit = section.length_unit
+    if rule.kind == "closed":
+        props["t"] = sheet.input(
+            "t", Quantity(rule.thickness, unit), "Design wall thickness", reference="section"
+        )
+        props["A_m"] = sheet.input(
+            "A_m",
+            Quantity(rule.enclosed_area, f"{unit}**2"),
+            "Area inside the wall mid-line, (B − t)·(H − t), square corners",
+            reference="section dimensions",
+        )
+    elif rule.kind == "open":
+        props["t_max"] = sheet.input(
+            "t_max",
+            Quantity(rule.thickness, unit),
+            "Thickest wall (used at every point: conservative)",
+            reference="section dimensions",
+        )
+    return props
+
+
+def _significant(value: float, scale: float) -> bool:
+    return abs(value) > _ZERO_Q * scale
+
+
+def _write_point_stresses(
+    sheet: Sheet,
+    section: Section,
+    model: StressModel,
+    forces: dict[str, sp.Symbol],
+    props: dict[str, sp.Symbol | None],
+    stress: str,
+) -> list[_PointSymbols]:
+    sheet.heading("Stresses at the points of the section")
+    sheet.text(SHEAR_TEXT)
+    N, V_x, V_y, T, M_x, M_y = (forces[k] for k in ("N", "V_x", "V_y", "T", "M_x", "M_y"))
+    A, I_x, I_y, J = props["A"], props["I_x"], props["I_y"], props["J"]
+    I_xy, D = props["I_xy"], props["D"]
+    unit = section.length_unit
+    q_scale = model.A**1.5
+    sigma_N = sheet.step("sigma_N", N / A, "Axial term, N/A (same at every point)", unit=stress)
+    rule = model.torsion
+    tau_T_common = None
+    if rule.kind == "closed":
+        tau_T_common = sheet.step(
+            "tau_T", T / (2 * props["A_m"] * props["t"]), "Torsion, T/(2·A_m·t)", unit=stress
+        )
+    elif rule.kind == "open":
+        tau_T_common = sheet.step(
+            "tau_T", T * props["t_max"] / J, "Torsion, T·t_max/J", unit=stress
+        )
+    points: list[_PointSymbols] = []
+    cuts = model.cuts
+    for index, label in enumerate(model.labels):
+        n = str(index + 1)
+        record = _PointSymbols(index + 1, label)
+        sheet.heading(f"Point {n}: {label}", level=2)
+        x = sheet.input(
+            f"x_{n}",
+            Quantity(model.x[index], unit),
+            "x of the point from the centroid",
+            reference="section outline",
+        )
+        y = sheet.input(
+            f"y_{n}",
+            Quantity(model.y[index], unit),
+            "y of the point from the centroid",
+            reference="section outline",
+        )
+        if D is None:
+            sigma_mx = sheet.step(f"sigma_Mx_{n}", M_x * y / I_x, "Term from M_x", unit=stress)
+            sigma_my = sheet.step(f"sigma_My_{n}", -M_y * x / I_y, "Term from M_y", unit=stress)
+        else:
+            sigma_mx = sheet.step(
+                f"sigma_Mx_{n}", M_x * (I_y * y - I_xy * x) / D, "Term from M_x", unit=stress
+            )
+            sigma_my = sheet.step(
+                f"sigma_My_{n}", M_y * (I_xy * y - I_x * x) / D, "Term from M_y", unit=stress
+            )
+        sigma = sheet.step(
+            f"sigma_z_{n}", sigma_N + sigma_mx + sigma_my, "Normal stress (sum)", unit=stress
+        )
+        record.terms.update(sigma_N=sigma_N, sigma_Mx=sigma_mx, sigma_My=sigma_my, sigma=sigma)
+
+        transverse = []
+        for cut, (Q_own, Q_other, width) in (
+            ("zy", (cuts.Qx_above[index], cuts.Qy_above[index], cuts.b[index])),
+            ("zx", (cuts.Qy_right[index], cuts.Qx_right[index], cuts.t[index])),
+        ):
+            term = _shear_term(
+                sheet,
+                cut,
+                n,
+                (Q_own, Q_other, width),
+                q_scale,
+                unit,
+                stress,
+                (V_x, V_y, I_x, I_y, I_xy, D),
+            )
+            if term is not None:
+                transverse.append(term)
+                record.terms[f"tau_{cut}"] = term
+        if tau_T_common is None:  # round: τ = T·r/J at the point's radius
+            r = sheet.step(f"r_{n}", sqrt(x**2 + y**2), "Radius of the point", unit=unit)
+            tau_T = sheet.step(f"tau_T_{n}", T * r / J, "Torsion, T·r/J", unit=stress)
+        else:
+            tau_T = tau_T_common
+        record.terms["tau_T"] = tau_T
+        if len(transverse) == 2:
+            shear_expr = sqrt(transverse[0] ** 2 + transverse[1] ** 2) + Abs(tau_T)
+        elif transverse:
+            shear_expr = Abs(transverse[0]) + Abs(tau_T)
+        else:
+            shear_expr = Abs(tau_T)
+        tau = sheet.step(f"tau_{n}", shear_expr, "Shear stress at the point", unit=stress)
+        radius = sqrt((sigma / 2) ** 2 + tau**2)
+        record.terms["tau"] = tau
+        record.terms["sigma_1"] = sheet.step(
+            f"sigma_1_{n}", sigma / 2 + radius, "Major principal stress", unit=stress
+        )
+        record.terms["sigma_2"] = sheet.step(
+            f"sigma_2_{n}", sigma / 2 - radius, "Minor principal stress", unit=stress
+        )
+        record.terms["tau_max"] = sheet.step(
+            f"tau_max_{n}", radius, "Maximum in-plane shear stress", unit=stress
+        )
+        record.terms["sigma_vm"] = sheet.step(
+            f"sigma_vm_{n}", sqrt(sigma**2 + 3 * tau**2), "Von Mises stress", unit=stress
+        )
+        points.append(record)
+    return points
+
+
+def _shear_term(
+    sheet: Sheet,
+    cut: str,
+    n: str,
+    cut_values: tuple[float, float, float],
+    q_scale: float,
+    unit: str,
+    stress: str,
+    section_symbols: tuple,
+) -> sp.Symbol | None:
+    """τzy (horizontal cut, part above) or τzx (vertical cut, part to the right), or None."""
+    Q_own, Q_other, width = cut_values
+    V_x, V_y, I_x, I_y, I_xy, D = section_symbols
+    has_own, has_other = _significant(Q_own, q_scale), _significant(Q_other, q_scale)
+    if width <= 0 or not (has_own or has_other):
+        return None  # a free edge, or nothing cut off: no transverse shear on this cut
+    if cut == "zy":
+        where, width_name = "horizontal cut, part above", f"b_{n}"
+        own_name, other_name = f"Q_xa_{n}", f"Q_ya_{n}"
+        own_text, other_text = "∫y dA of the part above", "∫x dA of the part above"
+        V_own, V_other, I_own, I_other = V_y, V_x, I_x, I_y
+    else:
+        where, width_name = "vertical cut, part to the right", f"t_{n}"
+        own_name, other_name = f"Q_yr_{n}", f"Q_xr_{n}"
+        own_text, other_text = "∫x dA of the part to the right", "∫y dA of the part to the right"
+        V_own, V_other, I_own, I_other = V_x, V_y, I_y, I_x
+    volume = f"{unit}**3"
+    Q_a = sheet.input(own_name, Quantity(Q_own, volume), own_text, reference="section outline")
+    Q_b = None
+    if has_other or D is not None:
+        Q_b = sheet.input(
+            other_name, Quantity(Q_other, volume), other_text, reference="section outline"
+        )
+    b = sheet.input(
+        width_name,
+        Quantity(width, unit),
+        f"Width of material on the {where}",
+        reference="section outline",
+    )
+    if D is not None:
+        # τ·b = [(V_own·I_other − V_other·I_xy)·Q_own + (V_other·I_own − V_own·I_xy)·Q_other]/D
+        expr = (
+            (V_own * I_other - V_other * I_xy) * Q_a + (V_other * I_own - V_own * I_xy) * Q_b
+        ) / (D * b)
+    elif Q_b is not None:
+        expr = V_own * Q_a / (I_own * b) + V_other * Q_b / (I_other * b)
+    else:
+        expr = V_own * Q_a / (I_own * b)
+    description = f"Transverse shear on the {where} (V·Q/(I·b))"
+    return sheet.step(f"tau_{cut}_{n}", expr, description, unit=stress)
+
+
+def _value(sheet: Sheet, symbol: sp.Symbol, stress: str) -> float:
+    return float(sheet.value(symbol).to(stress).m)
+
+
+def _write_summary(sheet: Sheet, points: list[_PointSymbols], stress: str) -> None:
+    sheet.heading("Summary by point")
+    shown = "ksi" if stress == "ksi" else "MPa"
+    for point in points:
+        terms = {key: _value(sheet, symbol, stress) for key, symbol in point.terms.items()}
+        shear_parts = [
+            f"τ_{key[4:]} = {terms[key]:+.3f}" for key in ("tau_zy", "tau_zx") if key in terms
+        ]
+        shear_parts.append(f"τ_T = {terms['tau_T']:+.3f}")
+        sheet.text(
+            f"Point {point.index} ({point.label}): σ = {terms['sigma_N']:+.3f} (N) "
+            f"{terms['sigma_Mx']:+.3f} (M_x) {terms['sigma_My']:+.3f} (M_y) = "
+            f"{terms['sigma']:+.3f} {shown}; {', '.join(shear_parts)} → τ = {terms['tau']:.3f}; "
+            f"σ1 = {terms['sigma_1']:+.3f}, σ2 = {terms['sigma_2']:+.3f}, "
+            f"τmax = {terms['tau_max']:.3f}, von Mises = {terms['sigma_vm']:.3f} {shown}."
+        )
+
+
+def governing_points(sheet: Sheet, points: list[_PointSymbols], stress: str) -> dict[str, int]:
+    """Index (into ``points``) of the governing point for each measure of :data:`MEASURES`."""
+    keys = {
+        "tension": ("sigma", 1.0),
+        "compression": ("sigma", -1.0),
+        "shear": ("tau", 1.0),
+        "max shear": ("tau_max", 1.0),
+        "von Mises": ("sigma_vm", 1.0),
+    }
+    chosen = {}
+    for measure, (key, sign) in keys.items():
+        values = [sign * _value(sheet, point.terms[key], stress) for point in points]
+        chosen[measure] = max(range(len(points)), key=values.__getitem__)
+    return chosen
+
+
+def _write_check(
+    sheet: Sheet, points: list[_PointSymbols], symbols: dict[str, sp.Symbol], stress: str
+) -> None:
+    sheet.heading("Governing points and allowable-stress check")
+    chosen = governing_points(sheet, points, stress)
+    lines = []
+    for measure, index in chosen.items():
+        point = points[index]
+        lines.append(f"{MEASURES[measure]}: point {point.index} ({point.label})")
+    sheet.text("Governing points. " + "; ".join(lines) + ".")
+    governing = points[chosen["von Mises"]]
+    sigma_vm_max = sheet.step(
+        "sigma_vm_max",
+        governing.terms["sigma_vm"],
+        f"Largest von Mises stress: point {governing.index} ({governing.label})",
+        unit=stress,
+    )
+    F_allow = sheet.step(
+        "F_allow", symbols["F_y"] / symbols["Omega"], "Generic allowable stress", unit=stress
+    )
+    sheet.text(NOT_A_SPEC_CHECK)
+    sheet.check(
+        f"Von Mises stress at point {governing.index} ({governing.label})",
+        sigma_vm_max,
+        F_allow,
+        reference="generic F_y/Ω; not a specification check",
+    )

@@ -1,0 +1,64 @@
+"""Mechanics of a cantilever member: loads, statics at a station, stresses at section points.
+
+Axis system: member along z from the fixed support (z = 0); section in (x, y),
+x right, y up, origin at the centroid; right-handed. Internal forces act on the
+cut face whose outward normal is +z (see :mod:`calcsheet.mechanics.statics`).
+
+Quick use::
+
+    from calcsheet.mechanics import point_load, internal_forces, stress_model
+
+    load = point_load("P1", magnitude="6 kip", angle="30 deg", from_axis="+z",
+                      toward_axis="-y", z="60 in", ey="-5 in")
+    forces = internal_forces("60 in", [load], station="0 in")
+    model = stress_model(section)             # once per section
+    result = model.stresses(forces.as_array("kip", "inch"))   # ksi at every point
+"""
+
+from calcsheet.mechanics.loads import (
+    AppliedMoment,
+    Direction,
+    PointLoad,
+    applied_moment,
+    member_length,
+    point_load,
+)
+from calcsheet.mechanics.statics import (
+    FORCE_NAMES,
+    InternalForces,
+    internal_forces,
+    loads_beyond,
+    resultants_numeric,
+    validate_loads,
+)
+from calcsheet.mechanics.stresses import (
+    CENTROID_LABEL,
+    MEASURES,
+    PointStresses,
+    StressModel,
+    stress_model,
+)
+from calcsheet.mechanics.torsion import WARPING_NOTE, TorsionRule, torsion_rule
+
+__all__ = [
+    "CENTROID_LABEL",
+    "FORCE_NAMES",
+    "MEASURES",
+    "WARPING_NOTE",
+    "AppliedMoment",
+    "Direction",
+    "InternalForces",
+    "PointLoad",
+    "PointStresses",
+    "StressModel",
+    "TorsionRule",
+    "applied_moment",
+    "internal_forces",
+    "loads_beyond",
+    "member_length",
+    "point_load",
+    "resultants_numeric",
+    "stress_model",
+    "torsion_rule",
+    "validate_loads",
+]
