@@ -3,7 +3,6 @@
 from __future__ import annotations
 
 import math
-import time
 
 import numpy as np
 import pytest
@@ -155,14 +154,11 @@ def test_mirror_symmetry_of_an_i_shape(forces) -> None:
         assert reflected.von_mises[j] == pytest.approx(original.von_mises[i], abs=1e-9)
 
 
-def test_thousand_load_cases_are_fast() -> None:
+def test_thousand_load_cases_give_every_point_of_every_case() -> None:
+    # Speed is measured by `make bench`, never asserted in a test.
     model = stress_model(catalog_section("W10x33"))
     cases = np.random.default_rng(7).normal(size=(1000, 6)) * 10
-    model.stresses(cases)  # warm-up
-    start = time.perf_counter()
     result = model.stresses(cases)
     governing = result.governing_index("von Mises")
-    elapsed = time.perf_counter() - start
     assert result.von_mises.shape == (1000, len(model.labels))
     assert governing.shape == (1000,)
-    assert elapsed < 0.05
