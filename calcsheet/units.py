@@ -189,7 +189,7 @@ class UnitSystem:
 
     def unit_for(self, quantity: pint.Quantity) -> pint.Unit | None:
         """The preset's unit for this quantity's dimension, or ``None`` when it has none."""
-        return _preferred_unit(self.name, quantity.dimensionality)
+        return _preferred_unit(tuple(self.preferred.items()), quantity.dimensionality)
 
 
 US_CUSTOMARY = UnitSystem(
@@ -238,9 +238,10 @@ def unit_system(name: str | UnitSystem) -> UnitSystem:
 
 
 @lru_cache(maxsize=256)
-def _preferred_unit(system_name: str, dimensionality: object) -> pint.Unit | None:
-    system = UNIT_SYSTEMS[system_name]
-    for dimension, unit in system.preferred.items():
+def _preferred_unit(
+    preferred: tuple[tuple[str, str], ...], dimensionality: object
+) -> pint.Unit | None:
+    for dimension, unit in preferred:
         wanted = DIMENSIONS.get(dimension, dimension)
         if wanted and ureg.get_dimensionality(wanted) == dimensionality:
             return ureg.parse_units(unit)

@@ -18,14 +18,14 @@ import pint
 import sympy as sp
 
 from calcsheet.engine import Sheet, TitleBlock
-from calcsheet.engine.functions import Abs, cos, sin, sqrt
+from calcsheet.engine.functions import Abs, Max, cos, sin, sqrt
 from calcsheet.errors import InputError
 from calcsheet.mechanics.loads import AXES, AppliedMoment, PointLoad, parse_signed_axis
 from calcsheet.mechanics.statics import loads_beyond, validate_loads
 from calcsheet.mechanics.stresses import MEASURES, StressModel, stress_model
 from calcsheet.mechanics.torsion import WARPING_NOTE
 from calcsheet.sections import Section
-from calcsheet.units import Quantity, parse_quantity
+from calcsheet.units import Quantity, parse_quantity, unit_system
 
 AXIS_TEXT = (
     "Axes: the member runs along z from the fixed support (z = 0) to the free end "
@@ -66,18 +66,6 @@ class _PointSymbols:
     terms: dict[str, sp.Symbol] = field(default_factory=dict)
 
 
-def _stress_unit(units: str) -> str:
-    return "MPa" if str(units).strip().upper() == "SI" else "ksi"
-
-
-def _length_unit(units: str) -> str:
-    return "mm" if str(units).strip().upper() == "SI" else "inch"
-
-
-def _force_unit(units: str) -> str:
-    return "kN" if str(units).strip().upper() == "SI" else "kip"
-
-
 def member_sheet(
     section: Section,
     loads: Sequence[PointLoad | AppliedMoment],
@@ -111,8 +99,8 @@ def member_sheet(
         raise InputError(
             "station z", f"{station_q:~P}", "a station with loads beyond it", "nothing to check"
         )
-    stress = _stress_unit(units)
-    length_unit = _length_unit(units)
+    preset = unit_system(units).preferred
+    stress, length_unit = preset["stress"], preset["length"]
     model = stress_model(section, section.length_unit)
     sheet = Sheet(title, units=units, title_block=title_block)
     with sheet:
@@ -120,10 +108,10 @@ def member_sheet(
         symbols, free_suffixes = _write_inputs(
             sheet, loads, free, length_q, station_q, fy_q, omega_q, length_unit
         )
-        forces = _write_internal_forces(sheet, free_suffixes, symbols)
+        forces = _write_internal_forces(sheet, free_suffixes, symbols, preset)
         props = _write_section_properties(sheet, section, model)
         points = _write_point_stresses(sheet, section, model, forces, props, stress)
-        _write_summary(sheet, points, stress)
+        _write_point_table(sheet, points, stress)
         _write_check(sheet, points, symbols, stress)
     return sheet
 
@@ -209,10 +197,7 @@ def _write_point_load(
             symbols[name] = sheet.input(
                 name, load.component(axis), f"Component of {load.name} along {axis}"
             )
-    where = "beyond the station: included" if beyond else "between support and station: excluded"
-    symbols[f"z_{suffix}"] = sheet.input(
-        f"z_{suffix}", load.z, f"Position along the member ({where})", unit=length_unit
-    )
+    _write_position(sheet, suffix, load.z, beyond, symbols, length_unit)
     symbols[f"e_x{suffix}"] = sheet.input(
         f"e_x{suffix}", load.ex, "Offset of the point of application in x", unit=length_unit
     )
@@ -241,14 +226,28 @@ def _write_couple(
     for axis, value in zip(AXES, (couple.Mx, couple.My, couple.Mz), strict=True):
         name = f"C_{axis}{suffix}"
         symbols[name] = sheet.input(name, value, f"Couple about {axis} (right-hand rule)")
+    _write_position(sheet, suffix, couple.z, beyond, symbols, length_unit)
+
+
+def _write_position(
+    sheet: Sheet,
+    suffix: str,
+    z: pint.Quantity,
+    beyond: bool,
+    symbols: dict[str, sp.Symbol],
+    length_unit: str,
+) -> None:
     where = "beyond the station: included" if beyond else "between support and station: excluded"
     symbols[f"z_{suffix}"] = sheet.input(
-        f"z_{suffix}", couple.z, f"Position along the member ({where})", unit=length_unit
+        f"z_{suffix}", z, f"Position along the member ({where})", unit=length_unit
     )
 
 
 def _write_internal_forces(
-    sheet: Sheet, free_suffixes: Sequence[str], symbols: dict[str, sp.Symbol]
+    sheet: Sheet,
+    free_suffixes: Sequence[str],
+    symbols: dict[str, sp.Symbol],
+    preset: dict[str, str],
 ) -> dict[str, sp.Symbol]:
     sheet.heading("Internal forces at the station (statics of the free part)")
     terms: dict[str, list[sp.Expr]] = {name: [] for name in ("N", "V_x", "V_y", "T", "M_x", "M_y")}
@@ -269,25 +268,25 @@ def _write_internal_forces(
     included = ", ".join(f"load {suffix}" for suffix in free_suffixes)
     sheet.text(f"Loads at or beyond the station, carried by the cut: {included}.")
     descriptions = {
-        "N": ("Axial force N = ΣF_z (tension positive)", "kip"),
-        "V_x": ("Shear along x, V_x = ΣF_x", "kip"),
-        "V_y": ("Shear along y, V_y = ΣF_y", "kip"),
-        "T": ("Torque T = Σ(e_x·F_y − e_y·F_x) + ΣC_z", "kip*ft"),
-        "M_x": ("Moment about x, M_x = Σ(e_y·F_z − a·F_y) + ΣC_x", "kip*ft"),
-        "M_y": ("Moment about y, M_y = Σ(a·F_x − e_x·F_z) + ΣC_y", "kip*ft"),
+        "N": ("Axial force N = ΣF_z (tension positive)", "force"),
+        "V_x": ("Shear along x, V_x = ΣF_x", "force"),
+        "V_y": ("Shear along y, V_y = ΣF_y", "force"),
+        "T": ("Torque T = Σ(e_x·F_y − e_y·F_x) + ΣC_z", "moment"),
+        "M_x": ("Moment about x, M_x = Σ(e_y·F_z − a·F_y) + ΣC_x", "moment"),
+        "M_y": ("Moment about y, M_y = Σ(a·F_x − e_x·F_z) + ΣC_y", "moment"),
     }
     forces: dict[str, sp.Symbol] = {}
     zero: dict[str, sp.Symbol] = {}
-    for name, (description, zero_unit) in descriptions.items():
+    for name, (description, kind) in descriptions.items():
         if terms[name]:
             expr: sp.Expr = sp.Add(*terms[name])
         else:  # no load of this kind beyond the cut: a zero with the right unit
-            if zero_unit not in zero:
-                label = "F_0" if zero_unit == "kip" else "M_0"
-                zero[zero_unit] = sheet.input(
-                    label, f"0 {zero_unit}", "Zero: no load of this kind beyond the station"
+            if kind not in zero:
+                label = "F_0" if kind == "force" else "M_0"
+                zero[kind] = sheet.input(
+                    label, f"0 {preset[kind]}", "Zero: no load of this kind beyond the station"
                 )
-            expr = zero[zero_unit]
+            expr = zero[kind]
         forces[name] = sheet.step(name, expr, description, reference="statics of the free part")
     return forces
 
@@ -519,22 +518,30 @@ def _value(sheet: Sheet, symbol: sp.Symbol, stress: str) -> float:
     return float(sheet.value(symbol).to(stress).m)
 
 
-def _write_summary(sheet: Sheet, points: list[_PointSymbols], stress: str) -> None:
+_TABLE_COLUMNS = (
+    ("sigma_N", "σ from N"),
+    ("sigma_Mx", "σ from Mx"),
+    ("sigma_My", "σ from My"),
+    ("sigma", "σ (sum)"),
+    ("tau", "τ"),
+    ("sigma_1", "σ1"),
+    ("sigma_2", "σ2"),
+    ("tau_max", "τmax"),
+    ("sigma_vm", "von Mises"),
+)
+
+
+def _write_point_table(sheet: Sheet, points: list[_PointSymbols], stress: str) -> None:
     sheet.heading("Summary by point")
-    shown = "ksi" if stress == "ksi" else "MPa"
-    for point in points:
-        terms = {key: _value(sheet, symbol, stress) for key, symbol in point.terms.items()}
-        shear_parts = [
-            f"τ_{key[4:]} = {terms[key]:+.3f}" for key in ("tau_zy", "tau_zx") if key in terms
-        ]
-        shear_parts.append(f"τ_T = {terms['tau_T']:+.3f}")
-        sheet.text(
-            f"Point {point.index} ({point.label}): σ = {terms['sigma_N']:+.3f} (N) "
-            f"{terms['sigma_Mx']:+.3f} (M_x) {terms['sigma_My']:+.3f} (M_y) = "
-            f"{terms['sigma']:+.3f} {shown}; {', '.join(shear_parts)} → τ = {terms['tau']:.3f}; "
-            f"σ1 = {terms['sigma_1']:+.3f}, σ2 = {terms['sigma_2']:+.3f}, "
-            f"τmax = {terms['tau_max']:.3f}, von Mises = {terms['sigma_vm']:.3f} {shown}."
-        )
+    sheet.table(
+        ["Point", *(title for _, title in _TABLE_COLUMNS)],
+        [
+            [f"{point.index}: {point.label}", *(point.terms[key] for key, _ in _TABLE_COLUMNS)]
+            for point in points
+        ],
+        caption="Stress terms with their signs and sums at each point, tension positive",
+        unit=stress,
+    )
 
 
 def governing_points(sheet: Sheet, points: list[_PointSymbols], stress: str) -> dict[str, int]:
@@ -566,8 +573,8 @@ def _write_check(
     governing = points[chosen["von Mises"]]
     sigma_vm_max = sheet.step(
         "sigma_vm_max",
-        governing.terms["sigma_vm"],
-        f"Largest von Mises stress: point {governing.index} ({governing.label})",
+        Max(*(point.terms["sigma_vm"] for point in points)),
+        "Largest von Mises stress over the points",
         unit=stress,
     )
     F_allow = sheet.step(

@@ -6,7 +6,17 @@ Public API for calc authors (built-in calcs use nothing else)::
     from calcsheet.engine.functions import sqrt, sin, cos, tan, Min, Max, Abs, Piecewise
 """
 
-from calcsheet.engine.parts import CAUTIONS, Check, Figure, Heading, Input, Prose, Step, TitleBlock
+from calcsheet.engine.parts import (
+    CAUTIONS,
+    Check,
+    Figure,
+    Heading,
+    Input,
+    Prose,
+    Step,
+    Table,
+    TitleBlock,
+)
 from calcsheet.engine.printers import TARGETS, as_written
 from calcsheet.engine.sheet import CheckText, Equation, Sheet
 
@@ -22,6 +32,7 @@ __all__ = [
     "Prose",
     "Sheet",
     "Step",
+    "Table",
     "TitleBlock",
     "as_written",
 ]

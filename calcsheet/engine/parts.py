@@ -54,6 +54,21 @@ class Prose:
 
 
 @dataclass(eq=False)
+class Table:
+    """Rows of cells: a cell is text, or a symbol shown with its current value.
+
+    A symbol cell is never a copy of a number: it is printed from the sheet's
+    values whenever the table is rendered, so it follows every input change.
+    ``unit`` shows every symbol cell in that unit, without repeating the unit.
+    """
+
+    columns: tuple[str, ...]
+    rows: list[tuple[str | sp.Symbol, ...]]
+    caption: str = ""
+    unit: pint.Unit | None = None
+
+
+@dataclass(eq=False)
 class Figure:
     """An SVG drawing with a caption. The SVG is produced by calcsheet's own figure code."""
 
@@ -136,4 +151,4 @@ class Check:
         }
 
 
-Part = Heading | Prose | Figure | Input | Step | Check
+Part = Heading | Prose | Figure | Table | Input | Step | Check

@@ -766,7 +766,7 @@ class PlainStepPrinter(_ExpressionPrinter):
             for symbol, power in below:
                 unit += f"/{symbol}" + (f"**{_exponent_text(power)}" if power != 1 else "")
             text = f"{text} {unit}"
-        return f"({text})"
+        return text if standalone else f"({text})"
 
     def plus_operator(self) -> str:
         return " + "

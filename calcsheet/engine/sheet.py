@@ -26,7 +26,17 @@ import sympy as sp
 
 from calcsheet.engine.evaluate import chosen_branch, evaluate
 from calcsheet.engine.names import parse_symbol_name
-from calcsheet.engine.parts import Check, Figure, Heading, Input, Part, Prose, Step, TitleBlock
+from calcsheet.engine.parts import (
+    Check,
+    Figure,
+    Heading,
+    Input,
+    Part,
+    Prose,
+    Step,
+    Table,
+    TitleBlock,
+)
 from calcsheet.engine.printers import PRINTERS, Quantityish, _ExpressionPrinter, as_written
 from calcsheet.errors import DefinitionError, DimensionError, EvaluationError, InputError
 from calcsheet.units import (
@@ -124,6 +134,33 @@ class Sheet:
     def figure(self, svg: str, caption: str = "") -> Figure:
         """An SVG drawing made by calcsheet's figure code (never user-supplied markup)."""
         part = Figure(svg, str(caption))
+        self.parts.append(part)
+        return part
+
+    def table(
+        self,
+        columns: list[str] | tuple[str, ...],
+        rows: list[list[str | sp.Symbol] | tuple[str | sp.Symbol, ...]],
+        *,
+        caption: str = "",
+        unit: str | None = None,
+    ) -> Table:
+        """A table whose cells are text or symbols defined earlier (shown with current values)."""
+        columns = tuple(str(column) for column in columns)
+        checked_rows = []
+        for number, row in enumerate(rows, start=1):
+            row = tuple(row)
+            if len(row) != len(columns):
+                raise DefinitionError(
+                    f"table {caption!r}: row {number} has {len(row)} cells "
+                    f"for {len(columns)} columns"
+                )
+            for cell in row:
+                if isinstance(cell, sp.Symbol):
+                    self._require_defined(cell, f"table {caption!r}")
+            checked_rows.append(tuple(c if isinstance(c, sp.Symbol) else str(c) for c in row))
+        shown_in = parse_unit(unit, field=f"table {caption!r} unit") if unit is not None else None
+        part = Table(columns, checked_rows, str(caption), shown_in)
         self.parts.append(part)
         return part
 
@@ -341,6 +378,22 @@ class Sheet:
             self._format(ureg.Quantity(check.utilization)), False, standalone=True
         )
         return CheckText(symbolic, numeric, utilization)
+
+    def cell_text(self, table: Table, cell: sp.Symbol, target: str) -> str:
+        """A symbol cell of ``table`` printed for ``target`` from the current value."""
+        _, slot_printer = self._printer_pair(target)
+        quantity = self._values[cell]
+        if table.unit is None:
+            return slot_printer.quantity(self._shown_value(cell), False, standalone=True)
+        try:
+            magnitude = float(quantity.to(table.unit).magnitude)
+        except pint.DimensionalityError:
+            raise DimensionError(
+                f"table {table.caption!r}: {cell.name} ({quantity:~P}) cannot be shown in "
+                f"{table.unit:~P}"
+            ) from None
+        number = format_number(magnitude, self.number_style)
+        return slot_printer.quantity(Quantityish(number), False, standalone=True)
 
     def format_value(self, quantity: pint.Quantity, target: str) -> str:
         """A quantity typeset for ``target`` with the sheet's number style."""

@@ -2,11 +2,13 @@
 
 from __future__ import annotations
 
-from dataclasses import dataclass, field
+from dataclasses import dataclass
 from typing import Any
 
+import sympy as sp
+
 from calcsheet import __version__
-from calcsheet.engine import CAUTIONS, Check, Figure, Heading, Input, Prose, Sheet, Step
+from calcsheet.engine import CAUTIONS, Check, Figure, Heading, Input, Prose, Sheet, Step, Table
 
 
 @dataclass(frozen=True)
@@ -25,7 +27,8 @@ class PartView:
     status: str = ""
     reference: str = ""
     svg: str = ""
-    extra: dict[str, Any] = field(default_factory=dict)
+    columns: tuple[str, ...] = ()
+    cells: tuple[tuple[tuple[bool, str], ...], ...] = ()  # (is math, content) per cell
 
 
 @dataclass(frozen=True)
@@ -54,6 +57,20 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
             parts.append(PartView("heading", text=part.text, level=part.level))
         elif isinstance(part, Prose):
             parts.append(PartView("prose", text=part.text))
+        elif isinstance(part, Table):
+            caption = part.caption
+            if part.unit is not None:
+                caption += f" (values in {part.unit:~P})"
+            cells = tuple(
+                tuple(
+                    (True, sheet.cell_text(part, cell, target))
+                    if isinstance(cell, sp.Symbol)
+                    else (False, cell)
+                    for cell in row
+                )
+                for row in part.rows
+            )
+            parts.append(PartView("table", text=caption, columns=part.columns, cells=cells))
         elif isinstance(part, Figure):
             parts.append(PartView("figure", text=part.caption, svg=part.svg))
         elif isinstance(part, Input):

@@ -57,7 +57,8 @@ def test_sheet_states_conventions_and_that_it_is_not_a_spec_check() -> None:
     assert "warping" in prose
     assert "Governing points" in prose
     assert sheet["M_x"].reference == "statics of the free part"
-    # Hand calc at the support: Mx = ey·Fz − a·Fy = −5·5.196 + 60·3 = 154.02 kip·in.
+    # Hand calc at the support (statics, common practice, no source):
+    # Mx = ey·Fz − a·Fy = −5·5.196 + 60·3 = 154.02 kip·in.
     assert sheet.value("M_x").to("kip*inch").m == pytest.approx(-5 * 6 * np.cos(np.pi / 6) + 180)
 
 

@@ -90,6 +90,7 @@ def test_unknown_units_and_wrong_dimensions_name_the_input():
 def test_changing_an_input_re_evaluates_every_step():
     sheet, _ = _bracket()
     sheet.set_input("P", "13 kip")
+    # 13 kip / 7.58 in^2 (arithmetic, common practice, no source)
     assert sheet.value("f_a").magnitude == pytest.approx(13 / 7.58)
     assert "13.00" in sheet.equation(sheet["f_a"], "plain").substituted
 
@@ -121,6 +122,7 @@ def test_angles_work_in_degrees_and_radians():
         phi = sheet.input("phi", f"{3.141592653589793 / 3} rad", "Angle", dimension="angle")
         sheet.step("P_x", P * cos(theta), "Component", unit="kip")
         sheet.step("P_y", P * cos(phi), "Component", unit="kip")
+    # 10 kip x cos 60° = 5 kip, in degrees or radians (common practice, no source)
     assert sheet.value("P_x").magnitude == pytest.approx(5.0)
     assert sheet.value("P_y").magnitude == pytest.approx(5.0)
 
@@ -130,6 +132,7 @@ def test_a_check_reports_utilization_and_status():
     with sheet:
         F_a = sheet.input("F_a", "1.0 ksi", "Allowable", dimension="stress")
     check = sheet.check("Axial stress", s["f_a"], F_a, reference="common practice")
+    # utilization = (6.5 / 7.58 ksi) / 1.0 ksi (arithmetic, common practice, no source)
     assert check.utilization == pytest.approx(6.5 / 7.58)
     assert check.passes and check.status == "OK"
     sheet.set_input("P", "10 kip")
@@ -149,3 +152,20 @@ def test_steps_show_in_a_notebook():
     assert sheet["f_a"]._repr_latex_().startswith("$$f_{a} = \\frac{P}{A}")
     assert "<math" in sheet["f_a"]._repr_html_()
     assert sheet._repr_latex_().startswith("$$\\begin{aligned}")
+
+
+def test_a_table_shows_current_values_after_an_input_changes():
+    sheet, s = _bracket()
+    table = sheet.table(["Term", "Value"], [["axial", s["f_a"]]], caption="t", unit="ksi")
+    # 6.5 / 7.58 = 0.858 ksi, then 13 / 7.58 = 1.715 ksi (arithmetic, common practice, no source)
+    assert sheet.cell_text(table, s["f_a"], "plain") == "0.858"
+    sheet.set_input("P", "13 kip")
+    assert sheet.cell_text(table, s["f_a"], "plain") == "1.715"
+
+
+def test_a_table_refuses_ragged_rows_and_undefined_symbols():
+    sheet, s = _bracket()
+    with pytest.raises(DefinitionError, match="row 1 has 1 cells for 2 columns"):
+        sheet.table(["a", "b"], [[s["P"]]])
+    with pytest.raises(DefinitionError, match="uses 'q' before it is defined"):
+        sheet.table(["a"], [[sp.Symbol("q")]])

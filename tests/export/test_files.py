@@ -90,3 +90,19 @@ def test_a_failed_pdf_keeps_the_previous_files(tmp_path: Path, monkeypatch):
         export_sheet(sheet, tmp_path, "sheet")
     after = {path.name: path.read_bytes() for path in tmp_path.iterdir()}
     assert after == before
+
+
+def test_a_table_reaches_both_outputs_with_current_values():
+    sheet = Sheet("table")
+    with sheet:
+        P = sheet.input("P", "2 kip", "Load", dimension="force")
+        A = sheet.input("A", "4 in^2", "Area", dimension="area")
+        f = sheet.step("f", P / A, "Stress", unit="ksi")
+    sheet.table(["Point", "Stress"], [["top <b>", f]], caption="Per point", unit="ksi")
+    sheet.set_input("P", "3 kip")
+    # 3 kip / 4 in^2 = 0.750 ksi (arithmetic, common practice, no source)
+    html = render_html(sheet)
+    assert '<table class="values">' in html and "top &lt;b&gt;" in html
+    assert "<mn>0.750</mn>" in html
+    text = " ".join(_pdf_pages(pdf_bytes(sheet)))
+    assert "top <b>" in text and "0.750" in text and "(values in ksi)" in text
