@@ -5,6 +5,7 @@ Parts are plain data. The sheet fills in their values; renderers only read them.
 
 from __future__ import annotations
 
+from collections.abc import Callable
 from dataclasses import dataclass, field
 from typing import TYPE_CHECKING, Any
 
@@ -70,9 +71,13 @@ class Table:
 
 @dataclass(eq=False)
 class Figure:
-    """An SVG drawing with a caption. The SVG is produced by calcsheet's own figure code."""
+    """An SVG drawing with a caption, made by calcsheet's own figure code.
 
-    svg: str
+    ``svg`` is the drawing, or a function of the sheet that draws it from the
+    current values (a stress plot that must follow every input change).
+    """
+
+    svg: str | Callable[[Sheet], str]
     caption: str = ""
 
 

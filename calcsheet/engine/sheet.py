@@ -17,7 +17,7 @@ symbolic forms.
 from __future__ import annotations
 
 import math
-from collections.abc import Iterator
+from collections.abc import Callable, Iterator
 from contextlib import ExitStack
 from dataclasses import dataclass
 
@@ -131,11 +131,18 @@ class Sheet:
         self.parts.append(part)
         return part
 
-    def figure(self, svg: str, caption: str = "") -> Figure:
-        """An SVG drawing made by calcsheet's figure code (never user-supplied markup)."""
+    def figure(self, svg: str | Callable[[Sheet], str], caption: str = "") -> Figure:
+        """An SVG drawing made by calcsheet's figure code (never user-supplied markup).
+
+        Pass a function of the sheet to draw from current values at render time.
+        """
         part = Figure(svg, str(caption))
         self.parts.append(part)
         return part
+
+    def figure_svg(self, figure: Figure) -> str:
+        """The figure's SVG as drawn now (a drawing function sees the current values)."""
+        return figure.svg(self) if callable(figure.svg) else figure.svg
 
     def table(
         self,
@@ -493,6 +500,13 @@ class Sheet:
         from calcsheet.render.html import render_fragment
 
         return render_fragment(self)
+
+    def _repr_mimebundle_(self, include: object = None, exclude: object = None) -> dict:
+        # The whole document travels with the notebook output, so nbconvert can
+        # write the sheet later without the kernel (see calcsheet.export.payload).
+        from calcsheet.export.payload import SHEET_MIME_TYPE, sheet_payload
+
+        return {SHEET_MIME_TYPE: sheet_payload(self)}
 
     def _repr_latex_(self) -> str:
         lines = []

@@ -72,7 +72,7 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
             )
             parts.append(PartView("table", text=caption, columns=part.columns, cells=cells))
         elif isinstance(part, Figure):
-            parts.append(PartView("figure", text=part.caption, svg=part.svg))
+            parts.append(PartView("figure", text=part.caption, svg=sheet.figure_svg(part)))
         elif isinstance(part, Input):
             equation = sheet.equation(part, target)
             view = PartView(
