@@ -187,6 +187,17 @@ class UnitSystem:
     name: str
     preferred: dict[str, str] = field(default_factory=dict)
 
+    @property
+    def description(self) -> str:
+        """The preset in words for the design basis: its name and main display units."""
+        title = {"US": "US customary", "SI": "SI"}.get(self.name, self.name)
+        main = [
+            f"{self.preferred[kind]} ({kind})".replace("**", "^").replace("*", "·")
+            for kind in ("length", "force", "moment", "stress")
+            if kind in self.preferred
+        ]
+        return f"{title}: " + ", ".join(main)
+
     def unit_for(self, quantity: pint.Quantity) -> pint.Unit | None:
         """The preset's unit for this quantity's dimension, or ``None`` when it has none."""
         return _preferred_unit(tuple(self.preferred.items()), quantity.dimensionality)

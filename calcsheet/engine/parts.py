@@ -39,6 +39,16 @@ class TitleBlock:
     revision: str = "0"
 
 
+@dataclass(frozen=True)
+class Revision:
+    """One line of the revision log: what changed in this issue of the calc."""
+
+    mark: str
+    date: str = ""
+    description: str = ""
+    by: str = ""
+
+
 @dataclass(eq=False)
 class Heading:
     """A part title; level 1 starts a part of the calc, level 2 a subsection."""
@@ -111,16 +121,32 @@ class _Defined:
 
 @dataclass(eq=False)
 class Input(_Defined):
-    """A value the engineer supplies, with the dimension it must have."""
+    """A value the engineer supplies, with the dimension it must have.
+
+    ``listed`` False keeps it out of the inputs table (a table of the sheet
+    shows it instead). A non-empty ``fixed`` says why the value cannot change
+    without building the sheet again (it decided which steps the sheet has).
+    """
 
     dimension: str | None = None
+    listed: bool = True
+    fixed: str = ""
 
 
 @dataclass(eq=False)
 class Step(_Defined):
-    """One line of the calc: symbol = expression, evaluated with units, with its reference."""
+    """One line of the calc: symbol = expression, evaluated with units, with its reference.
+
+    ``shown`` False evaluates the step for tables and checks without printing its
+    line. ``candidates`` (label, symbol) pairs make it a governing step: the
+    largest (or smallest) of the candidates, and the sheet names the one that
+    governs from the current values.
+    """
 
     expr: sp.Basic = sp.S.Zero
+    shown: bool = True
+    candidates: tuple[tuple[str, sp.Symbol], ...] = ()
+    largest: bool = True
 
 
 @dataclass(eq=False)

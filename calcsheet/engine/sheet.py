@@ -17,7 +17,7 @@ symbolic forms.
 from __future__ import annotations
 
 import math
-from collections.abc import Callable, Iterator
+from collections.abc import Callable, Iterator, Sequence
 from contextlib import ExitStack
 from dataclasses import dataclass
 
@@ -25,6 +25,7 @@ import pint
 import sympy as sp
 
 from calcsheet.engine.evaluate import chosen_branch, evaluate
+from calcsheet.engine.functions import Max, Min
 from calcsheet.engine.names import parse_symbol_name
 from calcsheet.engine.parts import (
     Check,
@@ -33,6 +34,7 @@ from calcsheet.engine.parts import (
     Input,
     Part,
     Prose,
+    Revision,
     Step,
     Table,
     TitleBlock,
@@ -109,6 +111,9 @@ class Sheet:
         self._templates: dict[tuple[int, str], tuple] = {}
         self._printers: dict[str, tuple[_ExpressionPrinter, _ExpressionPrinter]] = {}
         self._written_order = ExitStack()
+        self.revisions: list[Revision] = []
+        self.basis: dict[str, list[str]] = {}
+        self.references: list[str] = []
 
     # -- writing the calc ------------------------------------------------------------
 
@@ -118,6 +123,22 @@ class Sheet:
 
     def __exit__(self, *exc_info: object) -> None:
         self._written_order.close()
+
+    def add_revision(self, mark: str, date: str = "", description: str = "", by: str = "") -> None:
+        """Log an issue of the calc; the latest mark becomes the title block's revision."""
+        revision = Revision(str(mark), str(date), str(description), str(by))
+        self.revisions.append(revision)
+        self.title_block.revision = revision.mark
+
+    def add_basis(self, category: str, *items: str) -> None:
+        """State part of the design basis: codes and editions, materials, assumptions..."""
+        self.basis.setdefault(str(category), []).extend(str(item) for item in items)
+
+    def add_reference(self, *citations: str) -> None:
+        """List a document the calc relies on (standards, handbooks, tables), once each."""
+        for citation in citations:
+            if str(citation) not in self.references:
+                self.references.append(str(citation))
 
     def heading(self, text: str, level: int = 1) -> Heading:
         """Start a part (level 1) or a subsection (level 2) of the calc."""
@@ -180,18 +201,30 @@ class Sheet:
         dimension: str | None = None,
         unit: str | None = None,
         reference: str = "",
+        listed: bool = True,
+        fixed: str = "",
     ) -> sp.Symbol:
         """Add an input; returns its symbol for use in later steps.
 
         ``value`` is a quantity or text such as ``"6.5 kip"`` (read by pint's unit
         parser, never evaluated). ``dimension`` (force, length, stress, angle...)
-        is checked now and whenever the input changes.
+        is checked now and whenever the input changes. ``listed=False`` leaves it
+        out of the inputs table because a table of the sheet shows it. ``fixed``
+        is the reason the input cannot be changed with :meth:`set_input` (it
+        decided the layout of the sheet); build the sheet again instead.
         """
         symbol = self._new_symbol(name, "input")
         quantity = parse_quantity(value, field=f"input {name}", dimension=dimension)
         display = self._display_unit(quantity, unit, where=f"input {name!r}")
         part = Input(
-            symbol, str(description), str(reference), display, sheet=self, dimension=dimension
+            symbol,
+            str(description),
+            str(reference),
+            display,
+            sheet=self,
+            dimension=dimension,
+            listed=bool(listed),
+            fixed=str(fixed),
         )
         self._store(part, quantity)
         return symbol
@@ -204,13 +237,54 @@ class Sheet:
         *,
         unit: str | None = None,
         reference: str = "",
+        shown: bool = True,
     ) -> sp.Symbol:
         """Add a step ``name = expr``; returns its symbol for use in later steps.
 
         ``expr`` is a sympy expression over symbols this sheet defined earlier.
         ``unit`` is the unit the result is shown in; without it the sheet's unit
         preset chooses by dimension. ``reference`` cites the clause or equation.
+        ``shown=False`` evaluates the step without printing its line: use it for
+        values a table of the sheet shows, with the formula stated in the text.
         """
+        return self._add_step(name, expr, description, unit, reference, shown=shown)
+
+    def governing(
+        self,
+        name: str,
+        candidates: Sequence[tuple[str, sp.Symbol]],
+        description: str = "",
+        *,
+        largest: bool = True,
+        unit: str | None = None,
+        reference: str = "",
+    ) -> sp.Symbol:
+        """Add a step that takes the largest (or smallest) of labelled candidates.
+
+        The sheet names the candidate that governs from the current values
+        (:meth:`governing_label`), so the name follows every input change; a
+        check whose demand is this step states where it governs.
+        """
+        pairs = tuple((str(label), symbol) for label, symbol in candidates)
+        if not pairs or not all(isinstance(symbol, sp.Symbol) for _, symbol in pairs):
+            raise DefinitionError(
+                f"governing step {name!r}: give (label, symbol) pairs of earlier steps"
+            )
+        symbols = [symbol for _, symbol in pairs]
+        expr = (Max if largest else Min)(*symbols) if len(symbols) > 1 else symbols[0]
+        return self._add_step(
+            name, expr, description, unit, reference, candidates=pairs, largest=largest
+        )
+
+    def _add_step(
+        self,
+        name: str,
+        expr: sp.Basic | float,
+        description: str,
+        unit: str | None,
+        reference: str,
+        **options: object,
+    ) -> sp.Symbol:
         symbol = self._new_symbol(name, "step")
         if isinstance(expr, (int, float)) and not isinstance(expr, bool):
             expr = sp.Integer(expr) if isinstance(expr, int) else sp.Float(expr)
@@ -222,7 +296,9 @@ class Sheet:
         self._require_defined(expr, f"step {name!r}")
         quantity = evaluate(expr, self._values, step=name)
         display = self._display_unit(quantity, unit, where=f"step {name!r}")
-        part = Step(symbol, str(description), str(reference), display, sheet=self, expr=expr)
+        part = Step(
+            symbol, str(description), str(reference), display, sheet=self, expr=expr, **options
+        )
         self._store(part, quantity)
         return symbol
 
@@ -265,6 +341,10 @@ class Sheet:
                 known = ", ".join(n for n, p in self._defined.items() if isinstance(p, Input))
                 raise InputError("input name", name, f"one of: {known}")
             field = f"input {name}"
+            if part.fixed:
+                raise InputError(
+                    field, value, "no change here: build the sheet again", problem=part.fixed
+                )
             quantity = parse_quantity(value, field=field, dimension=part.dimension)
             old = values[part.symbol]
             if quantity.dimensionality != old.dimensionality:
@@ -324,6 +404,23 @@ class Sheet:
         checks = [check for check in self.checks if check.utilization is not None]
         return max(checks, key=lambda check: check.utilization, default=None)
 
+    def governing_label(self, part: Step | sp.Symbol) -> str:
+        """The label of the candidate that governs a governing step, from current values."""
+        step = self[part.name] if isinstance(part, sp.Symbol) else part
+        if not isinstance(step, Step) or not step.candidates:
+            return ""
+        common = self._values[step.candidates[0][1]].units
+        values = [float(self._values[symbol].to(common).magnitude) for _, symbol in step.candidates]
+        pick = max if step.largest else min
+        index = pick(range(len(values)), key=values.__getitem__)
+        return step.candidates[index][0]
+
+    def check_location(self, check: Check) -> str:
+        """Where a check governs, when its demand is a governing step; else empty."""
+        if isinstance(check.demand, sp.Symbol) and check.demand.name in self._defined:
+            return self.governing_label(check.demand)
+        return ""
+
     def iter_parts(self) -> Iterator[Part]:
         """The parts in order, for renderers."""
         return iter(self.parts)
@@ -336,7 +433,12 @@ class Sheet:
         key = (id(part), target)
         if key not in self._templates:
             name = symbolic_printer.symbol_name(parse_symbol_name(part.name))
-            if isinstance(part, Step) and not (part.expr.is_Symbol or part.expr.is_Number):
+            summarized = isinstance(part, Step) and len(part.candidates) > 3
+            if (
+                isinstance(part, Step)
+                and not summarized
+                and not (part.expr.is_Symbol or part.expr.is_Number)
+            ):
                 slots = {symbol: index for index, symbol in enumerate(_ordered_symbols(part.expr))}
                 symbolic = symbolic_printer.print_expression(part.expr)
                 # For an "if" step only the branch that applies is worth substituting.
@@ -349,6 +451,14 @@ class Sheet:
                     type(slot_printer)(slots).print_expression(branch) for branch in branches
                 )
                 order = tuple(slots)
+            elif summarized:
+                # max(...) of many values is read from the table it comes from;
+                # the line shows the rule and the result, and where it governs.
+                symbolic, substituted, order = (
+                    symbolic_printer.print_expression(part.expr),
+                    None,
+                    (),
+                )
             elif isinstance(part, Step) and part.expr.is_Symbol:
                 symbolic, substituted, order = (
                     symbolic_printer.print_expression(part.expr),

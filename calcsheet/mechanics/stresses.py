@@ -16,7 +16,10 @@ At each point (x, y) measured from the centroid:
 * τ = √(τzx² + τzy²) + |τ_T|, then σ1, σ2, τ_max and von Mises.
 
 The centroid is added as a point (label ``centroid``) when it lies in the
-material, because the transverse shear of a symmetric section peaks there.
+material, because the transverse shear of a symmetric section peaks there. When
+it does not (tubes, angles, most channels), the points where the centroidal axes
+leave the outline are added instead: the walls at the neutral axis of each
+bending plane, where V·Q/(I·b) peaks.
 """
 
 from __future__ import annotations
@@ -53,6 +56,34 @@ def point_in_material(rings: list[Array], x: float, y: float) -> bool:
             x_cross = x0 + (y - y0) * (x1 - x0) / (y1 - y0)
         inside ^= bool(np.count_nonzero(crosses & (x < x_cross)) % 2)
     return inside
+
+
+def _axis_crossings(rings: list[Array], vertical: bool) -> tuple[float, float] | None:
+    """Extreme points where a centroidal axis (y = 0, or x = 0 when vertical) meets the outline."""
+    found: list[float] = []
+    for ring in rings:
+        along, across = (ring[:, 1], ring[:, 0]) if vertical else (ring[:, 0], ring[:, 1])
+        a0, c0 = along, across
+        a1, c1 = np.roll(a0, -1), np.roll(c0, -1)
+        crosses = (c0 > 0.0) != (c1 > 0.0)
+        with np.errstate(divide="ignore", invalid="ignore"):
+            at = a0 + (0.0 - c0) * (a1 - a0) / (c1 - c0)
+        found.extend(at[crosses].tolist())
+    return (min(found), max(found)) if found else None
+
+
+def neutral_axis_points(rings: list[Array]) -> list[tuple[str, float, float]]:
+    """Outer points of the material on the centroidal axes (for sections hollow at the centroid)."""
+    points = []
+    horizontal = _axis_crossings(rings, vertical=False)
+    if horizontal is not None:
+        points += [("x axis, left face", horizontal[0], 0.0)]
+        points += [("x axis, right face", horizontal[1], 0.0)]
+    vertical = _axis_crossings(rings, vertical=True)
+    if vertical is not None:
+        points += [("y axis, bottom face", 0.0, vertical[0])]
+        points += [("y axis, top face", 0.0, vertical[1])]
+    return points
 
 
 @dataclass(frozen=True, eq=False)
@@ -173,10 +204,22 @@ def stress_model(
     numbers = section.numeric(length_unit)
     labels = list(numbers.point_labels)
     x, y = list(numbers.point_x), list(numbers.point_y)
-    if include_centroid and point_in_material(numbers.outline.rings, 0.0, 0.0):
-        labels.append(CENTROID_LABEL)
-        x.append(0.0)
-        y.append(0.0)
+    if include_centroid:
+        rings = numbers.outline.rings
+        extra = (
+            [(CENTROID_LABEL, 0.0, 0.0)]
+            if point_in_material(rings, 0.0, 0.0)
+            else neutral_axis_points(rings)
+        )
+        scale = max(float(np.ptp(ring[:, 0]) + np.ptp(ring[:, 1])) for ring in rings)
+        for label, px, py in extra:
+            # a corner already on the axis (a round tube's perimeter) is not repeated
+            if not any(
+                abs(px - qx) + abs(py - qy) < 1e-6 * scale for qx, qy in zip(x, y, strict=True)
+            ):
+                labels.append(label)
+                x.append(px)
+                y.append(py)
     x_arr, y_arr = np.array(x), np.array(y)
     Ix, Iy, Ixy, A, J = numbers.Ix, numbers.Iy, numbers.Ixy, numbers.A, numbers.J
     cuts = cut_data(section, x_arr, y_arr, length_unit)

@@ -8,7 +8,18 @@ from typing import Any
 import sympy as sp
 
 from calcsheet import __version__
-from calcsheet.engine import CAUTIONS, Check, Figure, Heading, Input, Prose, Sheet, Step, Table
+from calcsheet.engine import (
+    CAUTIONS,
+    Check,
+    Figure,
+    Heading,
+    Input,
+    Prose,
+    Revision,
+    Sheet,
+    Step,
+    Table,
+)
 
 
 @dataclass(frozen=True)
@@ -27,6 +38,7 @@ class PartView:
     status: str = ""
     reference: str = ""
     svg: str = ""
+    location: str = ""  # where a governing step or a check governs, from current values
     columns: tuple[str, ...] = ()
     cells: tuple[tuple[tuple[bool, str], ...], ...] = ()  # (is math, content) per cell
 
@@ -44,6 +56,9 @@ class SheetView:
     governing: PartView | None
     cautions: tuple[str, ...]
     tool_version: str
+    revisions: tuple[Revision, ...] = ()
+    basis: tuple[tuple[str, tuple[str, ...]], ...] = ()
+    references: tuple[str, ...] = ()
 
 
 def build_view(sheet: Sheet, target: str) -> SheetView:
@@ -82,9 +97,12 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
                 value=equation.result,
                 reference=part.reference,
             )
-            inputs.append(view)
+            if part.listed:
+                inputs.append(view)
             parts.append(view)
         elif isinstance(part, Step):
+            if not part.shown:
+                continue
             equation = sheet.equation(part, target)
             parts.append(
                 PartView(
@@ -94,6 +112,7 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
                     math=equation.chain(),
                     value=equation.result,
                     reference=part.reference,
+                    location=sheet.governing_label(part),
                 )
             )
         elif isinstance(part, Check):
@@ -106,6 +125,7 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
                 utilization=text.utilization,
                 status=part.status,
                 reference=part.reference,
+                location=sheet.check_location(part),
             )
             check_views[id(part)] = view
             checks.append(view)
@@ -122,4 +142,14 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
         governing=governing,
         cautions=CAUTIONS,
         tool_version=__version__,
+        revisions=tuple(sheet.revisions),
+        basis=_basis(sheet),
+        references=tuple(sheet.references),
     )
+
+
+def _basis(sheet: Sheet) -> tuple[tuple[str, tuple[str, ...]], ...]:
+    """The design basis by category; the units line comes from the sheet's unit preset."""
+    basis = {category: tuple(items) for category, items in sheet.basis.items()}
+    basis.setdefault("Units", (sheet.units.description,))
+    return tuple(basis.items())

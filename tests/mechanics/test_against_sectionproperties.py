@@ -112,3 +112,37 @@ def test_web_shear_of_i_shape_at_flange_junction_against_fe() -> None:
     # 0.05 in below the flange, on the web centre line.
     (_, _, fe_tau) = fe.get_stress_at_points([(cx, cy + model.y[junction] - 0.05)], vy=Vy)[0]
     assert fe_tau == pytest.approx(ours_tau, rel=0.10)
+
+
+def test_tube_shear_at_the_neutral_axis_against_fe() -> None:
+    """The tube's centroid is in the hole: the walls on the x axis carry the peak V_y shear.
+
+    τ = V·Q/(I·2t) (average over the two walls) within 10 % of the FE value at the
+    mid-thickness of the wall on the x axis (sectionproperties 3.x).
+    """
+    ours = rectangular_hss("8 in", "4 in", "0.349 in")
+    geometry = rectangular_hollow_section(d=8, b=4, t=0.349, r_out=0.698, n_r=8, r_in=0.349)
+    fe = _fe(geometry, 0.05)
+    model = stress_model(ours)
+    right = model.labels.index("x axis, right face")
+    assert model.x[right] == pytest.approx(2.0) and model.y[right] == 0.0
+    Vy = -4.0
+    only_vy = model.stresses(np.array([0, 0, Vy, 0, 0, 0]))
+    assert np.argmax(np.abs(only_vy.tau_zy)) in {right, model.labels.index("x axis, left face")}
+    cx, cy = fe.get_c()
+    (_, _, fe_tau) = fe.get_stress_at_points([(cx + 2.0 - 0.349 / 2, cy)], vy=Vy)[0]
+    assert fe_tau == pytest.approx(only_vy.tau_zy[right], rel=0.10)
+
+
+def test_angle_shear_where_the_x_axis_crosses_the_long_leg_against_fe() -> None:
+    """The angle's centroid is off the legs: the long leg on the x axis carries V_y shear."""
+    ours = angle("6 in", "4 in", "0.5 in")
+    fe = _fe(angle_section(d=6, b=4, t=0.5, r_r=0, r_t=0, n_r=1), 0.05)
+    model = stress_model(ours)
+    outer = model.labels.index("x axis, left face")
+    Vy = -4.0
+    only_vy = model.stresses(np.array([0, 0, Vy, 0, 0, 0]))
+    cx, cy = fe.get_c()
+    (_, _, fe_tau) = fe.get_stress_at_points([(cx + model.x[outer] + 0.25, cy)], vy=Vy)[0]
+    # The long leg's shear is nearly uniform across its 0.5 in thickness (thin wall).
+    assert fe_tau == pytest.approx(only_vy.tau_zy[outer], rel=0.10)
