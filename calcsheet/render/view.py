@@ -40,6 +40,7 @@ class PartView:
     svg: str = ""
     location: str = ""  # where a governing step or a check governs, from current values
     columns: tuple[str, ...] = ()
+    text_columns: tuple[bool, ...] = ()  # per column: all text (left-aligned) or has values
     cells: tuple[tuple[tuple[bool, str], ...], ...] = ()  # (is math, content) per cell
 
 
@@ -85,7 +86,18 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
                 )
                 for row in part.rows
             )
-            parts.append(PartView("table", text=caption, columns=part.columns, cells=cells))
+            text_columns = tuple(
+                all(not row[index][0] for row in cells) for index in range(len(part.columns))
+            )
+            parts.append(
+                PartView(
+                    "table",
+                    text=caption,
+                    columns=part.columns,
+                    cells=cells,
+                    text_columns=text_columns,
+                )
+            )
         elif isinstance(part, Figure):
             parts.append(PartView("figure", text=part.caption, svg=sheet.figure_svg(part)))
         elif isinstance(part, Input):
