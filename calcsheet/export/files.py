@@ -13,7 +13,7 @@ from pathlib import Path
 from calcsheet.engine import Sheet
 from calcsheet.errors import CalcsheetError
 from calcsheet.render.html import render_html
-from calcsheet.render.typst import render_typst
+from calcsheet.render.typst import paper_inputs, render_typst
 
 
 class ExportError(CalcsheetError):
@@ -22,11 +22,17 @@ class ExportError(CalcsheetError):
 
 def pdf_bytes(sheet: Sheet, *, paper: str = "letter") -> bytes:
     """Compile the sheet's Typst markup to PDF in memory (fonts come with the typst wheel)."""
+    return compile_pdf(render_typst(sheet, paper=paper))
+
+
+def compile_pdf(source: str, *, paper: str | None = None) -> bytes:
+    """Compile Typst markup from ``render_typst`` to PDF; ``paper`` overrides its paper."""
     import typst  # imported here: the compiler is only needed for PDFs
 
-    source = render_typst(sheet, paper=paper).encode("utf-8")
+    # Validated before the compiler runs, so a wrong paper names the field, not Typst.
+    inputs = paper_inputs(paper) if paper is not None else {}
     try:
-        return typst.compile(source)
+        return typst.compile(source.encode("utf-8"), sys_inputs=inputs)
     except Exception as error:  # typst raises its own error types per version
         raise ExportError(f"the PDF engine failed: {error}") from None
 
