@@ -169,3 +169,71 @@ def test_a_table_refuses_ragged_rows_and_undefined_symbols():
         sheet.table(["a", "b"], [[s["P"]]])
     with pytest.raises(DefinitionError, match="uses 'q' before it is defined"):
         sheet.table(["a"], [[sp.Symbol("q")]])
+
+
+def _three_bolts() -> Sheet:
+    """Three bolt forces (invented demo numbers): the largest governs."""
+    sheet = Sheet("bolts")
+    with sheet:
+        forces = [
+            (f"bolt {n}", sheet.input(f"R_{n}", f"{value} kip", dimension="force"))
+            for n, value in ((1, 3.0), (2, 5.0), (3, 4.0))
+        ]
+        R_max = sheet.governing("R_max", forces, "Largest bolt force", unit="kip")
+        capacity = sheet.input("R_n", "10 kip", dimension="force")
+        sheet.check("Bolt force", R_max, capacity)
+    return sheet
+
+
+def test_a_governing_step_names_the_candidate_that_governs_now():
+    sheet = _three_bolts()
+    assert sheet.value("R_max").to("kip").m == pytest.approx(5.0)
+    assert sheet.governing_label(sheet["R_max"]) == "bolt 2"
+    assert sheet.check_location(sheet.checks[0]) == "bolt 2"
+    sheet.set_input("R_3", "7 kip")
+    assert sheet.governing_label(sheet["R_max"]) == "bolt 3"
+    assert sheet.check_location(sheet.checks[0]) == "bolt 3"
+
+
+def test_the_smallest_can_govern_and_a_governing_step_needs_candidates():
+    sheet = Sheet("min")
+    with sheet:
+        a = sheet.input("a", "-2 ksi", dimension="stress")
+        b = sheet.input("b", "1 ksi", dimension="stress")
+        sheet.governing("s_min", [("A", a), ("B", b)], largest=False)
+        with pytest.raises(DefinitionError, match="s_none"):
+            sheet.governing("s_none", [])
+    assert sheet.governing_label(sheet["s_min"]) == "A"
+
+
+def test_a_fixed_input_refuses_a_change_and_says_why():
+    sheet = Sheet("fixed")
+    with sheet:
+        sheet.input("z", "10 in", dimension="length", fixed="it decides which loads are cut")
+    with pytest.raises(InputError) as raised:
+        sheet.set_input("z", "12 in")
+    assert "input z" in str(raised.value) and "decides which loads" in str(raised.value)
+    assert sheet.value("z").to("in").m == 10
+
+
+def test_hidden_steps_and_unlisted_inputs_still_evaluate():
+    sheet = Sheet("hidden")
+    with sheet:
+        x = sheet.input("x", "2 in", dimension="length", listed=False)
+        y = sheet.step("y", 3 * x, shown=False)
+    assert not sheet["x"].listed and not sheet["y"].shown
+    assert sheet.value(y).to("in").m == 6
+
+
+def test_revisions_basis_and_references_are_kept_in_order():
+    sheet = Sheet("log")
+    sheet.add_revision("A", "2026-11-02", "Issued for review", "A.E.")
+    sheet.add_revision("B", "2026-11-20", "Lug moved 1 in down", "A.E.")
+    sheet.add_basis("Assumptions", "Static loads")
+    sheet.add_basis("Assumptions", "Elastic")
+    sheet.add_reference("AISC 360-22")
+    sheet.add_reference("AISC 360-22")
+    assert [revision.mark for revision in sheet.revisions] == ["A", "B"]
+    assert sheet.title_block.revision == "B"
+    assert sheet.basis == {"Assumptions": ["Static loads", "Elastic"]}
+    assert sheet.references == ["AISC 360-22"]

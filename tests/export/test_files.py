@@ -106,3 +106,31 @@ def test_a_table_reaches_both_outputs_with_current_values():
     assert "<mn>0.750</mn>" in html
     text = " ".join(_pdf_pages(pdf_bytes(sheet)))
     assert "top <b>" in text and "0.750" in text and "(values in ksi)" in text
+
+
+def test_revision_log_design_basis_references_and_governing_point_reach_both_outputs():
+    sheet = Sheet("Lifting beam", title_block=TitleBlock(project="Log test"))
+    sheet.add_revision("A", "2026-11-02", "Issued for review", "A.E.")
+    sheet.add_revision("B", "2026-11-20", "Lug lowered 25 mm", "A.E.")
+    sheet.add_basis("Assumptions", "Static hook load")
+    sheet.add_reference("Made-up handbook for this test")
+    with sheet:
+        left = sheet.input("f_left", "12 ksi", dimension="stress")
+        right = sheet.input("f_right", "18 ksi", dimension="stress")
+        f_max = sheet.governing("f_max", [("right lug", right), ("left lug", left)])
+        sheet.check("Lug stress", f_max, sheet.input("F_a", "30 ksi", dimension="stress"))
+    html = render_html(sheet)
+    flat = " ".join(" ".join(_pdf_pages(pdf_bytes(sheet))).split())
+    for expected in (
+        "Revision log",
+        "Lug lowered 25 mm",
+        "Design basis",
+        "Static hook load",
+        "References",
+        "Made-up handbook for this test",
+        "Governs at right lug",
+        "Lug stress, at right lug",
+    ):
+        assert expected in html, expected
+        assert expected in flat, expected
+    assert "Rev. B" in flat
