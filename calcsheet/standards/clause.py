@@ -1,0 +1,78 @@
+"""A clause or equation of a standard, written once as a sympy expression.
+
+A :class:`Clause` wraps a function that builds the equation's right-hand side
+from symbols. The same expression
+
+* prints on a sheet as a step with the clause as its reference
+  (:meth:`Clause.write`), evaluated with units by the engine; and
+* evaluates fast on numpy arrays for searches over many sections or load cases
+  (:meth:`Clause.numeric`), through :func:`sympy.lambdify` of that very
+  expression, with every argument in coherent SI base units.
+
+Rule for clause authors: every dimensional constant (E, G, a limit stress) is an
+argument, never a number inside the expression, so the numeric path needs no
+unit handling and the printed step shows where each value comes from.
+"""
+
+from __future__ import annotations
+
+import inspect
+from collections.abc import Callable
+from dataclasses import dataclass, field
+from functools import cached_property
+from typing import Any
+
+import numpy as np
+import sympy as sp
+
+from calcsheet.engine import Sheet, as_written
+
+
+@dataclass(frozen=True)
+class Clause:
+    """One clause or equation: its reference, what it gives, and how to build it."""
+
+    reference: str
+    description: str
+    build: Callable[..., sp.Expr] = field(repr=False)
+
+    def __call__(self, *args: sp.Basic) -> sp.Expr:
+        """The right-hand side built from the caller's symbols (as written)."""
+        with as_written():
+            return self.build(*args)
+
+    def write(
+        self, sheet: Sheet, name: str, *args: sp.Symbol, unit: str | None = None, **options: Any
+    ) -> sp.Symbol:
+        """Add ``name = <clause>(args)`` to ``sheet`` as a step citing the clause."""
+        return sheet.step(
+            name, self(*args), self.description, reference=self.reference, unit=unit, **options
+        )
+
+    @cached_property
+    def parameters(self) -> tuple[str, ...]:
+        """The argument names of the builder, in order."""
+        return tuple(inspect.signature(self.build).parameters)
+
+    @cached_property
+    def _numeric_function(self) -> Callable[..., Any]:
+        placeholders = [sp.Symbol(name, real=True) for name in self.parameters]
+        expr = self.build(*placeholders)
+        return sp.lambdify(placeholders, expr, modules="numpy")
+
+    def numeric(self, *args: Any) -> np.ndarray:
+        """Evaluate on floats or numpy arrays given in coherent SI base units."""
+        with np.errstate(divide="ignore", invalid="ignore"):
+            result = self._numeric_function(*args)
+        return np.broadcast_to(result, np.broadcast_shapes(*(np.shape(a) for a in args)))
+
+
+def clause(reference: str, description: str) -> Callable[[Callable[..., sp.Expr]], Clause]:
+    """Decorator: ``@clause("AISC 360-22 Eq. D2-1", "Tensile yielding")`` over a builder."""
+
+    def wrap(build: Callable[..., sp.Expr]) -> Clause:
+        made = Clause(reference, description, build)
+        object.__setattr__(made, "__doc__", build.__doc__)
+        return made
+
+    return wrap
