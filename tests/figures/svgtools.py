@@ -1,0 +1,40 @@
+"""Reading the figures back: parse the SVG, find elements by class, pull out coordinates."""
+
+from __future__ import annotations
+
+import re
+import xml.etree.ElementTree as ET
+
+SVG = "{http://www.w3.org/2000/svg}"
+NUMBER = re.compile(r"-?\d+(?:\.\d+)?")
+
+
+def parse(svg: str) -> ET.Element:
+    """The root element; fails the test when the SVG is not well-formed XML."""
+    root = ET.fromstring(svg)
+    assert root.tag == f"{SVG}svg"
+    return root
+
+
+def by_class(root: ET.Element, name: str) -> list[ET.Element]:
+    """Every element whose class is ``name``."""
+    return [element for element in root.iter() if element.get("class") == name]
+
+
+def path_points(element: ET.Element) -> list[tuple[float, float]]:
+    """The (x, y) pairs of a path made of M, L and Z commands."""
+    values = [float(text) for text in NUMBER.findall(element.get("d", ""))]
+    return list(zip(values[0::2], values[1::2], strict=True))
+
+
+def line_ends(element: ET.Element) -> tuple[tuple[float, float], tuple[float, float]]:
+    """The two ends of a <line>."""
+    return (
+        (float(element.get("x1")), float(element.get("y1"))),
+        (float(element.get("x2")), float(element.get("y2"))),
+    )
+
+
+def texts(root: ET.Element) -> list[str]:
+    """The content of every <text>, in order."""
+    return [element.text or "" for element in root.iter(f"{SVG}text")]
