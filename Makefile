@@ -12,9 +12,9 @@ $(STAMP): pyproject.toml
 	$(PY) -m pip install --quiet -e ".[dev]"
 	touch $(STAMP)
 
-## demo: write the demo calc sheet (HTML and PDF) into out/
+## demo: build the demo job (examples/outrigger.toml) into out/ as PDF, HTML and JSON
 demo: $(STAMP)
-	$(PY) -m calcsheet.demo out
+	$(VENV)/bin/calcsheet build examples/outrigger.toml --out out
 
 ## test: lint, then the whole test suite
 test: $(STAMP)

@@ -119,7 +119,17 @@ def main() -> None:
     out = Path("out/bench")
     cold = timed(
         lambda: subprocess.run(
-            [sys.executable, "-m", "calcsheet.demo", str(out)], check=True, capture_output=True
+            [
+                sys.executable,
+                "-m",
+                "calcsheet.cli",
+                "build",
+                "examples/outrigger.toml",
+                "--out",
+                str(out),
+            ],
+            check=True,
+            capture_output=True,
         ),
         3,
     )

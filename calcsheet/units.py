@@ -105,7 +105,8 @@ def _expected_text(dimension: str | None) -> str:
     if dimension == "dimensionless":
         return "a plain number, such as '1.5'"
     article = "an" if dimension[0] in "aeiou" else "a"
-    return f"{article} {dimension}, such as '{dimension_example(dimension)}'"
+    examples = " or ".join(f"'{example}'" for example in dimension_example(dimension).split(" or "))
+    return f"{article} {dimension}, such as {examples}"
 
 
 def _parse_text(text: str, *, field: str, expected: str, dimension: str | None) -> pint.Quantity:

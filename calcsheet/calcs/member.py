@@ -70,6 +70,7 @@ def member_sheet(
     length: pint.Quantity | str,
     station: pint.Quantity | str = "0 in",
     Fy: pint.Quantity | str = "50 ksi",
+    Fy_reference: str = "",
     Omega: float = 1.67,
     title: str = "Member combined stresses",
     title_block: TitleBlock | None = None,
@@ -104,7 +105,7 @@ def member_sheet(
     with sheet:
         _write_conventions(sheet)
         symbols, free_suffixes = _write_inputs(
-            sheet, loads, free, length_q, station_q, fy_q, omega_q, length_unit
+            sheet, loads, free, length_q, station_q, (fy_q, Fy_reference), omega_q, length_unit
         )
         forces = _write_internal_forces(sheet, free_suffixes, symbols, preset)
         props = _write_section_properties(sheet, section, model)
@@ -154,7 +155,7 @@ def _write_inputs(
     free: Sequence[PointLoad | AppliedMoment],
     length: pint.Quantity,
     station: pint.Quantity,
-    fy: pint.Quantity,
+    fy: tuple[pint.Quantity, str],
     omega: pint.Quantity,
     length_unit: str,
 ) -> tuple[dict[str, sp.Symbol], list[str]]:
@@ -167,7 +168,9 @@ def _write_inputs(
     symbols["z_s"] = sheet.input(
         "z_s", station, "Station checked, measured from the support", unit=length_unit, fixed=LAYOUT
     )
-    symbols["F_y"] = sheet.input("F_y", fy, "Yield stress of the material", dimension="stress")
+    symbols["F_y"] = sheet.input(
+        "F_y", fy[0], "Yield stress of the material", dimension="stress", reference=fy[1]
+    )
     symbols["Omega"] = sheet.input(
         "Omega", omega, "Factor of safety (generic)", dimension="dimensionless"
     )

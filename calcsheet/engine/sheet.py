@@ -114,6 +114,8 @@ class Sheet:
         self.revisions: list[Revision] = []
         self.basis: dict[str, list[str]] = {}
         self.references: list[str] = []
+        # What produced this sheet (tool version, inputs hash), printed on every page.
+        self.stamp: str = ""
 
     # -- writing the calc ------------------------------------------------------------
 

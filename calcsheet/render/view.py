@@ -60,6 +60,7 @@ class SheetView:
     revisions: tuple[Revision, ...] = ()
     basis: tuple[tuple[str, tuple[str, ...]], ...] = ()
     references: tuple[str, ...] = ()
+    stamp: str = ""
 
 
 def build_view(sheet: Sheet, target: str) -> SheetView:
@@ -157,6 +158,7 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
         revisions=tuple(sheet.revisions),
         basis=_basis(sheet),
         references=tuple(sheet.references),
+        stamp=sheet.stamp,
     )
 
 

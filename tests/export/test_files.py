@@ -85,7 +85,7 @@ def test_a_failed_pdf_keeps_the_previous_files(tmp_path: Path, monkeypatch):
 
     monkeypatch.setattr(files, "pdf_bytes", broken)
     sheet = outrigger_sheet()
-    sheet.set_input("P", "3 kip")
+    sheet.set_input("P_1", "3 kip")
     with pytest.raises(ExportError):
         export_sheet(sheet, tmp_path, "sheet")
     after = {path.name: path.read_bytes() for path in tmp_path.iterdir()}

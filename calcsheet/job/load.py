@@ -1,0 +1,107 @@
+"""Read a job file: TOML syntax, then the schema, reporting every problem at once."""
+
+from __future__ import annotations
+
+import difflib
+import tomllib
+from pathlib import Path
+from typing import Any
+
+from pydantic import ValidationError
+
+from calcsheet.errors import CalcsheetError
+from calcsheet.job.schema import Job, known_keys
+
+# A job file is a page of text; anything far larger is not one (and is not read whole).
+MAX_JOB_BYTES = 1_000_000
+
+
+class JobError(CalcsheetError):
+    """A job file cannot be used; ``problems`` lists every (key path, message) found."""
+
+    def __init__(self, source: str, problems: list[tuple[str, str]]) -> None:
+        self.source = source
+        self.problems = problems
+        count = len(problems)
+        heading = f"{source}: {count} problem{'s' if count != 1 else ''}"
+        lines = [f"  {path}: {message}" if path else f"  {message}" for path, message in problems]
+        super().__init__("\n".join([heading, *lines]))
+
+
+def key_path(location: tuple[str | int, ...]) -> str:
+    """``("loads", 0, "magnitude")`` as ``loads[0].magnitude``."""
+    text = ""
+    for part in location:
+        if isinstance(part, int):
+            text += f"[{part}]"
+        else:
+            text += f".{part}" if text else str(part)
+    return text
+
+
+def _message(error: dict[str, Any]) -> str:
+    kind, location = error["type"], error["loc"]
+    given = error.get("input")
+    if kind == "extra_forbidden":
+        key = str(location[-1])
+        close = difflib.get_close_matches(key, sorted(known_keys()), n=1, cutoff=0.6)
+        hint = f'; did you mean "{close[0]}"?' if close else ""
+        return f"unknown key{hint}"
+    if kind == "missing":
+        return "required key is missing"
+    message = str(error["msg"]).removeprefix("Value error, ")
+    if isinstance(given, (str, int, float)) and not isinstance(given, bool):
+        shown = repr(given) if len(repr(given)) <= 60 else repr(given)[:57] + "...'"
+        return f"{message} (got {shown})"
+    return message
+
+
+def _problems(error: ValidationError) -> list[tuple[str, str]]:
+    seen: dict[tuple[str, str], None] = {}
+    for item in error.errors():
+        # A union (catalog name or a table of dimensions) reports each branch; keep the
+        # branch that matches what was written.
+        location = tuple(
+            part for part in item["loc"] if part not in ("str", "SectionSpec", "function-after")
+        )
+        seen.setdefault((key_path(location), _message(item)), None)
+    return list(seen)
+
+
+def parse_job(text: str, *, source: str = "job") -> Job:
+    """A job from TOML text; :class:`JobError` lists every problem with its key path."""
+    try:
+        data = tomllib.loads(text)
+    except tomllib.TOMLDecodeError as error:
+        raise JobError(source, [("", f"TOML syntax error: {error}")]) from None
+    return job_from_data(data, source=source)
+
+
+def job_from_data(data: dict[str, Any], *, source: str = "job") -> Job:
+    """A job from already-parsed TOML data (a batch row, a form's values)."""
+    try:
+        return Job.model_validate(data)
+    except ValidationError as error:
+        raise JobError(source, _problems(error)) from None
+
+
+def read_job(path: str | Path) -> Job:
+    """Read and validate the job file at ``path``."""
+    path = Path(path)
+    try:
+        size = path.stat().st_size
+        if size > MAX_JOB_BYTES:
+            raise JobError(
+                str(path),
+                [("", f"the file is {size:,} bytes; a job file is under {MAX_JOB_BYTES:,}")],
+            )
+        text = path.read_text(encoding="utf-8")
+    except FileNotFoundError:
+        raise JobError(str(path), [("", "no such file")]) from None
+    except IsADirectoryError:
+        raise JobError(str(path), [("", "this is a folder, not a job file")]) from None
+    except UnicodeDecodeError:
+        raise JobError(str(path), [("", "not UTF-8 text")]) from None
+    except OSError as error:
+        raise JobError(str(path), [("", f"cannot read it: {error.strerror}")]) from None
+    return parse_job(text, source=str(path))

@@ -1,0 +1,212 @@
+"""The job file's schema: what a member check needs, as plain text that diffs well.
+
+Quantities are strings with their unit ("6.5 kip", "1.2 m"), read by pint's unit
+parser (never evaluated) and checked for dimension here, so a force written as
+"6.5 in" is reported with its key path before anything is built. Unknown keys are
+errors (a typo must not silently fall back to a default).
+"""
+
+from __future__ import annotations
+
+from typing import Annotated, Literal
+
+from pydantic import AfterValidator, BaseModel, ConfigDict, Field, model_validator
+
+from calcsheet.errors import InputError
+from calcsheet.units import parse_quantity
+
+FORMAT_VERSION = 1
+
+
+def _quantity(dimension: str) -> AfterValidator:
+    def check(text: str) -> str:
+        try:
+            parse_quantity(text, field="value", dimension=dimension)
+        except InputError as error:
+            raise ValueError(f"expected {error.expected}") from None
+        return text
+
+    return AfterValidator(check)
+
+
+Length = Annotated[str, _quantity("length")]
+Force = Annotated[str, _quantity("force")]
+Moment = Annotated[str, _quantity("moment")]
+Stress = Annotated[str, _quantity("stress")]
+Angle = Annotated[str, _quantity("angle")]
+
+
+class _Table(BaseModel):
+    """A TOML table: unknown keys are errors; text is stripped."""
+
+    model_config = ConfigDict(extra="forbid", str_strip_whitespace=True, frozen=True)
+
+
+class SheetSpec(_Table):
+    """The sheet's title and the unit system every value is shown in."""
+
+    title: str = "Member combined stresses"
+    units: Literal["US", "SI"] = "US"
+
+
+class TitleBlockSpec(_Table):
+    project: str = ""
+    project_number: str = ""
+    subject: str = ""
+    calc_number: str = ""
+    prepared_by: str = ""
+    prepared_date: str = ""
+    checked_by: str = ""
+    checked_date: str = ""
+
+
+class RevisionSpec(_Table):
+    mark: str = Field(min_length=1, max_length=20)
+    date: str = ""
+    description: str = ""
+    by: str = ""
+
+
+SectionKind = Literal[
+    "plate", "round bar", "round HSS", "rectangular HSS", "I", "channel", "angle", "tee"
+]
+
+
+class SectionSpec(_Table):
+    """A section by dimensions; which keys a kind needs is checked when it is built."""
+
+    kind: SectionKind
+    name: str = ""
+    b: Length | None = None
+    d: Length | None = None
+    D: Length | None = None
+    OD: Length | None = None
+    t: Length | None = None
+    H: Length | None = None
+    B: Length | None = None
+    bf: Length | None = None
+    tf: Length | None = None
+    tw: Length | None = None
+    bf_bottom: Length | None = None
+    tf_bottom: Length | None = None
+
+
+class MemberSpec(_Table):
+    """The cantilever: name, section (a catalog designation or dimensions), length, stations."""
+
+    name: str = Field(min_length=1, max_length=80)
+    section: str | SectionSpec
+    length: Length
+    stations: list[Length] = Field(default_factory=lambda: ["0 in"], min_length=1, max_length=20)
+
+
+class MaterialSpec(_Table):
+    """A grade from the list (F_y and F_u prefilled) or F_y given directly; F_y given wins."""
+
+    grade: str | None = None
+    Fy: Stress | None = None
+    Fu: Stress | None = None
+
+    @model_validator(mode="after")
+    def _needs_a_yield_stress(self) -> MaterialSpec:
+        if self.grade is None and self.Fy is None:
+            raise ValueError("give a grade or Fy")
+        return self
+
+
+class CheckSpec(_Table):
+    """Which check the sheet makes. Only the generic allowable-stress check so far."""
+
+    kind: Literal["allowable stress"] = "allowable stress"
+    factor_of_safety: float = Field(default=1.67, gt=0, le=100)
+
+
+class LoadSpec(_Table):
+    """A point load: magnitude with an angle between two axes, or three components."""
+
+    name: str = Field(min_length=1, max_length=80)
+    type: str = "D"
+    z: Length
+    magnitude: Force | None = None
+    angle: Angle | None = None
+    from_axis: str = "+z"
+    toward_axis: str = "-y"
+    components: list[Force] | None = Field(default=None, min_length=3, max_length=3)
+    ex: Length = "0 in"
+    ey: Length = "0 in"
+
+    @model_validator(mode="after")
+    def _one_way_of_giving_the_direction(self) -> LoadSpec:
+        polar = self.magnitude is not None or self.angle is not None
+        if polar and self.components is not None:
+            raise ValueError("give either magnitude and angle, or components, not both")
+        if self.components is None and (self.magnitude is None or self.angle is None):
+            raise ValueError("give magnitude and angle, or components = [Fx, Fy, Fz]")
+        return self
+
+
+class MomentSpec(_Table):
+    """A concentrated couple at z, by its components about x, y, z (right-hand rule)."""
+
+    name: str = Field(min_length=1, max_length=80)
+    type: str = "D"
+    z: Length
+    Mx: Moment = "0 kip*ft"
+    My: Moment = "0 kip*ft"
+    Mz: Moment = "0 kip*ft"
+
+
+class OutputSpec(_Table):
+    """Where the sheet goes; not part of the inputs hash."""
+
+    folder: str = "out"
+    stem: str = ""
+    paper: Literal["letter", "a4"] = "letter"
+    formats: list[Literal["pdf", "html", "json"]] = Field(
+        default_factory=lambda: ["pdf", "html", "json"], min_length=1
+    )
+
+
+class Job(_Table):
+    """A whole job file."""
+
+    version: Literal[1] = FORMAT_VERSION
+    sheet: SheetSpec = SheetSpec()
+    title_block: TitleBlockSpec = TitleBlockSpec()
+    revisions: list[RevisionSpec] = Field(default_factory=list, max_length=200)
+    member: MemberSpec
+    material: MaterialSpec
+    check: CheckSpec = CheckSpec()
+    loads: list[LoadSpec] = Field(default_factory=list, max_length=200)
+    moments: list[MomentSpec] = Field(default_factory=list, max_length=200)
+    output: OutputSpec = OutputSpec()
+
+    @model_validator(mode="after")
+    def _needs_a_load(self) -> Job:
+        if not self.loads and not self.moments:
+            raise ValueError("give at least one [[loads]] or [[moments]] entry")
+        names = [entry.name for entry in (*self.loads, *self.moments)]
+        twice = sorted({name for name in names if names.count(name) > 1})
+        if twice:
+            raise ValueError(f"load names must differ; used twice: {', '.join(twice)}")
+        return self
+
+
+def known_keys() -> set[str]:
+    """Every key of every table, for "did you mean" suggestions."""
+    keys: set[str] = set()
+    for model in (
+        Job,
+        SheetSpec,
+        TitleBlockSpec,
+        RevisionSpec,
+        SectionSpec,
+        MemberSpec,
+        MaterialSpec,
+        CheckSpec,
+        LoadSpec,
+        MomentSpec,
+        OutputSpec,
+    ):
+        keys.update(model.model_fields)
+    return keys

@@ -1,0 +1,76 @@
+"""A commented starter job file (``calcsheet new``): every key with what it means."""
+
+STARTER = """\
+# calcsheet job file: one member checked for combined stresses.
+# Quantities are text with their unit: "6.5 kip", "1.2 m", "35 deg", "50 ksi".
+# Axes: the member runs along z from the fixed support (z = 0) to the free end;
+# x to the right and y up in the cross-section, origin at the centroid.
+version = 1
+
+[sheet]
+title = "Davit arm DA-1: combined stresses at the support"
+units = "US"                 # "US" (kip, in, ksi) or "SI" (kN, mm, MPa)
+
+[title_block]
+project = "Pump house upgrade"
+project_number = "P-0000"
+subject = ""                 # empty: the member name and section
+calc_number = "C-001"
+prepared_by = ""
+prepared_date = ""
+checked_by = ""
+checked_date = ""
+
+# One [[revisions]] entry per issue of the calc; the last one is the current revision.
+[[revisions]]
+mark = "A"
+date = ""
+description = "Issued for review"
+by = ""
+
+[member]
+name = "DA-1"
+section = "W8X31"            # a catalog designation, or a table of dimensions:
+# section = { kind = "rectangular HSS", H = "8 in", B = "4 in", t = "0.349 in" }
+# kinds: plate (b, d), round bar (D), round HSS (OD, t), rectangular HSS (H, B, t),
+#        I (d, bf, tw, tf), channel (d, bf, tw, tf), angle (d, b, t), tee (d, bf, tw, tf)
+length = "60 in"             # support to free end
+stations = ["0 in"]          # where the section is checked, from the support
+
+[material]
+grade = "ASTM A992"          # prefills Fy; or give Fy = "50 ksi" (wins over the grade)
+
+[check]
+kind = "allowable stress"    # generic von Mises check against Fy / factor of safety
+factor_of_safety = 1.67
+
+# Point loads: magnitude and an angle from one axis toward another ...
+[[loads]]
+name = "hoist"
+type = "L"                   # load type, for combinations
+z = "60 in"                  # position along the member
+magnitude = "3 kip"
+angle = "20 deg"
+from_axis = "-y"             # the force points cos(angle) along from_axis
+toward_axis = "+z"           # ... and sin(angle) along toward_axis
+ex = "0 in"                  # offset of the point of application from the centroid
+ey = "-4 in"
+
+# ... or by components: components = ["Fx", "Fy", "Fz"]
+# [[loads]]
+# name = "side"
+# z = "30 in"
+# components = ["0.3 kip", "0 kip", "0 kip"]
+
+# Concentrated couples (right-hand rule about x, y, z):
+# [[moments]]
+# name = "twist"
+# z = "60 in"
+# Mz = "0.5 kip*ft"
+
+[output]
+folder = "out"               # inside this job's folder
+stem = ""                    # file names; empty: the member name (+ revision)
+paper = "letter"             # or "a4"
+formats = ["pdf", "html", "json"]
+"""

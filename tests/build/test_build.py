@@ -1,0 +1,149 @@
+"""Building jobs: model errors by key path, the stamp, files on disk, nothing half-written."""
+
+from __future__ import annotations
+
+import json
+from pathlib import Path
+
+import pytest
+
+from calcsheet.build import build_sheets, inputs_hash, output_folder, safe_stem, write_outputs
+from calcsheet.build.compare import changed_inputs, delta_sheet
+from calcsheet.export import files
+from calcsheet.export.files import ExportError
+from calcsheet.job import JobError, parse_job
+from calcsheet.job.starter import STARTER
+
+
+def _job(text: str = STARTER):
+    return parse_job(text, source="job.toml")
+
+
+def test_model_problems_name_the_key_path_all_at_once() -> None:
+    text = STARTER.replace('section = "W8X31"', 'section = "W8X32"').replace(
+        'grade = "ASTM A992"', 'grade = "A9999"'
+    )
+    with pytest.raises(JobError) as raised:
+        build_sheets(_job(text), source="job.toml")
+    problems = dict(raised.value.problems)
+    assert "did you mean" in problems["member.section"]
+    assert "one of: ASTM A992" in problems["material.grade"]
+
+
+def test_a_section_by_dimensions_needs_its_keys() -> None:
+    text = STARTER.replace(
+        'section = "W8X31"', 'section = { kind = "rectangular HSS", H = "8 in", t = "0.3 in" }'
+    )
+    with pytest.raises(JobError) as raised:
+        build_sheets(_job(text))
+    assert "needs B" in dict(raised.value.problems)["member.section"]
+
+
+def test_a_flange_thicker_than_half_the_depth_is_named() -> None:
+    text = STARTER.replace(
+        'section = "W8X31"',
+        'section = { kind = "I", d = "8 in", bf = "6 in", tw = "0.3 in", tf = "5 in" }',
+    )
+    with pytest.raises(JobError) as raised:
+        build_sheets(_job(text))
+    assert "member.section" in dict(raised.value.problems)
+
+
+def test_a_load_beyond_the_member_is_named() -> None:
+    with pytest.raises(JobError) as raised:
+        build_sheets(_job(STARTER.replace('length = "60 in"', 'length = "50 in"')))
+    assert any("hoist" in message for _, message in raised.value.problems)
+
+
+def test_the_hash_is_stable_ignores_units_and_outputs_and_sees_any_change() -> None:
+    base = inputs_hash(_job())
+    assert base == inputs_hash(_job())
+    assert base == inputs_hash(_job(STARTER.replace('"3 kip"', '"3000 lbf"')))
+    assert base == inputs_hash(_job(STARTER.replace('folder = "out"', 'folder = "other"')))
+    assert base != inputs_hash(_job(STARTER.replace('"3 kip"', '"3.01 kip"')))
+    assert base != inputs_hash(_job(STARTER.replace('ey = "-4 in"', 'ey = "-4.5 in"')))
+
+
+def test_build_writes_stamped_pdf_html_and_json_named_by_revision(tmp_path: Path) -> None:
+    result = build_sheets(_job())
+    paths = write_outputs(result, tmp_path)
+    assert sorted(path.name for path in paths) == [
+        "DA-1-revA.html",
+        "DA-1-revA.json",
+        "DA-1-revA.pdf",
+    ]
+    data = json.loads((tmp_path / "DA-1-revA.json").read_text())
+    assert data["stamp"].startswith(f"inputs {result.hash}")
+    assert data["all_pass"] is True
+    assert data["governing"]["at"].startswith("point ")
+    moment = next(step for step in data["steps"] if step["name"] == "M_x")
+    assert moment["si_unit"] == "kg * m ** 2 / s ** 2"  # N·m in SI base units
+    assert result.hash in (tmp_path / "DA-1-revA.html").read_text()
+
+
+def test_a_new_revision_does_not_overwrite_the_previous_files(tmp_path: Path) -> None:
+    write_outputs(build_sheets(_job()), tmp_path)
+    before = (tmp_path / "DA-1-revA.pdf").read_bytes()
+    revised = STARTER.replace('mark = "A"', 'mark = "B"').replace('"3 kip"', '"4 kip"')
+    write_outputs(build_sheets(_job(revised)), tmp_path)
+    assert (tmp_path / "DA-1-revA.pdf").read_bytes() == before
+    assert (tmp_path / "DA-1-revB.pdf").exists()
+
+
+def test_a_failed_pdf_leaves_the_previous_outputs_intact(tmp_path: Path, monkeypatch) -> None:
+    write_outputs(build_sheets(_job()), tmp_path)
+    before = {path.name: path.read_bytes() for path in tmp_path.iterdir()}
+
+    def broken(*args, **kwargs):
+        raise ExportError("the PDF engine failed: simulated")
+
+    monkeypatch.setattr(files, "pdf_bytes", broken)
+    changed = _job(STARTER.replace('"3 kip"', '"4 kip"'))
+    with pytest.raises(ExportError):
+        write_outputs(build_sheets(changed), tmp_path)
+    after = {path.name: path.read_bytes() for path in tmp_path.iterdir()}
+    assert after == before  # same files, same bytes, no temporary file left
+
+
+def test_several_stations_give_one_sheet_each() -> None:
+    result = build_sheets(
+        _job(STARTER.replace('stations = ["0 in"]', 'stations = ["0 in", "30 in"]'))
+    )
+    assert [built.stem for built in result.sheets] == ["DA-1-revA-z0in", "DA-1-revA-z30in"]
+
+
+def test_output_folder_must_stay_inside_the_job_folder(tmp_path: Path) -> None:
+    for folder in ("../elsewhere", "/tmp/x"):
+        job = _job(STARTER.replace('folder = "out"', f'folder = "{folder}"'))
+        with pytest.raises(JobError, match="output.folder"):
+            output_folder(job, tmp_path)
+    assert output_folder(_job(), tmp_path) == tmp_path / "out"
+
+
+@pytest.mark.parametrize(
+    ("text", "expected"),
+    [
+        ("../../etc/passwd", "etc-passwd"),
+        ("A B/C", "A-B-C"),
+        ("...", "calc"),
+        ("x" * 200, "x" * 80),
+    ],
+)
+def test_file_names_are_sanitized(text: str, expected: str) -> None:
+    assert safe_stem(text) == expected
+
+
+def test_compare_lists_exactly_the_changed_inputs() -> None:
+    old = build_sheets(_job())
+    revised = (
+        STARTER.replace('mark = "A"', 'mark = "B"')
+        .replace('"3 kip"', '"4.5 kip"')
+        .replace('"3000 lbf"', "unused")
+    )
+    new = build_sheets(_job(revised))
+    changes = {change.path: (change.old, change.new) for change in changed_inputs(old, new)}
+    assert changes == {"revisions[0].mark": ("A", "B"), "loads[0].magnitude": ("3 kip", "4.5 kip")}
+    same_in_other_units = build_sheets(_job(STARTER.replace('"3 kip"', '"3000 lbf"')))
+    assert changed_inputs(old, same_in_other_units) == []
+    sheet = delta_sheet(old, new)
+    assert "rev. A to rev. B" in sheet.title
