@@ -17,6 +17,7 @@ from dataclasses import dataclass, field
 import pint
 import sympy as sp
 
+from calcsheet.calcs.member_figures import member_drawing, section_drawing, stress_drawing
 from calcsheet.calcs.points import PointSymbols, write_combined
 from calcsheet.calcs.round_section import write_round_point_stresses
 from calcsheet.engine import Sheet, TitleBlock
@@ -107,8 +108,18 @@ def member_sheet(
         symbols, free_suffixes = _write_inputs(
             sheet, loads, free, length_q, station_q, (fy_q, Fy_reference), omega_q, length_unit
         )
+        sheet.figure(
+            member_drawing(section, loads, length_unit),
+            "The member with its support, the station and each load at its angle and point "
+            "of application (elevation in the y-z plane; end view in the x-y plane).",
+        )
         forces = _write_internal_forces(sheet, free_suffixes, symbols, preset)
         props = _write_section_properties(sheet, section, model)
+        sheet.figure(
+            stress_drawing(section, stress),
+            "Normal stress over the section at the station from N, M_x and M_y "
+            "(tension positive), with the neutral axis.",
+        )
         if model.torsion.kind == "round":
             points = write_round_point_stresses(sheet, section, forces, props, stress)
         else:
@@ -407,9 +418,10 @@ class _PointData:
 
 
 def _write_point_data(
-    sheet: Sheet, model: StressModel, unit: str, unsymmetric: bool
+    sheet: Sheet, section: Section, model: StressModel, unsymmetric: bool
 ) -> list[_PointData]:
     """Coordinates and cut data of every point as inputs shown in two tables."""
+    unit = section.length_unit
     sheet.heading("Stress points of the section")
     sheet.text(
         "Stress points are the corners of the section outline (flange tips, wall corners, "
@@ -446,6 +458,17 @@ def _write_point_data(
             b = sheet.input(f"{width_name}_{n}", Quantity(width, unit), listed=False)
             point.cuts[cut] = (Q_a, Q_b, b)
         data.append(point)
+    sheet.figure(
+        section_drawing(
+            section,
+            [
+                (str(point.index), model.x[point.index - 1], model.y[point.index - 1])
+                for point in data
+            ],
+            unit,
+        ),
+        f"Section {section.name} to scale, with the stress points numbered as in the tables.",
+    )
     sheet.table(
         ["Point", "Location", "x", "y"],
         [[str(point.index), point.label, point.x, point.y] for point in data],
@@ -492,7 +515,7 @@ def _write_point_stresses(
     A, I_x, I_y, J = props["A"], props["I_x"], props["I_y"], props["J"]
     I_xy, D = props["I_xy"], props["D"]
     unit = section.length_unit
-    data = _write_point_data(sheet, model, unit, D is not None)
+    data = _write_point_data(sheet, section, model, D is not None)
     sheet.heading("Stresses at the points of the section")
     sheet.text(SHEAR_TEXT)
     sheet.text(

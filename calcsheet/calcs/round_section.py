@@ -12,6 +12,7 @@ from __future__ import annotations
 
 import sympy as sp
 
+from calcsheet.calcs.member_figures import section_drawing
 from calcsheet.calcs.points import PointSymbols, write_combined
 from calcsheet.engine import Sheet
 from calcsheet.engine.functions import Abs, sqrt
@@ -46,6 +47,11 @@ def write_round_point_stresses(
     outer_radius = max(float(abs(ring).max()) for ring in numbers.outline.rings)
     sheet.heading("Stresses at the extreme fibres of the round section")
     sheet.text(ROUND_TEXT)
+    sheet.figure(
+        section_drawing(section, [], unit),
+        f"Section {section.name} to scale (its extreme fibres lie on the diameter normal "
+        "to the resultant moment).",
+    )
     R_o = sheet.input(
         "R_o", Quantity(outer_radius, unit), "Outside radius", reference="section outline"
     )

@@ -268,6 +268,10 @@ class _ExpressionPrinter(Printer):
         """Pieces joined by equals signs: ``σ = P/A = 6.50 kip / 7.58 in² = 0.858 ksi``."""
         raise NotImplementedError
 
+    def stacked(self, pieces: Sequence[str]) -> str:
+        """A long chain one piece per line, the equals signs aligned under each other."""
+        raise NotImplementedError
+
     # -- slots --------------------------------------------------------------------------
 
     def fill(self, template: str, values: Sequence[Quantityish]) -> str:
@@ -483,6 +487,10 @@ class LatexStepPrinter(_ExpressionPrinter):
     def chain(self, pieces: Sequence[str]) -> str:
         return " = ".join(pieces)
 
+    def stacked(self, pieces: Sequence[str]) -> str:
+        rows = [f"{pieces[0]} &= {pieces[1]}", *(f"&= {piece}" for piece in pieces[2:])]
+        return "\\begin{aligned}" + " \\\\ ".join(rows) + "\\end{aligned}"
+
 
 # --- MathML (HTML sheets) ------------------------------------------------------------------
 
@@ -614,6 +622,15 @@ class MathMLStepPrinter(_ExpressionPrinter):
     def chain(self, pieces: Sequence[str]) -> str:
         return "<mo>=</mo>".join(f"<mrow>{piece}</mrow>" for piece in pieces)
 
+    def stacked(self, pieces: Sequence[str]) -> str:
+        rows = []
+        for index, piece in enumerate(pieces[1:]):
+            left = f"<mrow>{pieces[0]}</mrow>" if index == 0 else ""
+            rows.append(
+                f"<mtr><mtd>{left}</mtd><mtd><mrow><mo>=</mo><mrow>{piece}</mrow></mrow></mtd></mtr>"
+            )
+        return f'<mtable columnalign="right left" displaystyle="true">{"".join(rows)}</mtable>'
+
 
 # --- Typst (PDF sheets) --------------------------------------------------------------------
 
@@ -726,6 +743,10 @@ class TypstStepPrinter(_ExpressionPrinter):
     def chain(self, pieces: Sequence[str]) -> str:
         return " = ".join(pieces)
 
+    def stacked(self, pieces: Sequence[str]) -> str:
+        rows = [f"{pieces[0]} &= {pieces[1]}", *(f"&= {piece}" for piece in pieces[2:])]
+        return " \\\n".join(rows)
+
 
 def _typst_string(text: str) -> str:
     """Escape text for a Typst string literal: backslash and quote, nothing else is special."""
@@ -817,6 +838,10 @@ class PlainStepPrinter(_ExpressionPrinter):
 
     def chain(self, pieces: Sequence[str]) -> str:
         return " = ".join(pieces)
+
+    def stacked(self, pieces: Sequence[str]) -> str:
+        rows = [f"{pieces[0]} = {pieces[1]}", *(f"= {piece}" for piece in pieces[2:])]
+        return "\n".join(rows)
 
 
 def _exponent_text(power: float) -> str:

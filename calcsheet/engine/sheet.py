@@ -79,6 +79,15 @@ class Equation:
         pieces.append(self.result)
         return self.printer.chain(pieces)
 
+    def stacked(self) -> str:
+        """The same chain one piece per line, equals signs aligned (for long equations)."""
+        pieces = [self.symbol]
+        pieces += [piece for piece in (self.symbolic, self.substituted) if piece is not None]
+        pieces.append(self.result)
+        if len(pieces) < 3:
+            return self.chain()
+        return self.printer.stacked(pieces)
+
 
 @dataclass(frozen=True)
 class CheckText:

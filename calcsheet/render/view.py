@@ -21,6 +21,10 @@ from calcsheet.engine import (
     Table,
 )
 
+# Characters of the plain-text chain above which a step is printed one piece per line,
+# so that it fits the width of a letter or A4 page (measured on the demo's PDF).
+LONG_EQUATION = 90
+
 
 @dataclass(frozen=True)
 class PartView:
@@ -117,12 +121,13 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
             if not part.shown:
                 continue
             equation = sheet.equation(part, target)
+            long = len(sheet.equation(part, "plain").chain()) > LONG_EQUATION
             parts.append(
                 PartView(
                     "step",
                     text=part.description,
                     symbol=equation.symbol,
-                    math=equation.chain(),
+                    math=equation.stacked() if long else equation.chain(),
                     value=equation.result,
                     reference=part.reference,
                     location=sheet.governing_label(part),
