@@ -185,4 +185,4 @@ def _yield_stress(job: Job, problems: _Problems) -> tuple[pint.Quantity | None, 
     grade = problems.attempt("material.grade", lambda: find_grade(material.grade or ""))
     if grade is None:
         return None, ""
-    return grade.Fy, f"{grade.name} ({grade.source})"
+    return grade.Fy, f"{grade.name}, minimum (calcsheet grade table)"

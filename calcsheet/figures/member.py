@@ -93,8 +93,12 @@ def member_figure(
     svg = Svg(title="Member elevation and end view")
     obstacles = Obstacles()
     _draw_member(svg, obstacles, frame, L, d)
+    dimensioned: set[tuple[float, float]] = set()
     for number, load in enumerate(placed):
-        _draw_load(svg, obstacles, frame, (L, d), load, number, unit)
+        # Loads sharing a point (a bracket and the wind on it) share one e_y dimension.
+        first_at_point = (load.z, load.ey) not in dimensioned
+        dimensioned.add((load.z, load.ey))
+        _draw_load(svg, obstacles, frame, (L, d), load, number, unit, first_at_point)
     for moment in moments:
         _draw_moment(svg, obstacles, frame, moment, unit)
     _draw_station(svg, obstacles, frame, float(cut.m), d, unit)
@@ -197,6 +201,7 @@ def _draw_load(
     load: _PlacedLoad,
     number: int,
     unit: str,
+    dimension_ey: bool = True,
 ) -> None:
     """Lug (when outside the depth), force arrow at its true angle, name, e_y dimension.
 
@@ -243,7 +248,7 @@ def _draw_load(
             obstacles.add_line(push, at)
     center, _ = place_label(obstacles, free_end, direction, load.label, size=SMALL_FONT_SIZE)
     svg.text(center, load.label, size=SMALL_FONT_SIZE, bold=True, css_class="load-label")
-    if load.ey != 0:
+    if load.ey != 0 and dimension_ey:
         axis_point = frame.point(load.z, 0.0)
         line_x = at[0] - 12 - 10 * number
         linear_dimension(
@@ -364,6 +369,8 @@ def _draw_end_view(
 ) -> None:
     """The section seen from the free end, with each load's point of action and e_x, e_y."""
     obstacles = Obstacles()
+    # Labels of the end view must not reach back over the elevation on its left.
+    obstacles.add_box(Box(-1e6, -1e6, left - 4, 1e6))
     rings = []
     if section is not None:
         factor = float(Quantity(1.0, section.length_unit).to(unit).m)
@@ -403,23 +410,26 @@ def _draw_end_view(
             )
             arrow(svg, at, tip, width=1.3, head=0.8)
             obstacles.add_line(at, tip)
+    # One set of dimensions and one label per point of application, however many loads act there.
+    names_at: dict[tuple[float, float], list[str]] = {}
     for load in loads:
-        at = frame.point(load.ex, load.ey)
-        if load.ex != 0:
-            foot = frame.point(0.0, load.ey)
-            text = f"e_x = {quantity_text(Quantity(load.ex, unit))}"
+        names_at.setdefault((load.ex, load.ey), []).append(load.name)
+    for ex, ey in names_at:
+        at = frame.point(ex, ey)
+        if ex != 0:
+            foot = frame.point(0.0, ey)
+            text = f"e_x = {quantity_text(Quantity(ex, unit))}"
             linear_dimension(svg, obstacles, (foot, at), (foot, at), text, text_toward=(0.0, -1.0))
-        if load.ey != 0:
-            foot = frame.point(load.ex, 0.0)
-            text = f"e_y = {quantity_text(Quantity(load.ey, unit))}"
+        if ey != 0:
+            foot = frame.point(ex, 0.0)
+            text = f"e_y = {quantity_text(Quantity(ey, unit))}"
             linear_dimension(svg, obstacles, (foot, at), (foot, at), text, text_toward=(1.0, 0.0))
     centroid = frame.point(0, 0)
-    for load in loads:
-        at = frame.point(load.ex, load.ey)
+    for (ex, ey), names in names_at.items():
+        at = frame.point(ex, ey)
         away = unit_vector(centroid, at)
-        center, _ = place_label(
-            obstacles, at, away if away != (0.0, 0.0) else (-0.7, 0.7), load.name
-        )
-        svg.text(center, load.name, size=FONT_SIZE, bold=True)
+        label = ", ".join(names)
+        center, _ = place_label(obstacles, at, away if away != (0.0, 0.0) else (-0.7, 0.7), label)
+        svg.text(center, label, size=FONT_SIZE, bold=True)
     title_y = origin[1] - reach - 16 - FONT_SIZE
     svg.text((origin[0], title_y), "End view from the free end", size=SMALL_FONT_SIZE, fill=NOTE)
