@@ -8,6 +8,16 @@ from functools import lru_cache
 import jinja2
 
 _CONTROL = re.compile(r"[\x00-\x08\x0b\x0c\x0e-\x1f\x7f]")
+# Typst breaks lines only between words; a longer run gets invisible break points.
+_LONG_RUN = re.compile(r"\S{20}(?=\S)")
+_BREAK_OPPORTUNITY = "\u200b"
+
+
+def typst_data(value: object) -> str:
+    """Data (an SVG drawing) as a Typst string literal, every character kept as it is."""
+    text = str(value).replace("\\", "\\\\").replace('"', '\\"')
+    text = text.replace("\r", "").replace("\n", "\\n")
+    return f'"{text}"'
 
 
 def typst_string(value: object) -> str:
@@ -15,9 +25,12 @@ def typst_string(value: object) -> str:
 
     Inside a string literal only the backslash and the quote are special, so
     markup characters (``#``, ``$``, ``*``, ``_``, ``@``, ``<``) stay text and no
-    code can run. Control characters are dropped; newlines are kept as ``\\n``.
+    code can run. Control characters are dropped; newlines are kept as ``\\n``. A run
+    of more than 20 characters without a space gets zero-width break opportunities,
+    so a 2,000-character word wraps instead of running off the page.
     """
     text = _CONTROL.sub("", str(value))
+    text = _LONG_RUN.sub(lambda run: run[0] + _BREAK_OPPORTUNITY, text)
     text = text.replace("\\", "\\\\").replace('"', '\\"').replace("\r", "").replace("\n", "\\n")
     return f'"{text}"'
 
@@ -45,4 +58,5 @@ def typst_environment() -> jinja2.Environment:
         lstrip_blocks=True,
     )
     environment.filters["text"] = typst_string
+    environment.filters["data"] = typst_data
     return environment

@@ -134,3 +134,30 @@ def test_revision_log_design_basis_references_and_governing_point_reach_both_out
         assert expected in html, expected
         assert expected in flat, expected
     assert "Rev. B" in flat
+
+
+def test_a_2000_character_word_wraps_inside_the_page():
+    """Every piece of text of the PDF starts inside the page, and the word is all there."""
+    word = "W" * 2000
+    sheet = Sheet(word, title_block=TitleBlock(project=word, calc_number="C-1"))
+    with sheet:
+        sheet.heading(word)
+        sheet.text(f"Before {word} after.")
+        a = sheet.input("a", "2 in", word, dimension="length", reference=word)
+        sheet.step("b", 2 * a, word, reference=word)
+        sheet.check(word, a, a)
+    reader = pypdf.PdfReader(io.BytesIO(pdf_bytes(sheet)))
+    found = 0
+    for page in reader.pages:
+        width = float(page.mediabox.width)
+        pieces: list[tuple[float, str]] = []
+
+        def visit(text, cm, tm, font, size, pieces=pieces):
+            if text.strip():
+                pieces.append((cm[4] + tm[4] * cm[0], text))
+
+        text = page.extract_text(visitor_text=visit)
+        found += text.replace("\u200b", "").replace("\n", "").count("W" * 40)
+        for x, piece in pieces:
+            assert 0 <= x < width, (x, piece[:30])
+    assert found >= 4 * (2000 // 40)  # title, title block, heading, prose, description...
