@@ -161,3 +161,12 @@ def test_a_2000_character_word_wraps_inside_the_page():
         for x, piece in pieces:
             assert 0 <= x < width, (x, piece[:30])
     assert found >= 4 * (2000 // 40)  # title, title block, heading, prose, description...
+
+
+def test_the_pdf_engine_can_read_no_file(tmp_path: Path, monkeypatch):
+    """Defence in depth: even markup that asks to read a file next to it cannot."""
+    (tmp_path / "secret.txt").write_text("root:x:0:0")
+    monkeypatch.chdir(tmp_path)
+    for path in ("secret.txt", "/etc/passwd"):
+        with pytest.raises(ExportError, match="file not found"):
+            files.compile_pdf(f'#read("{path}")')
