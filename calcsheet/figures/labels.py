@@ -18,6 +18,7 @@ import numpy as np
 
 from calcsheet.figures.style import FONT_SIZE
 from calcsheet.figures.svg import Point, text_width
+from calcsheet.mechanics.stresses import point_in_material
 
 _TURNS_DEGREES = (0, 25, -25, 50, -50, 75, -75, 105, -105, 135, -135, 180)
 _DISTANCES = (3.0, 8.0, 15.0, 24.0, 36.0)
@@ -78,19 +79,6 @@ def _segments_cross_box(box: Box, segments: np.ndarray) -> bool:
     return bool(np.any(possible & (t_enter <= t_leave)))
 
 
-def _inside(rings: Sequence[np.ndarray], x: float, y: float) -> bool:
-    """Even-odd test against every ring (holes are rings too)."""
-    inside = False
-    for ring in rings:
-        x0, y0 = ring[:, 0], ring[:, 1]
-        x1, y1 = np.roll(x0, -1), np.roll(y0, -1)
-        crosses = (y0 > y) != (y1 > y)
-        with np.errstate(divide="ignore", invalid="ignore"):
-            x_cross = x0 + (y - y0) * (x1 - x0) / (y1 - y0)
-        inside ^= bool(np.count_nonzero(crosses & (x < x_cross)) % 2)
-    return inside
-
-
 @dataclass
 class Obstacles:
     """What a new label must keep clear of."""
@@ -130,7 +118,7 @@ class Obstacles:
         if _segments_cross_box(box, self._segment_array):
             return True
         x, y = box.center
-        return any(_inside(rings, x, y) for rings in self.regions)
+        return any(point_in_material(list(rings), x, y) for rings in self.regions)
 
 
 def place_label(
