@@ -1,0 +1,47 @@
+"""AISC 360-22 (ASD and LRFD) as clauses: one :class:`~calcsheet.standards.Clause` per equation.
+
+Modules: :mod:`.factors` (φ, Ω), :mod:`.classification` (Table B4.1), :mod:`.tension`
+(D2), :mod:`.compression` (E3, E4-2, E7), :mod:`.flexure` (F2, F3, F6, F7, F8, F10),
+:mod:`.shear` (G2, G3, G4, G5, G6), :mod:`.combined` (H1, H2), :mod:`.second_order`
+(Appendix 8, B1). :func:`write_aisc_checks` writes a member's checks on a sheet;
+:func:`aisc_utilization_numeric` evaluates the same checks on arrays of sections.
+"""
+
+from calcsheet.standards.aisc360.factors import (
+    AvailableStrength,
+    LimitStateFactors,
+    available_strength,
+    design_method,
+)
+from calcsheet.standards.aisc360.inputs import Steel
+from calcsheet.standards.aisc360.member import Demands, write_aisc_checks
+from calcsheet.standards.aisc360.numeric import (
+    CHECKS,
+    DemandArrays,
+    aisc_checks_numeric,
+    aisc_utilization_numeric,
+)
+from calcsheet.standards.aisc360.section_data import (
+    SectionTable,
+    catalog_table,
+    section_kind,
+    section_table,
+)
+
+__all__ = [
+    "CHECKS",
+    "AvailableStrength",
+    "DemandArrays",
+    "Demands",
+    "LimitStateFactors",
+    "SectionTable",
+    "Steel",
+    "aisc_checks_numeric",
+    "aisc_utilization_numeric",
+    "available_strength",
+    "catalog_table",
+    "design_method",
+    "section_kind",
+    "section_table",
+    "write_aisc_checks",
+]

@@ -1,0 +1,317 @@
+"""AISC 360-22 member checks on a sheet: :func:`write_aisc_checks`.
+
+For a rolled I-shape (W, M, S, HP), a rectangular or square HSS, a round HSS or
+pipe, or an equal-leg single angle, the sheet gets the inputs the checks need
+(material, lengths, section values with their sources), the classification of
+the elements, the nominal and available strengths, the P-δ multipliers B1
+(Appendix 8) and one check per action plus the interaction of Chapter H.
+
+:class:`Demands` are symbols the sheet already has: required strengths already
+factored (LRFD) or combined (ASD). Signs: P_r tension positive; M_rx about x,
+M_ry about y; V_rx along x, V_ry along y (the member sheet's N, M_x, M_y, V_x,
+V_y). For a W shape, V_ry is resisted by the web and V_rx by the flanges.
+
+The numeric twin, for searches over many sections and load combinations, is
+:func:`~calcsheet.standards.aisc360.numeric.aisc_utilization_numeric`; it uses the
+same clauses and, for the same inputs, the same decisions.
+"""
+
+from __future__ import annotations
+
+from collections.abc import Callable
+from dataclasses import dataclass, fields
+
+import numpy as np
+import pint
+import sympy as sp
+
+from calcsheet.engine import Check, Sheet, as_written
+from calcsheet.engine.functions import Abs, Piecewise
+from calcsheet.errors import DefinitionError, InputError
+from calcsheet.sections import Section
+from calcsheet.standards.aisc360 import combined, shear
+from calcsheet.standards.aisc360 import second_order as appendix8
+from calcsheet.standards.aisc360.factors import design_method
+from calcsheet.standards.aisc360.inputs import (
+    A992,
+    MODULI_REFERENCE,
+    MemberInputs,
+    Steel,
+    parse_member_inputs,
+)
+from calcsheet.standards.aisc360.member_angle import write_single_angle
+from calcsheet.standards.aisc360.member_common import Strengths
+from calcsheet.standards.aisc360.member_hss import write_rectangular_hss, write_round_hss
+from calcsheet.standards.aisc360.member_i import write_i_shape
+from calcsheet.standards.aisc360.numeric import scope_problem
+from calcsheet.standards.aisc360.section_data import SUPPORTED, section_kind, section_values
+from calcsheet.standards.aisc360.writing import MATERIAL_FIXED, SPECIFICATION, Writer
+
+SPECIFICATION_TITLE = "ANSI/AISC 360-22, Specification for Structural Steel Buildings (AISC, 2022)"
+_WRITERS: dict[str, Callable[[Writer], Strengths]] = {
+    "I": write_i_shape,
+    "HSS_RECT": write_rectangular_hss,
+    "HSS_ROUND": write_round_hss,
+    "L": write_single_angle,
+}
+
+
+@dataclass(frozen=True)
+class Demands:
+    """Required strengths at the section checked, as symbols (or expressions) of the sheet.
+
+    Already factored (LRFD) or combined (ASD) for the design method of the checks.
+
+    * ``P_r`` axial force, tension positive;
+    * ``M_rx``, ``M_ry`` moments about x and y (either sign: magnitudes are checked);
+    * ``V_rx``, ``V_ry`` shears along x and y (either sign).
+    """
+
+    P_r: sp.Basic
+    M_rx: sp.Basic
+    M_ry: sp.Basic
+    V_rx: sp.Basic
+    V_ry: sp.Basic
+
+
+def write_aisc_checks(
+    sheet: Sheet,
+    section: Section,
+    *,
+    demands: Demands,
+    method: str,
+    material: Steel = A992,
+    length: pint.Quantity | str,
+    K: float | str = appendix8.K_FIXED_FREE,
+    Lb: pint.Quantity | str | None = None,
+    Cb: float | str = 1.0,
+    Cm: float | str = 1.0,
+    second_order: bool = True,
+) -> list[Check]:
+    """Write the AISC 360-22 strength checks of ``section`` on ``sheet``; return the checks.
+
+    ``method`` is "LRFD" or "ASD". ``length`` is the member length L, ``K`` the
+    effective length factor about both axes (default 2.1, fixed-free), ``Lb`` the
+    laterally unbraced length (default L), ``Cb`` the LTB modification factor
+    (1.0 for a cantilever), ``Cm`` the Appendix 8 factor for B1. With
+    ``second_order=False`` the moments are taken as already second-order (no B1).
+
+    Bad input raises :class:`InputError` naming the field; a section family or a
+    section outside what is covered raises it before anything is written.
+    """
+    chosen = design_method(method)
+    kind = section_kind(section.family)
+    values = section_values(section)
+    inputs = parse_member_inputs(material, length, K, Lb, Cb, Cm)
+    _check_scope(kind, values, inputs, section.name)
+    for item in fields(Demands):
+        if not isinstance(getattr(demands, item.name), sp.Basic):
+            raise DefinitionError(
+                f"AISC 360-22 checks: demand {item.name} must be a symbol of the sheet"
+            )
+    w = Writer(sheet, chosen)
+    sheet.add_basis("Codes and editions", f"{SPECIFICATION_TITLE}, {chosen}.")
+    sheet.add_basis("Material", f"{inputs.grade}: F_y, E (and G) as listed in the inputs.")
+    sheet.add_reference(SPECIFICATION_TITLE)
+    with as_written():
+        sheet.heading(f"Member strength to AISC 360-22 ({chosen})")
+        sheet.text(
+            "Required strengths: P_r axial (tension positive), M_rx and M_ry about x and y, "
+            f"V_rx and V_ry along x and y, already {'factored' if chosen == 'LRFD' else 'combined'}"
+            f" for {chosen}. Torsion (H3) and connections are not checked here."
+        )
+        _write_member_inputs(w, inputs, kind, second_order)
+        sheet.heading(f"Section {section.name}", 2)
+        for value in values.values():
+            w.section_value(value)
+        strengths = _WRITERS[kind](w)
+        _write_demand_side(w, strengths, demands, second_order)
+    return w.checks
+
+
+def _check_scope(kind: str, values: dict, inputs: MemberInputs, name: str) -> None:
+    arrays = {key: np.array([[float(v.quantity.to_base_units().m)]]) for key, v in values.items()}
+    outside, reason = scope_problem(
+        kind, arrays, float(inputs.E.to("Pa").m), float(inputs.F_y.to("Pa").m)
+    )
+    if bool(np.any(outside)):
+        raise InputError("section", name, f"{SUPPORTED}, within the scope of the checks", reason)
+
+
+def _write_member_inputs(w: Writer, inputs: MemberInputs, kind: str, second_order: bool) -> None:
+    sheet = w.sheet
+    sheet.heading("Material and member", 2)
+    w.input(
+        "E",
+        inputs.E,
+        "Modulus of elasticity of steel",
+        reference=MODULI_REFERENCE,
+        dimension="stress",
+        fixed=MATERIAL_FIXED,
+    )
+    if kind == "I":
+        w.input(
+            "G",
+            inputs.G,
+            "Shear modulus of elasticity of steel",
+            reference=MODULI_REFERENCE,
+            dimension="stress",
+        )
+    w.input(
+        "F_y",
+        inputs.F_y,
+        f"Specified minimum yield stress ({inputs.grade})",
+        dimension="stress",
+        fixed=MATERIAL_FIXED,
+    )
+    w.input("L", inputs.length, "Member length", dimension="length")
+    w.input(
+        "K",
+        inputs.K,
+        "Effective length factor, both axes (2.1 recommended for fixed-free)",
+        reference="AISC 360-22 Commentary Table C-A-7.1",
+        dimension="dimensionless",
+    )
+    w.input("L_b", inputs.L_b, "Laterally unbraced length", dimension="length")
+    w.input(
+        "C_b",
+        inputs.C_b,
+        "Lateral-torsional buckling modification factor (1.0 for a cantilever)",
+        reference="AISC 360-22 Section F1",
+        dimension="dimensionless",
+    )
+    if second_order:
+        w.input(
+            "C_m",
+            inputs.C_m,
+            "Equivalent uniform moment factor (1.0 with transverse loading: conservative)",
+            reference="AISC 360-22 Appendix 8, Eq. A-8-4",
+            dimension="dimensionless",
+        )
+
+
+def _write_demand_side(
+    w: Writer, strengths: Strengths, demands: Demands, second_order: bool
+) -> None:
+    sheet = w.sheet
+    force = w.unit("force")
+    sheet.heading("Axial strength for the sign of the force", 2)
+    P_r = demands.P_r
+    P_c = w.step(
+        "P_c",
+        Piecewise((strengths.P_c_t, P_r / strengths.P_c_t >= 0), (strengths.P_c_c, True)),
+        "Available axial strength: tension when P_r >= 0, compression otherwise",
+        unit=force,
+        reference="AISC 360-22 Sections D2, E1",
+    )
+    M_rx, M_ry = demands.M_rx, demands.M_ry
+    if second_order:
+        M_rx, M_ry = _write_b1(w, strengths, demands)
+    refs = strengths.references
+    sheet.heading("Combined axial force and flexure (AISC 360-22 Chapter H)", 2)
+    if strengths.interaction == "H1":
+        eta = w.clause(
+            combined.h1_interaction,
+            "eta_H1",
+            Abs(P_r),
+            P_c,
+            Abs(M_rx),
+            strengths.M_c_x,
+            Abs(M_ry),
+            strengths.M_c_y,
+        )
+        combined_reference = "AISC 360-22 Eq. H1-1a, H1-1b"
+    else:
+        sheet.text(
+            "H2-1 with every term at its largest and added by magnitude: the ratios of required "
+            "to available strength stand for the stress ratios at the worst point (conservative)."
+        )
+        eta = w.clause(
+            combined.h2_interaction,
+            "eta_H2",
+            Abs(P_r),
+            P_c,
+            Abs(M_rx),
+            strengths.M_c_x,
+            Abs(M_ry),
+            strengths.M_c_y,
+        )
+        combined_reference = "AISC 360-22 Eq. H2-1"
+
+    sheet.heading("Checks", 2)
+    add = w.checks.append
+    add(sheet.check("Axial force", Abs(P_r), P_c, reference=refs["axial"]))
+    add(sheet.check("Flexure about x", Abs(M_rx), strengths.M_c_x, reference=refs["flexure_x"]))
+    add(sheet.check("Flexure about y", Abs(M_ry), strengths.M_c_y, reference=refs["flexure_y"]))
+    if strengths.resultant_shear:
+        V_r = w.clause(shear.resultant_shear, "V_r", demands.V_rx, demands.V_ry, unit=force)
+        add(sheet.check("Shear (resultant)", V_r, strengths.V_c_x, reference=refs["shear"]))
+    else:
+        add(
+            sheet.check(
+                "Shear along x", Abs(demands.V_rx), strengths.V_c_x, reference=refs["shear_x"]
+            )
+        )
+        add(
+            sheet.check(
+                "Shear along y", Abs(demands.V_ry), strengths.V_c_y, reference=refs["shear_y"]
+            )
+        )
+    add(
+        sheet.check(
+            "Combined axial force and flexure", eta, sp.Integer(1), reference=combined_reference
+        )
+    )
+
+
+def _write_b1(w: Writer, strengths: Strengths, demands: Demands) -> tuple[sp.Symbol, sp.Symbol]:
+    sheet = w.sheet
+    force, moment = w.unit("force"), w.unit("moment")
+    sheet.heading("Second-order effects (AISC 360-22 Appendix 8)", 2)
+    sheet.text(
+        "B1 amplifies each first-order moment for P-δ (Eq. A-8-3), with Pe1 from EI* = EI and "
+        "Lc1 = K·L (the effective length method, K as above). B1 = 1 in tension. Moments from "
+        "a second-order analysis need no B1: build the checks with second_order=False."
+    )
+    alpha = w.input(
+        "alpha",
+        appendix8.amplification_alpha(w.method),
+        f"α for {w.method}",
+        reference="AISC 360-22 Appendix 8, Section 8.2.1",
+        dimension="dimensionless",
+        fixed=SPECIFICATION,
+    )
+    amplified = []
+    for axis, I, M_r in (("x", strengths.I_x, demands.M_rx), ("y", strengths.I_y, demands.M_ry)):
+        P_e1 = w.clause(
+            appendix8.euler_load, f"P_e1_{axis}", w["E"] * I, w["K"], w["L"], unit=force
+        )
+        compression = float(-w.sheet.value(demands.P_r).to(force).m)
+        if appendix8.amplification_alpha(w.method) * compression >= w.value(f"P_e1_{axis}"):
+            # B1 has no value: the member buckles under the load. Say so with a failing
+            # check instead of refusing to write the sheet; the moments stay first-order.
+            sheet.text(
+                f"α·|P_r| ≥ P_e1 about {axis}: the member buckles under the axial load and B1 "
+                "is undefined. NOT OK: choose a stiffer section or a shorter member."
+            )
+            w.checks.append(
+                sheet.check(
+                    f"Axial compression below the elastic buckling load about {axis}",
+                    alpha * Abs(demands.P_r),
+                    P_e1,
+                    reference="AISC 360-22 Eq. A-8-3",
+                )
+            )
+            amplified.append(M_r)
+            continue
+        B_1 = w.clause(appendix8.b1_multiplier, f"B_1_{axis}", w["C_m"], alpha, demands.P_r, P_e1)
+        amplified.append(
+            w.step(
+                f"M_r{axis}_2",
+                B_1 * M_r,
+                f"Required flexural strength about {axis} with P-δ",
+                unit=moment,
+                reference="AISC 360-22 Eq. A-8-1",
+            )
+        )
+    return amplified[0], amplified[1]

@@ -1,0 +1,29 @@
+"""EN 1993-1-1:2005 (Eurocode 3, steel buildings) as clauses, and member checks on a sheet.
+
+Modules: :mod:`~calcsheet.standards.en1993.factors` (partial factors, grades,
+imperfection factors), :mod:`~calcsheet.standards.en1993.classification`
+(Table 5.2), :mod:`~calcsheet.standards.en1993.resistance` (6.2),
+:mod:`~calcsheet.standards.en1993.buckling` (6.3.1, Tables 6.1 and 6.2) and
+:mod:`~calcsheet.standards.en1993.member` (:func:`write_en1993_checks`).
+
+The standard's axes: y-y major, z-z minor (calcsheet's x-x and y-y).
+"""
+
+from calcsheet.standards.en1993.buckling import CurveChoice, buckling_curve
+from calcsheet.standards.en1993.factors import (
+    IMPERFECTION_FACTORS,
+    PartialFactors,
+    Steel,
+    steel,
+)
+from calcsheet.standards.en1993.member import write_en1993_checks
+
+__all__ = [
+    "IMPERFECTION_FACTORS",
+    "CurveChoice",
+    "PartialFactors",
+    "Steel",
+    "buckling_curve",
+    "steel",
+    "write_en1993_checks",
+]
