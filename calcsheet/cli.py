@@ -1,8 +1,9 @@
 """The command line: ``calcsheet build | check | new | compare | batch``.
 
 Exit status: 0 done (and, for check, every check passes), 1 a check fails,
-2 bad input (the message names the file, the key and the problem), 3 an
-internal error. Heavy modules are imported only by the command that needs them.
+2 bad input (the message names the file, the key and the problem), 3 an output
+could not be written (disk full, read-only folder, PDF engine), or an internal
+error. Heavy modules are imported only by the command that needs them.
 """
 
 from __future__ import annotations
@@ -23,7 +24,8 @@ examples:
   calcsheet batch members.csv --base davit.toml
 """
 
-OK, CHECK_FAILS, BAD_INPUT, INTERNAL = 0, 1, 2, 3
+OK, CHECK_FAILS, BAD_INPUT, NOT_WRITTEN = 0, 1, 2, 3
+INTERNAL = NOT_WRITTEN
 
 
 def _parser() -> argparse.ArgumentParser:
@@ -147,7 +149,7 @@ def _batch(arguments: argparse.Namespace) -> int:
         summary_csv,
         summary_sheet,
     )
-    from calcsheet.export.files import export_sheet, write_atomically
+    from calcsheet.export.files import export_sheet, make_folder, write_atomically
     from calcsheet.job import JobError
 
     table: Path = arguments.table
@@ -174,7 +176,7 @@ def _batch(arguments: argparse.Namespace) -> int:
     for outcome in outcomes:
         if not outcome.ok:
             print(f"skipped {outcome.name}:\n{outcome.message}", file=sys.stderr)
-    folder.mkdir(parents=True, exist_ok=True)
+    make_folder(folder)
     write_atomically(folder / "summary.csv", summary_csv(outcomes).encode())
     for path in export_sheet(summary_sheet(outcomes), folder, "summary"):
         print(f"wrote {path}")
@@ -202,10 +204,13 @@ COMMANDS = {"build": _build, "check": _check, "new": _new, "compare": _compare, 
 def main(argv: list[str] | None = None) -> int:
     """Run one command; returns the exit status (never raises for bad input)."""
     arguments = _parser().parse_args(argv)
-    from calcsheet.errors import CalcsheetError
+    from calcsheet.errors import CalcsheetError, ExportError
 
     try:
         return COMMANDS[arguments.command](arguments)
+    except ExportError as error:
+        print(str(error), file=sys.stderr)
+        return NOT_WRITTEN
     except CalcsheetError as error:
         print(str(error), file=sys.stderr)
         return BAD_INPUT

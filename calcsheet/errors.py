@@ -42,3 +42,7 @@ class DimensionError(CalcsheetError):
 
 class EvaluationError(CalcsheetError):
     """A step cannot be evaluated for these values (root of a negative, no branch applies)."""
+
+
+class ExportError(CalcsheetError):
+    """An output could not be made or written: the PDF engine failed, a disk is full."""

@@ -12,6 +12,7 @@ from __future__ import annotations
 import copy
 import csv
 import io
+import multiprocessing
 import os
 import re
 import tomllib
@@ -176,7 +177,9 @@ def run_batch(
             if progress:
                 progress(done, len(members), outcome)
         return outcomes
-    with ProcessPoolExecutor(max_workers=workers) as pool:
+    # "spawn": a forked worker would inherit the parent's PDF compiler and its threads.
+    context = multiprocessing.get_context("spawn")
+    with ProcessPoolExecutor(max_workers=workers, mp_context=context) as pool:
         mapped = pool.map(
             build_member, members, [str(folder)] * len(members), [source] * len(members)
         )

@@ -142,7 +142,7 @@ def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str
 def write_outputs(result: BuildResult, folder: Path) -> list[Path]:
     """Render every output of the job, then write each atomically; returns the paths."""
     # Imported here: rendering and the PDF engine are only needed when writing.
-    from calcsheet.export.files import pdf_bytes, write_atomically
+    from calcsheet.export.files import make_folder, pdf_bytes, write_atomically
     from calcsheet.render.html import render_html
 
     formats = result.job.output.formats
@@ -156,7 +156,7 @@ def write_outputs(result: BuildResult, folder: Path) -> list[Path]:
         if "json" in formats:
             text = json.dumps(built.results, indent=2, ensure_ascii=False, sort_keys=False)
             rendered.append((folder / f"{built.stem}.json", (text + "\n").encode()))
-    folder.mkdir(parents=True, exist_ok=True)
+    make_folder(folder)
     written = []
     for path, data in rendered:
         write_atomically(path, data)

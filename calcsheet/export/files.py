@@ -7,22 +7,20 @@ place only when complete; the previous file stays until then.
 from __future__ import annotations
 
 import atexit
+import glob
 import os
 import shutil
 import tempfile
 import threading
+import time
 from functools import lru_cache
 from pathlib import Path
 from typing import Any
 
 from calcsheet.engine import Sheet
-from calcsheet.errors import CalcsheetError
+from calcsheet.errors import ExportError
 from calcsheet.render.html import render_html
 from calcsheet.render.typst import paper_inputs, render_typst
-
-
-class ExportError(CalcsheetError):
-    """The PDF engine failed, or a file could not be written."""
 
 
 def pdf_bytes(sheet: Sheet, *, paper: str = "letter") -> bytes:
@@ -33,8 +31,13 @@ def pdf_bytes(sheet: Sheet, *, paper: str = "letter") -> bytes:
 _COMPILER_LOCK = threading.Lock()
 
 
-@lru_cache(maxsize=1)
 def _compiler() -> Any:
+    """The compiler of this process (a forked child makes its own: threads do not fork)."""
+    return _compiler_of_process(os.getpid())
+
+
+@lru_cache(maxsize=1)
+def _compiler_of_process(pid: int) -> Any:
     """One Typst compiler per process, rooted in an empty private folder.
 
     Reusing the compiler keeps Typst's caches (fonts, layout) warm: the demo's PDF
@@ -60,25 +63,68 @@ def compile_pdf(source: str, *, paper: str | None = None) -> bytes:
         raise ExportError(f"the PDF engine failed: {error}") from None
 
 
+# A temporary file left by a process killed between writing and renaming is stale
+# after this long; the next write into the folder removes it.
+STALE_SECONDS = 600
+
+
+def remove_stale_parts(path: Path) -> None:
+    """Remove temporary files of ``path`` left behind by a killed build."""
+    now = time.time()
+    for stale in path.parent.glob(f".{glob.escape(path.name)}.*.part"):
+        try:
+            if now - stale.stat().st_mtime > STALE_SECONDS:
+                stale.unlink()
+        except OSError:
+            pass  # another build is using it, or it is already gone
+
+
 def write_atomically(path: Path, data: bytes) -> None:
-    """Write ``data`` to ``path`` through a temporary file renamed into place."""
+    """Write ``data`` to ``path`` through a temporary file renamed into place.
+
+    A failure (disk full, read-only folder) raises :class:`ExportError` saying
+    which file and why; the previous file at ``path`` is left as it was.
+    """
     path = Path(path)
-    handle, temporary = tempfile.mkstemp(prefix=f".{path.name}.", suffix=".part", dir=path.parent)
+    try:
+        remove_stale_parts(path)
+        handle, temporary = tempfile.mkstemp(
+            prefix=f".{path.name}.", suffix=".part", dir=path.parent
+        )
+    except OSError as error:
+        raise ExportError(_cannot_write(path, error)) from None
     try:
         with os.fdopen(handle, "wb") as stream:
             stream.write(data)
             stream.flush()
             os.fsync(stream.fileno())
         os.replace(temporary, path)
+    except OSError as error:
+        Path(temporary).unlink(missing_ok=True)
+        raise ExportError(_cannot_write(path, error)) from None
     except BaseException:
         Path(temporary).unlink(missing_ok=True)
         raise
 
 
+def make_folder(folder: Path) -> None:
+    """Create the output folder (and its parents), or say clearly why not."""
+    try:
+        Path(folder).mkdir(parents=True, exist_ok=True)
+    except OSError as error:
+        reason = error.strerror or type(error).__name__
+        raise ExportError(f"cannot create the output folder {folder}: {reason}") from None
+
+
+def _cannot_write(path: Path, error: OSError) -> str:
+    reason = error.strerror or type(error).__name__
+    return f"cannot write {path}: {reason}; any earlier file of that name is unchanged"
+
+
 def export_sheet(sheet: Sheet, folder: Path, stem: str, *, paper: str = "letter") -> list[Path]:
     """Write ``stem``.html and ``stem``.pdf into ``folder``, both built before either is written."""
     folder = Path(folder)
-    folder.mkdir(parents=True, exist_ok=True)
+    make_folder(folder)
     html = render_html(sheet).encode("utf-8")
     pdf = pdf_bytes(sheet, paper=paper)
     written = []
