@@ -9,10 +9,12 @@ from __future__ import annotations
 
 import inspect
 from collections.abc import Callable
-from dataclasses import dataclass
+from dataclasses import dataclass, field
+from functools import lru_cache
 
 import pint
 
+from calcsheet.calcs.design import DesignBasis
 from calcsheet.engine import Revision, TitleBlock
 from calcsheet.errors import InputError
 from calcsheet.job import Job, JobError
@@ -60,6 +62,8 @@ class MemberModel:
     factor_of_safety: float
     title_block: TitleBlock
     revisions: tuple[Revision, ...]
+    design: DesignBasis = field(default_factory=DesignBasis)
+    load_types: tuple[str, ...] = ()
 
 
 class _Problems:
@@ -78,7 +82,7 @@ class _Problems:
 
 def _section(spec: str | SectionSpec, problems: _Problems) -> Section | None:
     if isinstance(spec, str):
-        return problems.attempt("member.section", lambda: catalog_section(spec))
+        return problems.attempt("member.section", lambda: _catalog_section(spec))
     builder = _BUILDERS[spec.kind]
     wanted = [name for name in inspect.signature(builder).parameters if name != "name"]
     given = {key: getattr(spec, key) for key in wanted if getattr(spec, key) is not None}
@@ -99,7 +103,22 @@ def _section(spec: str | SectionSpec, problems: _Problems) -> Section | None:
         )
         return None
     name = spec.name or spec.kind
-    return problems.attempt("member.section", lambda: builder(**given, name=name))
+    return problems.attempt(
+        "member.section", lambda: _built_section(spec.kind, tuple(given.items()), name)
+    )
+
+
+# A section depends only on its spec and is never changed once built (a frozen
+# dataclass), so a rebuild after a change of a load or the length (the form rebuilds
+# on every change) reuses it instead of integrating the outline again.
+@lru_cache(maxsize=64)
+def _catalog_section(designation: str) -> Section:
+    return catalog_section(designation)
+
+
+@lru_cache(maxsize=64)
+def _built_section(kind: str, given: tuple[tuple[str, str], ...], name: str) -> Section:
+    return _BUILDERS[kind](**dict(given), name=name)
 
 
 def _required(builder: Callable[..., Section], key: str) -> bool:
@@ -142,11 +161,14 @@ def member_model(job: Job, *, source: str = "job") -> MemberModel:
         for text in job.member.stations
     )
     if len(loads) == len(job.loads) + len(job.moments):
+        _check_positions(job, length, loads, problems)
+    if len(loads) == len(job.loads) + len(job.moments) and not problems.found:
         for index, station in enumerate(stations):
             problems.attempt(
                 f"member.stations[{index}]", lambda s=station: validate_loads(length, loads, s)
             )
     Fy, Fy_source = _yield_stress(job, problems)
+    design = problems.attempt("check", lambda: design_basis(job))
     if problems.found:
         raise JobError(source, problems.found)
     assert section is not None and Fy is not None  # no problems means both were built
@@ -175,7 +197,38 @@ def member_model(job: Job, *, source: str = "job") -> MemberModel:
         factor_of_safety=job.check.factor_of_safety,
         title_block=title_block,
         revisions=revisions,
+        design=design,
+        load_types=tuple([spec.type for spec in job.loads] + [spec.type for spec in job.moments]),
     )
+
+
+def _check_positions(
+    job: Job, length: pint.Quantity, loads: list[PointLoad | AppliedMoment], problems: _Problems
+) -> None:
+    """The length, then each load's z, reported at their own key paths.
+
+    Checked one by one (before the stations) so that a load beyond the member is
+    named at ``loads[i].z`` rather than at the station being checked, and a form can
+    mark the very field that is wrong.
+    """
+    if problems.attempt("member.length", lambda: validate_loads(length, [])) is None:
+        return
+    paths = [f"loads[{i}].z" for i in range(len(job.loads))]
+    paths += [f"moments[{i}].z" for i in range(len(job.moments))]
+    for path, load in zip(paths, loads, strict=True):
+        problems.attempt(path, lambda load=load: validate_loads(length, [load]))
+
+
+def section_dimension_keys(kind: str) -> tuple[tuple[str, ...], tuple[str, ...]]:
+    """The dimension keys a section kind of the job file takes: (required, optional).
+
+    ``section_dimension_keys("I")`` is ``(("d", "bf", "tw", "tf"), ("bf_bottom", "tf_bottom"))``;
+    a form uses it to show the right boxes for "custom dimensions".
+    """
+    builder = _BUILDERS[kind]
+    names = [name for name in inspect.signature(builder).parameters if name != "name"]
+    required = tuple(name for name in names if _required(builder, name))
+    return required, tuple(name for name in names if name not in required)
 
 
 def _yield_stress(job: Job, problems: _Problems) -> tuple[pint.Quantity | None, str]:
@@ -186,3 +239,27 @@ def _yield_stress(job: Job, problems: _Problems) -> tuple[pint.Quantity | None, 
     if grade is None:
         return None, ""
     return grade.Fy, f"{grade.name}, minimum (calcsheet grade table)"
+
+
+def design_basis(job: Job) -> DesignBasis:
+    """The member sheet's design basis from the job's [check] and [explore] tables."""
+    check, explore = job.check, job.explore
+    grade = job.material.grade or ""
+    step = parse_quantity(explore.sweep_step, field="explore.sweep_step", dimension="angle")
+    return DesignBasis(
+        kind=check.kind,
+        method=check.method,
+        combinations=check.combinations,
+        factor_of_safety=check.factor_of_safety,
+        K=check.K,
+        Lb=parse_quantity(check.Lb, field="check.Lb", dimension="length") if check.Lb else None,
+        Cb=check.Cb,
+        gamma_M0=check.gamma_M0,
+        gamma_M1=check.gamma_M1,
+        S_DS=check.S_DS,
+        grade=grade,
+        deflection_ratio=check.deflection_limit,
+        sweep_load=explore.sweep_load or None,
+        sweep_step_deg=float(step.to("deg").m),
+        lightest_in=explore.lightest_in or None,
+    )

@@ -131,9 +131,20 @@ def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str
             title=job.sheet.title,
             title_block=model.title_block,
             units=job.sheet.units,
+            design=model.design,
+            load_types=model.load_types,
         )
     except InputError as error:
-        raise JobError(source, [(f"member.stations[{index}]", str(error))]) from None
+        # A station with nothing beyond it is the station's problem; anything else (a
+        # section the chosen standard does not cover, a sweep of an unknown load) is
+        # reported against the table it comes from.
+        if error.field.startswith("station"):
+            path = f"member.stations[{index}]"
+        elif error.field.startswith("explore"):
+            path = "explore"
+        else:
+            path = "check"
+        raise JobError(source, [(path, str(error))]) from None
     for revision in model.revisions:
         sheet.add_revision(revision.mark, revision.date, revision.description, revision.by)
     return sheet

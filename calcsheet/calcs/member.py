@@ -17,12 +17,19 @@ from dataclasses import dataclass, field
 import pint
 import sympy as sp
 
+from calcsheet.calcs.design import DesignBasis, plan_combinations
+from calcsheet.calcs.design_sheet import (
+    write_combinations,
+    write_exploration,
+    write_standard_checks,
+)
 from calcsheet.calcs.member_figures import member_drawing, section_drawing, stress_drawing
 from calcsheet.calcs.points import PointSymbols, write_combined
 from calcsheet.calcs.round_section import write_round_point_stresses
 from calcsheet.engine import Sheet, TitleBlock
 from calcsheet.engine.functions import Abs, cos, sin, sqrt
 from calcsheet.errors import InputError
+from calcsheet.mechanics.deflection import write_tip_deflection
 from calcsheet.mechanics.loads import AXES, AppliedMoment, PointLoad, parse_signed_axis
 from calcsheet.mechanics.statics import loads_beyond, validate_loads
 from calcsheet.mechanics.stresses import StressModel, stress_model
@@ -76,14 +83,25 @@ def member_sheet(
     title: str = "Member combined stresses",
     title_block: TitleBlock | None = None,
     units: str = "US",
+    design: DesignBasis | None = None,
+    load_types: Sequence[str] | None = None,
 ) -> Sheet:
     """Build the combined-stress sheet of a cantilever member at ``station``.
 
     ``loads`` are :func:`~calcsheet.mechanics.point_load` and
-    :func:`~calcsheet.mechanics.applied_moment` results. Bad input raises
-    :class:`InputError` naming the field (``member length``, ``station z``,
-    ``load P1 z``, ``Fy``, ``Omega``).
+    :func:`~calcsheet.mechanics.applied_moment` results, ``load_types`` their
+    types for the combinations (D, L, W...; all D when not given). ``design``
+    chooses the check: the generic allowable stress check (F_y/Ω, the default),
+    AISC 360-22 or EN 1993-1-1 with their load combinations, the deflection
+    check and the design exploration. Bad input raises :class:`InputError`
+    naming the field (``member length``, ``station z``, ``load P1 z``, ``Fy``...).
     """
+    basis = design or DesignBasis(factor_of_safety=Omega)
+    if design is not None:
+        Omega = design.factor_of_safety
+    types = list(load_types) if load_types is not None else ["D"] * len(loads)
+    if len(types) != len(loads):
+        raise InputError("load types", types, f"one type for each of the {len(loads)} loads")
     length_q, station_q = validate_loads(length, loads, station)
     fy_q = parse_quantity(Fy, field="Fy", dimension="stress")
     if fy_q.m <= 0:
@@ -101,19 +119,30 @@ def member_sheet(
     preset = unit_system(units).preferred
     stress, length_unit = preset["stress"], preset["length"]
     model = stress_model(section, section.length_unit)
+    plan = plan_combinations(section, loads, types, length_q, station_q, basis, fy_q)
     sheet = Sheet(title, units=units, title_block=title_block)
-    _write_basis(sheet, section)
+    _write_basis(sheet, section, basis)
+    generic = basis.kind == "allowable stress"
     with sheet:
-        _write_conventions(sheet)
+        _write_conventions(sheet, generic)
         symbols, free_suffixes = _write_inputs(
-            sheet, loads, free, length_q, station_q, (fy_q, Fy_reference), omega_q, length_unit
+            sheet,
+            loads,
+            free,
+            length_q,
+            station_q,
+            (fy_q, Fy_reference),
+            omega_q if generic else None,
+            length_unit,
+            types,
         )
         sheet.figure(
             member_drawing(section, loads, length_unit),
             "The member with its support, the station and each load at its angle and point "
             "of application (elevation in the y-z plane; end view in the x-y plane).",
         )
-        forces = _write_internal_forces(sheet, free_suffixes, symbols, preset)
+        factors = write_combinations(sheet, plan, types, free_suffixes, preset) if plan else {}
+        forces = _write_internal_forces(sheet, free_suffixes, symbols, preset, factors)
         props = _write_section_properties(sheet, section, model)
         sheet.figure(
             stress_drawing(section, stress),
@@ -125,18 +154,37 @@ def member_sheet(
         else:
             points = _write_point_stresses(sheet, section, model, forces, props, stress)
         _write_point_table(sheet, points, stress)
-        _write_check(sheet, points, symbols, stress)
+        governing = _write_governing(sheet, points, stress)
+        if generic:
+            _write_generic_check(sheet, governing, symbols, stress)
+        else:
+            write_standard_checks(sheet, section, basis, forces, (fy_q, length_q))
+        if basis.deflection_ratio:
+            # E as the standard states it (AISC 360-22: 29,000 ksi; EN 1993-1-1 3.2.6:
+            # 210,000 N/mm²), so that the deflection shares the checks' input E.
+            modulus = "210000 MPa" if basis.kind == "EN 1993-1-1" else "29000 ksi"
+            write_tip_deflection(
+                sheet, section, loads, length=length_q, E=modulus, n=basis.deflection_ratio
+            )
+        write_exploration(sheet, section, (loads, types), (length_q, station_q), basis, fy_q, plan)
     return sheet
 
 
-def _write_basis(sheet: Sheet, section: Section) -> None:
-    sheet.add_basis(
-        "Codes and editions",
-        "No specification clause is checked here: the von Mises stress is compared with a "
-        "generic allowable F_y/Ω. Member stability, local buckling, connections and fatigue "
-        "need a specification check.",
-    )
-    sheet.add_basis("Material", "Steel, linear elastic; F_y and Ω as listed in the inputs.")
+def _write_basis(sheet: Sheet, section: Section, basis: DesignBasis) -> None:
+    if basis.kind == "allowable stress":
+        sheet.add_basis(
+            "Codes and editions",
+            "No specification clause is checked here: the von Mises stress is compared with a "
+            "generic allowable F_y/Ω. Member stability, local buckling, connections and "
+            "fatigue need a specification check.",
+        )
+        sheet.add_basis("Material", "Steel, linear elastic; F_y and Ω as listed in the inputs.")
+    if basis.combination_standard:
+        sheet.add_basis(
+            "Load combinations",
+            f"{basis.combination_standard}: every basic combination of the load types present "
+            "is evaluated; the governing one is written out in full.",
+        )
     sheet.add_basis(
         "Assumptions",
         "Cantilever fixed at z = 0, free at z = L; static loads; first-order statics "
@@ -153,11 +201,12 @@ def _write_basis(sheet: Sheet, section: Section) -> None:
         )
 
 
-def _write_conventions(sheet: Sheet) -> None:
+def _write_conventions(sheet: Sheet, generic: bool) -> None:
     sheet.heading("Scope, axes and sign convention")
     sheet.text(AXIS_TEXT)
     sheet.text(SIGN_TEXT)
-    sheet.text(NOT_A_SPEC_CHECK)
+    if generic:
+        sheet.text(NOT_A_SPEC_CHECK)
 
 
 def _write_inputs(
@@ -167,8 +216,9 @@ def _write_inputs(
     length: pint.Quantity,
     station: pint.Quantity,
     fy: tuple[pint.Quantity, str],
-    omega: pint.Quantity,
+    omega: pint.Quantity | None,
     length_unit: str,
+    types: Sequence[str],
 ) -> tuple[dict[str, sp.Symbol], list[str]]:
     sheet.heading("Member, material and loads")
     symbols: dict[str, sp.Symbol] = {}
@@ -182,15 +232,21 @@ def _write_inputs(
     symbols["F_y"] = sheet.input(
         "F_y", fy[0], "Yield stress of the material", dimension="stress", reference=fy[1]
     )
-    symbols["Omega"] = sheet.input(
-        "Omega", omega, "Factor of safety (generic)", dimension="dimensionless"
-    )
+    if omega is not None:
+        symbols["Omega"] = sheet.input(
+            "Omega", omega, "Factor of safety (generic)", dimension="dimensionless"
+        )
     free_ids = {id(load) for load in free}
     for number, load in enumerate(loads, start=1):
         beyond = id(load) in free_ids
         if isinstance(load, PointLoad):
+            sheet.heading(f"Load {number}: {load.name} (type {types[number - 1]})", level=2)
             _write_point_load(sheet, number, load, beyond, symbols, length_unit)
         else:
+            sheet.heading(
+                f"Load {number}: {load.name} (concentrated couple, type {types[number - 1]})",
+                level=2,
+            )
             _write_couple(sheet, number, load, beyond, symbols, length_unit)
         if beyond:
             free_suffixes.append(str(number))
@@ -205,7 +261,6 @@ def _write_point_load(
     symbols: dict[str, sp.Symbol],
     length_unit: str,
 ) -> None:
-    sheet.heading(f"Load {number}: {load.name}", level=2)
     suffix = str(number)
     if load.direction is not None:
         direction = load.direction
@@ -259,7 +314,6 @@ def _write_couple(
     symbols: dict[str, sp.Symbol],
     length_unit: str,
 ) -> None:
-    sheet.heading(f"Load {number}: {couple.name} (concentrated couple)", level=2)
     suffix = str(number)
     for axis, value in zip(AXES, (couple.Mx, couple.My, couple.Mz), strict=True):
         name = f"C_{axis}{suffix}"
@@ -298,16 +352,22 @@ def _write_internal_forces(
     free_suffixes: Sequence[str],
     symbols: dict[str, sp.Symbol],
     preset: dict[str, str],
+    factors: dict[str, sp.Symbol],
 ) -> dict[str, sp.Symbol]:
     sheet.heading("Internal forces at the station (statics of the free part)")
     terms: dict[str, list[sp.Expr]] = {name: [] for name in ("N", "V_x", "V_y", "T", "M_x", "M_y")}
     for suffix in free_suffixes:
+        # The load factor of the governing combination multiplies each of the load's
+        # terms (1 when the loads are taken as given).
+        gamma = factors.get(suffix, 1)
         if f"C_x{suffix}" in symbols:
-            terms["M_x"].append(symbols[f"C_x{suffix}"])
-            terms["M_y"].append(symbols[f"C_y{suffix}"])
-            terms["T"].append(symbols[f"C_z{suffix}"])
+            terms["M_x"].append(gamma * symbols[f"C_x{suffix}"])
+            terms["M_y"].append(gamma * symbols[f"C_y{suffix}"])
+            terms["T"].append(gamma * symbols[f"C_z{suffix}"])
             continue
         fx, fy, fz = (symbols.get(f"F_{axis}{suffix}") for axis in AXES)
+        if gamma != 1:
+            fx, fy, fz = (None if f is None else gamma * f for f in (fx, fy, fz))
         ex, ey, a = symbols[f"e_x{suffix}"], symbols[f"e_y{suffix}"], symbols[f"a_{suffix}"]
         for name, pairs in _RESULTANT_TERMS.items():
             for sign, arm, component in pairs:
@@ -644,10 +704,8 @@ _GOVERNING = (
 )
 
 
-def _write_check(
-    sheet: Sheet, points: list[PointSymbols], symbols: dict[str, sp.Symbol], stress: str
-) -> None:
-    sheet.heading("Governing points and allowable-stress check")
+def _write_governing(sheet: Sheet, points: list[PointSymbols], stress: str) -> dict[str, sp.Symbol]:
+    sheet.heading("Governing points")
     governing: dict[str, sp.Symbol] = {}
     for name, term, largest, description in _GOVERNING:
         governing[name] = sheet.governing(
@@ -657,6 +715,13 @@ def _write_check(
             largest=largest,
             unit=stress,
         )
+    return governing
+
+
+def _write_generic_check(
+    sheet: Sheet, governing: dict[str, sp.Symbol], symbols: dict[str, sp.Symbol], stress: str
+) -> None:
+    sheet.heading("Allowable-stress check")
     F_allow = sheet.step(
         "F_allow", symbols["F_y"] / symbols["Omega"], "Generic allowable stress", unit=stress
     )

@@ -49,6 +49,13 @@ def _message(error: dict[str, Any]) -> str:
         return f"unknown key{hint}"
     if kind == "missing":
         return "required key is missing"
+    if kind in ("too_long", "too_short") and error.get("ctx", {}).get("field_type") == "List":
+        # pydantic says "List should have at most 200 items after validation, not 10000".
+        context = error["ctx"]
+        bound = context["max_length"] if kind == "too_long" else context["min_length"]
+        entries = f"{bound:,} entr{'y' if bound == 1 else 'ies'}"
+        limit = f"at most {entries}" if kind == "too_long" else f"at least {entries}"
+        return f"{limit} allowed; this list has {context['actual_length']:,}"
     message = str(error["msg"]).removeprefix("Value error, ")
     if isinstance(given, (str, int, float)) and not isinstance(given, bool):
         shown = repr(given) if len(repr(given)) <= 60 else repr(given)[:57] + "...'"
@@ -74,6 +81,8 @@ def parse_job(text: str, *, source: str = "job") -> Job:
         data = tomllib.loads(text)
     except tomllib.TOMLDecodeError as error:
         raise JobError(source, [("", f"TOML syntax error: {error}")]) from None
+    except RecursionError:  # tomllib recurses once per level of nested arrays or tables
+        raise JobError(source, [("", "arrays or tables are nested too deeply")]) from None
     return job_from_data(data, source=source)
 
 

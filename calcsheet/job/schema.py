@@ -36,6 +36,10 @@ Stress = Annotated[str, _quantity("stress")]
 Angle = Annotated[str, _quantity("angle")]
 
 
+# ASCE 7 types (D, L, Lr, S, R, W, E) and EN 1990 types (G, Q, S, W).
+LoadType = Literal["D", "L", "Lr", "S", "R", "W", "E", "G", "Q"]
+
+
 class _Table(BaseModel):
     """A TOML table: unknown keys are errors; text is stripped."""
 
@@ -115,17 +119,50 @@ class MaterialSpec(_Table):
 
 
 class CheckSpec(_Table):
-    """Which check the sheet makes. Only the generic allowable-stress check so far."""
+    """Which check the sheet makes, and its settings (unused settings are ignored).
 
-    kind: Literal["allowable stress"] = "allowable stress"
+    ``kind``: "allowable stress" (generic von Mises against F_y/Ω), "AISC 360-22"
+    (``method`` LRFD or ASD) or "EN 1993-1-1". ``combinations``: the load
+    combination standard; by default ASCE 7-22 (strength for LRFD, ASD for ASD)
+    with AISC, EN 1990 with EN 1993, none with the allowable-stress check.
+    """
+
+    kind: Literal["allowable stress", "AISC 360-22", "EN 1993-1-1"] = "allowable stress"
+    method: Literal["LRFD", "ASD"] = "LRFD"
     factor_of_safety: float = Field(default=1.67, gt=0, le=100)
+    combinations: (
+        Literal[
+            "ASCE 7-22 strength",
+            "ASCE 7-22 ASD",
+            "ASCE 7-16 strength",
+            "ASCE 7-16 ASD",
+            "EN 1990",
+            "none",
+        ]
+        | None
+    ) = None
+    K: float | None = Field(default=None, gt=0, le=10)
+    Lb: Length | None = None
+    Cb: float = Field(default=1.0, ge=1.0, le=3.0)
+    gamma_M0: float = Field(default=1.0, ge=1.0, le=2.0)
+    gamma_M1: float = Field(default=1.0, ge=1.0, le=2.0)
+    S_DS: float | None = Field(default=None, ge=0, le=5)
+    deflection_limit: float | None = Field(default=None, gt=0, le=10000)
+
+
+class ExploreSpec(_Table):
+    """Design exploration drawn on the sheet: the load-direction sweep, the lightest section."""
+
+    sweep_load: str = ""
+    sweep_step: Angle = "5 deg"
+    lightest_in: str = ""
 
 
 class LoadSpec(_Table):
     """A point load: magnitude with an angle between two axes, or three components."""
 
     name: str = Field(min_length=1, max_length=80)
-    type: str = "D"
+    type: LoadType = "D"
     z: Length
     magnitude: Force | None = None
     angle: Angle | None = None
@@ -149,7 +186,7 @@ class MomentSpec(_Table):
     """A concentrated couple at z, by its components about x, y, z (right-hand rule)."""
 
     name: str = Field(min_length=1, max_length=80)
-    type: str = "D"
+    type: LoadType = "D"
     z: Length
     Mx: Moment = "0 kip*ft"
     My: Moment = "0 kip*ft"
@@ -177,6 +214,7 @@ class Job(_Table):
     member: MemberSpec
     material: MaterialSpec
     check: CheckSpec = CheckSpec()
+    explore: ExploreSpec = ExploreSpec()
     loads: list[LoadSpec] = Field(default_factory=list, max_length=200)
     moments: list[MomentSpec] = Field(default_factory=list, max_length=200)
     output: OutputSpec = OutputSpec()
@@ -204,6 +242,7 @@ def known_keys() -> set[str]:
         MemberSpec,
         MaterialSpec,
         CheckSpec,
+        ExploreSpec,
         LoadSpec,
         MomentSpec,
         OutputSpec,

@@ -1,0 +1,391 @@
+"""The design basis of a member sheet, and the numeric work behind its checks.
+
+A :class:`DesignBasis` says which check the sheet makes: the generic allowable
+stress check, AISC 360-22 (ASD or LRFD) or EN 1993-1-1, with the load
+combinations that go with it. Before the sheet is written, every combination is
+evaluated numerically (the same clauses as the printed steps, on arrays) to find
+the governing one; the sheet then prints that combination in full and lists the
+others in an envelope table. The load-direction sweep and the lightest-section
+search use the same numeric path.
+"""
+
+from __future__ import annotations
+
+import math
+from collections.abc import Sequence
+from dataclasses import dataclass, field
+
+import numpy as np
+import pint
+
+from calcsheet.errors import InputError
+from calcsheet.mechanics import internal_forces, stress_model
+from calcsheet.mechanics.loads import AppliedMoment, PointLoad, point_load
+from calcsheet.mechanics.statics import loads_beyond
+from calcsheet.sections import Section
+from calcsheet.standards.combinations import Combination, combinations, factor_matrix
+from calcsheet.units import Quantity
+
+KINDS = ("allowable stress", "AISC 360-22", "EN 1993-1-1")
+PASCAL_PER = {"inch": 0.0254**-2, "millimeter": 1e6, "meter": 1.0, "foot": 0.3048**-2}
+
+
+@dataclass(frozen=True)
+class DesignBasis:
+    """Which check a member sheet makes, and its settings (defaults as stated)."""
+
+    kind: str = "allowable stress"
+    method: str = "LRFD"
+    combinations: str | None = None  # None: ASCE 7-22 for AISC, EN 1990 for EN, none else
+    factor_of_safety: float = 1.67
+    K: float | None = None  # effective length factor; AISC 2.1, EN 2.0 when None
+    Lb: pint.Quantity | None = None
+    Cb: float = 1.0
+    gamma_M0: float = 1.00
+    gamma_M1: float = 1.00
+    S_DS: float | None = None
+    grade: str = ""
+    deflection_ratio: float | None = None  # L/n; None: no deflection check
+    sweep_load: str | None = None
+    sweep_step_deg: float = 5.0
+    lightest_in: str | None = None
+
+    def __post_init__(self) -> None:
+        if self.kind not in KINDS:
+            raise InputError("check kind", self.kind, "one of: " + ", ".join(KINDS))
+        if self.kind == "AISC 360-22" and self.method not in ("LRFD", "ASD"):
+            raise InputError("check method", self.method, "LRFD or ASD")
+        if self.K is not None and not (math.isfinite(self.K) and self.K > 0):
+            raise InputError("check K", self.K, "a positive effective length factor")
+        if self.lightest_in and self.kind != "AISC 360-22":
+            raise InputError(
+                "explore lightest_in",
+                self.lightest_in,
+                "a family to search only with the AISC 360-22 check (its numeric path)",
+            )
+
+    @property
+    def combination_standard(self) -> str | None:
+        """The load-combination standard, or None when loads are taken as given."""
+        if self.combinations is not None:
+            return None if self.combinations.lower() == "none" else self.combinations
+        if self.kind == "AISC 360-22":
+            return "ASCE 7-22 strength" if self.method == "LRFD" else "ASCE 7-22 ASD"
+        if self.kind == "EN 1993-1-1":
+            return "EN 1990"
+        return None
+
+    @property
+    def effective_length_factor(self) -> float:
+        if self.K is not None:
+            return self.K
+        # Fixed-free: AISC Commentary Table C-A-7.1 recommends 2.1 (from memory);
+        # EN 1993-1-1 has no table; 2.0 is the theoretical value (common practice).
+        return 2.1 if self.kind == "AISC 360-22" else 2.0
+
+
+@dataclass
+class CombinationPlan:
+    """Every combination's internal forces at the station and its utilization."""
+
+    standard: str
+    types: list[str]
+    combos: list[Combination]
+    forces: np.ndarray  # (n_combos, 6): N, Vx, Vy, T, Mx, My in N and N·m
+    utilization: np.ndarray  # (n_combos,)
+    measure: str
+    governing: int
+    check_names: list[str] = field(default_factory=list)  # governing check per combination
+
+    @property
+    def governing_combination(self) -> Combination:
+        return self.combos[self.governing]
+
+
+def forces_by_type(
+    loads: Sequence[PointLoad | AppliedMoment],
+    types: Sequence[str],
+    length: pint.Quantity,
+    station: pint.Quantity,
+) -> tuple[list[str], np.ndarray]:
+    """Internal forces at the station of each load type's loads: (n_types, 6) in N, N·m."""
+    present = list(dict.fromkeys(types))
+    rows = []
+    for load_type in present:
+        chosen = [load for load, kind in zip(loads, types, strict=True) if kind == load_type]
+        if loads_beyond(chosen, station):
+            rows.append(internal_forces(length, chosen, station).as_array("N", "m"))
+        else:
+            rows.append(np.zeros(6))
+    return present, np.array(rows)
+
+
+def _aisc_check_table(section: Section, forces: np.ndarray, basis: DesignBasis, Fy, length):
+    from calcsheet.standards.aisc360 import CHECKS, DemandArrays, Steel, aisc_checks_numeric
+    from calcsheet.standards.aisc360.section_data import section_table
+
+    demands = DemandArrays(
+        P_r=forces[:, 0], M_rx=forces[:, 4], M_ry=forces[:, 5], V_rx=forces[:, 1], V_ry=forces[:, 2]
+    )
+    checks = aisc_checks_numeric(
+        section_table([section]),
+        demands,
+        method=basis.method,
+        material=Steel(F_y=Fy, grade=basis.grade or "steel"),
+        length=length,
+        K=basis.effective_length_factor,
+        Lb=basis.Lb,
+        Cb=basis.Cb,
+    )
+    return CHECKS, np.stack([checks[name][0] for name in CHECKS])  # (n_checks, n_cases)
+
+
+def utilizations(
+    section: Section,
+    forces: np.ndarray,
+    basis: DesignBasis,
+    Fy: pint.Quantity,
+    length: pint.Quantity,
+) -> tuple[np.ndarray, list[str], str]:
+    """Utilization of each row of ``forces`` (n, 6) in N, N·m; the governing check of each."""
+    if basis.kind == "AISC 360-22":
+        names, table = _aisc_check_table(section, forces, basis, Fy, length)
+        worst = np.argmax(table, axis=0)
+        return table.max(axis=0), [names[i] for i in worst], "governing AISC 360-22 check"
+    # Elastic proxy (stated on the sheet): the largest von Mises stress at the points
+    # over the allowable (F_y/Ω) or the design yield stress (f_y/γM0, EN 1993-1-1 6.2.1(5)).
+    unit = section.length_unit
+    model = stress_model(section, unit)
+    scale = np.array([1, 1, 1, unit_metres(unit), unit_metres(unit), unit_metres(unit)])
+    stresses = model.stresses(forces / scale)  # N/unit² per point
+    vm = stresses.von_mises.max(axis=-1) * PASCAL_PER.get(unit, 1.0)
+    if basis.kind == "allowable stress":
+        allowable = Fy.to("Pa").m / basis.factor_of_safety
+        measure = "largest von Mises stress / (F_y/Ω)"
+    else:
+        allowable = Fy.to("Pa").m / basis.gamma_M0
+        measure = "largest von Mises stress / (f_y/γM0), EN 1993-1-1 6.2.1(5)"
+    return vm / allowable, ["von Mises"] * len(vm), measure
+
+
+def unit_metres(unit: str) -> float:
+    return float(Quantity(1.0, unit).to("m").m)
+
+
+def plan_combinations(
+    section: Section,
+    loads: Sequence[PointLoad | AppliedMoment],
+    types: Sequence[str],
+    length: pint.Quantity,
+    station: pint.Quantity,
+    basis: DesignBasis,
+    Fy: pint.Quantity,
+) -> CombinationPlan | None:
+    """Evaluate every combination of the basis; None when loads are taken as given."""
+    standard = basis.combination_standard
+    if standard is None:
+        return None
+    present, by_type = forces_by_type(loads, types, length, station)
+    combos = combinations(standard, present, S_DS=basis.S_DS)
+    if not combos:
+        raise InputError(
+            "loads type",
+            ", ".join(present),
+            f"load types that {standard} combines (D, L, Lr, S, R, W, E; EN: G, Q, S, W)",
+            "no combination applies",
+        )
+    from calcsheet.standards.combinations import combine_numeric
+
+    forces = combine_numeric(by_type, combos, present)
+    values, names, measure = utilizations(section, forces, basis, Fy, length)
+    return CombinationPlan(
+        standard=standard,
+        types=present,
+        combos=combos,
+        forces=forces,
+        utilization=values,
+        measure=measure,
+        governing=int(np.argmax(values)),
+        check_names=names,
+    )
+
+
+def governing_utilization(
+    section: Section,
+    loads: Sequence[PointLoad | AppliedMoment],
+    types: Sequence[str],
+    length: pint.Quantity,
+    station: pint.Quantity,
+    basis: DesignBasis,
+    Fy: pint.Quantity,
+) -> float:
+    """The largest utilization over every combination (or over the loads as given)."""
+    plan = plan_combinations(section, loads, types, length, station, basis, Fy)
+    if plan is not None:
+        return float(plan.utilization.max())
+    forces = internal_forces(length, loads, station).as_array("N", "m")[np.newaxis, :]
+    return float(utilizations(section, forces, basis, Fy, length)[0][0])
+
+
+@dataclass(frozen=True)
+class Sweep:
+    """Utilization against the angle of one load, drawn angle and worst angle."""
+
+    load: str
+    angles_deg: np.ndarray
+    utilization: np.ndarray
+    drawn_deg: float
+
+    @property
+    def worst_deg(self) -> float:
+        return float(self.angles_deg[int(np.argmax(self.utilization))])
+
+
+def angle_sweep(
+    section: Section,
+    loads: Sequence[PointLoad | AppliedMoment],
+    types: Sequence[str],
+    length: pint.Quantity,
+    station: pint.Quantity,
+    basis: DesignBasis,
+    Fy: pint.Quantity,
+) -> Sweep:
+    """Turn one load (given by magnitude and angle) through 0–360° in its plane."""
+    names = [load.name for load in loads]
+    if basis.sweep_load not in names:
+        raise InputError(
+            "explore sweep_load", basis.sweep_load, "the name of a load: " + ", ".join(names)
+        )
+    index = names.index(basis.sweep_load)
+    swept = loads[index]
+    if not isinstance(swept, PointLoad) or swept.direction is None:
+        raise InputError(
+            "explore sweep_load", basis.sweep_load, "a load given by magnitude and angle"
+        )
+    step = basis.sweep_step_deg
+    if not (math.isfinite(step) and 0.5 <= step <= 90):
+        raise InputError("explore sweep_step", step, "an angle step from 0.5 to 90 deg")
+    angles = np.arange(0.0, 360.0 + step / 2, step)
+    # Statics is linear in the load: the swept load at angle θ gives
+    # cos θ·(its forces at 0°) + sin θ·(its forces at 90°); the other loads do not move.
+    present = list(dict.fromkeys(types))
+    others = [(load, kind) for i, (load, kind) in enumerate(zip(loads, types, strict=True))
+              if i != index]  # fmt: skip
+    base = np.zeros((len(present), 6))
+    for row, load_type in enumerate(present):
+        chosen = [load for load, kind in others if kind == load_type]
+        if loads_beyond(chosen, station):
+            base[row] = internal_forces(length, chosen, station).as_array("N", "m")
+    unit_forces = []
+    for quarter in (0.0, 90.0):
+        turned = point_load(
+            swept.name,
+            z=swept.z,
+            magnitude=swept.magnitude,
+            angle=Quantity(quarter, "deg"),
+            from_axis=swept.direction.from_axis,
+            toward_axis=swept.direction.toward_axis,
+            ex=swept.ex,
+            ey=swept.ey,
+        )
+        beyond = loads_beyond([turned], station)
+        unit_forces.append(
+            internal_forces(length, [turned], station).as_array("N", "m") if beyond else np.zeros(6)
+        )
+    radians = np.radians(angles)
+    swept_forces = (
+        np.cos(radians)[:, None] * unit_forces[0] + np.sin(radians)[:, None] * unit_forces[1]
+    )
+    by_angle = np.repeat(base[np.newaxis], len(angles), axis=0)  # (angles, types, 6)
+    by_angle[:, present.index(types[index])] += swept_forces
+    standard = basis.combination_standard
+    if standard is not None:
+        combos = combinations(standard, present, S_DS=basis.S_DS)
+        factors = factor_matrix(combos, present)  # (combos, types)
+        combined = np.einsum("ct,atk->ack", factors, by_angle)  # (angles, combos, 6)
+    else:
+        combined = by_angle.sum(axis=1)[:, np.newaxis, :]
+    flat = combined.reshape(-1, 6)
+    values = utilizations(section, flat, basis, Fy, length)[0].reshape(combined.shape[:2])
+    values = values.max(axis=1)
+    drawn = float(swept.direction.angle.to("deg").m) % 360.0
+    return Sweep(swept.name, angles, values, drawn)
+
+
+@dataclass(frozen=True)
+class Candidate:
+    """A catalog section tried by the lightest-section search."""
+
+    name: str
+    weight: pint.Quantity
+    utilization: float
+    governing_check: str
+
+    @property
+    def passes(self) -> bool:
+        return self.utilization <= 1.0
+
+
+def lightest_section(
+    plan: CombinationPlan, basis: DesignBasis, Fy: pint.Quantity, length: pint.Quantity
+) -> tuple[Candidate | None, list[Candidate]]:
+    """The lightest section of ``basis.lightest_in`` passing every AISC check, and the
+    (up to) two lighter sections before it, which fail."""
+    from calcsheet.sections import list_designations
+    from calcsheet.sections.catalog import find_entry
+    from calcsheet.standards.aisc360 import CHECKS, DemandArrays, Steel, aisc_checks_numeric
+    from calcsheet.standards.aisc360.section_data import catalog_table
+
+    family = basis.lightest_in or ""
+    try:
+        names = list_designations(family, lightest_first=True)
+    except InputError:
+        raise InputError(
+            "explore lightest_in", family, "a catalog family such as W or HSS_RECT"
+        ) from None
+    forces = plan.forces
+    demands = DemandArrays(
+        P_r=forces[:, 0], M_rx=forces[:, 4], M_ry=forces[:, 5], V_rx=forces[:, 1], V_ry=forces[:, 2]
+    )
+    checks = aisc_checks_numeric(
+        catalog_table(names),
+        demands,
+        method=basis.method,
+        material=Steel(F_y=Fy, grade=basis.grade or "steel"),
+        length=length,
+        K=basis.effective_length_factor,
+        Lb=basis.Lb,
+        Cb=basis.Cb,
+    )
+    table = np.stack([checks[name] for name in CHECKS])  # (checks, sections, combos)
+    per_check = table.max(axis=2)  # (checks, sections)
+    worst = per_check.max(axis=0)
+    which = per_check.argmax(axis=0)
+    candidates = [
+        Candidate(
+            name,
+            Quantity(find_entry(name).values.get("weight", math.nan), "lbf/ft"),
+            float(worst[i]),
+            CHECKS[int(which[i])],
+        )
+        for i, name in enumerate(names)
+    ]
+    for position, candidate in enumerate(candidates):
+        if candidate.passes:
+            return candidate, candidates[max(0, position - 2) : position]
+    return None, candidates[-2:]
+
+
+__all__ = [
+    "KINDS",
+    "Candidate",
+    "CombinationPlan",
+    "DesignBasis",
+    "Sweep",
+    "angle_sweep",
+    "forces_by_type",
+    "governing_utilization",
+    "lightest_section",
+    "plan_combinations",
+    "utilizations",
+]

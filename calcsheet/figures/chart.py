@@ -1,0 +1,86 @@
+"""A line chart of utilization against load angle (the load-direction sweep).
+
+Plain axes with a grid every 45°, the limit line at 1.0, the angle drawn on the
+sheet marked and the worst angle named, all in the figures' own style.
+"""
+
+from __future__ import annotations
+
+from collections.abc import Sequence
+
+from calcsheet.figures.style import AXIS, DIMENSION, INK, NOTE, SMALL_FONT_SIZE, TENSION
+from calcsheet.figures.svg import Svg
+
+WIDTH = 520.0
+HEIGHT = 220.0
+
+
+def sweep_chart(
+    angles_deg: Sequence[float],
+    utilizations: Sequence[float],
+    *,
+    drawn_deg: float,
+    title: str,
+) -> str:
+    """SVG of utilization against the load angle, with the drawn and the worst angle marked."""
+    values = [float(value) for value in utilizations]
+    angles = [float(angle) for angle in angles_deg]
+    top = max(1.2, max(values) * 1.1)
+    svg = Svg(title=title)
+
+    def at(angle: float, value: float) -> tuple[float, float]:
+        span = (angles[-1] - angles[0]) or 1.0
+        return ((angle - angles[0]) / span * WIDTH, HEIGHT - value / top * HEIGHT)
+
+    svg.line((0, HEIGHT), (WIDTH, HEIGHT), stroke=INK, width=1.0)
+    svg.line((0, 0), (0, HEIGHT), stroke=INK, width=1.0)
+    step = 45.0
+    tick = angles[0]
+    while tick <= angles[-1] + 1e-9:
+        x, _ = at(tick, 0)
+        svg.line((x, 0), (x, HEIGHT), stroke=AXIS, width=0.4, dash="2 3")
+        svg.text((x, HEIGHT + 12), f"{tick:g}°", size=SMALL_FONT_SIZE, fill=NOTE)
+        tick += step
+    for level in _levels(top):
+        _, y = at(angles[0], level)
+        svg.line((0, y), (WIDTH, y), stroke=AXIS, width=0.4, dash="2 3")
+        svg.text((-6, y), f"{level:g}", size=SMALL_FONT_SIZE, anchor="end", fill=NOTE)
+    _, limit_y = at(angles[0], 1.0)
+    svg.line((0, limit_y), (WIDTH, limit_y), stroke=TENSION_HEX, width=1.2, dash="6 3")
+    svg.text((WIDTH - 2, limit_y - 8), "limit 1.0", size=SMALL_FONT_SIZE, anchor="end")
+    svg.polyline([at(a, v) for a, v in zip(angles, values, strict=True)], stroke=INK, width=1.6)
+    worst = max(range(len(values)), key=values.__getitem__)
+    _mark(svg, at(angles[worst], values[worst]), f"worst {angles[worst]:g}°: {values[worst]:.3f}")
+    drawn_value = _interpolate(angles, values, drawn_deg)
+    _mark(svg, at(drawn_deg, drawn_value), f"drawn {drawn_deg:g}°: {drawn_value:.3f}", below=True)
+    svg.text((WIDTH / 2, HEIGHT + 28), "load angle θ", size=SMALL_FONT_SIZE, fill=NOTE)
+    svg.text((-34, HEIGHT / 2), "utilization", size=SMALL_FONT_SIZE, fill=NOTE, vertical=True)
+    return svg.render()
+
+
+TENSION_HEX = "#{:02x}{:02x}{:02x}".format(*TENSION)
+
+
+def _levels(top: float) -> list[float]:
+    step = 0.25 if top <= 1.5 else 0.5 if top <= 3 else 1.0 if top <= 6 else round(top / 5)
+    levels, value = [], step
+    while value < top:
+        levels.append(round(value, 6))
+        value += step
+    return levels
+
+
+def _mark(svg: Svg, point: tuple[float, float], label: str, *, below: bool = False) -> None:
+    svg.circle(point, 3.2, fill=INK)
+    offset = 14 if below else -12
+    svg.text((point[0], point[1] + offset), label, size=SMALL_FONT_SIZE, fill=DIMENSION, bold=True)
+
+
+def _interpolate(angles: Sequence[float], values: Sequence[float], angle: float) -> float:
+    wrapped = angles[0] + (angle - angles[0]) % ((angles[-1] - angles[0]) or 360.0)
+    for index in range(len(angles) - 1):
+        a, b = angles[index], angles[index + 1]
+        if a <= wrapped <= b:
+            share = (wrapped - a) / (b - a) if b > a else 0.0
+            return values[index] + share * (values[index + 1] - values[index])
+    return values[-1]

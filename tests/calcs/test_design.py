@@ -1,0 +1,107 @@
+"""Design checks on the member sheet: combinations, specification checks, exploration.
+
+Scenario (our own, invented numbers): a 5 ft W10x33 davit arm with a 5 kip hoist pull
+(dead load, D) 30° from −y toward +z on a lug 5 in below the centroid, and a 0.5 kip
+wind push (W) along +x at the tip. The sheet's printed checks are compared with the
+numeric path of the same clauses, which the combination search and the exploration use.
+"""
+
+from __future__ import annotations
+
+import numpy as np
+import pytest
+
+from calcsheet.calcs import member_sheet
+from calcsheet.calcs.design import DesignBasis, lightest_section, plan_combinations
+from calcsheet.errors import InputError
+from calcsheet.mechanics import point_load
+from calcsheet.sections import catalog_section
+from calcsheet.units import Quantity
+
+LOADS = [
+    point_load(
+        "hoist", z="60 in", magnitude="5 kip", angle="30 deg", from_axis="-y",
+        toward_axis="+z", ey="-5 in",
+    ),
+    point_load("wind", z="60 in", components=("0.5 kip", "0 kip", "0 kip")),
+]  # fmt: skip
+TYPES = ["D", "W"]
+LENGTH, STATION, FY = Quantity(60, "in"), Quantity(0, "in"), Quantity(50, "ksi")
+
+
+def _sheet(basis: DesignBasis, section: str = "W10X33", types=TYPES):
+    return member_sheet(
+        catalog_section(section), LOADS, length=LENGTH, Fy=FY, design=basis, load_types=types
+    )
+
+
+@pytest.mark.parametrize("method", ["LRFD", "ASD"])
+def test_the_printed_aisc_checks_agree_with_the_numeric_path(method: str) -> None:
+    basis = DesignBasis("AISC 360-22", method=method, grade="ASTM A992")
+    sheet = _sheet(basis)
+    plan = plan_combinations(catalog_section("W10X33"), LOADS, TYPES, LENGTH, STATION, basis, FY)
+    # ASCE 7-22 2.3.1 strength: 1.4D, 1.2D + W, 0.9D + W; 2.4.1 ASD: D, D + 0.6W,
+    # D + 0.45W (with L, here absent), 0.6D + 0.6W (from memory).
+    assert plan is not None and len(plan.combos) == {"LRFD": 3, "ASD": 4}[method]
+    governing = max(check.utilization for check in sheet.checks)
+    assert governing == pytest.approx(plan.utilization.max(), rel=1e-9)
+    # The load factors of the governing combination multiply the loads in the statics.
+    combo = plan.governing_combination
+    assert sheet.value("gamma_D").m == combo.factor("D")
+    assert sheet.value("N").to("N").m == pytest.approx(plan.forces[plan.governing][0])
+    assert sheet.value("M_x").to("N*m").m == pytest.approx(plan.forces[plan.governing][4])
+
+
+def test_a_changed_load_factor_needs_a_rebuild() -> None:
+    sheet = _sheet(DesignBasis("AISC 360-22"))
+    with pytest.raises(InputError, match="governing combination was chosen"):
+        sheet.set_input("gamma_D", 1.6)
+
+
+def test_en_1993_with_en_1990_combinations() -> None:
+    basis = DesignBasis("EN 1993-1-1", grade="S355")
+    sheet = _sheet(basis, types=["G", "W"])
+    names = [check.description for check in sheet.checks]
+    assert any("Flexural buckling" in name for name in names)
+    assert all(check.utilization is not None for check in sheet.checks)
+    with pytest.raises(InputError, match="standard|type|G, Q"):
+        _sheet(basis, types=["D", "W"])  # D is an ASCE 7 type, not EN 1990's
+
+
+def test_a_family_the_standard_does_not_cover_is_refused_clearly() -> None:
+    with pytest.raises(InputError) as raised:
+        _sheet(DesignBasis("AISC 360-22"), section="C10X15.3")
+    assert "section" in str(raised.value).lower()
+
+
+def test_the_sweep_passes_through_the_drawn_angle_and_names_the_worst() -> None:
+    basis = DesignBasis("AISC 360-22", sweep_load="hoist", sweep_step_deg=5.0)
+    sheet = _sheet(basis)
+    from calcsheet.calcs.design import angle_sweep
+
+    sweep = angle_sweep(catalog_section("W10X33"), LOADS, TYPES, LENGTH, STATION, basis, FY)
+    drawn = sweep.utilization[list(sweep.angles_deg).index(30.0)]
+    assert drawn == pytest.approx(max(check.utilization for check in sheet.checks), rel=1e-9)
+    assert sweep.utilization.max() >= drawn
+    assert sweep.worst_deg == sweep.angles_deg[int(np.argmax(sweep.utilization))]
+    assert any("Design exploration" in getattr(part, "text", "") for part in sheet.parts)
+
+
+def test_the_lightest_section_passes_in_its_own_sheet_and_the_lighter_ones_fail() -> None:
+    basis = DesignBasis("AISC 360-22", lightest_in="W")
+    plan = plan_combinations(catalog_section("W10X33"), LOADS, TYPES, LENGTH, STATION, basis, FY)
+    chosen, lighter = lightest_section(plan, basis, FY, LENGTH)
+    assert chosen is not None and chosen.passes
+    assert lighter and all(not candidate.passes for candidate in lighter)
+    assert all(candidate.weight <= chosen.weight for candidate in lighter)
+    # Independent of the numeric path: the chosen section's printed sheet passes every check.
+    sheet = _sheet(DesignBasis("AISC 360-22"), section=chosen.name)
+    assert all(check.passes for check in sheet.checks)
+    assert max(check.utilization for check in sheet.checks) == pytest.approx(
+        chosen.utilization, rel=1e-6
+    )
+
+
+def test_the_lightest_search_is_only_offered_with_aisc() -> None:
+    with pytest.raises(InputError, match="lightest_in"):
+        DesignBasis("EN 1993-1-1", lightest_in="W")
