@@ -80,7 +80,10 @@ def parse_quantity(
     elif isinstance(text, bool):
         raise InputError(field, text, expected, "a yes/no value is not a quantity")
     elif isinstance(text, (int, float)):
-        quantity = Quantity(float(text))
+        try:
+            quantity = Quantity(float(text))
+        except OverflowError:  # an int beyond the largest float
+            raise InputError(field, text, expected, "the number must be finite") from None
         if dimension == "angle":
             raise InputError(field, text, expected, "an angle needs its unit, deg or rad")
     elif isinstance(text, str):
@@ -141,7 +144,7 @@ def parse_unit(text: str, *, field: str, shown: object = None, expected: str = "
         unit = ureg.parse_units(normalised)
     except (pint.errors.UndefinedUnitError, pint.errors.DefinitionSyntaxError) as error:
         raise InputError(field, shown, expected, f"unknown unit {text!r}") from error
-    except (ValueError, TypeError, AttributeError, SyntaxError) as error:
+    except Exception as error:  # pint's parser: KeyError, ZeroDivisionError, TokenError...
         raise InputError(field, shown, expected, f"{text!r} is not a unit") from error
     return unit
 
@@ -150,12 +153,15 @@ def _require_dimension(
     quantity: pint.Quantity, dimension: str, *, field: str, shown: object, expected: str
 ) -> None:
     wanted = DIMENSIONS[dimension]
+    # Not ``quantity.dimensionless``: pint converts to root units for it, which
+    # overflows for a unit such as km^999.
+    dimensionless = not quantity.dimensionality
     if dimension == "angle":
-        if not quantity.dimensionless or quantity.unitless:
+        if not dimensionless or quantity.unitless:
             raise InputError(field, shown, expected, "an angle needs its unit, deg or rad")
         return
     if wanted == "":
-        if not quantity.dimensionless:
+        if not dimensionless:
             raise InputError(field, shown, expected, f"{quantity.units:~} is not dimensionless")
         return
     if not quantity.check(wanted):

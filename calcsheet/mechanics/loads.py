@@ -130,7 +130,7 @@ def point_load(
         )
         unit = fx.units
         fy, fz = fy.to(unit), fz.to(unit)
-        size = math.sqrt(fx.m**2 + fy.m**2 + fz.m**2)
+        size = math.hypot(fx.m, fy.m, fz.m)  # no overflow for components near 1e308
         if size == 0.0:
             raise InputError(
                 f"{prefix} components", components, "a force with a direction", "all three are zero"

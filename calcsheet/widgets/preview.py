@@ -1,0 +1,127 @@
+"""The live preview: the result at a glance, a note when the entries have problems, the sheet.
+
+Each part is one HTML widget whose value is replaced in place (and only when it
+changed), so the page does not jump or flash while the user types; the 100-odd
+kilobytes of the sheet travel to the browser only when the sheet changed.
+"""
+
+from __future__ import annotations
+
+import html
+
+import ipywidgets as widgets
+
+from calcsheet.build import BuildResult
+from calcsheet.engine import Sheet
+from calcsheet.render.html import render_fragment
+
+OK_COLOUR = "#1f6f3f"
+NOT_OK_COLOUR = "#a11d1d"
+NOTE_STYLE = "border-left:4px solid #c98a00;background:#fff7e0;padding:0.4em 0.7em;margin:0.3em 0;"
+MAX_LISTED_PROBLEMS = 6
+CELL_STYLE = "padding:0.1em 0.9em 0.1em 0;text-align:left;vertical-align:top"
+
+
+def governing_sheet(result: BuildResult) -> Sheet:
+    """The sheet (station) with the highest utilization: the one the preview shows."""
+    worst = max(
+        result.sheets,
+        key=lambda built: (built.results["governing"] or {}).get("utilization") or 0.0,
+    )
+    return worst.sheet
+
+
+def _cells(tag: str, *texts: str) -> str:
+    return "".join(f"<{tag} style='{CELL_STYLE}'>{text}</{tag}>" for text in texts)
+
+
+def key_results_html(result: BuildResult) -> str:
+    """Status, governing utilization and where it governs, station by station, and the stamp."""
+    status = "OK" if result.all_pass else "NOT OK"
+    colour = OK_COLOUR if result.all_pass else NOT_OK_COLOUR
+    stations = result.job.member.stations
+    rows = []
+    for index, built in enumerate(result.sheets):
+        governing = built.results["governing"]
+        where = "z = " + html.escape(stations[index]) if index < len(stations) else ""
+        if governing is None:
+            rows.append("<tr>" + _cells("td", where, "", "no checks", "") + "</tr>")
+            continue
+        at = f" at {html.escape(governing['at'])}" if governing["at"] else ""
+        cells = _cells(
+            "td",
+            where,
+            f"<b>{governing['utilization']:.3f}</b>",
+            html.escape(governing["status"]),
+            html.escape(governing["description"]) + at,
+        )
+        rows.append(f"<tr>{cells}</tr>")
+    stamp = html.escape(result.sheets[0].sheet.stamp) if result.sheets else ""
+    badge = (
+        f"background:{colour};color:white;font-weight:bold;padding:0.15em 0.6em;border-radius:3px"
+    )
+    return (
+        '<div style="font-size:0.95em">'
+        f'<span style="{badge}">{status}</span> '
+        f"governing utilization <b>{result.governing_utilization:.3f}</b>"
+        f" · {html.escape(result.member)}"
+        '<table style="border-collapse:collapse;margin-top:0.3em;text-align:left">'
+        "<tr>"
+        + _cells("th", "station", "utilization", "status", "governs")
+        + "</tr>"
+        + "".join(rows)
+        + "</table>"
+        f'<div style="color:#555;font-size:0.85em">{stamp}</div>'
+        "</div>"
+    )
+
+
+def problems_note_html(problems: list[tuple[str, str]], *, have_result: bool) -> str:
+    """The note shown while the entries have problems: what is wrong, and what is shown."""
+    if not problems:
+        return ""
+    count = len(problems)
+    shown = "".join(
+        f"<li><b>{html.escape(label)}</b>: {html.escape(message)}</li>"
+        for label, message in problems[:MAX_LISTED_PROBLEMS]
+    )
+    more = (
+        f"<li>… and {count - MAX_LISTED_PROBLEMS} more</li>" if count > MAX_LISTED_PROBLEMS else ""
+    )
+    kept = (
+        "The preview below is the last good result, not these entries."
+        if have_result
+        else "There is no sheet yet."
+    )
+    noun = "entry has a problem" if count == 1 else f"{count} entries have problems"
+    return f'<div style="{NOTE_STYLE}">The current {noun}. {kept}<ul>{shown}{more}</ul></div>'
+
+
+class Preview:
+    """Key results, the problems note and the sheet, each updated in place."""
+
+    def __init__(self) -> None:
+        self.key_results = widgets.HTML()
+        self.note = widgets.HTML()
+        self.sheet_view = widgets.HTML(
+            layout=widgets.Layout(border="1px solid #d0d4da", padding="0.5em")
+        )
+        self.box = widgets.VBox([self.key_results, self.note, self.sheet_view])
+        self._shown_result: BuildResult | None = None
+
+    def show(self, result: BuildResult | None, problems: list[tuple[str, str]]) -> None:
+        """Show ``result`` (the last good one) and the note about ``problems``."""
+        _replace(self.note, problems_note_html(problems, have_result=result is not None))
+        if result is None:
+            _replace(self.key_results, "")
+            return
+        if result is self._shown_result:
+            return  # the entries have problems and the last good result is already shown
+        self._shown_result = result
+        _replace(self.key_results, key_results_html(result))
+        _replace(self.sheet_view, render_fragment(governing_sheet(result)))
+
+
+def _replace(widget: widgets.HTML, value: str) -> None:
+    if widget.value != value:
+        widget.value = value
