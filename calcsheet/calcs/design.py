@@ -361,19 +361,18 @@ def lightest_section(
     per_check = table.max(axis=2)  # (checks, sections)
     worst = per_check.max(axis=0)
     which = per_check.argmax(axis=0)
-    candidates = [
-        Candidate(
-            name,
-            Quantity(find_entry(name).values.get("weight", math.nan), "lbf/ft"),
-            float(worst[i]),
-            CHECKS[int(which[i])],
+
+    def candidate(i: int) -> Candidate:
+        weight = find_entry(names[i]).values.get("weight", math.nan)
+        return Candidate(
+            names[i], Quantity(weight, "lbf/ft"), float(worst[i]), CHECKS[int(which[i])]
         )
-        for i, name in enumerate(names)
-    ]
-    for position, candidate in enumerate(candidates):
-        if candidate.passes:
-            return candidate, candidates[max(0, position - 2) : position]
-    return None, candidates[-2:]
+
+    passing = np.flatnonzero(worst <= 1.0)
+    if passing.size == 0:
+        return None, [candidate(i) for i in range(max(0, len(names) - 2), len(names))]
+    first = int(passing[0])
+    return candidate(first), [candidate(i) for i in range(max(0, first - 2), first)]
 
 
 __all__ = [

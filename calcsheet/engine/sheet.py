@@ -20,6 +20,7 @@ import math
 from collections.abc import Callable, Iterator, Sequence
 from contextlib import ExitStack
 from dataclasses import dataclass
+from functools import lru_cache
 
 import pint
 import sympy as sp
@@ -443,42 +444,7 @@ class Sheet:
         symbolic_printer, slot_printer = self._printer_pair(target)
         key = (id(part), target)
         if key not in self._templates:
-            name = symbolic_printer.symbol_name(parse_symbol_name(part.name))
-            summarized = isinstance(part, Step) and len(part.candidates) > 3
-            if (
-                isinstance(part, Step)
-                and not summarized
-                and not (part.expr.is_Symbol or part.expr.is_Number)
-            ):
-                slots = {symbol: index for index, symbol in enumerate(_ordered_symbols(part.expr))}
-                symbolic = symbolic_printer.print_expression(part.expr)
-                # For an "if" step only the branch that applies is worth substituting.
-                branches = (
-                    [value for value, _ in part.expr.args]
-                    if isinstance(part.expr, sp.Piecewise)
-                    else [part.expr]
-                )
-                substituted = tuple(
-                    type(slot_printer)(slots).print_expression(branch) for branch in branches
-                )
-                order = tuple(slots)
-            elif summarized:
-                # max(...) of many values is read from the table it comes from;
-                # the line shows the rule and the result, and where it governs.
-                symbolic, substituted, order = (
-                    symbolic_printer.print_expression(part.expr),
-                    None,
-                    (),
-                )
-            elif isinstance(part, Step) and part.expr.is_Symbol:
-                symbolic, substituted, order = (
-                    symbolic_printer.print_expression(part.expr),
-                    None,
-                    (),
-                )
-            else:
-                symbolic, substituted, order = None, None, ()
-            self._templates[key] = (name, symbolic, substituted, order)
+            self._templates[key] = _printed_template(part, target, symbolic_printer, slot_printer)
         name, symbolic, template, order = self._templates[key]
         substituted = None
         if template is not None:
@@ -664,3 +630,69 @@ def _ordered_symbols(expr: sp.Basic) -> list[sp.Symbol]:
 
 def _article(noun: str) -> str:
     return f"{'an' if noun[:1] in 'aeiou' else 'a'} {noun}"
+
+
+# A sheet rebuilt after a design change (the form rebuilds on every entry) has the same
+# expressions as before; sympy compares them by structure, so their printed templates
+# are kept across sheets here instead of being printed again.
+@lru_cache(maxsize=20_000)
+def _cached_template(
+    part_kind: str, name: str, expr: sp.Basic, candidates: int, target: str
+) -> tuple:
+    symbolic_printer, slot_printer = PRINTERS[target](), PRINTERS[target]({})
+    return _template_of(part_kind, name, expr, candidates, symbolic_printer, slot_printer)
+
+
+def _printed_template(
+    part: Input | Step,
+    target: str,
+    symbolic_printer: _ExpressionPrinter,
+    slot_printer: _ExpressionPrinter,
+) -> tuple:
+    """(name, symbolic, substituted templates, slot order) of a step or input."""
+    kind = "step" if isinstance(part, Step) else "input"
+    expr = part.expr if isinstance(part, Step) else sp.S.Zero
+    candidates = len(part.candidates) if isinstance(part, Step) else 0
+    try:
+        return _cached_template(kind, part.name, expr, candidates, target)
+    except TypeError:  # an expression that cannot be hashed: print it here
+        return _template_of(kind, part.name, expr, candidates, symbolic_printer, slot_printer)
+
+
+def _template_of(
+    part_kind: str,
+    part_name: str,
+    expr: sp.Basic,
+    candidates: int,
+    symbolic_printer: _ExpressionPrinter,
+    slot_printer: _ExpressionPrinter,
+) -> tuple:
+    """Print a step once: its name, symbolic form and substitution templates with slots."""
+    name = symbolic_printer.symbol_name(parse_symbol_name(part_name))
+    summarized = part_kind == "step" and candidates > 3
+    if part_kind == "step" and not summarized and not (expr.is_Symbol or expr.is_Number):
+        slots = {symbol: index for index, symbol in enumerate(_ordered_symbols(expr))}
+        symbolic = symbolic_printer.print_expression(expr)
+        # For an "if" step only the branch that applies is worth substituting.
+        branches = [value for value, _ in expr.args] if isinstance(expr, sp.Piecewise) else [expr]
+        substituted = tuple(
+            type(slot_printer)(slots).print_expression(branch) for branch in branches
+        )
+        order = tuple(slots)
+    elif summarized:
+        # max(...) of many values is read from the table it comes from;
+        # the line shows the rule and the result, and where it governs.
+        symbolic, substituted, order = (
+            symbolic_printer.print_expression(expr),
+            None,
+            (),
+        )
+    elif part_kind == "step" and expr.is_Symbol:
+        symbolic, substituted, order = (
+            symbolic_printer.print_expression(expr),
+            None,
+            (),
+        )
+    else:
+        symbolic, substituted, order = None, None, ()
+    return (name, symbolic, substituted, order)
