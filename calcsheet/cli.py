@@ -25,6 +25,8 @@ examples:
 """
 
 OK, CHECK_FAILS, BAD_INPUT, NOT_WRITTEN = 0, 1, 2, 3
+# A batch of 5,000 members (the batch limit) is well under this; larger is not a table.
+MAX_TABLE_BYTES = 20_000_000
 INTERNAL = NOT_WRITTEN
 
 
@@ -92,6 +94,7 @@ def _build(arguments: argparse.Namespace) -> int:
 
 def _check(arguments: argparse.Namespace) -> int:
     from calcsheet.build import build_sheets
+    from calcsheet.errors import CalcsheetError
     from calcsheet.job import JobError, read_job
 
     status = OK
@@ -100,6 +103,10 @@ def _check(arguments: argparse.Namespace) -> int:
             result = build_sheets(read_job(path), source=str(path))
         except JobError as error:
             print(str(error), file=sys.stderr)
+            status = BAD_INPUT
+            continue
+        except CalcsheetError as error:  # every job is checked, each error names its file
+            print(f"{path}: {error}", file=sys.stderr)
             status = BAD_INPUT
             continue
         print(result.summary())
@@ -154,6 +161,11 @@ def _batch(arguments: argparse.Namespace) -> int:
 
     table: Path = arguments.table
     try:
+        size = table.stat().st_size
+        if size > MAX_TABLE_BYTES:
+            raise JobError(
+                str(table), [("", f"{size:,} bytes; a batch table is at most {MAX_TABLE_BYTES:,}")]
+            )
         text = table.read_text(encoding="utf-8")
     except (OSError, UnicodeDecodeError) as error:
         raise JobError(str(table), [("", f"cannot read it: {error}")]) from None

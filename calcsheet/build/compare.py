@@ -7,6 +7,7 @@ check of every station with its old and new utilization and status.
 
 from __future__ import annotations
 
+import re
 from dataclasses import dataclass
 from typing import Any
 
@@ -53,7 +54,8 @@ def changed_inputs(old: BuildResult, new: BuildResult) -> list[InputChange]:
     changes = []
     for path in [*before, *(key for key in after if key not in before)]:
         a, b = before.get(path), after.get(path)
-        if normalized(a) != normalized(b):
+        key = re.sub(r"\[\d+\]$", "", path.rsplit(".", 1)[-1])
+        if normalized(a, key) != normalized(b, key):
             changes.append(InputChange(path, _shown(a), _shown(b)))
     return changes
 

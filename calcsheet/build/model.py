@@ -78,6 +78,10 @@ class _Problems:
         except InputError as error:
             self.found.append((path, str(error)))
             return None
+        except ArithmeticError as error:  # dimensions of 1e-320 or 1e300: out of range
+            reason = f"{type(error).__name__}: {error}"
+            self.found.append((path, f"the values give numbers out of range ({reason})"))
+            return None
 
 
 def _section(spec: str | SectionSpec, problems: _Problems) -> Section | None:

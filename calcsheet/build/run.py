@@ -19,7 +19,7 @@ from calcsheet.build.results import sheet_results
 from calcsheet.build.stamp import inputs_hash, stamp_text
 from calcsheet.calcs import member_sheet
 from calcsheet.engine import Sheet
-from calcsheet.errors import InputError
+from calcsheet.errors import CalcsheetError, InputError
 from calcsheet.job import Job, JobError
 
 _UNSAFE = re.compile(r"[^A-Za-z0-9._-]+")
@@ -86,6 +86,10 @@ def output_folder(job: Job, job_folder: Path, override: Path | None = None) -> P
     """Where outputs go: ``override`` (the command line's), or output.folder in the job folder."""
     if override is not None:
         return Path(override)
+    if any(ord(character) < 32 or character == "\x7f" for character in job.output.folder):
+        raise JobError(
+            "job", [("output.folder", "control characters are not allowed in a folder name")]
+        )
     folder = Path(job.output.folder)
     if folder.is_absolute() or ".." in folder.parts:
         raise JobError(
@@ -134,26 +138,43 @@ def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str
             design=model.design,
             load_types=model.load_types,
         )
-    except InputError as error:
-        # A station with nothing beyond it is the station's problem; anything else (a
-        # section the chosen standard does not cover, a sweep of an unknown load) is
-        # reported against the table it comes from.
-        if error.field.startswith("station"):
-            path = f"member.stations[{index}]"
-        elif error.field.startswith("explore"):
-            path = "explore"
-        else:
-            path = "check"
-        raise JobError(source, [(path, str(error))]) from None
+    except (ArithmeticError, ValueError) as error:
+        if isinstance(error, InputError):
+            raise _placed(source, index, error) from None
+        # Numbers beyond what floating point holds (a section of 1e-320 in, a load of
+        # 1e308 kip): said plainly, with the job's name, instead of a traceback.
+        raise JobError(
+            source,
+            [("", f"the values give numbers out of range ({type(error).__name__}: {error})")],
+        ) from None
+    except CalcsheetError as error:
+        # A step that cannot be evaluated for these values (a capacity of zero...).
+        raise JobError(source, [("", str(error))]) from None
     for revision in model.revisions:
         sheet.add_revision(revision.mark, revision.date, revision.description, revision.by)
     return sheet
 
 
+def _placed(source: str, index: int, error: InputError) -> JobError:
+    """The job error for a calc input error, at the key path it most likely comes from.
+
+    A station with nothing beyond it is the station's problem; anything else (a
+    section the chosen standard does not cover, a sweep of an unknown load) is
+    reported against the table it comes from.
+    """
+    if error.field.startswith("station"):
+        path = f"member.stations[{index}]"
+    elif error.field.startswith("explore"):
+        path = "explore"
+    else:
+        path = "check"
+    return JobError(source, [(path, str(error))])
+
+
 def write_outputs(result: BuildResult, folder: Path) -> list[Path]:
     """Render every output of the job, then write each atomically; returns the paths."""
     # Imported here: rendering and the PDF engine are only needed when writing.
-    from calcsheet.export.files import make_folder, pdf_bytes, write_atomically
+    from calcsheet.export.files import make_folder, pdf_bytes, write_all_atomically
     from calcsheet.render.html import render_html
 
     formats = result.job.output.formats
@@ -168,10 +189,8 @@ def write_outputs(result: BuildResult, folder: Path) -> list[Path]:
             text = json.dumps(built.results, indent=2, ensure_ascii=False, sort_keys=False)
             rendered.append((folder / f"{built.stem}.json", (text + "\n").encode()))
     make_folder(folder)
-    written = []
-    for path, data in rendered:
-        write_atomically(path, data)
-        written.append(path)
+    write_all_atomically(rendered)
+    written = [path for path, _ in rendered]
     for built in result.sheets:
         built.paths = [path for path in written if path.stem == built.stem]
     return written

@@ -17,21 +17,35 @@ from calcsheet.units import parse_quantity
 HASH_LENGTH = 12
 
 
-def normalized(value: Any) -> Any:
+# The job keys whose values are quantities (see calcsheet.job.schema); only these are
+# normalized, so free text such as a title of "3 kip" stays text.
+QUANTITY_KEYS = frozenset(
+    {
+        "length", "stations", "z", "magnitude", "angle", "components", "ex", "ey",
+        "Mx", "My", "Mz", "Fy", "Fu", "Lb", "sweep_step",
+        "b", "d", "D", "OD", "t", "H", "B", "bf", "tf", "tw", "bf_bottom", "tf_bottom",
+    }
+)  # fmt: skip
+
+
+def _quantity_text(text: str) -> str:
+    try:
+        base = parse_quantity(text, field="stamp").to_base_units()
+        # 15 significant digits: all a double holds reliably, so 3 kip and 3000 lbf
+        # agree while a change in the 13th digit still shows.
+        return f"{base.magnitude:.15g} {base.units:~}"
+    except (ValueError, ArithmeticError):
+        return text
+
+
+def normalized(value: Any, key: str = "") -> Any:
     """Quantities in SI base units (so a change of unit alone is no change); the rest as is."""
     if isinstance(value, dict):
-        return {key: normalized(item) for key, item in sorted(value.items())}
+        return {name: normalized(item, name) for name, item in sorted(value.items())}
     if isinstance(value, list):
-        return [normalized(item) for item in value]
-    if isinstance(value, str):
-        try:
-            quantity = parse_quantity(value, field="stamp")
-        except ValueError:
-            return value
-        if quantity.dimensionless and not str(quantity.units):
-            return value  # plain numbers written as text stay text
-        base = quantity.to_base_units()
-        return f"{base.magnitude:.12g} {base.units:~}"
+        return [normalized(item, key) for item in value]
+    if isinstance(value, str) and key in QUANTITY_KEYS:
+        return _quantity_text(value)
     return value
 
 

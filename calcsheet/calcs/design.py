@@ -198,6 +198,12 @@ def plan_combinations(
 
     forces = combine_numeric(by_type, combos, present)
     values, names, measure = utilizations(section, forces, basis, Fy, length)
+    # Infinite utilization is an answer (outside the clauses' scope, or buckling);
+    # infinite forces or NaN mean the inputs are beyond floating point.
+    if not np.all(np.isfinite(forces)) or np.any(np.isnan(values)):
+        raise InputError(
+            "loads", ", ".join(present), "loads whose combined forces are finite numbers"
+        )
     return CombinationPlan(
         standard=standard,
         types=present,

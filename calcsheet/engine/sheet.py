@@ -571,7 +571,13 @@ class Sheet:
         capacity_in_demand_units = capacity.to(demand.units)
         if capacity_in_demand_units.magnitude <= 0:
             raise EvaluationError(f"{where}: the capacity {capacity:~P} must be positive")
-        utilization = float(abs(demand.magnitude) / capacity_in_demand_units.magnitude)
+        # Python floats: an overflow gives inf (reported below), not a numpy warning.
+        utilization = abs(float(demand.magnitude)) / float(capacity_in_demand_units.magnitude)
+        if not math.isfinite(utilization):
+            raise EvaluationError(
+                f"{where}: the utilization is not a finite number (demand {demand:~P}, "
+                f"capacity {capacity:~P}); check the values for extreme sizes"
+            )
         return demand, capacity_in_demand_units, utilization
 
     def _evaluate_check(self, check: Check, values: dict[sp.Symbol, pint.Quantity]) -> None:

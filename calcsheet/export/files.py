@@ -7,6 +7,7 @@ place only when complete; the previous file stays until then.
 from __future__ import annotations
 
 import atexit
+import errno
 import glob
 import os
 import shutil
@@ -85,34 +86,54 @@ def write_atomically(path: Path, data: bytes) -> None:
     A failure (disk full, read-only folder) raises :class:`ExportError` saying
     which file and why; the previous file at ``path`` is left as it was.
     """
-    path = Path(path)
+    write_all_atomically([(Path(path), data)])
+
+
+def write_all_atomically(files: list[tuple[Path, bytes]]) -> None:
+    """Write several files as one: every one is written in full before any replaces its
+    predecessor, so a failure (disk full mid-way) leaves all the previous files as they were.
+    """
+    staged: list[tuple[str, Path]] = []
+    current = Path(".")
     try:
-        remove_stale_parts(path)
-        handle, temporary = tempfile.mkstemp(
-            prefix=f".{path.name}.", suffix=".part", dir=path.parent
-        )
+        for path, data in files:
+            current = Path(path)
+            staged.append((_staged_copy(current, data), current))
+        for _, path in staged:  # a rename that would fail is found before any is made
+            current = path
+            if path.is_dir():
+                raise IsADirectoryError(errno.EISDIR, os.strerror(errno.EISDIR), str(path))
+        for temporary, path in staged:
+            current = path
+            os.replace(temporary, path)
     except OSError as error:
-        raise ExportError(_cannot_write(path, error)) from None
+        raise ExportError(_cannot_write(current, error)) from None
+    finally:
+        for temporary, _ in staged:
+            Path(temporary).unlink(missing_ok=True)  # already renamed, or abandoned
+
+
+def _staged_copy(path: Path, data: bytes) -> str:
+    """``data`` written and flushed to a temporary file beside ``path``; its name."""
+    remove_stale_parts(path)
+    handle, temporary = tempfile.mkstemp(prefix=f".{path.name}.", suffix=".part", dir=path.parent)
     try:
         with os.fdopen(handle, "wb") as stream:
             stream.write(data)
             stream.flush()
             os.fsync(stream.fileno())
-        os.replace(temporary, path)
-    except OSError as error:
-        Path(temporary).unlink(missing_ok=True)
-        raise ExportError(_cannot_write(path, error)) from None
     except BaseException:
         Path(temporary).unlink(missing_ok=True)
         raise
+    return temporary
 
 
 def make_folder(folder: Path) -> None:
     """Create the output folder (and its parents), or say clearly why not."""
     try:
         Path(folder).mkdir(parents=True, exist_ok=True)
-    except OSError as error:
-        reason = error.strerror or type(error).__name__
+    except (OSError, ValueError) as error:  # ValueError: a NUL byte in the name
+        reason = getattr(error, "strerror", None) or str(error)
         raise ExportError(f"cannot create the output folder {folder}: {reason}") from None
 
 
@@ -127,9 +148,6 @@ def export_sheet(sheet: Sheet, folder: Path, stem: str, *, paper: str = "letter"
     make_folder(folder)
     html = render_html(sheet).encode("utf-8")
     pdf = pdf_bytes(sheet, paper=paper)
-    written = []
-    for suffix, data in ((".html", html), (".pdf", pdf)):
-        target = folder / f"{stem}{suffix}"
-        write_atomically(target, data)
-        written.append(target)
-    return written
+    files = [(folder / f"{stem}.html", html), (folder / f"{stem}.pdf", pdf)]
+    write_all_atomically(files)
+    return [path for path, _ in files]

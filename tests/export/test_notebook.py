@@ -32,6 +32,7 @@ from calcsheet.export.notebook import (
     SheetConversionError,
 )
 from calcsheet.export.payload import PAYLOAD_VERSION, SHEET_MIME_TYPE, sheet_payload
+from tests.jupyter_env import KERNEL, isolated_jupyter
 
 TITLE = "Sign outrigger arm OA-1: combined stresses at the support"
 CODE = ["from calcsheet.demo import outrigger_sheet", "sheet = outrigger_sheet()", "sheet"]
@@ -177,7 +178,6 @@ def test_an_unreadable_sheet_output_names_the_cell(payload, message):
 # -- jupyter nbconvert, as a user runs it ----------------------------------------------------
 
 JUPYTER = str(Path(sys.executable).parent / "jupyter")
-KERNEL = "calcsheet-test-python"
 
 
 class Folder:
@@ -185,23 +185,7 @@ class Folder:
 
     def __init__(self, path: Path) -> None:
         self.path = path
-        # A kernelspec of our own, first on JUPYTER_PATH, runs this interpreter; the
-        # other Jupyter folders point inside the test folder so nothing of the user's
-        # (kernels, IPython start-up files) takes part and nothing is left in $HOME.
-        spec = path / "jupyter" / "kernels" / KERNEL
-        spec.mkdir(parents=True)
-        argv = [sys.executable, "-m", "ipykernel_launcher", "-f", "{connection_file}"]
-        kernel = {"argv": argv, "display_name": "calcsheet tests", "language": "python"}
-        (spec / "kernel.json").write_text(json.dumps(kernel))
-        self.env = {
-            **os.environ,
-            "JUPYTER_PATH": str(path / "jupyter"),
-            "JUPYTER_DATA_DIR": str(path / "jupyter-data"),
-            "JUPYTER_RUNTIME_DIR": str(path / "jupyter-runtime"),
-            "JUPYTER_CONFIG_DIR": str(path / "jupyter-config"),
-            "IPYTHONDIR": str(path / "ipython"),
-            "PYDEVD_DISABLE_FILE_VALIDATION": "1",
-        }
+        self.env = isolated_jupyter(path, KERNEL)
 
     def write(self, name: str, cells: list[str]) -> None:
         nb = nbformat.v4.new_notebook()

@@ -14,8 +14,6 @@ member-form-bad-entry.png with an entry marked).
 from __future__ import annotations
 
 import importlib.util
-import json
-import os
 import re
 import secrets
 import shutil
@@ -29,6 +27,8 @@ from urllib.error import URLError
 from urllib.request import urlopen
 
 import pytest
+
+from tests.jupyter_env import isolated_jupyter
 
 ROOT = Path(__file__).resolve().parents[2]
 ARTIFACTS = ROOT / "tests" / "artifacts"
@@ -65,21 +65,7 @@ def lab(tmp_path_factory: pytest.TempPathFactory) -> Iterator[str]:
     shutil.copy(ROOT / "notebooks" / "member-form-demo.ipynb", folder / "notebooks")
     shutil.copy(ROOT / "examples" / "outrigger.toml", folder / "examples")
     # The notebook asks for "python3": ours runs this interpreter, whatever else is installed.
-    spec = folder / "jupyter" / "kernels" / "python3"
-    spec.mkdir(parents=True)
-    argv = [sys.executable, "-m", "ipykernel_launcher", "-f", "{connection_file}"]
-    spec.joinpath("kernel.json").write_text(
-        json.dumps({"argv": argv, "display_name": "Python 3", "language": "python"})
-    )
-    env = {
-        **os.environ,
-        "JUPYTER_PATH": str(folder / "jupyter"),
-        "JUPYTER_DATA_DIR": str(folder / "jupyter-data"),
-        "JUPYTER_RUNTIME_DIR": str(folder / "jupyter-runtime"),
-        "JUPYTER_CONFIG_DIR": str(folder / "jupyter-config"),
-        "IPYTHONDIR": str(folder / "ipython"),
-        "PYDEVD_DISABLE_FILE_VALIDATION": "1",
-    }
+    env = isolated_jupyter(folder, "python3", "Python 3")
     port, token = _free_port(), secrets.token_hex(16)
     command = [
         sys.executable,

@@ -13,8 +13,6 @@ The form notebook shows a widget, which carries no sheet; its last cell displays
 from __future__ import annotations
 
 import io
-import json
-import os
 import subprocess
 import sys
 from pathlib import Path
@@ -27,40 +25,22 @@ from jupyter_client.manager import KernelManager
 from nbclient import NotebookClient
 
 from calcsheet.export.payload import SHEET_MIME_TYPE
+from tests.jupyter_env import KERNEL, isolated_jupyter
 
 ROOT = Path(__file__).resolve().parents[2]
 NOTEBOOKS = ROOT / "notebooks"
 FORM = "member-form-demo.ipynb"
 USER_CALC = "user-calc-example.ipynb"
-KERNEL = "calcsheet-test-python"
 JUPYTER = str(Path(sys.executable).parent / "jupyter")
 WIDGET_VIEW = "application/vnd.jupyter.widget-view+json"
-
-
-def _isolated_env(folder: Path) -> dict[str, str]:
-    # Nothing of the user's Jupyter or IPython set-up takes part, nothing is left in $HOME.
-    return {
-        **os.environ,
-        "JUPYTER_PATH": str(folder / "jupyter"),
-        "JUPYTER_DATA_DIR": str(folder / "jupyter-data"),
-        "JUPYTER_RUNTIME_DIR": str(folder / "jupyter-runtime"),
-        "JUPYTER_CONFIG_DIR": str(folder / "jupyter-config"),
-        "IPYTHONDIR": str(folder / "ipython"),
-        "PYDEVD_DISABLE_FILE_VALIDATION": "1",
-    }
 
 
 @pytest.fixture(scope="module")
 def executed(tmp_path_factory: pytest.TempPathFactory) -> dict[str, Path]:
     """Both notebooks executed; the executed copies, saved in a temporary folder."""
     folder = tmp_path_factory.mktemp("executed")
+    env = isolated_jupyter(folder, KERNEL)
     kernels = folder / "jupyter" / "kernels"
-    spec = kernels / KERNEL
-    spec.mkdir(parents=True)
-    argv = [sys.executable, "-m", "ipykernel_launcher", "-f", "{connection_file}"]
-    kernel = {"argv": argv, "display_name": "calcsheet tests", "language": "python"}
-    (spec / "kernel.json").write_text(json.dumps(kernel))
-    env = _isolated_env(folder)
     copies = {}
     for name in (FORM, USER_CALC):
         nb = nbformat.read(NOTEBOOKS / name, as_version=4)
@@ -117,7 +97,7 @@ def test_nbconvert_writes_the_pdf_of_the_executed_notebook(
     result = subprocess.run(
         [JUPYTER, "nbconvert", "--to", "calcsheet", path.name],
         cwd=path.parent,
-        env=_isolated_env(path.parent),
+        env=isolated_jupyter(path.parent, KERNEL),
         capture_output=True,
         text=True,
         timeout=300,
