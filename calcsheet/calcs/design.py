@@ -96,6 +96,8 @@ class CombinationPlan:
     measure: str
     governing: int
     check_names: list[str] = field(default_factory=list)  # governing check per combination
+    # AISC: the utilization of every check under every combination (check -> (n_combos,))
+    per_check: dict[str, np.ndarray] = field(default_factory=dict)
 
     @property
     def governing_combination(self) -> Combination:
@@ -204,7 +206,12 @@ def plan_combinations(
         raise InputError(
             "loads", ", ".join(present), "loads whose combined forces are finite numbers"
         )
+    per_check = {}
+    if basis.kind == "AISC 360-22":
+        names_of_checks, table = _aisc_check_table(section, forces, basis, Fy, length)
+        per_check = {name: table[i] for i, name in enumerate(names_of_checks)}
     return CombinationPlan(
+        per_check=per_check,
         standard=standard,
         types=present,
         combos=combos,

@@ -35,6 +35,16 @@ _FORCE_COLUMNS = (("N", "force"), ("V_x", "force"), ("V_y", "force"), ("T", "mom
                   ("M_x", "moment"), ("M_y", "moment"))  # fmt: skip
 
 
+CHECK_TITLES = {
+    "axial": "Axial force",
+    "flexure_x": "Flexure about x",
+    "flexure_y": "Flexure about y",
+    "shear_x": "Shear along x",
+    "shear_y": "Shear along y",
+    "combined": "Combined axial force and flexure",
+}
+
+
 def _unit(unit: str) -> str:
     return f"{ureg.Unit(unit):~P}"
 
@@ -72,6 +82,21 @@ def write_combinations(
             f"{_unit(moment_unit)}) and the {plan.measure}, computed when the sheet was built"
         ),
     )
+    if plan.per_check:
+        rows = []
+        for check, values in plan.per_check.items():
+            worst = int(np.argmax(values))
+            shown = f"{values[worst]:.3f}" if np.isfinite(values[worst]) else "∞"
+            rows.append([CHECK_TITLES.get(check, check), plan.combos[worst].name, shown])
+        sheet.table(
+            ["Check", "Governing combination", "Utilization"],
+            rows,
+            caption=(
+                "The combination that governs each check (the same clauses evaluated for "
+                "every combination when the sheet was built); the sheet writes out the "
+                "combination that governs overall"
+            ),
+        )
     chosen = plan.governing_combination
     sheet.text(
         f"Governing combination: {chosen.name}, {chosen.text()} ({plan.measure} "

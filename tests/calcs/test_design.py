@@ -105,3 +105,19 @@ def test_the_lightest_section_passes_in_its_own_sheet_and_the_lighter_ones_fail(
 def test_the_lightest_search_is_only_offered_with_aisc() -> None:
     with pytest.raises(InputError, match="lightest_in"):
         DesignBasis("EN 1993-1-1", lightest_in="W")
+
+
+def test_each_check_names_its_governing_combination() -> None:
+    basis = DesignBasis("AISC 360-22")
+    plan = plan_combinations(catalog_section("W10X33"), LOADS, TYPES, LENGTH, STATION, basis, FY)
+    # 1.4D has the most axial force; the wind combinations the most flexure about y.
+    axial = plan.combos[int(np.argmax(plan.per_check["axial"]))]
+    flexure_y = plan.combos[int(np.argmax(plan.per_check["flexure_y"]))]
+    assert axial.factor("D") == 1.4 and flexure_y.factor("W") == 1.0
+    sheet = _sheet(basis)
+    tables = [
+        part
+        for part in sheet.parts
+        if getattr(part, "columns", ())[:2] == ("Check", "Governing combination")
+    ]
+    assert tables and len(tables[0].rows) == len(plan.per_check)
