@@ -122,15 +122,15 @@ def forces_by_type(
     return present, np.array(rows)
 
 
-def _aisc_check_table(section: Section, forces: np.ndarray, basis: DesignBasis, Fy, length):
-    from calcsheet.standards.aisc360 import CHECKS, DemandArrays, Steel, aisc_checks_numeric
-    from calcsheet.standards.aisc360.section_data import section_table
+def _aisc_numeric(table, forces: np.ndarray, basis: DesignBasis, Fy, length) -> dict:
+    """aisc_checks_numeric of ``table`` under the combinations' forces (n, 6) in N, N·m."""
+    from calcsheet.standards.aisc360 import DemandArrays, Steel, aisc_checks_numeric
 
     demands = DemandArrays(
         P_r=forces[:, 0], M_rx=forces[:, 4], M_ry=forces[:, 5], V_rx=forces[:, 1], V_ry=forces[:, 2]
     )
-    checks = aisc_checks_numeric(
-        section_table([section]),
+    return aisc_checks_numeric(
+        table,
         demands,
         method=basis.method,
         material=Steel(F_y=Fy, grade=basis.grade or "steel"),
@@ -139,6 +139,13 @@ def _aisc_check_table(section: Section, forces: np.ndarray, basis: DesignBasis, 
         Lb=basis.Lb,
         Cb=basis.Cb,
     )
+
+
+def _aisc_check_table(section: Section, forces: np.ndarray, basis: DesignBasis, Fy, length):
+    from calcsheet.standards.aisc360 import CHECKS
+    from calcsheet.standards.aisc360.section_data import section_table
+
+    checks = _aisc_numeric(section_table([section]), forces, basis, Fy, length)
     return CHECKS, np.stack([checks[name][0] for name in CHECKS])  # (n_checks, n_cases)
 
 
@@ -346,7 +353,7 @@ def lightest_section(
     (up to) two lighter sections before it, which fail."""
     from calcsheet.sections import list_designations
     from calcsheet.sections.catalog import find_entry
-    from calcsheet.standards.aisc360 import CHECKS, DemandArrays, Steel, aisc_checks_numeric
+    from calcsheet.standards.aisc360 import CHECKS
     from calcsheet.standards.aisc360.section_data import catalog_table
 
     family = basis.lightest_in or ""
@@ -356,20 +363,7 @@ def lightest_section(
         raise InputError(
             "explore lightest_in", family, "a catalog family such as W or HSS_RECT"
         ) from None
-    forces = plan.forces
-    demands = DemandArrays(
-        P_r=forces[:, 0], M_rx=forces[:, 4], M_ry=forces[:, 5], V_rx=forces[:, 1], V_ry=forces[:, 2]
-    )
-    checks = aisc_checks_numeric(
-        catalog_table(names),
-        demands,
-        method=basis.method,
-        material=Steel(F_y=Fy, grade=basis.grade or "steel"),
-        length=length,
-        K=basis.effective_length_factor,
-        Lb=basis.Lb,
-        Cb=basis.Cb,
-    )
+    checks = _aisc_numeric(catalog_table(names), plan.forces, basis, Fy, length)
     table = np.stack([checks[name] for name in CHECKS])  # (checks, sections, combos)
     per_check = table.max(axis=2)  # (checks, sections)
     worst = per_check.max(axis=0)
