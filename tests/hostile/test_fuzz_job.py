@@ -41,10 +41,6 @@ from calcsheet.mechanics import point_load
 from calcsheet.units import DIMENSIONS, parse_quantity
 
 from .support import (
-
-# Huge values overflow inside pint on purpose (1e308 kip squared); the result is then
-# refused as not finite, which is what these tests check.
-pytestmark = pytest.mark.filterwarnings("ignore:overflow encountered:RuntimeWarning")
     OUTRIGGER,
     OUTRIGGER_DATA,
     known_bug,
@@ -54,6 +50,10 @@ pytestmark = pytest.mark.filterwarnings("ignore:overflow encountered:RuntimeWarn
     starter_data,
     toml_text,
 )
+
+# Huge values overflow inside pint on purpose (1e308 kip squared); the result is then
+# refused as not finite, which is what these tests check.
+pytestmark = pytest.mark.filterwarnings("ignore:overflow encountered:RuntimeWarning")
 
 OUTCOMES: Counter[str] = Counter()
 
