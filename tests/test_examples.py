@@ -26,3 +26,11 @@ def test_bolt_group_corner_bolt_force_matches_a_hand_calculation():
     assert sheet.checks[0].passes
     sheet.set_input("P", "12 kip")
     assert not sheet.checks[0].passes
+
+
+def test_the_readme_shows_the_demo_job_as_it_is() -> None:
+    """The complete job example in the README is the demo job file, character for character."""
+    root = Path(__file__).resolve().parents[1]
+    readme = (root / "README.md").read_text(encoding="utf-8")
+    shown = readme.split("```toml\n", 1)[1].split("```", 1)[0]
+    assert shown == (root / "examples" / "outrigger.toml").read_text(encoding="utf-8")
