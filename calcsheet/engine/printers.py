@@ -629,7 +629,12 @@ class MathMLStepPrinter(_ExpressionPrinter):
             rows.append(
                 f"<mtr><mtd>{left}</mtd><mtd><mrow><mo>=</mo><mrow>{piece}</mrow></mrow></mtd></mtr>"
             )
-        return f'<mtable columnalign="right left" displaystyle="true">{"".join(rows)}</mtable>'
+        # MathML Core lays out columnalign as centred: the class lets the sheet's style
+        # align the symbol right and the pieces left, equals signs under each other.
+        return (
+            '<mtable class="stacked" columnalign="right left" displaystyle="true">'
+            f"{''.join(rows)}</mtable>"
+        )
 
 
 # --- Typst (PDF sheets) --------------------------------------------------------------------
