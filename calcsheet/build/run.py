@@ -12,6 +12,7 @@ from __future__ import annotations
 import json
 import re
 from dataclasses import dataclass, field
+from functools import cached_property
 from pathlib import Path
 
 from calcsheet.build.model import MemberModel, member_model
@@ -38,8 +39,12 @@ class BuiltSheet:
 
     sheet: Sheet
     stem: str
-    results: dict
     paths: list[Path] = field(default_factory=list)
+
+    @cached_property
+    def results(self) -> dict:
+        """The JSON results (every value in display and SI units): made when first asked."""
+        return sheet_results(self.sheet)
 
 
 @dataclass
@@ -53,32 +58,34 @@ class BuildResult:
 
     @property
     def all_pass(self) -> bool:
-        return all(built.results["all_pass"] for built in self.sheets)
+        return all(check.passes for built in self.sheets for check in built.sheet.checks)
 
     @property
     def governing_utilization(self) -> float:
         values = [
-            built.results["governing"]["utilization"]
+            check.utilization
             for built in self.sheets
-            if built.results["governing"] is not None
+            for check in built.sheet.checks
+            if check.utilization is not None
         ]
         return max(values, default=0.0)
 
     def summary(self) -> str:
         """``OA-1: OK, utilization 0.507 (…, at point 6 …) [inputs 3fa9…]``."""
-        worst = max(
-            (built for built in self.sheets if built.results["governing"] is not None),
-            key=lambda built: built.results["governing"]["utilization"],
-            default=None,
-        )
+        governing = [
+            (built.sheet, built.sheet.governing_check())
+            for built in self.sheets
+            if built.sheet.governing_check() is not None
+        ]
         status = "OK" if self.all_pass else "NOT OK"
-        if worst is None:
+        if not governing:
             return f"{self.member}: {status} (no checks) [inputs {self.hash}]"
-        governing = worst.results["governing"]
-        where = f", at {governing['at']}" if governing["at"] else ""
+        sheet, check = max(governing, key=lambda pair: pair[1].utilization)
+        at = sheet.check_location(check)
+        where = f", at {at}" if at else ""
         return (
-            f"{self.member}: {status}, utilization {governing['utilization']:.3f} "
-            f"({governing['description']}{where}) [inputs {self.hash}]"
+            f"{self.member}: {status}, utilization {check.utilization:.3f} "
+            f"({check.description}{where}) [inputs {self.hash}]"
         )
 
 
@@ -118,7 +125,7 @@ def build_sheets(job: Job, *, source: str = "job") -> BuildResult:
         stem = f"{base}-rev{revision}"
         if len(model.stations) > 1:
             stem += "-z" + safe_stem(f"{station.magnitude:g}{station.units:~}")
-        sheets.append(BuiltSheet(sheet, stem, sheet_results(sheet)))
+        sheets.append(BuiltSheet(sheet, stem))
     return BuildResult(job, job.member.name, inputs_hash(job), sheets)
 
 

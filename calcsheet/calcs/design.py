@@ -14,6 +14,7 @@ from __future__ import annotations
 import math
 from collections.abc import Sequence
 from dataclasses import dataclass, field
+from functools import lru_cache
 
 import numpy as np
 import pint
@@ -141,11 +142,26 @@ def _aisc_numeric(table, forces: np.ndarray, basis: DesignBasis, Fy, length) -> 
     )
 
 
-def _aisc_check_table(section: Section, forces: np.ndarray, basis: DesignBasis, Fy, length):
-    from calcsheet.standards.aisc360 import CHECKS
+# Sections are built once per design (and cached by the job builder), so their AISC
+# tables are kept by identity; the section is held too, so an id is never reused.
+_SECTION_TABLES: dict[int, tuple[Section, object]] = {}
+
+
+def _section_table(section: Section) -> object:
     from calcsheet.standards.aisc360.section_data import section_table
 
-    checks = _aisc_numeric(section_table([section]), forces, basis, Fy, length)
+    kept = _SECTION_TABLES.get(id(section))
+    if kept is None or kept[0] is not section:
+        if len(_SECTION_TABLES) >= 32:
+            _SECTION_TABLES.clear()
+        kept = _SECTION_TABLES[id(section)] = (section, section_table([section]))
+    return kept[1]
+
+
+def _aisc_check_table(section: Section, forces: np.ndarray, basis: DesignBasis, Fy, length):
+    from calcsheet.standards.aisc360 import CHECKS
+
+    checks = _aisc_numeric(_section_table(section), forces, basis, Fy, length)
     return CHECKS, np.stack([checks[name][0] for name in CHECKS])  # (n_checks, n_cases)
 
 
@@ -346,24 +362,31 @@ class Candidate:
         return self.utilization <= 1.0
 
 
-def lightest_section(
-    plan: CombinationPlan, basis: DesignBasis, Fy: pint.Quantity, length: pint.Quantity
-) -> tuple[Candidate | None, list[Candidate]]:
-    """The lightest section of ``basis.lightest_in`` passing every AISC check, and the
-    (up to) two lighter sections before it, which fail."""
+@lru_cache(maxsize=8)
+def _family_table(family: str) -> tuple[list[str], object]:
+    """A family's designations (lightest first) and their table: fixed data, read once."""
     from calcsheet.sections import list_designations
-    from calcsheet.sections.catalog import find_entry
-    from calcsheet.standards.aisc360 import CHECKS
     from calcsheet.standards.aisc360.section_data import catalog_table
 
-    family = basis.lightest_in or ""
     try:
         names = list_designations(family, lightest_first=True)
     except InputError:
         raise InputError(
             "explore lightest_in", family, "a catalog family such as W or HSS_RECT"
         ) from None
-    checks = _aisc_numeric(catalog_table(names), plan.forces, basis, Fy, length)
+    return names, catalog_table(names)
+
+
+def lightest_section(
+    plan: CombinationPlan, basis: DesignBasis, Fy: pint.Quantity, length: pint.Quantity
+) -> tuple[Candidate | None, list[Candidate]]:
+    """The lightest section of ``basis.lightest_in`` passing every AISC check, and the
+    (up to) two lighter sections before it, which fail."""
+    from calcsheet.sections.catalog import find_entry
+    from calcsheet.standards.aisc360 import CHECKS
+
+    names, family_table = _family_table(basis.lightest_in or "")
+    checks = _aisc_numeric(family_table, plan.forces, basis, Fy, length)
     table = np.stack([checks[name] for name in CHECKS])  # (checks, sections, combos)
     per_check = table.max(axis=2)  # (checks, sections)
     worst = per_check.max(axis=0)

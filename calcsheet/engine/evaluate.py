@@ -33,7 +33,25 @@ class _ClashError(Exception):
 def evaluate(
     expr: sp.Basic, values: Mapping[sp.Symbol, pint.Quantity], *, step: str
 ) -> pint.Quantity:
-    """Evaluate ``expr`` with the quantities in ``values``; errors name ``step``."""
+    """Evaluate ``expr`` with the quantities in ``values``; errors name ``step``.
+
+    The first evaluations walk the tree with pint, which checks every unit and names
+    any clash. An expression evaluated again with inputs in the same units (a sheet
+    rebuilt or re-evaluated after a change of value) takes a compiled float path in
+    SI base units, checked once against the pint result; anything unusual there (a
+    non-finite value, a domain error) falls back to the pint walk and its message.
+    """
+    fast = _fast_value(expr, values)
+    if fast is not None:
+        return fast
+    result = _evaluate_with_units(expr, values, step=step)
+    _learn(expr, values, result)
+    return result
+
+
+def _evaluate_with_units(
+    expr: sp.Basic, values: Mapping[sp.Symbol, pint.Quantity], *, step: str
+) -> pint.Quantity:
     try:
         result = _walk(expr, values)
     except _ClashError as clash:
@@ -47,6 +65,8 @@ def evaluate(
         ) from None
     except (ZeroDivisionError, OverflowError, ValueError) as error:
         raise EvaluationError(f"step {step!r}: {error} in {sp.sstr(expr)}") from None
+    except EvaluationError as error:  # raised deep in the walk: say which step
+        raise EvaluationError(f"step {step!r}: {error}") from None
     quantity = result if isinstance(result, pint.Quantity) else Quantity(result)
     magnitude = quantity.magnitude
     if isinstance(magnitude, complex) or not math.isfinite(magnitude):
@@ -55,6 +75,99 @@ def evaluate(
             f"(a square root of a negative value, or a division by zero?) in {sp.sstr(expr)}"
         )
     return quantity
+
+
+# --- the compiled path ------------------------------------------------------------------
+# Key: (structural hash of the expression, units of its symbols). Sympy's hash is
+# structural and cached on each expression, so a rebuilt sheet finds its plans without
+# comparing expression trees; two different expressions sharing a 64-bit hash and the
+# units of every symbol is not a practical concern. Value: None after one evaluation
+# (not worth compiling yet), then (function, factors to base units, result base unit),
+# or False when the compiled path does not reproduce the pint result.
+_PLANS: dict[tuple, tuple | bool | None] = {}
+_SYMBOLS: dict[int, tuple[sp.Symbol, ...]] = {}
+_MAX_PLANS = 50_000
+
+
+def _symbols_of(expr: sp.Basic) -> tuple[sp.Symbol, ...]:
+    key = hash(expr)
+    symbols = _SYMBOLS.get(key)
+    if symbols is None:
+        if len(_SYMBOLS) >= _MAX_PLANS:
+            _SYMBOLS.clear()
+        symbols = _SYMBOLS[key] = tuple(sorted(expr.free_symbols, key=lambda s: s.name))
+    return symbols
+
+
+def _signature(expr: sp.Basic, values: Mapping[sp.Symbol, pint.Quantity]) -> tuple | None:
+    try:
+        symbols = _symbols_of(expr)
+        return (hash(expr), tuple(values[symbol].units for symbol in symbols))
+    except (KeyError, TypeError, AttributeError):
+        return None
+
+
+def _fast_value(expr: sp.Basic, values: Mapping[sp.Symbol, pint.Quantity]) -> pint.Quantity | None:
+    key = _signature(expr, values)
+    plan = _PLANS.get(key) if key is not None else None
+    if not plan:
+        return None
+    function, factors, unit = plan
+    try:
+        arguments = [
+            float(values[symbol].magnitude) * factor
+            for symbol, factor in zip(_symbols_of(expr), factors, strict=True)
+        ]
+        number = float(function(*arguments))
+    except (ArithmeticError, ValueError, TypeError):
+        return None  # the pint walk gives the error its proper message
+    if not math.isfinite(number):
+        return None
+    return Quantity(number, unit)
+
+
+def _learn(
+    expr: sp.Basic, values: Mapping[sp.Symbol, pint.Quantity], result: pint.Quantity
+) -> None:
+    """Count an evaluation; on the second with the same units, compile and verify a plan."""
+    key = _signature(expr, values)
+    if key is None or expr.is_Symbol or expr.is_Number:
+        return
+    if key not in _PLANS:
+        if len(_PLANS) >= _MAX_PLANS:
+            _PLANS.clear()
+        _PLANS[key] = None
+        return
+    if _PLANS[key] is not None:
+        return
+    _PLANS[key] = _compiled(expr, values, result)
+
+
+def _compiled(
+    expr: sp.Basic, values: Mapping[sp.Symbol, pint.Quantity], result: pint.Quantity
+) -> tuple | bool:
+    symbols = _symbols_of(expr)
+    try:
+        factors = tuple(
+            float(Quantity(1.0, values[symbol].units).to_base_units().magnitude)
+            for symbol in symbols
+        )
+        base = result.to_base_units()
+        function = sp.lambdify(symbols, expr, modules="math", dummify=True)
+        trial = float(
+            function(
+                *(float(values[s].magnitude) * f for s, f in zip(symbols, factors, strict=True))
+            )
+        )
+    except Exception:  # an expression the float path cannot take: keep the pint walk
+        return False
+    expected = float(base.magnitude)
+    if not (trial == expected or math.isclose(trial, expected, rel_tol=1e-9)):
+        return False
+    # Offset units (degrees Celsius) cannot be scaled by a factor: keep the pint walk.
+    if any(not values[s]._ok_for_muldiv() for s in symbols):
+        return False
+    return (function, factors, base.units)
 
 
 def chosen_branch(

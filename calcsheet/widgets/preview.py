@@ -24,11 +24,12 @@ CELL_STYLE = "padding:0.1em 0.9em 0.1em 0;text-align:left;vertical-align:top"
 
 def governing_sheet(result: BuildResult) -> Sheet:
     """The sheet (station) with the highest utilization: the one the preview shows."""
-    worst = max(
-        result.sheets,
-        key=lambda built: (built.results["governing"] or {}).get("utilization") or 0.0,
-    )
-    return worst.sheet
+
+    def utilization(built) -> float:
+        check = built.sheet.governing_check()
+        return check.utilization if check is not None else 0.0
+
+    return max(result.sheets, key=utilization).sheet
 
 
 def _cells(tag: str, *texts: str) -> str:
@@ -42,18 +43,21 @@ def key_results_html(result: BuildResult) -> str:
     stations = result.job.member.stations
     rows = []
     for index, built in enumerate(result.sheets):
-        governing = built.results["governing"]
+        # Read from the sheet itself: the JSON results (every value in SI) are not
+        # needed for the preview and cost a pint conversion per value.
+        governing = built.sheet.governing_check()
         where = "z = " + html.escape(stations[index]) if index < len(stations) else ""
         if governing is None:
             rows.append("<tr>" + _cells("td", where, "", "no checks", "") + "</tr>")
             continue
-        at = f" at {html.escape(governing['at'])}" if governing["at"] else ""
+        location = built.sheet.check_location(governing)
+        at = f" at {html.escape(location)}" if location else ""
         cells = _cells(
             "td",
             where,
-            f"<b>{governing['utilization']:.3f}</b>",
-            html.escape(governing["status"]),
-            html.escape(governing["description"]) + at,
+            f"<b>{governing.utilization:.3f}</b>",
+            html.escape(governing.status),
+            html.escape(governing.description) + at,
         )
         rows.append(f"<tr>{cells}</tr>")
     stamp = html.escape(result.sheets[0].sheet.stamp) if result.sheets else ""
