@@ -45,6 +45,12 @@ CHECK_TITLES = {
 }
 
 
+def _named(combo) -> str:
+    """The combination's name, with its factors unless the name already shows them."""
+    text = combo.text()
+    return combo.name if combo.name.endswith(text) else f"{combo.name}: {text}"
+
+
 def _unit(unit: str) -> str:
     return f"{ureg.Unit(unit):~P}"
 
@@ -73,9 +79,9 @@ def write_combinations(
             for k, (_, kind) in enumerate(_FORCE_COLUMNS)
         ]  # fmt: skip
         mark = " (governs)" if index == plan.governing else ""
-        rows.append([combo.name + mark, combo.text(), *cells, f"{plan.utilization[index]:.3f}"])
+        rows.append([_named(combo) + mark, *cells, f"{plan.utilization[index]:.3f}"])
     sheet.table(
-        ["Combination", "Factors", *(name for name, _ in _FORCE_COLUMNS), "Utilization"],
+        ["Combination", *(name for name, _ in _FORCE_COLUMNS), "Utilization"],
         rows,
         caption=(
             f"Internal forces at the station for every combination ({_unit(force_unit)}, "
@@ -99,7 +105,7 @@ def write_combinations(
         )
     chosen = plan.governing_combination
     sheet.text(
-        f"Governing combination: {chosen.name}, {chosen.text()} ({plan.measure} "
+        f"Governing combination: {_named(chosen)} ({plan.measure} "
         f"{plan.utilization[plan.governing]:.3f}). Its load factors multiply each load in "
         "the statics below; every other combination gives a lower utilization."
     )
