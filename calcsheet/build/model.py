@@ -9,7 +9,7 @@ from __future__ import annotations
 
 import inspect
 from collections.abc import Callable
-from dataclasses import dataclass, field
+from dataclasses import dataclass
 from functools import lru_cache
 
 import pint
@@ -59,10 +59,9 @@ class MemberModel:
     stations: tuple[pint.Quantity, ...]
     Fy: pint.Quantity
     Fy_source: str
-    factor_of_safety: float
     title_block: TitleBlock
     revisions: tuple[Revision, ...]
-    design: DesignBasis = field(default_factory=DesignBasis)
+    design: DesignBasis
     load_types: tuple[str, ...] = ()
 
 
@@ -180,17 +179,11 @@ def member_model(job: Job, *, source: str = "job") -> MemberModel:
     revisions = tuple(
         Revision(entry.mark, entry.date, entry.description, entry.by) for entry in job.revisions
     )
-    title_block = TitleBlock(
-        project=block.project,
-        project_number=block.project_number,
-        subject=block.subject or f"{job.member.name}, {section.name}",
-        calc_number=block.calc_number,
-        prepared_by=block.prepared_by,
-        prepared_date=block.prepared_date,
-        checked_by=block.checked_by,
-        checked_date=block.checked_date,
-        revision=revisions[-1].mark if revisions else "0",
-    )
+    # The job's title block has the engine's fields but the revision, which is the
+    # latest entry of the revision log.
+    fields = block.model_dump()
+    fields["subject"] = fields["subject"] or f"{job.member.name}, {section.name}"
+    title_block = TitleBlock(**fields, revision=revisions[-1].mark if revisions else "0")
     return MemberModel(
         section=section,
         loads=tuple(loads),
@@ -198,7 +191,6 @@ def member_model(job: Job, *, source: str = "job") -> MemberModel:
         stations=stations,
         Fy=Fy,
         Fy_source=Fy_source,
-        factor_of_safety=job.check.factor_of_safety,
         title_block=title_block,
         revisions=revisions,
         design=design,

@@ -138,7 +138,6 @@ def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str
             station=station,
             Fy=model.Fy,
             Fy_reference=model.Fy_source,
-            Omega=model.factor_of_safety,
             title=job.sheet.title,
             title_block=model.title_block,
             units=job.sheet.units,

@@ -28,7 +28,6 @@ from calcsheet.standards.combinations import Combination, combinations, factor_m
 from calcsheet.units import Quantity
 
 KINDS = ("allowable stress", "AISC 360-22", "EN 1993-1-1")
-PASCAL_PER = {"inch": 0.0254**-2, "millimeter": 1e6, "meter": 1.0, "foot": 0.3048**-2}
 
 
 @dataclass(frozen=True)
@@ -96,7 +95,6 @@ class CombinationPlan:
     utilization: np.ndarray  # (n_combos,)
     measure: str
     governing: int
-    check_names: list[str] = field(default_factory=list)  # governing check per combination
     # AISC: the utilization of every check under every combination (check -> (n_combos,))
     per_check: dict[str, np.ndarray] = field(default_factory=dict)
 
@@ -110,9 +108,13 @@ def forces_by_type(
     types: Sequence[str],
     length: pint.Quantity,
     station: pint.Quantity,
+    present: Sequence[str] | None = None,
 ) -> tuple[list[str], np.ndarray]:
-    """Internal forces at the station of each load type's loads: (n_types, 6) in N, N·m."""
-    present = list(dict.fromkeys(types))
+    """Internal forces at the station of each load type's loads: (n_types, 6) in N, N·m.
+
+    ``present`` lists the types to give rows for (by default those of ``loads``).
+    """
+    present = list(dict.fromkeys(types)) if present is None else list(present)
     rows = []
     for load_type in present:
         chosen = [load for load, kind in zip(loads, types, strict=True) if kind == load_type]
@@ -158,43 +160,35 @@ def _section_table(section: Section) -> object:
     return kept[1]
 
 
-def _aisc_check_table(section: Section, forces: np.ndarray, basis: DesignBasis, Fy, length):
-    from calcsheet.standards.aisc360 import CHECKS
-
-    checks = _aisc_numeric(_section_table(section), forces, basis, Fy, length)
-    return CHECKS, np.stack([checks[name][0] for name in CHECKS])  # (n_checks, n_cases)
-
-
 def utilizations(
     section: Section,
     forces: np.ndarray,
     basis: DesignBasis,
     Fy: pint.Quantity,
     length: pint.Quantity,
-) -> tuple[np.ndarray, list[str], str]:
-    """Utilization of each row of ``forces`` (n, 6) in N, N·m; the governing check of each."""
+) -> tuple[np.ndarray, dict[str, np.ndarray], str]:
+    """Utilization of each row of ``forces`` (n, 6) in N, N·m, the utilization of each
+    AISC check per row (empty for the other kinds), and what the utilization measures."""
     if basis.kind == "AISC 360-22":
-        names, table = _aisc_check_table(section, forces, basis, Fy, length)
-        worst = np.argmax(table, axis=0)
-        return table.max(axis=0), [names[i] for i in worst], "governing AISC 360-22 check"
+        from calcsheet.standards.aisc360 import CHECKS
+
+        checks = _aisc_numeric(_section_table(section), forces, basis, Fy, length)
+        per_check = {name: checks[name][0] for name in CHECKS}
+        worst = np.max(np.stack(list(per_check.values())), axis=0)
+        return worst, per_check, "governing AISC 360-22 check"
     # Elastic proxy (stated on the sheet): the largest von Mises stress at the points
     # over the allowable (F_y/Ω) or the design yield stress (f_y/γM0, EN 1993-1-1 6.2.1(5)).
     unit = section.length_unit
-    model = stress_model(section, unit)
-    scale = np.array([1, 1, 1, unit_metres(unit), unit_metres(unit), unit_metres(unit)])
-    stresses = model.stresses(forces / scale)  # N/unit² per point
-    vm = stresses.von_mises.max(axis=-1) * PASCAL_PER.get(unit, 1.0)
+    metres = float(Quantity(1.0, unit).to("m").m)
+    stresses = stress_model(section, unit).stresses(forces / [1, 1, 1, metres, metres, metres])
+    vm = stresses.von_mises.max(axis=-1) * float(Quantity(1.0, f"N/{unit}**2").to("Pa").m)
     if basis.kind == "allowable stress":
         allowable = Fy.to("Pa").m / basis.factor_of_safety
         measure = "largest von Mises stress / (F_y/Ω)"
     else:
         allowable = Fy.to("Pa").m / basis.gamma_M0
         measure = "largest von Mises stress / (f_y/γM0), EN 1993-1-1 6.2.1(5)"
-    return vm / allowable, ["von Mises"] * len(vm), measure
-
-
-def unit_metres(unit: str) -> float:
-    return float(Quantity(1.0, unit).to("m").m)
+    return vm / allowable, {}, measure
 
 
 def plan_combinations(
@@ -222,17 +216,13 @@ def plan_combinations(
     from calcsheet.standards.combinations import combine_numeric
 
     forces = combine_numeric(by_type, combos, present)
-    values, names, measure = utilizations(section, forces, basis, Fy, length)
+    values, per_check, measure = utilizations(section, forces, basis, Fy, length)
     # Infinite utilization is an answer (outside the clauses' scope, or buckling);
     # infinite forces or NaN mean the inputs are beyond floating point.
     if not np.all(np.isfinite(forces)) or np.any(np.isnan(values)):
         raise InputError(
             "loads", ", ".join(present), "loads whose combined forces are finite numbers"
         )
-    per_check = {}
-    if basis.kind == "AISC 360-22":
-        names_of_checks, table = _aisc_check_table(section, forces, basis, Fy, length)
-        per_check = {name: table[i] for i, name in enumerate(names_of_checks)}
     return CombinationPlan(
         per_check=per_check,
         standard=standard,
@@ -242,25 +232,7 @@ def plan_combinations(
         utilization=values,
         measure=measure,
         governing=int(np.argmax(values)),
-        check_names=names,
     )
-
-
-def governing_utilization(
-    section: Section,
-    loads: Sequence[PointLoad | AppliedMoment],
-    types: Sequence[str],
-    length: pint.Quantity,
-    station: pint.Quantity,
-    basis: DesignBasis,
-    Fy: pint.Quantity,
-) -> float:
-    """The largest utilization over every combination (or over the loads as given)."""
-    plan = plan_combinations(section, loads, types, length, station, basis, Fy)
-    if plan is not None:
-        return float(plan.utilization.max())
-    forces = internal_forces(length, loads, station).as_array("N", "m")[np.newaxis, :]
-    return float(utilizations(section, forces, basis, Fy, length)[0][0])
 
 
 @dataclass(frozen=True)
@@ -271,6 +243,11 @@ class Sweep:
     angles_deg: np.ndarray
     utilization: np.ndarray
     drawn_deg: float
+
+    @property
+    def drawn_utilization(self) -> float:
+        """The utilization at the angle drawn on the sheet (between sweep points: linear)."""
+        return float(np.interp(self.drawn_deg, self.angles_deg, self.utilization))
 
     @property
     def worst_deg(self) -> float:
@@ -305,13 +282,13 @@ def angle_sweep(
     # Statics is linear in the load: the swept load at angle θ gives
     # cos θ·(its forces at 0°) + sin θ·(its forces at 90°); the other loads do not move.
     present = list(dict.fromkeys(types))
-    others = [(load, kind) for i, (load, kind) in enumerate(zip(loads, types, strict=True))
-              if i != index]  # fmt: skip
-    base = np.zeros((len(present), 6))
-    for row, load_type in enumerate(present):
-        chosen = [load for load, kind in others if kind == load_type]
-        if loads_beyond(chosen, station):
-            base[row] = internal_forces(length, chosen, station).as_array("N", "m")
+    _, base = forces_by_type(
+        [load for i, load in enumerate(loads) if i != index],
+        [kind for i, kind in enumerate(types) if i != index],
+        length,
+        station,
+        present,
+    )
     unit_forces = []
     for quarter in (0.0, 90.0):
         turned = point_load(
@@ -324,10 +301,7 @@ def angle_sweep(
             ex=swept.ex,
             ey=swept.ey,
         )
-        beyond = loads_beyond([turned], station)
-        unit_forces.append(
-            internal_forces(length, [turned], station).as_array("N", "m") if beyond else np.zeros(6)
-        )
+        unit_forces.append(forces_by_type([turned], ["swept"], length, station)[1][0])
     radians = np.radians(angles)
     swept_forces = (
         np.cos(radians)[:, None] * unit_forces[0] + np.sin(radians)[:, None] * unit_forces[1]
@@ -413,7 +387,6 @@ __all__ = [
     "Sweep",
     "angle_sweep",
     "forces_by_type",
-    "governing_utilization",
     "lightest_section",
     "plan_combinations",
     "utilizations",

@@ -192,7 +192,7 @@ def write_exploration(
     if basis.sweep_load:
         sweep = angle_sweep(section, loads, types, length, station, basis, Fy)
         sheet.heading(f"Design exploration: direction of {sweep.load}")
-        drawn = float(np.interp(sweep.drawn_deg, sweep.angles_deg, sweep.utilization))
+        drawn = sweep.drawn_utilization
         sheet.text(
             f"The load {sweep.load} is turned through 0–360° in its plane in steps of "
             f"{basis.sweep_step_deg:g}°, magnitude and point of application unchanged, and the "
@@ -204,7 +204,7 @@ def write_exploration(
             sweep_chart(
                 sweep.angles_deg,
                 sweep.utilization,
-                drawn_deg=sweep.drawn_deg,
+                drawn=(sweep.drawn_deg, drawn),
                 title=f"Utilization against the angle of {sweep.load}",
             ),
             f"Governing utilization against the angle of {sweep.load}.",

@@ -19,10 +19,13 @@ def sweep_chart(
     angles_deg: Sequence[float],
     utilizations: Sequence[float],
     *,
-    drawn_deg: float,
+    drawn: tuple[float, float],
     title: str,
 ) -> str:
-    """SVG of utilization against the load angle, with the drawn and the worst angle marked."""
+    """SVG of utilization against the load angle, with the drawn and the worst angle marked.
+
+    ``drawn`` is the angle drawn on the sheet and its utilization, as the caller found it.
+    """
     values = [float(value) for value in utilizations]
     angles = [float(angle) for angle in angles_deg]
     top = max(1.2, max(values) * 1.1)
@@ -51,7 +54,7 @@ def sweep_chart(
     svg.polyline([at(a, v) for a, v in zip(angles, values, strict=True)], stroke=INK, width=1.6)
     worst = max(range(len(values)), key=values.__getitem__)
     _mark(svg, at(angles[worst], values[worst]), f"worst {angles[worst]:g}°: {values[worst]:.3f}")
-    drawn_value = _interpolate(angles, values, drawn_deg)
+    drawn_deg, drawn_value = drawn
     _mark(svg, at(drawn_deg, drawn_value), f"drawn {drawn_deg:g}°: {drawn_value:.3f}", below=True)
     svg.text((WIDTH / 2, HEIGHT + 28), "load angle θ", size=SMALL_FONT_SIZE, fill=NOTE)
     svg.text((-34, HEIGHT / 2), "utilization", size=SMALL_FONT_SIZE, fill=NOTE, vertical=True)
@@ -74,13 +77,3 @@ def _mark(svg: Svg, point: tuple[float, float], label: str, *, below: bool = Fal
     svg.circle(point, 3.2, fill=INK)
     offset = 14 if below else -12
     svg.text((point[0], point[1] + offset), label, size=SMALL_FONT_SIZE, fill=DIMENSION, bold=True)
-
-
-def _interpolate(angles: Sequence[float], values: Sequence[float], angle: float) -> float:
-    wrapped = angles[0] + (angle - angles[0]) % ((angles[-1] - angles[0]) or 360.0)
-    for index in range(len(angles) - 1):
-        a, b = angles[index], angles[index + 1]
-        if a <= wrapped <= b:
-            share = (wrapped - a) / (b - a) if b > a else 0.0
-            return values[index] + share * (values[index + 1] - values[index])
-    return values[-1]

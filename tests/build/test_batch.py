@@ -36,7 +36,8 @@ def test_twelve_members_give_twelve_sheets_and_a_correct_summary(tmp_path: Path)
     rows = list(csv.DictReader(io.StringIO(summary_csv(outcomes))))
     assert [row["member"] for row in rows] == [f"M{n}" for n in range(1, 13)]
     assert [row["section"] for row in rows] == SECTIONS
-    # Stress is linear in the load: the utilization of M5 (W8X31, 5 kip) is 5 × M1's.
+    # Linear elasticity (common practice, no source): stress is linear in the load, so the
+    # utilization of M5 (W8X31, 5 kip) is 5 × M1's (W8X31, 1 kip).
     assert float(rows[4]["governing utilization"]) == pytest.approx(
         5 * float(rows[0]["governing utilization"]), abs=0.002
     )

@@ -110,7 +110,8 @@ def test_the_lightest_search_is_only_offered_with_aisc() -> None:
 def test_each_check_names_its_governing_combination() -> None:
     basis = DesignBasis("AISC 360-22")
     plan = plan_combinations(catalog_section("W10X33"), LOADS, TYPES, LENGTH, STATION, basis, FY)
-    # 1.4D has the most axial force; the wind combinations the most flexure about y.
+    # Arithmetic of the ASCE 7-22 2.3.1 factors (from memory): 1.4D has the most axial
+    # force (all of it from D); the combinations with 1.0W the most flexure about y.
     axial = plan.combos[int(np.argmax(plan.per_check["axial"]))]
     flexure_y = plan.combos[int(np.argmax(plan.per_check["flexure_y"]))]
     assert axial.factor("D") == 1.4 and flexure_y.factor("W") == 1.0
