@@ -46,7 +46,20 @@ def evaluate(
         return fast
     result = _evaluate_with_units(expr, values, step=step)
     _learn(expr, values, result)
-    return result
+    return _carried(result.magnitude, result.units)
+
+
+# Values are carried to 12 significant figures, far beyond any engineering use, so
+# that the pint walk and the compiled path (which differ in the last bits) give the
+# same numbers, and a sheet prints the same bytes whichever path computed it.
+CARRIED_FIGURES = 12
+
+
+def _carried(magnitude: float, units: pint.Unit) -> pint.Quantity:
+    number = float(magnitude)
+    if math.isfinite(number):
+        number = float(f"{number:.{CARRIED_FIGURES}g}")
+    return Quantity(number, units)
 
 
 def _evaluate_with_units(
@@ -82,7 +95,8 @@ def _evaluate_with_units(
 # structural and cached on each expression, so a rebuilt sheet finds its plans without
 # comparing expression trees; two different expressions sharing a 64-bit hash and the
 # units of every symbol is not a practical concern. Value: None after one evaluation
-# (not worth compiling yet), then (function, factors to base units, result base unit),
+# (not worth compiling yet), then (function, factors to base units, (the pint result's
+# units, their factor to base units)),
 # or False when the compiled path does not reproduce the pint result.
 _PLANS: dict[tuple, tuple | bool | None] = {}
 _SYMBOLS: dict[int, tuple[sp.Symbol, ...]] = {}
@@ -112,18 +126,19 @@ def _fast_value(expr: sp.Basic, values: Mapping[sp.Symbol, pint.Quantity]) -> pi
     plan = _PLANS.get(key) if key is not None else None
     if not plan:
         return None
-    function, factors, unit = plan
+    function, factors, (units, to_units) = plan
     try:
         arguments = [
             float(values[symbol].magnitude) * factor
             for symbol, factor in zip(_symbols_of(expr), factors, strict=True)
         ]
-        number = float(function(*arguments))
+        number = float(function(*arguments)) / to_units
     except (ArithmeticError, ValueError, TypeError):
         return None  # the pint walk gives the error its proper message
     if not math.isfinite(number):
         return None
-    return Quantity(number, unit)
+    # In the units the pint walk gives (a check prints its demand in them).
+    return _carried(number, units)
 
 
 def _learn(
@@ -167,7 +182,8 @@ def _compiled(
     # Offset units (degrees Celsius) cannot be scaled by a factor: keep the pint walk.
     if any(not values[s]._ok_for_muldiv() for s in symbols):
         return False
-    return (function, factors, base.units)
+    to_units = float(Quantity(1.0, result.units).to_base_units().magnitude)
+    return (function, factors, (result.units, to_units))
 
 
 def chosen_branch(

@@ -513,8 +513,8 @@ class Sheet:
 
     def _format(self, quantity: pint.Quantity) -> Quantityish:
         number = format_number(float(quantity.magnitude), self.number_style)
-        if quantity.unitless:
-            return Quantityish(number)
+        # A plain number has no unit factors (pint's ``unitless`` costs a root-unit
+        # conversion per value, which shows when a whole sheet is printed).
         return Quantityish(number, unit_factors(quantity.units))
 
     # -- internals -------------------------------------------------------------------------

@@ -40,6 +40,13 @@ def test_building_twice_gives_identical_bytes():
     assert render_html(outrigger_sheet()) == render_html(outrigger_sheet())
 
 
+def test_a_sheet_rebuilt_many_times_prints_the_same_bytes():
+    """Rebuilt sheets take the compiled evaluation path; they must print exactly the same."""
+    first = render_html(outrigger_sheet())
+    for _ in range(3):
+        assert render_html(outrigger_sheet()) == first
+
+
 def test_a4_and_letter_are_selectable():
     letter = pypdf.PdfReader(io.BytesIO(pdf_bytes(outrigger_sheet(), paper="letter")))
     a4 = pypdf.PdfReader(io.BytesIO(pdf_bytes(outrigger_sheet(), paper="a4")))
