@@ -536,7 +536,8 @@ class Sheet:
         self, quantity: pint.Quantity, unit: str | None, *, where: str
     ) -> pint.Unit | None:
         if unit is not None:
-            display = parse_unit(unit, field=f"{where} display unit")
+            # The same few display units come back on every step: parsed once.
+            display = _known_unit(str(unit)) or parse_unit(unit, field=f"{where} display unit")
             if display.dimensionality != quantity.dimensionality:
                 raise DimensionError(
                     f"{where}: the result is {_article(describe_dimension(quantity))} "
@@ -546,7 +547,7 @@ class Sheet:
             return display
         if str(quantity.units) in _ANGLE_UNITS:
             return ureg.degree
-        if quantity.dimensionless:
+        if not quantity.dimensionality:  # (pint's ``dimensionless`` converts to root units)
             return None
         return self.units.unit_for(quantity) or quantity.to_reduced_units().units
 
@@ -611,6 +612,15 @@ class Sheet:
             + " \\\\ ".join(line.replace(" = ", " &= ", 1) for line in lines)
             + "\\end{aligned}$$"
         )
+
+
+@lru_cache(maxsize=512)
+def _known_unit(text: str) -> pint.Unit | None:
+    """A display unit written by a calc author, parsed; None when it is not one."""
+    try:
+        return parse_unit(text, field="display unit")
+    except InputError:
+        return None
 
 
 def _to_display(quantity: pint.Quantity, unit: pint.Unit | None, where: str) -> pint.Quantity:
