@@ -170,10 +170,8 @@ def utilizations(
     """Utilization of each row of ``forces`` (n, 6) in N, N·m, the utilization of each
     AISC check per row (empty for the other kinds), and what the utilization measures."""
     if basis.kind == "AISC 360-22":
-        from calcsheet.standards.aisc360 import CHECKS
-
         checks = _aisc_numeric(_section_table(section), forces, basis, Fy, length)
-        per_check = {name: checks[name][0] for name in CHECKS}
+        per_check = {name: values[0] for name, values in checks.items()}
         worst = np.max(np.stack(list(per_check.values())), axis=0)
         return worst, per_check, "governing AISC 360-22 check"
     # Elastic proxy (stated on the sheet): the largest von Mises stress at the points
@@ -357,20 +355,18 @@ def lightest_section(
     """The lightest section of ``basis.lightest_in`` passing every AISC check, and the
     (up to) two lighter sections before it, which fail."""
     from calcsheet.sections.catalog import find_entry
-    from calcsheet.standards.aisc360 import CHECKS
 
     names, family_table = _family_table(basis.lightest_in or "")
     checks = _aisc_numeric(family_table, plan.forces, basis, Fy, length)
-    table = np.stack([checks[name] for name in CHECKS])  # (checks, sections, combos)
+    keys = list(checks)
+    table = np.stack([checks[name] for name in keys])  # (checks, sections, combos)
     per_check = table.max(axis=2)  # (checks, sections)
     worst = per_check.max(axis=0)
     which = per_check.argmax(axis=0)
 
     def candidate(i: int) -> Candidate:
         weight = find_entry(names[i]).values.get("weight", math.nan)
-        return Candidate(
-            names[i], Quantity(weight, "lbf/ft"), float(worst[i]), CHECKS[int(which[i])]
-        )
+        return Candidate(names[i], Quantity(weight, "lbf/ft"), float(worst[i]), keys[int(which[i])])
 
     passing = np.flatnonzero(worst <= 1.0)
     if passing.size == 0:

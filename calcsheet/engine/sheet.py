@@ -396,6 +396,15 @@ class Sheet:
         key = name.name if isinstance(name, sp.Symbol) else name
         return self[key].value
 
+    def evaluate(self, expr: sp.Basic, *, where: str = "a decision") -> pint.Quantity:
+        """The current value of an expression over this sheet's symbols (nothing is added).
+
+        For a calc that settles a decision from the values it has now (which equation
+        of a standard applies); errors name ``where``.
+        """
+        self._require_defined(expr, where)
+        return evaluate(expr, self._values, step=where)
+
     @property
     def checks(self) -> list[Check]:
         """The checks in sheet order."""
