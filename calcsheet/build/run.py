@@ -63,7 +63,7 @@ class BuildResult:
     @property
     def governing_utilization(self) -> float:
         values = [
-            check.utilization
+            check.worst_utilization
             for built in self.sheets
             for check in built.sheet.checks
             if check.utilization is not None
@@ -80,12 +80,13 @@ class BuildResult:
         status = "OK" if self.all_pass else "NOT OK"
         if not governing:
             return f"{self.member}: {status} (no checks) [inputs {self.hash}]"
-        sheet, check = max(governing, key=lambda pair: pair[1].utilization)
+        sheet, check = max(governing, key=lambda pair: pair[1].worst_utilization)
         at = sheet.check_location(check)
         where = f", at {at}" if at else ""
+        case = f", under {check.cases.case}" if check.cases is not None else ""
         return (
-            f"{self.member}: {status}, utilization {check.utilization:.3f} "
-            f"({check.description}{where}) [inputs {self.hash}]"
+            f"{self.member}: {status}, utilization {check.worst_utilization:.3f} "
+            f"({check.description}{where}{case}) [inputs {self.hash}]"
         )
 
 

@@ -28,6 +28,7 @@ from calcsheet.standards.combinations import Combination, combinations, factor_m
 from calcsheet.units import Quantity
 
 KINDS = ("allowable stress", "AISC 360-22", "EN 1993-1-1")
+GENERIC_CHECK_TITLE = "Von Mises stress, largest over the points"
 
 
 @dataclass(frozen=True)
@@ -95,7 +96,9 @@ class CombinationPlan:
     utilization: np.ndarray  # (n_combos,)
     measure: str
     governing: int
-    # AISC: the utilization of every check under every combination (check -> (n_combos,))
+    basis: DesignBasis
+    # The utilization of every check under every combination (check key -> (n_combos,)),
+    # from the procedure the sheet writes out for the governing combination.
     per_check: dict[str, np.ndarray] = field(default_factory=dict)
 
     @property
@@ -183,10 +186,21 @@ def utilizations(
     if basis.kind == "allowable stress":
         allowable = Fy.to("Pa").m / basis.factor_of_safety
         measure = "largest von Mises stress / (F_y/Ω)"
-    else:
-        allowable = Fy.to("Pa").m / basis.gamma_M0
-        measure = "largest von Mises stress / (f_y/γM0), EN 1993-1-1 6.2.1(5)"
+        return vm / allowable, {"von_mises": vm / allowable}, measure
+    allowable = Fy.to("Pa").m / basis.gamma_M0
+    measure = "largest von Mises stress / (f_y/γM0), EN 1993-1-1 6.2.1(5)"
     return vm / allowable, {}, measure
+
+
+def check_titles(basis: DesignBasis) -> dict[str, str]:
+    """The sheet's title of each check key of :func:`utilizations`."""
+    if basis.kind == "AISC 360-22":
+        from calcsheet.standards.aisc360 import CHECK_TITLES
+
+        return dict(CHECK_TITLES)
+    if basis.kind == "allowable stress":
+        return {"von_mises": GENERIC_CHECK_TITLE}
+    return {}
 
 
 def plan_combinations(
@@ -222,6 +236,7 @@ def plan_combinations(
             "loads", ", ".join(present), "loads whose combined forces are finite numbers"
         )
     return CombinationPlan(
+        basis=basis,
         per_check=per_check,
         standard=standard,
         types=present,
@@ -376,12 +391,14 @@ def lightest_section(
 
 
 __all__ = [
+    "GENERIC_CHECK_TITLE",
     "KINDS",
     "Candidate",
     "CombinationPlan",
     "DesignBasis",
     "Sweep",
     "angle_sweep",
+    "check_titles",
     "forces_by_type",
     "lightest_section",
     "plan_combinations",
