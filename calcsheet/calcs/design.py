@@ -12,7 +12,7 @@ search use the same numeric path.
 from __future__ import annotations
 
 import math
-from collections.abc import Sequence
+from collections.abc import Mapping, Sequence
 from dataclasses import dataclass, field
 from functools import lru_cache
 
@@ -45,6 +45,11 @@ class DesignBasis:
     gamma_M0: float = 1.00
     gamma_M1: float = 1.00
     S_DS: float | None = None
+    reverse_lateral: bool = False  # wind and earthquake also reversed
+    en1990_expression: str = "6.10"  # or "6.10a/b"
+    imposed_category: str = "A"  # EN 1990 Table A1.1
+    snow_site: str = "H <= 1000 m"  # ψ0 of snow, EN 1990 Table A1.1
+    psi0: Mapping[str, float] | None = None  # ψ0 given directly (EN 1990)
     grade: str = ""
     deflection_ratio: float | None = None  # L/n; None: no deflection check
     sweep_load: str | None = None
@@ -75,6 +80,18 @@ class DesignBasis:
         if self.kind == "EN 1993-1-1":
             return "EN 1990"
         return None
+
+    def combination_options(self, load_names: Mapping[str, Sequence[str]] | None = None) -> dict:
+        """The keyword options of :func:`combinations` this basis sets."""
+        return {
+            "S_DS": self.S_DS,
+            "reverse_lateral": self.reverse_lateral,
+            "en1990_expression": self.en1990_expression,
+            "imposed_category": self.imposed_category,
+            "snow_site": self.snow_site,
+            "psi0": self.psi0,
+            "load_names": load_names,
+        }
 
     @property
     def effective_length_factor(self) -> float:
@@ -217,14 +234,9 @@ def plan_combinations(
     if standard is None:
         return None
     present, by_type = forces_by_type(loads, types, length, station)
-    combos = combinations(standard, present, S_DS=basis.S_DS)
-    if not combos:
-        raise InputError(
-            "loads type",
-            ", ".join(present),
-            f"load types that {standard} combines (D, L, Lr, S, R, W, E; EN: G, Q, S, W)",
-            "no combination applies",
-        )
+    names = {kind: [load.name for load, t in zip(loads, types, strict=True) if t == kind]
+             for kind in present}  # fmt: skip
+    combos = combinations(standard, present, **basis.combination_options(names))
     from calcsheet.standards.combinations import combine_numeric
 
     forces = combine_numeric(by_type, combos, present)
@@ -323,7 +335,7 @@ def angle_sweep(
     by_angle[:, present.index(types[index])] += swept_forces
     standard = basis.combination_standard
     if standard is not None:
-        combos = combinations(standard, present, S_DS=basis.S_DS)
+        combos = combinations(standard, present, **basis.combination_options())
         factors = factor_matrix(combos, present)  # (combos, types)
         combined = np.einsum("ct,atk->ack", factors, by_angle)  # (angles, combos, 6)
     else:
