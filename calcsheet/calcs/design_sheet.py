@@ -27,6 +27,7 @@ from calcsheet.engine import Check, Sheet
 from calcsheet.figures.chart import sweep_chart
 from calcsheet.mechanics.loads import AppliedMoment, PointLoad
 from calcsheet.sections import Section
+from calcsheet.standards.combinations import combination_rules_text
 from calcsheet.units import Quantity, format_number, ureg
 
 CHOSEN_AT_BUILD = (
@@ -70,6 +71,9 @@ def write_combinations(
 ) -> dict[str, sp.Symbol]:
     """The envelope table and the governing combination's load factors (by load suffix)."""
     sheet.heading(f"Load combinations ({plan.standard})")
+    sheet.text(
+        combination_rules_text(plan.standard, plan.types, **plan.basis.combination_options())
+    )
     force_unit, moment_unit = preset["force"], preset["moment"]
     rows = []
     for index, combo in enumerate(plan.combos):
@@ -93,7 +97,7 @@ def write_combinations(
         _write_check_matrix(sheet, plan)
     chosen = plan.governing_combination
     sheet.text(
-        f"{len(plan.combos)} combinations were evaluated. Governing combination: "
+        "Governing combination: "
         f"{_named(chosen)} ({plan.measure} {plan.utilization[plan.governing]:.3f}). Its load "
         "factors multiply each load in the statics below; every other combination gives a "
         "lower governing utilization. Where another combination governs a single check, the "
