@@ -16,6 +16,7 @@ unit handling and the printed step shows where each value comes from.
 
 from __future__ import annotations
 
+import hashlib
 import inspect
 from collections.abc import Callable
 from dataclasses import dataclass, field
@@ -27,6 +28,10 @@ import sympy as sp
 
 from calcsheet.engine import Sheet, as_written
 
+# Every clause made, so that their numeric functions can be written out as code once
+# (:mod:`calcsheet.standards.write_clause_code`) instead of lambdified in each process.
+ALL_CLAUSES: list[Clause] = []
+
 
 @dataclass(frozen=True)
 class Clause:
@@ -35,6 +40,9 @@ class Clause:
     reference: str
     description: str
     build: Callable[..., sp.Expr] = field(repr=False)
+
+    def __post_init__(self) -> None:
+        ALL_CLAUSES.append(self)
 
     def __call__(self, *args: sp.Basic) -> sp.Expr:
         """The right-hand side built from the caller's symbols (as written)."""
@@ -55,10 +63,27 @@ class Clause:
         return tuple(inspect.signature(self.build).parameters)
 
     @cached_property
+    def placeholder_expression(self) -> sp.Expr:
+        """The expression over real symbols named as the builder's arguments."""
+        return self.build(*(sp.Symbol(name, real=True) for name in self.parameters))
+
+    @cached_property
+    def code_key(self) -> str:
+        """Names this clause's expression and arguments: a changed formula gets a new key."""
+        text = f"{self.parameters}|{sp.srepr(self.placeholder_expression)}"
+        return hashlib.sha256(text.encode()).hexdigest()[:20]
+
+    @cached_property
     def _numeric_function(self) -> Callable[..., Any]:
+        # The expression written out as numpy code (reviewed, in the package) is the same
+        # printer's output as lambdify's; a clause changed since it was written falls back.
+        from calcsheet.standards.clause_code import FUNCTIONS
+
+        written = FUNCTIONS.get(self.code_key)
+        if written is not None:
+            return written
         placeholders = [sp.Symbol(name, real=True) for name in self.parameters]
-        expr = self.build(*placeholders)
-        return sp.lambdify(placeholders, expr, modules="numpy")
+        return sp.lambdify(placeholders, self.placeholder_expression, modules="numpy")
 
     def numeric(self, *args: Any) -> np.ndarray:
         """Evaluate on floats or numpy arrays given in coherent SI base units."""
