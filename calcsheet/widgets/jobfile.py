@@ -102,13 +102,16 @@ def _updated_text(previous: str, data: dict[str, Any], job: object) -> str | Non
     """``previous`` with ``data``'s values put in; None if that cannot be done faithfully."""
     mark = _BYTE_ORDER_MARK if previous.startswith(_BYTE_ORDER_MARK) else ""
     try:
-        document = tomlkit.parse(previous.removeprefix(_BYTE_ORDER_MARK))
+        body = previous.removeprefix(_BYTE_ORDER_MARK)
+        document = tomlkit.parse(body)
     except Exception:  # tomlkit raises its own parse errors: the file is not TOML
         return None
     added: list[tuple[Any, str]] = []
     _merge_table(document, data, added)
     _drop_needless_additions(document, added, job)
     text = tomlkit.dumps(document)
+    if text != body:  # a table added last brings its blank line: end as the file did
+        text = text.rstrip("\n") + "\n" if body.endswith("\n") else text
     text = _FORM_HEADER_LINE.sub(f"{FORM_MARK} on {date.today().isoformat()}.", text, count=1)
     try:
         if job_from_data(tomllib.loads(text), source="form") != job:
@@ -139,14 +142,34 @@ def _merge_table(table: Any, data: dict[str, Any], added: list[tuple[Any, str]])
 
 
 def _merge_table_list(tables: AoT, data: list[dict[str, Any]], added: list) -> None:
-    """Update an array of tables (loads, revisions) entry by entry, in order."""
-    while len(tables) > len(data):
-        del tables[len(tables) - 1]
-    for index, value in enumerate(data):
-        if index < len(tables):
-            _merge_table(tables[index], value, added)
+    """Update an array of tables (loads, couples, revisions), keeping each entry's text.
+
+    Entries are matched by their ``name`` where every one has a distinct name (a load
+    removed from the middle takes its comments with it), otherwise by position.
+    """
+    old_names = [_plain(table.get("name")) for table in tables]
+    new_names = [value.get("name") for value in data]
+    by_name = all(isinstance(name, str) for name in old_names + new_names) and (
+        len(set(old_names)) == len(old_names) and len(set(new_names)) == len(new_names)
+    )
+    if by_name:
+        old_by_name = dict(zip(old_names, tables, strict=True))
+        matched = [old_by_name.get(name) for name in new_names]
+    else:
+        matched = [tables[index] if index < len(tables) else None for index in range(len(data))]
+    entries = []
+    for table, value in zip(matched, data, strict=True):
+        if table is None:
+            entries.append(_new_item(value))
         else:
-            tables.append(_new_item(value))
+            _merge_table(table, value, added)
+            entries.append(table)
+    if len(entries) == len(tables) and all(a is b for a, b in zip(entries, tables, strict=True)):
+        return  # the same entries in the same order: each was updated in place
+    while len(tables):
+        del tables[0]
+    for entry in entries:
+        tables.append(entry)
 
 
 def _new_item(value: Any) -> Any:
@@ -158,7 +181,10 @@ def _new_item(value: Any) -> Any:
         table.add(tomlkit.nl())
         return table
     if _is_table_list(value):
-        return tomlkit.aot_from(_new_item(item) for item in value)
+        tables = tomlkit.aot()
+        for item in value:
+            tables.append(_new_item(item))
+        return tables
     return value
 
 
