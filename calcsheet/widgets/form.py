@@ -7,6 +7,17 @@ pauses the whole job is built exactly as ``calcsheet build`` builds it, and the
 preview shows the result. While an entry has a problem the preview keeps the last
 good result and says so.
 
+Save never replaces the user's work silently. Over a file the form did not write
+(the hand-written job it was opened from, say) Save first asks: it shows a
+"Replace <name>" button and writes only when that is clicked (or another file
+name is given). Writing over a job file changes only the keys whose values
+changed; comments, layout and the file's permissions stay. A file the form
+created (it starts with the form's header) is saved over without asking.
+
+Switching US/SI converts what the boxes show, rounded as sheets print; the calc
+and Save keep using each entry as it was typed, at full precision, and switching
+back shows it exactly as typed.
+
 A user never sees a traceback: problems of the entries are shown beside them,
 a :class:`~calcsheet.errors.CalcsheetError` as its one line, and anything
 unexpected as one line too.
