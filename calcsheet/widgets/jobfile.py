@@ -101,15 +101,15 @@ def _readable_text(path: Path) -> str | None:
 def _updated_text(previous: str, data: dict[str, Any], job: object) -> str | None:
     """``previous`` with ``data``'s values put in; None if that cannot be done faithfully."""
     mark = _BYTE_ORDER_MARK if previous.startswith(_BYTE_ORDER_MARK) else ""
+    body = previous.removeprefix(_BYTE_ORDER_MARK)
     try:
-        body = previous.removeprefix(_BYTE_ORDER_MARK)
         document = tomlkit.parse(body)
-    except Exception:  # tomlkit raises its own parse errors: the file is not TOML
+        added: list[tuple[Any, str]] = []
+        _merge_table(document, data, added)
+        _drop_needless_additions(document, added, job)
+        text = tomlkit.dumps(document)
+    except Exception:  # not TOML (tomlkit raises its own errors), or a shape it cannot update
         return None
-    added: list[tuple[Any, str]] = []
-    _merge_table(document, data, added)
-    _drop_needless_additions(document, added, job)
-    text = tomlkit.dumps(document)
     if text != body:  # a table added last brings its blank line: end as the file did
         text = text.rstrip("\n") + "\n" if body.endswith("\n") else text
     text = _FORM_HEADER_LINE.sub(f"{FORM_MARK} on {date.today().isoformat()}.", text, count=1)
@@ -137,6 +137,8 @@ def _merge_table(table: Any, data: dict[str, Any], added: list[tuple[Any, str]])
             _merge_table(current, value, added)
         elif _is_table_list(value) and isinstance(current, AoT):
             _merge_table_list(current, value, added)
+        elif isinstance(value, dict) or _is_table_list(value):
+            table[key] = _new_item(value)  # e.g. a designation became a table of dimensions
         else:
             table[key] = value  # tomlkit keeps the comment after the value
 
