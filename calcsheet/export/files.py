@@ -11,6 +11,7 @@ import errno
 import glob
 import os
 import shutil
+import stat
 import tempfile
 import threading
 import time
@@ -118,6 +119,9 @@ def _staged_copy(path: Path, data: bytes) -> str:
     remove_stale_parts(path)
     handle, temporary = tempfile.mkstemp(prefix=f".{path.name}.", suffix=".part", dir=path.parent)
     try:
+        # mkstemp makes the file private (600); the finished file gets the mode a plain
+        # write would give it: the previous file's, or the umask's for a new one.
+        os.fchmod(handle, _mode_for(path))
         with os.fdopen(handle, "wb") as stream:
             stream.write(data)
             stream.flush()
@@ -126,6 +130,27 @@ def _staged_copy(path: Path, data: bytes) -> str:
         Path(temporary).unlink(missing_ok=True)
         raise
     return temporary
+
+
+def _mode_for(path: Path) -> int:
+    """The permissions for ``path``: those of the file it replaces, else 666 less the umask."""
+    try:
+        return stat.S_IMODE(path.stat().st_mode)
+    except OSError:
+        return 0o666 & ~_umask()
+
+
+def _umask() -> int:
+    """The process umask (read from /proc where possible: setting it is not thread-safe)."""
+    try:
+        for line in Path("/proc/self/status").read_text().splitlines():
+            if line.startswith("Umask:"):
+                return int(line.split()[1], 8)
+    except (OSError, ValueError, IndexError):
+        pass
+    mask = os.umask(0o022)
+    os.umask(mask)
+    return mask
 
 
 def make_folder(folder: Path) -> None:

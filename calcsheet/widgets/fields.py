@@ -84,6 +84,11 @@ class Field:
         value = self.widget.value
         return value.strip() if isinstance(value, str) else value
 
+    @property
+    def shown(self) -> Any:
+        """What the box shows (after a switch of units, a rounded conversion of the value)."""
+        return self.widget.value
+
     def set(self, value: Any) -> None:
         """Put a value in the box exactly as a user would (observers run)."""
         self.widget.value = value
@@ -160,10 +165,28 @@ class QuantityField(Field):
         super().__init__(label, _text_box(label, value, placeholder, width, label_width))
         self.dimension = dimension
         self.optional = optional
-        # (system converted from, the text then, the text converted to): switching back
-        # restores the entry exactly as typed unless it was edited in between, so that
-        # toggling US/SI to have a look does not round the inputs.
-        self._before_switch: tuple[str, str, str] | None = None
+        # While the box shows an entry converted to the other unit system: (the system it
+        # was typed in, the text as typed, the text shown). The calc and Save use the
+        # typed text, and every conversion starts from it, so switching US/SI any number
+        # of times rounds nothing the calc uses; only what is shown is rounded. Typing
+        # in the box (the shown text changes) makes the new text the typed one.
+        self._typed: tuple[str, str, str] | None = None
+
+    def _text(self) -> str:
+        """The entry's text as typed (not the rounded conversion the box may show)."""
+        shown = self.widget.value
+        if self._typed is not None and self._typed[2] == shown:
+            return self._typed[1]
+        return shown
+
+    @property
+    def value(self) -> Any:
+        """The entry as the job file takes it: as typed, never the rounded conversion shown."""
+        return self._text().strip()
+
+    def set(self, value: Any) -> None:
+        self._typed = None
+        super().set(value)
 
     def check(self) -> str | None:
         text = self.value
@@ -179,14 +202,17 @@ class QuantityField(Field):
         return convert_text(text, self.dimension, system)
 
     def convert(self, old: str, new: str) -> None:
-        """Rewrite the entry in the ``new`` system's unit, its value converted."""
-        text = self.widget.value
-        memory = self._before_switch
-        if memory is not None and memory[0] == new and memory[2] == text:
-            converted = memory[1]
+        """Show the entry in the ``new`` system's unit, rounded; the typed value is kept.
+
+        Back in the system it was typed in, the entry shows exactly as typed.
+        """
+        shown = self.widget.value
+        if self._typed is not None and self._typed[2] == shown:
+            system, typed = self._typed[0], self._typed[1]
         else:
-            converted = self._converted(text, new)
-        self._before_switch = (old, text, converted)
+            system, typed = old, shown
+        converted = typed if system == new else self._converted(typed, new)
+        self._typed = (system, typed, converted) if converted != typed else None
         self.widget.value = converted
 
 
@@ -195,10 +221,11 @@ class ListQuantityField(QuantityField):
 
     @property
     def value(self) -> list[str]:
-        return [part.strip() for part in self.widget.value.split(",") if part.strip()]
+        return [part.strip() for part in self._text().split(",") if part.strip()]
 
     def set(self, value: Any) -> None:
-        self.widget.value = ", ".join(value) if isinstance(value, (list, tuple)) else str(value)
+        text = ", ".join(value) if isinstance(value, (list, tuple)) else str(value)
+        super().set(text)
 
     def check(self) -> str | None:
         parts = self.value

@@ -7,6 +7,17 @@ pauses the whole job is built exactly as ``calcsheet build`` builds it, and the
 preview shows the result. While an entry has a problem the preview keeps the last
 good result and says so.
 
+Save never replaces the user's work silently. Over a file the form did not write
+(the hand-written job it was opened from, say) Save first asks: it shows a
+"Replace <name>" button and writes only when that is clicked (or another file
+name is given). Writing over a job file changes only the keys whose values
+changed; comments, layout and the file's permissions stay. A file the form
+created (it starts with the form's header) is saved over without asking.
+
+Switching US/SI converts what the boxes show, rounded as sheets print; the calc
+and Save keep using each entry as it was typed, at full precision, and switching
+back shows it exactly as typed.
+
 A user never sees a traceback: problems of the entries are shown beside them,
 a :class:`~calcsheet.errors.CalcsheetError` as its one line, and anything
 unexpected as one line too.
@@ -43,7 +54,12 @@ from calcsheet.widgets.fields import (
     TextField,
     ToggleField,
 )
-from calcsheet.widgets.jobfile import next_revision_mark, write_job_file
+from calcsheet.widgets.jobfile import (
+    job_file_path,
+    next_revision_mark,
+    write_job_file,
+    written_by_form,
+)
 from calcsheet.widgets.material import MaterialPanel
 from calcsheet.widgets.preview import Preview, governing_sheet
 from calcsheet.widgets.rows import LoadRow, MomentRow, RevisionRow, RowList
@@ -187,10 +203,15 @@ class MemberForm:
             field.observe(changed)
 
         self.job_path = TextField("job file", job_path, width="30em")
+        # Files Save may write over without asking: those the form wrote in this session
+        # (created, or replaced after the user said so).
+        self._may_replace: set[Path] = set()
+        self.job_path.observe(self._hide_replace)
         self.status = widgets.HTML()
         self.links = widgets.HTML()
         buttons = {
-            "save": ("Save job file", "save", self.save),
+            "save": ("Save job file", "save", self._save_clicked),
+            "replace": ("Replace the file", "exclamation-triangle", self._replace_clicked),
             "load": ("Load job file", "folder-open", self.load),
             "export": ("Export PDF + HTML + JSON", "file-pdf-o", self.export),
             "revision": ("New revision", "plus", self.new_revision),
@@ -204,6 +225,9 @@ class MemberForm:
                 lambda _button, label=label, action=action: self._run_action(label, action)
             )
             self.buttons[key] = button
+        # Shown only while Save waits for the user's word to write over a file.
+        self.buttons["replace"].layout.display = "none"
+        self.buttons["replace"].button_style = "warning"
 
         self.preview = Preview()
         form_column = _scrolling_column(
@@ -227,7 +251,14 @@ class MemberForm:
                 _heading("6 · Check"),
                 self.check.box,
                 _heading("7 · Files"),
-                widgets.HBox([self.job_path.box, self.buttons["save"], self.buttons["load"]]),
+                widgets.HBox(
+                    [
+                        self.job_path.box,
+                        self.buttons["save"],
+                        self.buttons["load"],
+                        self.buttons["replace"],
+                    ]
+                ),
                 self.out_folder.box,
                 self.out_stem.box,
                 self.paper.box,
@@ -366,6 +397,13 @@ class MemberForm:
     def value(self, path: str) -> Any:
         """The entry at a key path, as the job file takes it (``form.value("member.length")``)."""
         return self._entry(path).value
+
+    def shown(self, path: str) -> Any:
+        """What the entry at a key path shows: after a switch of units, a rounded conversion.
+
+        The calc and Save use :meth:`value`, the entry as typed, at full precision.
+        """
+        return self._entry(path).shown
 
     def set_value(self, path: str, value: Any) -> None:
         """Type ``value`` into the entry at ``path``, exactly as a user would.
@@ -545,12 +583,56 @@ class MemberForm:
         path = Path(str(text).strip()).expanduser()
         return path if path.is_absolute() else self.folder / path
 
-    def save(self, path: str | Path | None = None) -> Path:
-        """Write the entries as a job file (TOML) to ``path`` or the job-file box's path."""
-        target = self._path(path if path is not None else self.job_path.value)
+    def save(self, path: str | Path | None = None, *, replace: bool = False) -> Path:
+        """Write the entries as a job file (TOML) to ``path`` or the job-file box's path.
+
+        A file the form did not write (one typed by hand, or the file the form was
+        opened from) is written over only with ``replace=True``, which the form's
+        "Replace" button gives after Save asked; otherwise :class:`FormError` says so
+        and nothing is written. Writing over a file changes only the keys whose
+        values changed: its comments, layout and permissions stay.
+        """
+        target = job_file_path(self._path(path if path is not None else self.job_path.value))
+        if not (replace or self._may_write(target)):
+            raise FormError(
+                f"{target.name} exists and was not written by this form; Save does not "
+                "write over it without asking: click 'Replace' (or call save(replace=True)) "
+                "to update it in place, keeping its comments, or give another file name"
+            )
         written = write_job_file(target, self.job_data())
+        self._may_replace.add(written.resolve())
+        self._hide_replace()
         self._say(f"Saved the job file {written.name}.", True)
         return written
+
+    def _may_write(self, target: Path) -> bool:
+        """Whether Save may write ``target`` without asking."""
+        return (
+            not target.exists() or target.resolve() in self._may_replace or written_by_form(target)
+        )
+
+    def _save_clicked(self) -> None:
+        """Save; over a file the form did not write, ask first with the Replace button."""
+        target = job_file_path(self._path(self.job_path.value))
+        if self._may_write(target):
+            self.save()
+            return
+        self.to_job()  # entries with problems are said first: there is nothing to save yet
+        replace = self.buttons["replace"]
+        replace.description = f"Replace {target.name}"
+        replace.layout.display = None
+        self._say(
+            f"{target.name} already exists and was not written by this form. Click "
+            f"'Replace {target.name}' to update it (its comments and layout are kept), "
+            "or give another file name and Save.",
+            False,
+        )
+
+    def _replace_clicked(self) -> None:
+        self.save(replace=True)
+
+    def _hide_replace(self, _change: Any = None) -> None:
+        self.buttons["replace"].layout.display = "none"
 
     def load(self, path: str | Path | None = None) -> Job:
         """Open the job file at ``path`` (or the job-file box's path) and show it."""

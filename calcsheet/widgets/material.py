@@ -48,7 +48,8 @@ class MaterialPanel:
         self._given = {"Fy": False, "Fu": False}
         self._prefill(self._units())
 
-    def _prefill(self, system: str) -> None:
+    def _prefill(self, system: str, refill: dict[str, bool] | None = None) -> None:
+        """Fill the grade's values in ``system``'s unit (only the ``refill`` entries, if given)."""
         grade = GRADES.get(self.grade.value)
         for key, field in (("Fy", self.Fy), ("Fu", self.Fu)):
             if grade is None:
@@ -56,7 +57,7 @@ class MaterialPanel:
                 continue
             text = quantity_text(getattr(grade, key), "stress", system)
             self._filled[key] = text
-            if not self._given[key]:
+            if not self._given[key] and (refill is None or refill[key]):
                 field.set(text)
         self.source.value = (
             f'<span style="color:#555;font-size:0.9em">{grade.source}; minimum values '
@@ -76,11 +77,14 @@ class MaterialPanel:
 
     def convert(self, old: str, new: str) -> None:
         """Follow a change of units: the grade's values are filled afresh, typed ones converted."""
+        refill: dict[str, bool] = {}
         for key, field in (("Fy", self.Fy), ("Fu", self.Fu)):
-            if not self._given[key] and field.widget.value == self._filled[key]:
-                continue  # the grade's value: filled afresh below, not rounded twice
-            field.convert(old, new)
-        self._prefill(new)
+            # The grade's value is filled afresh below, not rounded twice; a typed one
+            # is converted for the eye and kept as typed for the calc.
+            refill[key] = not self._given[key] and field.shown == self._filled[key]
+            if not refill[key]:
+                field.convert(old, new)
+        self._prefill(new, refill)
 
     def fields(self) -> dict[str, Field]:
         return {"material.grade": self.grade, "material.Fy": self.Fy, "material.Fu": self.Fu}

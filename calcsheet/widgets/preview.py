@@ -17,6 +17,8 @@ from calcsheet.render.html import render_fragment
 
 OK_COLOUR = "#1f6f3f"
 NOT_OK_COLOUR = "#a11d1d"
+STALE_COLOUR = "#6b7280"
+STALE_STATUS = "entries have problems"
 NOTE_STYLE = "border-left:4px solid #c98a00;background:#fff7e0;padding:0.4em 0.7em;margin:0.3em 0;"
 MAX_LISTED_PROBLEMS = 6
 CELL_STYLE = "padding:0.1em 0.9em 0.1em 0;text-align:left;vertical-align:top"
@@ -36,10 +38,18 @@ def _cells(tag: str, *texts: str) -> str:
     return "".join(f"<{tag} style='{CELL_STYLE}'>{text}</{tag}>" for text in texts)
 
 
-def key_results_html(result: BuildResult) -> str:
-    """Status, governing utilization and where it governs, station by station, and the stamp."""
-    status = "OK" if result.all_pass else "NOT OK"
-    colour = OK_COLOUR if result.all_pass else NOT_OK_COLOUR
+def key_results_html(result: BuildResult, *, stale: bool = False) -> str:
+    """Status, governing utilization and where it governs, station by station, and the stamp.
+
+    ``stale``: the entries have problems and ``result`` is the last good build, not
+    theirs. The badge then says so, in grey, and the figures are marked as the last
+    good result: an "OK" must never stand above entries that have problems.
+    """
+    if stale:
+        status, colour = STALE_STATUS, STALE_COLOUR
+    else:
+        status = "OK" if result.all_pass else "NOT OK"
+        colour = OK_COLOUR if result.all_pass else NOT_OK_COLOUR
     stations = result.job.member.stations
     rows = []
     for index, built in enumerate(result.sheets):
@@ -64,10 +74,12 @@ def key_results_html(result: BuildResult) -> str:
     badge = (
         f"background:{colour};color:white;font-weight:bold;padding:0.15em 0.6em;border-radius:3px"
     )
+    faded = ";opacity:0.55" if stale else ""
+    before = "last good result: " if stale else ""
     return (
-        '<div style="font-size:0.95em">'
+        f'<div style="font-size:0.95em{faded}">'
         f'<span style="{badge}">{status}</span> '
-        f"governing utilization <b>{result.governing_utilization:.3f}</b>"
+        f"{before}governing utilization <b>{result.governing_utilization:.3f}</b>"
         f" · {html.escape(result.member)}"
         '<table style="border-collapse:collapse;margin-top:0.3em;text-align:left">'
         "<tr>"
@@ -112,17 +124,27 @@ class Preview:
         )
         self.box = widgets.VBox([self.key_results, self.note, self.sheet_view])
         self._shown_result: BuildResult | None = None
+        self._shown_key_results: tuple[BuildResult, bool] | None = None
 
     def show(self, result: BuildResult | None, problems: list[tuple[str, str]]) -> None:
-        """Show ``result`` (the last good one) and the note about ``problems``."""
+        """Show ``result`` (the last good one) and the note about ``problems``.
+
+        With problems the key results say "entries have problems" instead of OK or
+        NOT OK, since they are not these entries' results.
+        """
         _replace(self.note, problems_note_html(problems, have_result=result is not None))
         if result is None:
             _replace(self.key_results, "")
+            self._shown_key_results = None
             return
+        stale = bool(problems)
+        shown = self._shown_key_results
+        if shown is None or shown[0] is not result or shown[1] != stale:
+            self._shown_key_results = (result, stale)
+            _replace(self.key_results, key_results_html(result, stale=stale))
         if result is self._shown_result:
-            return  # the entries have problems and the last good result is already shown
+            return  # the sheet of this result is already shown
         self._shown_result = result
-        _replace(self.key_results, key_results_html(result))
         _replace(self.sheet_view, render_fragment(governing_sheet(result)))
 
 

@@ -188,13 +188,16 @@ def test_an_unknown_entry_is_refused_with_the_list_of_entries(form: MemberForm) 
 
 def test_switching_units_converts_every_quantity(form: MemberForm) -> None:
     form.set_value("sheet.units", "SI")
-    assert form.value("member.length") == "1219 mm"  # 48 in x 25.4 = 1219.2 mm
-    assert form.value("member.stations") == ["0 mm"]
-    assert form.value("loads[0].magnitude") == "10.68 kN"  # 2.4 kip x 4.448 = 10.676 kN
-    assert form.value("loads[0].ey") == "-101.6 mm"  # -4 in x 25.4
-    assert form.value("loads[0].angle") == "35 deg"  # angles have no system
-    assert form.value("loads[1].components[0]") == "1.557 kN"  # 0.35 kip x 4.448 = 1.5569
-    assert form.value("material.Fy") == "345 MPa"  # 50 ksi x 6.895 = 344.7 MPa
+    assert form.shown("member.length") == "1219 mm"  # 48 in x 25.4 = 1219.2 mm
+    assert form.shown("member.stations") == "0 mm"
+    assert form.shown("loads[0].magnitude") == "10.68 kN"  # 2.4 kip x 4.448 = 10.676 kN
+    assert form.shown("loads[0].ey") == "-101.6 mm"  # -4 in x 25.4
+    assert form.shown("loads[0].angle") == "35 deg"  # angles have no system
+    assert form.shown("loads[1].components[0]") == "1.557 kN"  # 0.35 kip x 4.448 = 1.5569
+    assert form.shown("material.Fy") == "345 MPa"  # 50 ksi x 6.895 = 344.7 MPa
+    # The calc takes the entries as typed, not the rounded figures shown.
+    assert form.value("member.length") == "48 in"
+    assert form.value("loads[0].magnitude") == "2.4 kip"
     form.refresh()
     assert form.errors == {}
     assert form.results.job.sheet.units == "SI"
@@ -205,9 +208,10 @@ def test_switching_back_restores_the_entries_unless_edited(form: MemberForm) -> 
     form.set_value("sheet.units", "SI")
     form.set_value("member.length", "1500 mm")
     form.set_value("sheet.units", "US")
-    assert form.value("member.length") == "59.1 in"  # 1500 / 25.4 = 59.06 in
-    assert form.value("loads[0].magnitude") == "2.4 kip"  # untouched: as typed
-    assert form.value("loads[0].ey") == "-4 in"
+    assert form.shown("member.length") == "59.1 in"  # 1500 / 25.4 = 59.06 in
+    assert form.value("member.length") == "1500 mm"  # the calc takes it as typed
+    assert form.shown("loads[0].magnitude") == "2.4 kip"  # untouched: as typed
+    assert form.shown("loads[0].ey") == "-4 in"
     form.refresh()
     assert form.errors == {}
 
