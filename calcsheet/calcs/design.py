@@ -14,21 +14,26 @@ from __future__ import annotations
 import math
 from collections.abc import Mapping, Sequence
 from dataclasses import dataclass, field
-from functools import lru_cache
 
 import numpy as np
 import pint
 
+from calcsheet.calcs.design_standards import (
+    GENERIC_CHECK_TITLE,
+    DesignStandard,
+    design_standard,
+    registered,
+    von_mises_ratio,
+)
 from calcsheet.errors import InputError
-from calcsheet.mechanics import internal_forces, stress_model
+from calcsheet.mechanics import internal_forces
 from calcsheet.mechanics.loads import AppliedMoment, PointLoad, point_load
 from calcsheet.mechanics.statics import loads_beyond
 from calcsheet.sections import Section
 from calcsheet.standards.combinations import Combination, combinations, factor_matrix
 from calcsheet.units import Quantity
 
-KINDS = ("allowable stress", "AISC 360-22", "EN 1993-1-1")
-GENERIC_CHECK_TITLE = "Von Mises stress, largest over the points"
+KINDS = registered()
 
 
 @dataclass(frozen=True)
@@ -57,29 +62,30 @@ class DesignBasis:
     lightest_in: str | None = None
 
     def __post_init__(self) -> None:
-        if self.kind not in KINDS:
-            raise InputError("check kind", self.kind, "one of: " + ", ".join(KINDS))
-        if self.kind == "AISC 360-22" and self.method not in ("LRFD", "ASD"):
-            raise InputError("check method", self.method, "LRFD or ASD")
+        standard = design_standard(self.kind)
+        if standard.methods and self.method not in standard.methods:
+            raise InputError("check method", self.method, " or ".join(standard.methods))
         if self.K is not None and not (math.isfinite(self.K) and self.K > 0):
             raise InputError("check K", self.K, "a positive effective length factor")
-        if self.lightest_in and self.kind != "AISC 360-22":
+        if self.lightest_in and standard.search is None:
+            searchable = [name for name in KINDS if design_standard(name).search is not None]
             raise InputError(
                 "explore lightest_in",
                 self.lightest_in,
-                "a family to search only with the AISC 360-22 check (its numeric path)",
+                f"a family to search only with the {', '.join(searchable)} check",
             )
+
+    @property
+    def standard(self) -> DesignStandard:
+        """The registered standard the checks follow."""
+        return design_standard(self.kind)
 
     @property
     def combination_standard(self) -> str | None:
         """The load-combination standard, or None when loads are taken as given."""
         if self.combinations is not None:
             return None if self.combinations.lower() == "none" else self.combinations
-        if self.kind == "AISC 360-22":
-            return "ASCE 7-22 strength" if self.method == "LRFD" else "ASCE 7-22 ASD"
-        if self.kind == "EN 1993-1-1":
-            return "EN 1990"
-        return None
+        return self.standard.combination_standard(self.method)
 
     def combination_options(self, load_names: Mapping[str, Sequence[str]] | None = None) -> dict:
         """The keyword options of :func:`combinations` this basis sets."""
@@ -97,9 +103,7 @@ class DesignBasis:
     def effective_length_factor(self) -> float:
         if self.K is not None:
             return self.K
-        # Fixed-free: AISC Commentary Table C-A-7.1 recommends 2.1 (from memory);
-        # EN 1993-1-1 has no table; 2.0 is the theoretical value (common practice).
-        return 2.1 if self.kind == "AISC 360-22" else 2.0
+        return self.standard.effective_length_factor
 
 
 @dataclass
@@ -145,41 +149,6 @@ def forces_by_type(
     return present, np.array(rows)
 
 
-def _aisc_numeric(table, forces: np.ndarray, basis: DesignBasis, Fy, length) -> dict:
-    """aisc_checks_numeric of ``table`` under the combinations' forces (n, 6) in N, N·m."""
-    from calcsheet.standards.aisc360 import DemandArrays, Steel, aisc_checks_numeric
-
-    demands = DemandArrays(
-        P_r=forces[:, 0], M_rx=forces[:, 4], M_ry=forces[:, 5], V_rx=forces[:, 1], V_ry=forces[:, 2]
-    )
-    return aisc_checks_numeric(
-        table,
-        demands,
-        method=basis.method,
-        material=Steel(F_y=Fy, grade=basis.grade or "steel"),
-        length=length,
-        K=basis.effective_length_factor,
-        Lb=basis.Lb,
-        Cb=basis.Cb,
-    )
-
-
-# Sections are built once per design (and cached by the job builder), so their AISC
-# tables are kept by identity; the section is held too, so an id is never reused.
-_SECTION_TABLES: dict[int, tuple[Section, object]] = {}
-
-
-def _section_table(section: Section) -> object:
-    from calcsheet.standards.aisc360.section_data import section_table
-
-    kept = _SECTION_TABLES.get(id(section))
-    if kept is None or kept[0] is not section:
-        if len(_SECTION_TABLES) >= 32:
-            _SECTION_TABLES.clear()
-        kept = _SECTION_TABLES[id(section)] = (section, section_table([section]))
-    return kept[1]
-
-
 def utilizations(
     section: Section,
     forces: np.ndarray,
@@ -187,37 +156,29 @@ def utilizations(
     Fy: pint.Quantity,
     length: pint.Quantity,
 ) -> tuple[np.ndarray, dict[str, np.ndarray], str]:
-    """Utilization of each row of ``forces`` (n, 6) in N, N·m, the utilization of each
-    AISC check per row (empty for the other kinds), and what the utilization measures."""
-    if basis.kind == "AISC 360-22":
-        checks = _aisc_numeric(_section_table(section), forces, basis, Fy, length)
-        per_check = {name: values[0] for name, values in checks.items()}
+    """Utilization of each row of ``forces`` (n, 6) in N, N·m: the governing one, each
+    check's (by key, see :func:`check_titles`), and what the governing one measures.
+
+    The standard's own procedure evaluated on arrays (see :mod:`.design_standards`).
+    """
+    per_check, measure = basis.standard.evaluate(section, forces, basis, Fy, length)
+    if per_check:
         worst = np.max(np.stack(list(per_check.values())), axis=0)
-        return worst, per_check, "governing AISC 360-22 check"
-    # Elastic proxy (stated on the sheet): the largest von Mises stress at the points
-    # over the allowable (F_y/Ω) or the design yield stress (f_y/γM0, EN 1993-1-1 6.2.1(5)).
-    unit = section.length_unit
-    metres = float(Quantity(1.0, unit).to("m").m)
-    stresses = stress_model(section, unit).stresses(forces / [1, 1, 1, metres, metres, metres])
-    vm = stresses.von_mises.max(axis=-1) * float(Quantity(1.0, f"N/{unit}**2").to("Pa").m)
-    if basis.kind == "allowable stress":
-        allowable = Fy.to("Pa").m / basis.factor_of_safety
-        measure = "largest von Mises stress / (F_y/Ω)"
-        return vm / allowable, {"von_mises": vm / allowable}, measure
-    allowable = Fy.to("Pa").m / basis.gamma_M0
-    measure = "largest von Mises stress / (f_y/γM0), EN 1993-1-1 6.2.1(5)"
-    return vm / allowable, {}, measure
+        return worst, per_check, measure
+    return _proxy_utilization(section, forces, basis, Fy), per_check, measure
+
+
+def _proxy_utilization(
+    section: Section, forces: np.ndarray, basis: DesignBasis, Fy: pint.Quantity
+) -> np.ndarray:
+    # A standard without a numeric path: the largest von Mises stress over f_y/γM0
+    # (EN 1993-1-1 6.2.1(5)), stated on the sheet as the measure.
+    return von_mises_ratio(section, forces, Fy / basis.gamma_M0)
 
 
 def check_titles(basis: DesignBasis) -> dict[str, str]:
     """The sheet's title of each check key of :func:`utilizations`."""
-    if basis.kind == "AISC 360-22":
-        from calcsheet.standards.aisc360 import CHECK_TITLES
-
-        return dict(CHECK_TITLES)
-    if basis.kind == "allowable stress":
-        return {"von_mises": GENERIC_CHECK_TITLE}
-    return {}
+    return dict(basis.standard.check_titles())
 
 
 def plan_combinations(
@@ -361,30 +322,17 @@ class Candidate:
         return self.utilization <= 1.0
 
 
-@lru_cache(maxsize=8)
-def _family_table(family: str) -> tuple[list[str], object]:
-    """A family's designations (lightest first) and their table: fixed data, read once."""
-    from calcsheet.sections import list_designations
-    from calcsheet.standards.aisc360.section_data import catalog_table
-
-    try:
-        names = list_designations(family, lightest_first=True)
-    except InputError:
-        raise InputError(
-            "explore lightest_in", family, "a catalog family such as W or HSS_RECT"
-        ) from None
-    return names, catalog_table(names)
-
-
 def lightest_section(
     plan: CombinationPlan, basis: DesignBasis, Fy: pint.Quantity, length: pint.Quantity
 ) -> tuple[Candidate | None, list[Candidate]]:
-    """The lightest section of ``basis.lightest_in`` passing every AISC check, and the
-    (up to) two lighter sections before it, which fail."""
+    """The lightest section of ``basis.lightest_in`` passing every check of the standard
+    under every combination, and the (up to) two lighter sections before it, which fail."""
     from calcsheet.sections.catalog import find_entry
 
-    names, family_table = _family_table(basis.lightest_in or "")
-    checks = _aisc_numeric(family_table, plan.forces, basis, Fy, length)
+    search = basis.standard.search
+    if search is None:
+        raise InputError("explore lightest_in", basis.lightest_in, "a standard with a search")
+    names, checks = search(basis.lightest_in or "", plan.forces, basis, Fy, length)
     keys = list(checks)
     table = np.stack([checks[name] for name in keys])  # (checks, sections, combos)
     per_check = table.max(axis=2)  # (checks, sections)

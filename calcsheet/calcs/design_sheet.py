@@ -15,7 +15,6 @@ import pint
 import sympy as sp
 
 from calcsheet.calcs.design import (
-    GENERIC_CHECK_TITLE,
     CombinationPlan,
     DesignBasis,
     angle_sweep,
@@ -39,11 +38,9 @@ _FORCE_COLUMNS = (("N", "force"), ("V_x", "force"), ("V_y", "force"), ("T", "mom
 
 
 __all__ = [
-    "GENERIC_CHECK_TITLE",
     "write_check_cases",
     "write_combinations",
     "write_exploration",
-    "write_standard_checks",
 ]
 
 
@@ -161,61 +158,6 @@ def write_check_cases(
             f"{_named(plan.combos[worst])}, station {where}",
             len(plan.combos),
         )
-
-
-def write_standard_checks(
-    sheet: Sheet,
-    section: Section,
-    basis: DesignBasis,
-    forces: dict[str, sp.Symbol],
-    material: tuple[pint.Quantity, pint.Quantity],
-) -> list[Check]:
-    """The specification checks of ``basis.kind`` under the internal forces written above."""
-    Fy, length = material
-    if basis.kind == "AISC 360-22":
-        from calcsheet.standards.aisc360 import Demands, Steel, write_aisc_checks
-
-        return write_aisc_checks(
-            sheet,
-            section,
-            demands=Demands(
-                P_r=forces["N"],
-                M_rx=forces["M_x"],
-                M_ry=forces["M_y"],
-                V_rx=forces["V_x"],
-                V_ry=forces["V_y"],
-            ),
-            method=basis.method,
-            material=Steel(F_y=Fy, grade=basis.grade or "steel (F_y as given)"),
-            length=length,
-            K=basis.effective_length_factor,
-            Lb=basis.Lb,
-            Cb=basis.Cb,
-        )
-    from calcsheet.standards.en1993 import steel, write_en1993_checks
-
-    grade = basis.grade if basis.grade.upper().startswith("S") else "S355"
-    if grade != basis.grade:
-        sheet.text(
-            f"No EN 10025 grade given: buckling curves are chosen as for {grade} "
-            "(Table 6.2), with f_y as given."
-        )
-    # EN 1993-1-1 names the strong axis y-y: our M_x is its M_y,Ed, our V_y its V_z,Ed.
-    return write_en1993_checks(
-        sheet,
-        section,
-        demands={
-            "N_Ed": forces["N"],
-            "M_y_Ed": forces["M_x"],
-            "M_z_Ed": forces["M_y"],
-            "V_z_Ed": forces["V_y"],
-            "V_y_Ed": forces["V_x"],
-        },
-        material=steel(grade, f_y=Fy),
-        length=length,
-        k_eff=basis.effective_length_factor,
-        gamma={"gamma_M0": basis.gamma_M0, "gamma_M1": basis.gamma_M1},
-    )
 
 
 def write_exploration(

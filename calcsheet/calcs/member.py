@@ -19,17 +19,16 @@ import sympy as sp
 
 from calcsheet.calcs.design import DesignBasis, plan_combinations
 from calcsheet.calcs.design_sheet import (
-    GENERIC_CHECK_TITLE,
     write_check_cases,
     write_combinations,
     write_exploration,
-    write_standard_checks,
 )
+from calcsheet.calcs.design_standards import NOT_A_SPEC_CHECK, CheckContext
 from calcsheet.calcs.member_figures import member_drawing, section_drawing, stress_drawing
 from calcsheet.calcs.member_rebuild import rebuild_on_change
 from calcsheet.calcs.points import PointSymbols, write_combined
 from calcsheet.calcs.round_section import write_round_point_stresses
-from calcsheet.engine import Check, Sheet, TitleBlock
+from calcsheet.engine import Sheet, TitleBlock
 from calcsheet.engine.functions import Abs, cos, sin, sqrt
 from calcsheet.errors import InputError
 from calcsheet.mechanics.deflection import write_tip_deflection
@@ -60,11 +59,6 @@ SHEAR_TEXT = (
     "average over the vertical cut (τ = V·Q/(I·b) in its general unsymmetric form, Q of "
     "the part cut off). The torsional shear τ_T is added to the transverse shear by "
     "magnitude because its direction along the wall is not tracked (conservative)."
-)
-NOT_A_SPEC_CHECK = (
-    "The check below is a generic allowable-stress check of the von Mises stress "
-    "against F_y/Ω. It is NOT a specification check: member stability (buckling, "
-    "lateral-torsional buckling), local buckling, connections and fatigue are not covered."
 )
 LAYOUT = (
     "the member length, the station and the load positions decide which loads the cut "
@@ -139,7 +133,8 @@ def member_sheet(
     plan = plan_combinations(section, loads, types, length_q, station_q, basis, fy_q)
     sheet = Sheet(title, units=units, title_block=title_block)
     _write_basis(sheet, section, basis)
-    generic = basis.kind == "allowable stress"
+    standard = basis.standard
+    generic = not standard.specification
     with sheet:
         _write_conventions(sheet, generic)
         symbols, free_suffixes = _write_inputs(
@@ -172,18 +167,22 @@ def member_sheet(
             points = _write_point_stresses(sheet, section, model, forces, props, stress)
         _write_point_table(sheet, points, stress)
         governing = _write_governing(sheet, points, stress)
-        if generic:
-            checks = [_write_generic_check(sheet, governing, symbols, stress)]
-        else:
-            checks = write_standard_checks(sheet, section, basis, forces, (fy_q, length_q))
+        checks = standard.write(
+            CheckContext(
+                sheet, section, basis, forces, governing, symbols, (fy_q, length_q), stress
+            )
+        )
         if plan is not None:
             write_check_cases(sheet, plan, checks, station_q.to(length_unit))
         if basis.deflection_ratio:
-            # E as the standard states it (AISC 360-22: 29,000 ksi; EN 1993-1-1 3.2.6:
-            # 210,000 N/mm²), so that the deflection shares the checks' input E.
-            modulus = "210000 MPa" if basis.kind == "EN 1993-1-1" else "29000 ksi"
+            # E as the standard states it, so that the deflection shares the checks' input E.
             write_tip_deflection(
-                sheet, section, loads, length=length_q, E=modulus, n=basis.deflection_ratio
+                sheet,
+                section,
+                loads,
+                length=length_q,
+                E=standard.modulus,
+                n=basis.deflection_ratio,
             )
         write_exploration(sheet, section, (loads, types), (length_q, station_q), basis, fy_q, plan)
     rebuild_on_change(sheet, member_sheet, arguments)
@@ -191,7 +190,7 @@ def member_sheet(
 
 
 def _write_basis(sheet: Sheet, section: Section, basis: DesignBasis) -> None:
-    if basis.kind == "allowable stress":
+    if not basis.standard.specification:
         sheet.add_basis(
             "Codes and editions",
             "No specification clause is checked here: the von Mises stress is compared with a "
@@ -736,19 +735,3 @@ def _write_governing(sheet: Sheet, points: list[PointSymbols], stress: str) -> d
             unit=stress,
         )
     return governing
-
-
-def _write_generic_check(
-    sheet: Sheet, governing: dict[str, sp.Symbol], symbols: dict[str, sp.Symbol], stress: str
-) -> Check:
-    sheet.heading("Allowable-stress check")
-    F_allow = sheet.step(
-        "F_allow", symbols["F_y"] / symbols["Omega"], "Generic allowable stress", unit=stress
-    )
-    sheet.text(NOT_A_SPEC_CHECK)
-    return sheet.check(
-        GENERIC_CHECK_TITLE,
-        governing["sigma_vm_max"],
-        F_allow,
-        reference="generic F_y/Ω; not a specification check",
-    )
