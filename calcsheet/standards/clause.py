@@ -64,8 +64,13 @@ class Clause:
 
     @cached_property
     def placeholder_expression(self) -> sp.Expr:
-        """The expression over real symbols named as the builder's arguments."""
-        return self.build(*(sp.Symbol(name, real=True) for name in self.parameters))
+        """The expression over real symbols named as the builder's arguments.
+
+        Built with sympy's usual evaluation, whatever the caller's ``as_written`` state,
+        so that its key and its numeric code never depend on where it is first asked.
+        """
+        with sp.evaluate(True):
+            return self.build(*(sp.Symbol(name, real=True) for name in self.parameters))
 
     @cached_property
     def code_key(self) -> str:
