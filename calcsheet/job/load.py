@@ -56,6 +56,13 @@ def _message(error: dict[str, Any]) -> str:
         entries = f"{bound:,} entr{'y' if bound == 1 else 'ies'}"
         limit = f"at most {entries}" if kind == "too_long" else f"at least {entries}"
         return f"{limit} allowed; this list has {context['actual_length']:,}"
+    if kind == "string_too_long" and isinstance(given, str):
+        # pydantic says "String should have at most 200 characters".
+        bound = error["ctx"]["max_length"]
+        return (
+            f"at most {bound:,} characters allowed; this text has {len(given):,} "
+            f"(it begins {given[:40]!r}): shorten it"
+        )
     message = str(error["msg"]).removeprefix("Value error, ")
     if isinstance(given, (str, int, float)) and not isinstance(given, bool):
         shown = repr(given) if len(repr(given)) <= 60 else repr(given)[:57] + "...'"
@@ -76,9 +83,13 @@ def _problems(error: ValidationError) -> list[tuple[str, str]]:
 
 
 def parse_job(text: str, *, source: str = "job") -> Job:
-    """A job from TOML text; :class:`JobError` lists every problem with its key path."""
+    """A job from TOML text; :class:`JobError` lists every problem with its key path.
+
+    A byte-order mark at the start (some Windows editors save UTF-8 with one) is
+    not part of the job and is skipped.
+    """
     try:
-        data = tomllib.loads(text)
+        data = tomllib.loads(text.removeprefix("\ufeff"))
     except tomllib.TOMLDecodeError as error:
         raise JobError(source, [("", f"TOML syntax error: {error}")]) from None
     except RecursionError:  # tomllib recurses once per level of nested arrays or tables
