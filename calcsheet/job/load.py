@@ -75,8 +75,16 @@ def _problems(error: ValidationError) -> list[tuple[str, str]]:
     for item in error.errors():
         # A union (catalog name or a table of dimensions) reports each branch; keep the
         # branch that matches what was written.
+        branches = set(item["loc"])
+        if branches & {"str", "constrained-str"} and isinstance(item.get("input"), dict):
+            continue
+        section_branch = "SectionSpec" in branches and item["type"] == "model_type"
+        if section_branch and isinstance(item.get("input"), str):
+            continue
         location = tuple(
-            part for part in item["loc"] if part not in ("str", "SectionSpec", "function-after")
+            part
+            for part in item["loc"]
+            if part not in ("str", "constrained-str", "SectionSpec", "function-after")
         )
         seen.setdefault((key_path(location), _message(item)), None)
     return list(seen)

@@ -75,10 +75,10 @@ def _quantity(dimension: str, largest: Quantity | None = None) -> AfterValidator
 
 
 def _too_large(dimension: str, largest: Quantity) -> str:
-    si = largest.to("kN" if dimension == "force" else "kN*m")
+    us, si = ("kip", "kN") if dimension == "force" else ("kip*ft", "kN*m")
     return (
-        f"a {dimension} of at most {largest.m:,} {largest.units:~} "
-        f"({si.m:,.0f} {si.units:~}) in size; check the number and its unit"
+        f"a {dimension} of at most {largest.to(us).m:,.0f} {us} "
+        f"({largest.to(si).m:,.0f} {si}) in size; check the number and its unit"
     )
 
 
@@ -164,7 +164,7 @@ class SectionSpec(_Table):
     """A section by dimensions; which keys a kind needs is checked when it is built."""
 
     kind: SectionKind
-    name: str = ""
+    name: Text = ""
     b: Length | None = None
     d: Length | None = None
     D: Length | None = None
