@@ -114,8 +114,9 @@ def point_load(
 
     Give either ``magnitude`` and ``angle`` (the force points
     ``cos(angle)·from_axis + sin(angle)·toward_axis``), or ``components``.
-    A zero force, an angle without its unit, or parallel axes raise
-    :class:`InputError` naming the field (``load <name> angle`` ...).
+    A zero or negative magnitude (the angle gives the direction), an angle without
+    its unit or beyond a full turn either way (|angle| > 360 deg), or parallel axes
+    raise :class:`InputError` naming the field (``load <name> angle`` ...).
     """
     prefix = f"load {name}"
     z_q = parse_quantity(z, field=f"{prefix} z", dimension="length")

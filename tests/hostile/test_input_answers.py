@@ -17,6 +17,8 @@ from pathlib import Path
 import pytest
 
 from calcsheet.cli import main
+from calcsheet.errors import InputError
+from calcsheet.mechanics import point_load
 
 from .support import OUTRIGGER
 
@@ -287,3 +289,17 @@ def test_an_asce_load_type_in_an_en_1993_job_names_the_load(tmp_path, capsys) ->
     line = refused_at(status, message, "loads[0].type")
     assert "'sign bracket'" in line and "G, Q, S, W" in line  # calcsheet's EN 1990 types
     assert "loads[1].type" not in message  # the wind load's "W" is one of them
+
+
+# --- the same rules for a calc written in Python ------------------------------------------
+
+
+def test_point_load_refuses_an_angle_beyond_a_turn_and_a_negative_magnitude() -> None:
+    with pytest.raises(InputError) as raised:
+        point_load("P", z="10 in", magnitude="2 kip", angle="400 deg")
+    assert raised.value.field == "load P angle" and raised.value.value == "400 deg"
+    with pytest.raises(InputError) as raised:
+        point_load("P", z="10 in", magnitude="-2 kip", angle="-30 deg")
+    assert raised.value.field == "load P magnitude" and "150 deg" in str(raised.value)  # -30+180
+    load = point_load("P", z="10 in", magnitude="2 kip", angle="-360 deg", from_axis="+x")
+    assert load.Fx.m == pytest.approx(2.0)  # cos(-360 deg) = 1
