@@ -37,6 +37,9 @@ MAX_TEXT = 200
 # bound, 1e9 kip printed a utilization of 68 million and 1e300 kip overflowed.
 MAX_FORCE = Quantity(100_000, "kip")
 MAX_MOMENT = Quantity(1_000_000, "kip*ft")
+# The longest member: a cantilever of 1,000 ft (305 m) is beyond any this tool checks;
+# 1e30 in overflowed in the statics with a message naming no key.
+MAX_MEMBER_LENGTH = Quantity(1_000, "ft")
 
 # The unit a bare number most likely lacks, for the message that asks for it.
 _UNIT_EXAMPLES = {
@@ -75,7 +78,9 @@ def _quantity(dimension: str, largest: Quantity | None = None) -> AfterValidator
 
 
 def _too_large(dimension: str, largest: Quantity) -> str:
-    us, si = ("kip", "kN") if dimension == "force" else ("kip*ft", "kN*m")
+    us, si = {"force": ("kip", "kN"), "moment": ("kip*ft", "kN*m"), "length": ("ft", "m")}[
+        dimension
+    ]
     return (
         f"a {dimension} of at most {largest.to(us).m:,.0f} {us} "
         f"({largest.to(si).m:,.0f} {si}) in size; check the number and its unit"
@@ -89,6 +94,7 @@ Stress = Annotated[str, _quoted("stress"), _quantity("stress")]
 Angle = Annotated[str, _quoted("angle"), _quantity("angle")]
 LoadForce = Annotated[str, _quoted("force"), _quantity("force", MAX_FORCE)]
 LoadMoment = Annotated[str, _quoted("moment"), _quantity("moment", MAX_MOMENT)]
+MemberLength = Annotated[str, _quoted("length"), _quantity("length", MAX_MEMBER_LENGTH)]
 
 _ISO_DATE = re.compile(r"\d{4}-\d{2}-\d{2}")
 
@@ -184,7 +190,7 @@ class MemberSpec(_Table):
 
     name: str = Field(min_length=1, max_length=80)
     section: str | SectionSpec
-    length: Length
+    length: MemberLength
     stations: list[Length] = Field(default_factory=lambda: ["0 in"], min_length=1, max_length=20)
 
     @field_validator("stations")

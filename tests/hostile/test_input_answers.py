@@ -141,6 +141,13 @@ def test_a_moment_beyond_the_stated_bound_is_refused(tmp_path, capsys) -> None:
     assert "'2e6 kip*ft'" in line and "at most 1,000,000 kip*ft (1,355,818 kN*m)" in line
 
 
+def test_a_member_length_beyond_the_stated_bound_names_the_key(tmp_path, capsys) -> None:
+    # 1e30 in overflowed in the statics: "the values give numbers out of range", no key.
+    status, message = answer(tmp_path, capsys, ('length = "48 in"', 'length = "1e30 in"'))
+    line = refused_at(status, message, "member.length")
+    assert "'1e30 in'" in line and "at most 1,000 ft (305 m)" in line  # 0.3048 m/ft (NIST)
+
+
 @pytest.mark.parametrize(
     ("old", "new", "key"),
     [
