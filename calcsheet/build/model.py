@@ -316,20 +316,17 @@ def _check_load_types(job: Job, design: DesignBasis, problems: _Problems) -> Non
         if allowed is ASCE_TYPES
         else "with EN 1990, G is the permanent load and Q the variable load"
     )
-    entries = [("loads", spec) for spec in job.loads] + [("moments", spec) for spec in job.moments]
-    counters = {"loads": 0, "moments": 0}
-    for table, spec in entries:
-        index = counters[table]
-        counters[table] += 1
-        if spec.type not in allowed:
-            problems.found.append(
-                (
-                    f"{table}[{index}].type",
-                    f"{table[:-1]} {spec.name!r} has type {spec.type!r}, which the "
-                    f"{standard} combinations do not use; expected one of "
-                    f"{', '.join(allowed)} ({meaning})",
+    for table, specs in (("loads", job.loads), ("moments", job.moments)):
+        for index, spec in enumerate(specs):
+            if spec.type not in allowed:
+                problems.found.append(
+                    (
+                        f"{table}[{index}].type",
+                        f"{table[:-1]} {spec.name!r} has type {spec.type!r}, which the "
+                        f"{standard} combinations do not use; expected one of "
+                        f"{', '.join(allowed)} ({meaning})",
+                    )
                 )
-            )
 
 
 def _check_positions(

@@ -9,6 +9,7 @@ errors (a typo must not silently fall back to a default).
 from __future__ import annotations
 
 import datetime
+import math
 import re
 from typing import Annotated, Any, Literal
 
@@ -56,7 +57,12 @@ def _quoted(dimension: str) -> BeforeValidator:
 
     def check(value: Any) -> Any:
         if isinstance(value, (int, float)) and not isinstance(value, bool):
-            written = " or ".join(f'"{value:g} {unit}"' for unit in _UNIT_EXAMPLES[dimension])
+            # The number as typed when it is an ordinary one (not nan, not 400 digits).
+            number = str(value) if isinstance(value, int) else f"{value:g}"
+            not_finite = isinstance(value, float) and not math.isfinite(value)
+            if not_finite or len(number) > 20:
+                number = "15"
+            written = " or ".join(f'"{number} {unit}"' for unit in _UNIT_EXAMPLES[dimension])
             raise ValueError(f"a number needs its unit, in quotes: write {written}")
         return value
 
