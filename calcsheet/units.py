@@ -55,6 +55,11 @@ _NUMBER = r"[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d{1,3})?"
 _QUANTITY_TEXT = re.compile(rf"^\s*(?P<number>{_NUMBER})\s*(?P<unit>[^\d\s.+-].*?)?\s*$")
 _UNIT_TEXT = re.compile(r"^[A-Za-z_µμ°Ω·*/^()\d\s.-]{1,40}$")
 _NOT_FINITE = re.compile(r"^\s*[+-]?(nan|inf|infinity)\b", re.IGNORECASE)
+# The sheet prints negative numbers with the typographic minus (U+2212); a value
+# copied from a sheet back into a job file is read as the ASCII hyphen-minus.
+UNICODE_MINUS = "\u2212"
+# "4200 lb" for a force: the pound is a mass; the force unit is lbf (the pound-force).
+_POUND = re.compile(r"(?<![A-Za-z])lbs?(?![A-Za-z])")
 
 
 def dimension_example(dimension: str) -> str:
@@ -115,27 +120,34 @@ def _expected_text(dimension: str | None) -> str:
 def _parse_text(text: str, *, field: str, expected: str, dimension: str | None) -> pint.Quantity:
     if len(text) > 80:
         raise InputError(field, text, expected, "the entry is too long")
+    typed, text = text, text.replace(UNICODE_MINUS, "-")
     if _NOT_FINITE.match(text):
-        raise InputError(field, text, expected, "the number must be finite")
+        raise InputError(field, typed, expected, "the number must be finite")
     match = _QUANTITY_TEXT.match(text)
     if match is None:
-        raise InputError(field, text, expected, "not a number followed by a unit")
+        raise InputError(field, typed, expected, "not a number followed by a unit")
     number = float(match.group("number"))
     if not math.isfinite(number):
-        raise InputError(field, text, expected, "the number must be finite")
+        raise InputError(field, typed, expected, "the number must be finite")
     unit_text = (match.group("unit") or "").strip()
     if not unit_text:
         if dimension == "angle":
-            raise InputError(field, text, expected, "an angle needs its unit, deg or rad")
+            raise InputError(field, typed, expected, "an angle needs its unit, deg or rad")
         return Quantity(number)
-    return Quantity(number, parse_unit(unit_text, field=field, shown=text, expected=expected))
+    return Quantity(number, parse_unit(unit_text, field=field, shown=typed, expected=expected))
 
 
 def parse_unit(text: str, *, field: str, shown: object = None, expected: str = "") -> pint.Unit:
     """Read a unit such as ``"kip*ft"`` or ``"in^2"``; unknown units raise :class:`InputError`."""
     shown = text if shown is None else shown
     expected = expected or "a unit such as kip, kN, in, mm, ksi, MPa, kip*ft, kN*m, deg"
-    normalised = text.replace("°", "deg").replace("·", "*").replace("μ", "µ").strip()
+    normalised = (
+        text.replace("°", "deg")
+        .replace("·", "*")
+        .replace("μ", "µ")
+        .replace(UNICODE_MINUS, "-")
+        .strip()
+    )
     if normalised == "%":
         raise InputError(field, shown, expected, "percent is not accepted; give a plain number")
     if not _UNIT_TEXT.match(normalised):
@@ -166,7 +178,21 @@ def _require_dimension(
         return
     if not quantity.check(wanted):
         got = describe_dimension(quantity)
-        raise InputError(field, shown, expected, f"that is {_with_article(got)}, not a {dimension}")
+        problem = f"that is {_with_article(got)}, not a {dimension}"
+        if (quantity * ureg.standard_gravity).check(wanted):
+            problem = _mass_for_force_hint(shown, dimension)
+        raise InputError(field, shown, expected, problem)
+
+
+def _mass_for_force_hint(shown: object, dimension: str) -> str:
+    """Why "4200 lb" is not a force: lb is the pound (a mass), lbf the pound-force."""
+    if _POUND.search(str(shown)):
+        written = _POUND.sub("lbf", str(shown))
+        return f"lb is a mass (the pound), lbf a force (the pound-force): write {written!r}"
+    return (
+        f"that is a mass; give the {dimension} with a force unit (N, kN, lbf or kip); "
+        "a mass of 1 kg weighs 9.81 N"
+    )
 
 
 def _with_article(noun: str) -> str:
@@ -181,6 +207,8 @@ def describe_dimension(quantity: pint.Quantity | pint.Unit) -> str:
             return name
     if not dimensionality:
         return "dimensionless number"
+    if dimensionality == ureg.get_dimensionality("[mass]"):
+        return "mass"
     return str(dimensionality)
 
 

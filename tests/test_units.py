@@ -139,3 +139,52 @@ def test_unit_factors_for_typesetting():
     assert unit_factors(ureg.ksi) == (("ksi", 1.0),)
     assert unit_factors(ureg.parse_units("kN/m")) == (("kN", 1.0), ("m", -1.0))
     assert unit_factors(ureg.degree) == (("°", 1.0),)
+
+
+# --- careless entries (issue 16) ---------------------------------------------------------
+
+
+@pytest.mark.parametrize(
+    ("text", "dimension", "expected"),
+    [
+        ("\u22124 in", "length", -4.0),  # U+2212 MINUS SIGN, as the sheet prints negatives
+        ("\u22122.5e\u22123 kip", "force", -2.5e-3),
+        ("2 in^\u22121", None, 2.0),
+    ],
+)
+def test_the_unicode_minus_is_read_as_a_minus(text, dimension, expected):
+    # U+2212 MINUS SIGN (The Unicode Standard, Mathematical Operators block).
+    assert parse_quantity(text, field="e", dimension=dimension).m == expected
+
+
+def test_the_unicode_minus_in_an_exponent_gives_the_unit():
+    assert parse_quantity("2 in^\u22121", field="k").units == ureg.parse_units("1/in")
+
+
+@pytest.mark.parametrize(
+    ("text", "dimension", "written"),
+    [
+        ("4200 lb", "force", "'4200 lbf'"),
+        ("4200 lbs", "force", "'4200 lbf'"),
+        ("5 lb*ft", "moment", "'5 lbf*ft'"),
+        ("50 lb/in^2", "stress", "'50 lbf/in^2'"),
+    ],
+)
+def test_pounds_of_mass_for_a_force_say_to_write_lbf(text, dimension, written):
+    # NIST SP 811 (2008) B.8: pound (avoirdupois) is a unit of mass; pound-force of force.
+    with pytest.raises(InputError) as raised:
+        parse_quantity(text, field="P", dimension=dimension)
+    assert "lb is a mass" in str(raised.value) and written in str(raised.value)
+    assert raised.value.value == text  # quoted as typed
+
+
+def test_kilograms_for_a_force_say_to_give_a_force_unit():
+    # 1 kgf = 9.80665 N (NIST SP 811 (2008) B.8: kilogram-force to newton 9.806 65).
+    with pytest.raises(InputError) as raised:
+        parse_quantity("300 kg", field="P", dimension="force")
+    assert "that is a mass" in str(raised.value) and "kN" in str(raised.value)
+
+
+def test_a_length_for_a_force_keeps_its_plain_message():
+    with pytest.raises(InputError, match="that is a length, not a force"):
+        parse_quantity("6.5 in", field="P", dimension="force")

@@ -35,7 +35,23 @@ from calcsheet.sections import (
     round_hss,
     tee,
 )
-from calcsheet.units import parse_quantity
+from calcsheet.standards.combinations import ASCE_TYPES, EN_TYPES
+from calcsheet.units import Quantity, parse_quantity
+
+# The yield stress a job may give: the range of structural steels, from about
+# 24 ksi (ASTM A283 Gr. A; S185 is 185 MPa) to about 140 ksi (S960 is 960 MPa) (from
+# memory), with a margin. A value outside is a slip of unit or digit; 5000 ksi was
+# otherwise blamed on the section's web (slender for that F_y).
+FY_RANGE = (Quantity(20, "ksi"), Quantity(150, "ksi"))
+
+# Offsets of a load from the centroid (a bracket, a lug). A bracket several section
+# depths long is common practice, so a large offset is noted on the sheet for the
+# checker: beyond NOTED_OFFSET times the section's size in that direction. Beyond
+# both the member length and REFUSED_OFFSET times the section's larger outside
+# dimension, the bracket is a member of its own (or the number a slip: 1e6 in), and
+# the job is refused (common practice, no source).
+NOTED_OFFSET = 5.0
+REFUSED_OFFSET = 10.0
 
 _BUILDERS: dict[str, Callable[..., Section]] = {
     "plate": plate,
@@ -63,6 +79,7 @@ class MemberModel:
     revisions: tuple[Revision, ...]
     design: DesignBasis
     load_types: tuple[str, ...] = ()
+    notes: tuple[str, ...] = ()
 
 
 class _Problems:
@@ -71,11 +88,24 @@ class _Problems:
     def __init__(self) -> None:
         self.found: list[tuple[str, str]] = []
 
-    def attempt(self, path: str, make: Callable[[], object]) -> object | None:
+    def attempt(
+        self, path: str, make: Callable[[], object], keys: dict[str, str] | None = None
+    ) -> object | None:
+        """``make()``, or ``None`` with its problem recorded at ``path``.
+
+        ``keys`` maps the field names an :class:`InputError` may carry (``"load P
+        angle"``) to the job-file key under ``path`` (``"angle"``), so the problem is
+        reported at ``loads[0].angle`` with what was typed, not at ``loads[0]``.
+        """
         try:
             return make()
         except InputError as error:
-            self.found.append((path, str(error)))
+            key = (keys or {}).get(error.field)
+            if key is None:
+                self.found.append((path, str(error)))
+            else:
+                where = f"{path}.{key}" if key else path
+                self.found.append((where, str(error).removeprefix(f"{error.field}: ")))
             return None
         except ArithmeticError as error:  # dimensions of 1e-320 or 1e300: out of range
             reason = f"{type(error).__name__}: {error}"
@@ -145,7 +175,9 @@ def member_model(job: Job, *, source: str = "job") -> MemberModel:
                 toward_axis=spec.toward_axis,
             )
         load = problems.attempt(
-            f"loads[{index}]", lambda spec=spec, options=options: point_load(spec.name, **options)
+            f"loads[{index}]",
+            lambda spec=spec, options=options: point_load(spec.name, **options),
+            _load_keys("load", spec.name),
         )
         if load is not None:
             loads.append(load)
@@ -155,6 +187,7 @@ def member_model(job: Job, *, source: str = "job") -> MemberModel:
             lambda spec=spec: applied_moment(
                 spec.name, z=spec.z, Mx=spec.Mx, My=spec.My, Mz=spec.Mz
             ),
+            _load_keys("moment", spec.name),
         )
         if couple is not None:
             loads.append(couple)
@@ -170,8 +203,13 @@ def member_model(job: Job, *, source: str = "job") -> MemberModel:
             problems.attempt(
                 f"member.stations[{index}]", lambda s=station: validate_loads(length, loads, s)
             )
+    notes: list[str] = []
+    if section is not None and len(loads) == len(job.loads) + len(job.moments):
+        notes = _check_offsets(job, section, length, loads, problems)
     Fy, Fy_source = _yield_stress(job, problems)
     design = problems.attempt("check", lambda: design_basis(job))
+    if isinstance(design, DesignBasis):
+        _check_load_types(job, design, problems)
     if problems.found:
         raise JobError(source, problems.found)
     assert section is not None and Fy is not None  # no problems means both were built
@@ -195,7 +233,100 @@ def member_model(job: Job, *, source: str = "job") -> MemberModel:
         revisions=revisions,
         design=design,
         load_types=tuple([spec.type for spec in job.loads] + [spec.type for spec in job.moments]),
+        notes=tuple(notes),
     )
+
+
+def _load_keys(kind: str, name: str) -> dict[str, str]:
+    """The fields :func:`point_load` / :func:`applied_moment` name, as job-file keys."""
+    prefix = f"{kind} {name}"
+    keys = ["z", "ex", "ey", "magnitude", "angle", "from_axis", "toward_axis", "components"]
+    if kind == "moment":
+        keys = ["z", "Mx", "My", "Mz"]
+    mapping = {f"{prefix} {key}": key for key in keys}
+    mapping |= {f"{prefix} F{axis}": f"components[{i}]" for i, axis in enumerate("xyz")}
+    mapping[f"{prefix} direction"] = ""
+    return mapping
+
+
+def _check_offsets(
+    job: Job,
+    section: Section,
+    length: pint.Quantity,
+    loads: list[PointLoad | AppliedMoment],
+    problems: _Problems,
+) -> list[str]:
+    """Refuse an offset no bracket has; return notes for the sheet on long brackets.
+
+    The rule (NOTED_OFFSET, REFUSED_OFFSET above): an offset beyond both the member
+    length and 10 times the section's larger outside dimension is an error; one
+    beyond 5 times the section's size in its own direction (the depth for ey, the
+    width for ex) is printed in the design basis for the checker.
+    """
+    unit = section.length_unit
+    numbers = section.numeric(unit)
+    sizes = {
+        "ex": ("width", numbers.c_left + numbers.c_right),
+        "ey": ("depth", numbers.c_top + numbers.c_bottom),
+    }
+    largest = max(size for _, size in sizes.values())
+    limit = max(float(length.to(unit).m), REFUSED_OFFSET * largest)
+    notes = []
+    for index, (spec, load) in enumerate(zip(job.loads, loads, strict=False)):
+        if not isinstance(load, PointLoad):
+            continue
+        for key, (what, size) in sizes.items():
+            offset = float(getattr(load, key).to(unit).m)
+            typed = getattr(spec, key)
+            if abs(offset) > limit:
+                problems.found.append(
+                    (
+                        f"loads[{index}].{key}",
+                        f"got {typed!r}; expected an offset of at most {_shown(limit, unit)} "
+                        f"(the larger of the member length and {REFUSED_OFFSET:g} times the "
+                        f"section's larger outside dimension, {_shown(largest, unit)}). Check the "
+                        "number and its unit; a bracket that long is a member of its own: "
+                        "check it on its own sheet, and here give the force at the centroid "
+                        "with the bracket's moment as a [[moments]] entry",
+                    )
+                )
+            elif abs(offset) > NOTED_OFFSET * size:
+                notes.append(
+                    f"Load {spec.name!r} is applied {_shown(abs(offset), unit)} from the "
+                    f"centroid ({key} = {typed}), {abs(offset) / size:.3g} times the "
+                    f"section {what} ({_shown(size, unit)}): the bracket or lug that carries "
+                    "it, and its connection to the member, are not checked on this sheet."
+                )
+    return notes
+
+
+def _shown(value: float, unit: str) -> str:
+    """``60 in``: a length for a message, to 4 significant figures."""
+    return f"{Quantity(value, unit):.4g~P}"
+
+
+def _check_load_types(job: Job, design: DesignBasis, problems: _Problems) -> None:
+    """Each load's type must be one the combination standard uses; name the load."""
+    standard = design.combination_standard
+    if standard is None:
+        return
+    allowed = EN_TYPES if standard.startswith("EN") else ASCE_TYPES
+    meaning = (
+        "with ASCE 7, D is the dead load and L the live load"
+        if allowed is ASCE_TYPES
+        else "with EN 1990, G is the permanent load and Q the variable load"
+    )
+    for table, specs in (("loads", job.loads), ("moments", job.moments)):
+        for index, spec in enumerate(specs):
+            if spec.type not in allowed:
+                problems.found.append(
+                    (
+                        f"{table}[{index}].type",
+                        f"{table[:-1]} {spec.name!r} has type {spec.type!r}, which the "
+                        f"{standard} combinations do not use; expected one of "
+                        f"{', '.join(allowed)} ({meaning})",
+                    )
+                )
 
 
 def _check_positions(
@@ -230,7 +361,20 @@ def section_dimension_keys(kind: str) -> tuple[tuple[str, ...], tuple[str, ...]]
 def _yield_stress(job: Job, problems: _Problems) -> tuple[pint.Quantity | None, str]:
     material = job.material
     if material.Fy is not None:
-        return parse_quantity(material.Fy, field="material.Fy", dimension="stress"), "job file"
+        Fy = parse_quantity(material.Fy, field="material.Fy", dimension="stress")
+        low, high = FY_RANGE
+        if not low <= Fy <= high:
+            low_si, high_si = (bound.to("MPa").m for bound in FY_RANGE)
+            problems.found.append(
+                (
+                    "material.Fy",
+                    f"got {material.Fy!r}; expected a yield stress from {low.m:g} to "
+                    f"{high.m:g} ksi ({low_si:.0f} to {high_si:.0f} MPa), the range of "
+                    "structural steels: check the number and its unit",
+                )
+            )
+            return None, ""
+        return Fy, "job file"
     grade = problems.attempt("material.grade", lambda: find_grade(material.grade or ""))
     if grade is None:
         return None, ""

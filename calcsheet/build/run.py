@@ -159,6 +159,8 @@ def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str
         raise JobError(source, [("", str(error))]) from None
     for revision in model.revisions:
         sheet.add_revision(revision.mark, revision.date, revision.description, revision.by)
+    if model.notes:  # unusual but possible inputs (a long bracket), for the checker
+        sheet.add_basis("Notes on the inputs", *model.notes)
     return sheet
 
 

@@ -56,6 +56,13 @@ def _message(error: dict[str, Any]) -> str:
         entries = f"{bound:,} entr{'y' if bound == 1 else 'ies'}"
         limit = f"at most {entries}" if kind == "too_long" else f"at least {entries}"
         return f"{limit} allowed; this list has {context['actual_length']:,}"
+    if kind == "string_too_long" and isinstance(given, str):
+        # pydantic says "String should have at most 200 characters".
+        bound = error["ctx"]["max_length"]
+        return (
+            f"at most {bound:,} characters allowed; this text has {len(given):,} "
+            f"(it begins {given[:40]!r}): shorten it"
+        )
     message = str(error["msg"]).removeprefix("Value error, ")
     if isinstance(given, (str, int, float)) and not isinstance(given, bool):
         shown = repr(given) if len(repr(given)) <= 60 else repr(given)[:57] + "...'"
@@ -68,17 +75,29 @@ def _problems(error: ValidationError) -> list[tuple[str, str]]:
     for item in error.errors():
         # A union (catalog name or a table of dimensions) reports each branch; keep the
         # branch that matches what was written.
+        branches = set(item["loc"])
+        if branches & {"str", "constrained-str"} and isinstance(item.get("input"), dict):
+            continue
+        section_branch = "SectionSpec" in branches and item["type"] == "model_type"
+        if section_branch and isinstance(item.get("input"), str):
+            continue
         location = tuple(
-            part for part in item["loc"] if part not in ("str", "SectionSpec", "function-after")
+            part
+            for part in item["loc"]
+            if part not in ("str", "constrained-str", "SectionSpec", "function-after")
         )
         seen.setdefault((key_path(location), _message(item)), None)
     return list(seen)
 
 
 def parse_job(text: str, *, source: str = "job") -> Job:
-    """A job from TOML text; :class:`JobError` lists every problem with its key path."""
+    """A job from TOML text; :class:`JobError` lists every problem with its key path.
+
+    A byte-order mark at the start (some Windows editors save UTF-8 with one) is
+    not part of the job and is skipped.
+    """
     try:
-        data = tomllib.loads(text)
+        data = tomllib.loads(text.removeprefix("\ufeff"))
     except tomllib.TOMLDecodeError as error:
         raise JobError(source, [("", f"TOML syntax error: {error}")]) from None
     except RecursionError:  # tomllib recurses once per level of nested arrays or tables

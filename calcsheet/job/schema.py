@@ -8,32 +8,126 @@ errors (a typo must not silently fall back to a default).
 
 from __future__ import annotations
 
-from typing import Annotated, Literal
+import datetime
+import math
+import re
+from typing import Annotated, Any, Literal
 
-from pydantic import AfterValidator, BaseModel, ConfigDict, Field, model_validator
+from pydantic import (
+    AfterValidator,
+    BaseModel,
+    BeforeValidator,
+    ConfigDict,
+    Field,
+    field_validator,
+    model_validator,
+)
 
 from calcsheet.errors import InputError
-from calcsheet.units import parse_quantity
+from calcsheet.units import Quantity, parse_quantity
 
 FORMAT_VERSION = 1
 
+# Text printed in the title block, the sheet's title and the revision log: a line or
+# two on the page. Longer text is a paste gone wrong (it would run over pages).
+MAX_TEXT = 200
 
-def _quantity(dimension: str) -> AfterValidator:
+# The largest force and moment a job takes. A single member checked by this tool
+# does not see more (100,000 kip is 445 MN; 1,000,000 kip*ft is 1.36 GN*m), so a
+# larger value is a unit or a typing slip (common practice, no source). Without the
+# bound, 1e9 kip printed a utilization of 68 million and 1e300 kip overflowed.
+MAX_FORCE = Quantity(100_000, "kip")
+MAX_MOMENT = Quantity(1_000_000, "kip*ft")
+# The longest member: a cantilever of 1,000 ft (305 m) is beyond any this tool checks;
+# 1e30 in overflowed in the statics with a message naming no key.
+MAX_MEMBER_LENGTH = Quantity(1_000, "ft")
+
+# The unit a bare number most likely lacks, for the message that asks for it.
+_UNIT_EXAMPLES = {
+    "length": ("in", "mm"),
+    "force": ("kip", "kN"),
+    "moment": ("kip*ft", "kN*m"),
+    "stress": ("ksi", "MPa"),
+    "angle": ("deg",),
+}
+
+
+def _quoted(dimension: str) -> BeforeValidator:
+    """A bare number (``angle = 15``) is refused with the entry to write instead."""
+
+    def check(value: Any) -> Any:
+        if isinstance(value, (int, float)) and not isinstance(value, bool):
+            # The number as typed when it is an ordinary one (not nan, not 400 digits).
+            number = str(value) if isinstance(value, int) else f"{value:g}"
+            not_finite = isinstance(value, float) and not math.isfinite(value)
+            if not_finite or len(number) > 20:
+                number = "15"
+            written = " or ".join(f'"{number} {unit}"' for unit in _UNIT_EXAMPLES[dimension])
+            raise ValueError(f"a number needs its unit, in quotes: write {written}")
+        return value
+
+    return BeforeValidator(check)
+
+
+def _quantity(dimension: str, largest: Quantity | None = None) -> AfterValidator:
     def check(text: str) -> str:
         try:
-            parse_quantity(text, field="value", dimension=dimension)
+            value = parse_quantity(text, field="value", dimension=dimension)
         except InputError as error:
-            raise ValueError(f"expected {error.expected}") from None
+            problem = f"{error.problem}; " if error.problem else ""
+            raise ValueError(f"{problem}expected {error.expected}") from None
+        if largest is not None and abs(value) > largest:
+            raise ValueError(_too_large(dimension, largest))
         return text
 
     return AfterValidator(check)
 
 
-Length = Annotated[str, _quantity("length")]
-Force = Annotated[str, _quantity("force")]
-Moment = Annotated[str, _quantity("moment")]
-Stress = Annotated[str, _quantity("stress")]
-Angle = Annotated[str, _quantity("angle")]
+def _too_large(dimension: str, largest: Quantity) -> str:
+    us, si = {"force": ("kip", "kN"), "moment": ("kip*ft", "kN*m"), "length": ("ft", "m")}[
+        dimension
+    ]
+    return (
+        f"a {dimension} of at most {largest.to(us).m:,.0f} {us} "
+        f"({largest.to(si).m:,.0f} {si}) in size; check the number and its unit"
+    )
+
+
+Length = Annotated[str, _quoted("length"), _quantity("length")]
+Force = Annotated[str, _quoted("force"), _quantity("force")]
+Moment = Annotated[str, _quoted("moment"), _quantity("moment")]
+Stress = Annotated[str, _quoted("stress"), _quantity("stress")]
+Angle = Annotated[str, _quoted("angle"), _quantity("angle")]
+LoadForce = Annotated[str, _quoted("force"), _quantity("force", MAX_FORCE)]
+LoadMoment = Annotated[str, _quoted("moment"), _quantity("moment", MAX_MOMENT)]
+MemberLength = Annotated[str, _quoted("length"), _quantity("length", MAX_MEMBER_LENGTH)]
+
+_ISO_DATE = re.compile(r"\d{4}-\d{2}-\d{2}")
+
+
+def _date_text(value: Any) -> Any:
+    """A TOML date (``date = 2026-12-01``) as its ISO text; text is checked after."""
+    if isinstance(value, datetime.date) and not isinstance(value, datetime.datetime):
+        return value.isoformat()
+    return value
+
+
+def _iso_date(text: str) -> str:
+    if not text:
+        return text
+    try:
+        if _ISO_DATE.fullmatch(text) is None:
+            raise ValueError
+        datetime.date.fromisoformat(text)
+    except ValueError:
+        raise ValueError(
+            "a date as YYYY-MM-DD (year, month, day), such as 2026-12-01, or empty"
+        ) from None
+    return text
+
+
+Date = Annotated[str, BeforeValidator(_date_text), AfterValidator(_iso_date)]
+Text = Annotated[str, Field(max_length=MAX_TEXT)]
 
 
 # ASCE 7 types (D, L, Lr, S, R, W, E) and EN 1990 types (G, Q, S, W).
@@ -49,26 +143,28 @@ class _Table(BaseModel):
 class SheetSpec(_Table):
     """The sheet's title and the unit system every value is shown in."""
 
-    title: str = "Member combined stresses"
+    title: Text = "Member combined stresses"
     units: Literal["US", "SI"] = "US"
 
 
 class TitleBlockSpec(_Table):
-    project: str = ""
-    project_number: str = ""
-    subject: str = ""
-    calc_number: str = ""
-    prepared_by: str = ""
-    prepared_date: str = ""
-    checked_by: str = ""
-    checked_date: str = ""
+    """The title block on every page: text of at most MAX_TEXT characters, ISO dates."""
+
+    project: Text = ""
+    project_number: Text = ""
+    subject: Text = ""
+    calc_number: Text = ""
+    prepared_by: Text = ""
+    prepared_date: Date = ""
+    checked_by: Text = ""
+    checked_date: Date = ""
 
 
 class RevisionSpec(_Table):
     mark: str = Field(min_length=1, max_length=20)
-    date: str = ""
-    description: str = ""
-    by: str = ""
+    date: Date = ""
+    description: Text = ""
+    by: Text = ""
 
 
 SectionKind = Literal[
@@ -80,7 +176,7 @@ class SectionSpec(_Table):
     """A section by dimensions; which keys a kind needs is checked when it is built."""
 
     kind: SectionKind
-    name: str = ""
+    name: Text = ""
     b: Length | None = None
     d: Length | None = None
     D: Length | None = None
@@ -100,8 +196,25 @@ class MemberSpec(_Table):
 
     name: str = Field(min_length=1, max_length=80)
     section: str | SectionSpec
-    length: Length
+    length: MemberLength
     stations: list[Length] = Field(default_factory=lambda: ["0 in"], min_length=1, max_length=20)
+
+    @field_validator("stations")
+    @classmethod
+    def _each_station_once(cls, stations: list[str]) -> list[str]:
+        # Compared in one unit to 9 significant figures, so "12 in" repeats "1 ft".
+        seen: dict[str, int] = {}
+        for index, text in enumerate(stations):
+            inches = parse_quantity(text, field="station", dimension="length").to("in").m
+            key = f"{inches:.9g}"
+            if key in seen:
+                first = seen[key]
+                raise ValueError(
+                    f"stations[{index}] = {text!r} repeats stations[{first}] = "
+                    f"{stations[first]!r}; each station is checked once: remove the repeat"
+                )
+            seen[key] = index
+        return stations
 
 
 class MaterialSpec(_Table):
@@ -173,11 +286,11 @@ class LoadSpec(_Table):
     name: str = Field(min_length=1, max_length=80)
     type: LoadType = "D"
     z: Length
-    magnitude: Force | None = None
+    magnitude: LoadForce | None = None
     angle: Angle | None = None
     from_axis: str = "+z"
     toward_axis: str = "-y"
-    components: list[Force] | None = Field(default=None, min_length=3, max_length=3)
+    components: list[LoadForce] | None = Field(default=None, min_length=3, max_length=3)
     ex: Length = "0 in"
     ey: Length = "0 in"
 
@@ -197,9 +310,9 @@ class MomentSpec(_Table):
     name: str = Field(min_length=1, max_length=80)
     type: LoadType = "D"
     z: Length
-    Mx: Moment = "0 kip*ft"
-    My: Moment = "0 kip*ft"
-    Mz: Moment = "0 kip*ft"
+    Mx: LoadMoment = "0 kip*ft"
+    My: LoadMoment = "0 kip*ft"
+    Mz: LoadMoment = "0 kip*ft"
 
 
 class OutputSpec(_Table):

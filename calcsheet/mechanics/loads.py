@@ -28,6 +28,10 @@ from calcsheet.units import Quantity, parse_quantity
 QuantityInput = pint.Quantity | str | float | int
 
 AXES: tuple[str, ...] = ("x", "y", "z")
+
+# An angle beyond one turn either way is a slip ("400 deg" for "40 deg"), never a
+# direction an engineer means: it would be read as the angle less a turn.
+MAX_TURN_DEG = 360.0
 _SIGNED_AXES = {
     f"{sign}{axis}": (axis, 1.0 if sign == "+" else -1.0) for axis in AXES for sign in "+-"
 }
@@ -110,8 +114,9 @@ def point_load(
 
     Give either ``magnitude`` and ``angle`` (the force points
     ``cos(angle)·from_axis + sin(angle)·toward_axis``), or ``components``.
-    A zero force, an angle without its unit, or parallel axes raise
-    :class:`InputError` naming the field (``load <name> angle`` ...).
+    A zero or negative magnitude (the angle gives the direction), an angle without
+    its unit or beyond a full turn either way (|angle| > 360 deg), or parallel axes
+    raise :class:`InputError` naming the field (``load <name> angle`` ...).
     """
     prefix = f"load {name}"
     z_q = parse_quantity(z, field=f"{prefix} z", dimension="length")
@@ -149,6 +154,25 @@ def point_load(
             f"{prefix} magnitude", magnitude, "a non-zero force", "zero has no direction"
         )
     theta = parse_quantity(angle, field=f"{prefix} angle", dimension="angle")
+    degrees = float(theta.to("deg").m)
+    if abs(degrees) > MAX_TURN_DEG:
+        within = math.fmod(degrees, MAX_TURN_DEG)
+        raise InputError(
+            f"{prefix} angle",
+            angle,
+            f"an angle from -{MAX_TURN_DEG:g} to {MAX_TURN_DEG:g} deg",
+            f"more than a full turn; it would be taken as {within:.6g} deg: write that if meant",
+        )
+    if size.m < 0.0:
+        # A negative magnitude silently reverses the force; the direction is the angle's.
+        reversed_angle = degrees + 180.0 if degrees + 180.0 <= MAX_TURN_DEG else degrees - 180.0
+        raise InputError(
+            f"{prefix} magnitude",
+            magnitude,
+            "a positive force; the angle gives its direction",
+            f"a negative magnitude reverses the force: to reverse it, write the magnitude "
+            f"without its sign and the angle {reversed_angle:.6g} deg (the angle ± 180 deg)",
+        )
     first, first_sign = parse_signed_axis(from_axis, field=f"{prefix} from_axis")
     second, second_sign = parse_signed_axis(toward_axis, field=f"{prefix} toward_axis")
     if first == second:

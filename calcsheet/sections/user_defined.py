@@ -10,14 +10,15 @@ labels are as described in :mod:`calcsheet.sections.shapes` and
 
 from __future__ import annotations
 
-from collections.abc import Sequence
+from collections.abc import Iterator, Sequence
+from contextlib import contextmanager
 
 import pint
 
 from calcsheet.errors import InputError
 from calcsheet.sections import shapes
 from calcsheet.sections.section import Section, build_section
-from calcsheet.units import parse_quantity
+from calcsheet.units import Quantity, parse_quantity
 
 LengthInput = pint.Quantity | str | float | int
 
@@ -33,6 +34,25 @@ def _lengths(**given: LengthInput | None) -> tuple[str, dict[str, pint.Quantity]
     return unit, {field: quantity.to(unit) for field, quantity in parsed.items()}
 
 
+@contextmanager
+def _as_typed(
+    given: dict[str, LengthInput | None], dims: dict[str, pint.Quantity]
+) -> Iterator[None]:
+    """Quote a dimension in a message as it was typed ("2.1 in"), not as converted."""
+    try:
+        yield
+    except InputError as error:
+        value = dims.get(error.field)
+        typed = given.get(error.field)
+        if value is None or typed is None or error.value != f"{value.m:g} {value.units}":
+            raise
+        raise InputError(error.field, typed, error.expected, error.problem) from None
+
+
+def _short(value: float, unit: str) -> str:
+    return f"{Quantity(value, unit):g~P}"
+
+
 def _floats(dimensions: dict[str, pint.Quantity]) -> dict[str, float]:
     return {field: float(quantity.magnitude) for field, quantity in dimensions.items()}
 
@@ -45,31 +65,52 @@ def _section(name: str, family: str, unit: str, dimensions, shape) -> Section:
 
 def plate(b: LengthInput, d: LengthInput, *, name: str = "plate") -> Section:
     """Solid rectangle: width ``b`` (horizontal) by depth ``d`` (vertical)."""
-    unit, dims = _lengths(b=b, d=d)
+    given = {"b": b, "d": d}
+    unit, dims = _lengths(**given)
     value = _floats(dims)
-    return _section(name, "plate", unit, dims, shapes.rectangle(value["b"], value["d"], unit))
+    with _as_typed(given, dims):
+        shape = shapes.rectangle(value["b"], value["d"], unit)
+    return _section(name, "plate", unit, dims, shape)
 
 
 def round_bar(D: LengthInput, *, name: str = "round bar") -> Section:
     """Solid round bar of diameter ``D``."""
-    unit, dims = _lengths(D=D)
-    return _section(name, "round bar", unit, dims, shapes.round_bar(_floats(dims)["D"], unit))
+    given = {"D": D}
+    unit, dims = _lengths(**given)
+    with _as_typed(given, dims):
+        shape = shapes.round_bar(_floats(dims)["D"], unit)
+    return _section(name, "round bar", unit, dims, shape)
 
 
 def round_hss(OD: LengthInput, t: LengthInput, *, name: str = "round HSS") -> Section:
     """Round HSS or pipe; ``t`` is the design wall thickness."""
-    unit, dims = _lengths(OD=OD, t=t)
+    given = {"OD": OD, "t": t}
+    unit, dims = _lengths(**given)
     value = _floats(dims)
-    return _section(name, "round HSS", unit, dims, shapes.round_tube(value["OD"], value["t"], unit))
+    with _as_typed(given, dims):
+        shape = shapes.round_tube(value["OD"], value["t"], unit)
+    return _section(name, "round HSS", unit, dims, shape)
 
 
 def rectangular_hss(
     H: LengthInput, B: LengthInput, t: LengthInput, *, name: str = "rectangular HSS"
 ) -> Section:
     """Rectangular HSS, height ``H`` by width ``B``, design wall ``t``, corner radii 2t / t."""
-    unit, dims = _lengths(H=H, B=B, t=t)
+    given = {"H": H, "B": B, "t": t}
+    unit, dims = _lengths(**given)
     value = _floats(dims)
-    shape = shapes.rectangular_tube(value["H"], value["B"], value["t"], unit)
+    smaller = min(value["H"], value["B"])
+    if min(value.values()) > 0 and not 4 * value["t"] < smaller:
+        # The outside corners have radius 2t: two of them across the smaller side.
+        raise InputError(
+            "t",
+            t,
+            f"a wall thinner than a quarter of the smaller outside dimension "
+            f"({_short(smaller, unit)} / 4 = {_short(smaller / 4, unit)})",
+            "with outside corner radii of 2t the section outline would not close",
+        )
+    with _as_typed(given, dims):
+        shape = shapes.rectangular_tube(value["H"], value["B"], value["t"], unit)
     return _section(name, "rectangular HSS", unit, dims, shape)
 
 
@@ -84,17 +125,28 @@ def i_shape(
     name: str = "I-shape",
 ) -> Section:
     """I-shape; give ``bf_bottom``/``tf_bottom`` for a bottom flange unlike the top one."""
-    unit, dims = _lengths(d=d, bf=bf, tw=tw, tf=tf, bf_bottom=bf_bottom, tf_bottom=tf_bottom)
+    given = {"d": d, "bf": bf, "tw": tw, "tf": tf, "bf_bottom": bf_bottom, "tf_bottom": tf_bottom}
+    unit, dims = _lengths(**given)
     value = _floats(dims)
-    shape = shapes.i_shape(
-        value["d"],
-        value["bf"],
-        value["tw"],
-        value["tf"],
-        unit,
-        bottom_flange_width=value.get("bf_bottom"),
-        bottom_flange=value.get("tf_bottom"),
-    )
+    bottom = value.get("tf_bottom")
+    if bottom is not None and min(value.values()) > 0 and not value["tf"] + bottom < value["d"]:
+        raise InputError(
+            "tf",
+            tf,
+            f"less than d - tf_bottom = {_short(value['d'] - bottom, unit)} "
+            f"(with tf_bottom = {tf_bottom}, both flanges together thinner than the depth d)",
+            "the section outline would not close",
+        )
+    with _as_typed(given, dims):
+        shape = shapes.i_shape(
+            value["d"],
+            value["bf"],
+            value["tw"],
+            value["tf"],
+            unit,
+            bottom_flange_width=value.get("bf_bottom"),
+            bottom_flange=bottom,
+        )
     return _section(name, "I-shape", unit, dims, shape)
 
 
@@ -102,28 +154,33 @@ def channel(
     d: LengthInput, bf: LengthInput, tw: LengthInput, tf: LengthInput, *, name: str = "channel"
 ) -> Section:
     """Channel, back of web on the left."""
-    unit, dims = _lengths(d=d, bf=bf, tw=tw, tf=tf)
+    given = {"d": d, "bf": bf, "tw": tw, "tf": tf}
+    unit, dims = _lengths(**given)
     value = _floats(dims)
-    shape = shapes.channel(value["d"], value["bf"], value["tw"], value["tf"], unit)
+    with _as_typed(given, dims):
+        shape = shapes.channel(value["d"], value["bf"], value["tw"], value["tf"], unit)
     return _section(name, "channel", unit, dims, shape)
 
 
 def angle(d: LengthInput, b: LengthInput, t: LengthInput, *, name: str = "angle") -> Section:
     """Angle with vertical leg ``d`` and horizontal leg ``b``, heel at the lower left."""
-    unit, dims = _lengths(d=d, b=b, t=t)
+    given = {"d": d, "b": b, "t": t}
+    unit, dims = _lengths(**given)
     value = _floats(dims)
-    return _section(
-        name, "angle", unit, dims, shapes.angle(value["d"], value["b"], value["t"], unit)
-    )
+    with _as_typed(given, dims):
+        shape = shapes.angle(value["d"], value["b"], value["t"], unit)
+    return _section(name, "angle", unit, dims, shape)
 
 
 def tee(
     d: LengthInput, bf: LengthInput, tw: LengthInput, tf: LengthInput, *, name: str = "tee"
 ) -> Section:
     """Tee, flange on top, stem down."""
-    unit, dims = _lengths(d=d, bf=bf, tw=tw, tf=tf)
+    given = {"d": d, "bf": bf, "tw": tw, "tf": tf}
+    unit, dims = _lengths(**given)
     value = _floats(dims)
-    shape = shapes.tee(value["d"], value["bf"], value["tw"], value["tf"], unit)
+    with _as_typed(given, dims):
+        shape = shapes.tee(value["d"], value["bf"], value["tw"], value["tf"], unit)
     return _section(name, "tee", unit, dims, shape)
 
 

@@ -46,6 +46,7 @@ PAYLOADS = [
 SAFE_NAME = re.compile(r"^[A-Za-z0-9_-][A-Za-z0-9._-]*$")
 SVG = re.compile(r"<svg\b.*?</svg>", re.DOTALL)
 MARK_LENGTH = 20  # the schema's limit for a revision mark
+ISO_DATE = "2026-12-01"
 
 
 def hostile_job_text(payload: str) -> str:
@@ -53,9 +54,10 @@ def hostile_job_text(payload: str) -> str:
     data = starter_data()
     data["sheet"]["title"] = payload
     for key in data["title_block"]:
-        data["title_block"][key] = payload
+        # Dates must be YYYY-MM-DD (a payload there is refused: test_input_answers.py).
+        data["title_block"][key] = ISO_DATE if key.endswith("_date") else payload
     data["revisions"] = [
-        {"mark": payload[:MARK_LENGTH], "date": payload, "description": payload, "by": payload}
+        {"mark": payload[:MARK_LENGTH], "date": ISO_DATE, "description": payload, "by": payload}
     ]
     data["member"]["name"] = payload
     data["member"]["section"] = {

@@ -17,6 +17,7 @@ from calcsheet.build.batch import MAX_MEMBERS, members_from_toml, run_batch
 from calcsheet.cli import main
 from calcsheet.job import JobError, job_from_data, read_job
 from calcsheet.job.load import MAX_JOB_BYTES
+from calcsheet.job.schema import MAX_TEXT
 
 from .support import no_hang, starter_data, toml_text
 
@@ -105,18 +106,30 @@ def test_a_50_mb_batch_table_is_refused_without_being_read(tmp_path, monkeypatch
     assert main(["batch", str(path), "--out", str(tmp_path / "out")]) == 2
 
 
-def test_100k_characters_in_every_free_text_field_build_and_write(tmp_path: Path) -> None:
-    long = "Wrap me " * 12_500  # 100,000 characters
-    data = starter_data()
-    data["sheet"]["title"] = long
-    for key in data["title_block"]:
-        data["title_block"][key] = long
-    data["revisions"][0].update(description=long, date=long, by=long)
-    data["member"]["section"] = {"kind": "round bar", "D": "2 in", "name": long}
-    with no_hang(240):
-        written = write_outputs(build_sheets(job_from_data(data)), tmp_path)
-    pdf = next(path for path in written if path.suffix == ".pdf")
-    pages = pypdf.PdfReader(io.BytesIO(pdf.read_bytes())).pages
-    assert len(pages) >= 1
-    html = next(path for path in written if path.suffix == ".html").read_text(encoding="utf-8")
-    assert long.strip() in html
+def test_free_text_at_its_limit_builds_and_writes_and_100k_characters_are_refused(
+    tmp_path: Path,
+) -> None:
+    # Text printed in the title block and the revision log is limited to MAX_TEXT
+    # characters (issue 16: a 10,000-character title made five pages of title).
+    keys = ["sheet.title", "revisions[0].description", "revisions[0].by", "member.section.name"]
+    keys += [f"title_block.{key}" for key in starter_data()["title_block"] if "date" not in key]
+    for size in (MAX_TEXT, 100_000):
+        long = ("Wrap me " * (size // 8 + 1))[:size].strip()
+        data = starter_data()
+        data["sheet"]["title"] = long
+        for key in data["title_block"]:
+            data["title_block"][key] = "2026-12-01" if key.endswith("_date") else long
+        data["revisions"][0].update(description=long, by=long)
+        data["member"]["section"] = {"kind": "round bar", "D": "2 in", "name": long}
+        if size > MAX_TEXT:
+            problems = refused(data)
+            assert set(problems) == set(keys)
+            assert all(f"at most {MAX_TEXT} characters" in text for text in problems.values())
+            continue
+        with no_hang(240):
+            written = write_outputs(build_sheets(job_from_data(data)), tmp_path)
+        pdf = next(path for path in written if path.suffix == ".pdf")
+        pages = pypdf.PdfReader(io.BytesIO(pdf.read_bytes())).pages
+        assert len(pages) >= 1
+        html = next(path for path in written if path.suffix == ".html").read_text(encoding="utf-8")
+        assert long in html
