@@ -1,19 +1,28 @@
 """Write a sheet's HTML and PDF so that a failure never leaves a half-written file.
 
 Each output is written to a temporary file in the same folder and renamed into
-place only when complete; the previous file stays until then.
+place only when complete; the previous file stays until then. Files get the mode
+the process umask gives a new file (0644 under umask 022), as other tools' files
+do, not the private 0600 of a temporary file. Ctrl-C while the files of a set are
+being renamed into place takes effect once the set is complete, so a set is never
+half old, half new. :func:`folder_lock` keeps two builds from writing into one
+folder at once.
 """
 
 from __future__ import annotations
 
 import atexit
+import contextlib
 import errno
 import glob
 import os
 import shutil
+import signal
+import sys
 import tempfile
 import threading
 import time
+from collections.abc import Callable, Iterator
 from functools import lru_cache
 from pathlib import Path
 from typing import Any
@@ -80,32 +89,35 @@ def remove_stale_parts(path: Path) -> None:
             pass  # another build is using it, or it is already gone
 
 
-def write_atomically(path: Path, data: bytes) -> None:
+def write_atomically(path: Path, data: bytes, *, mode: int | None = None) -> None:
     """Write ``data`` to ``path`` through a temporary file renamed into place.
 
     A failure (disk full, read-only folder) raises :class:`ExportError` saying
-    which file and why; the previous file at ``path`` is left as it was.
+    which file and why; the previous file at ``path`` is left as it was. ``mode``:
+    the file's permission bits (default: what the umask gives a new file).
     """
-    write_all_atomically([(Path(path), data)])
+    write_all_atomically([(Path(path), data)], mode=mode)
 
 
-def write_all_atomically(files: list[tuple[Path, bytes]]) -> None:
+def write_all_atomically(files: list[tuple[Path, bytes]], *, mode: int | None = None) -> None:
     """Write several files as one: every one is written in full before any replaces its
     predecessor, so a failure (disk full mid-way) leaves all the previous files as they were.
     """
     staged: list[tuple[str, Path]] = []
     current = Path(".")
+    permissions = new_file_mode() if mode is None else mode
     try:
         for path, data in files:
             current = Path(path)
-            staged.append((_staged_copy(current, data), current))
+            staged.append((_staged_copy(current, data, permissions), current))
         for _, path in staged:  # a rename that would fail is found before any is made
             current = path
             if path.is_dir():
                 raise IsADirectoryError(errno.EISDIR, os.strerror(errno.EISDIR), str(path))
-        for temporary, path in staged:
-            current = path
-            os.replace(temporary, path)
+        with _interrupts_deferred():
+            for temporary, path in staged:
+                current = path
+                os.replace(temporary, path)
     except OSError as error:
         raise ExportError(_cannot_write(current, error)) from None
     finally:
@@ -113,7 +125,39 @@ def write_all_atomically(files: list[tuple[Path, bytes]]) -> None:
             Path(temporary).unlink(missing_ok=True)  # already renamed, or abandoned
 
 
-def _staged_copy(path: Path, data: bytes) -> str:
+_UMASK_LOCK = threading.Lock()
+
+
+def new_file_mode() -> int:
+    """The permission bits a new file gets from the process umask (0o644 under umask 022)."""
+    with _UMASK_LOCK:  # reading the umask means setting it: never two threads at once
+        umask = os.umask(0o022)
+        os.umask(umask)
+    return 0o666 & ~umask
+
+
+@contextlib.contextmanager
+def _interrupts_deferred() -> Iterator[None]:
+    """Hold Ctrl-C (SIGINT) until the block ends, so a set of renames is never cut in two.
+
+    The signal stays pending and is delivered (as KeyboardInterrupt) when the block
+    ends. Only the main thread receives it; elsewhere, or without POSIX signal
+    masks, the block runs as is.
+    """
+    can_block = hasattr(signal, "pthread_sigmask") and (
+        threading.current_thread() is threading.main_thread()
+    )
+    if not can_block:
+        yield
+        return
+    previous = signal.pthread_sigmask(signal.SIG_BLOCK, {signal.SIGINT})
+    try:
+        yield
+    finally:
+        signal.pthread_sigmask(signal.SIG_SETMASK, previous)
+
+
+def _staged_copy(path: Path, data: bytes, mode: int = 0o644) -> str:
     """``data`` written and flushed to a temporary file beside ``path``; its name."""
     remove_stale_parts(path)
     handle, temporary = tempfile.mkstemp(prefix=f".{path.name}.", suffix=".part", dir=path.parent)
@@ -121,11 +165,104 @@ def _staged_copy(path: Path, data: bytes) -> str:
         with os.fdopen(handle, "wb") as stream:
             stream.write(data)
             stream.flush()
+            # mkstemp makes the file private (0600); the output is for colleagues too.
+            if hasattr(os, "fchmod"):
+                os.fchmod(stream.fileno(), mode)
             os.fsync(stream.fileno())
     except BaseException:
         Path(temporary).unlink(missing_ok=True)
         raise
+    if not hasattr(os, "fchmod"):  # Windows: chmod by name (only the read-only bit counts)
+        os.chmod(temporary, mode)
     return temporary
+
+
+# How long a build waits for another one writing into the same folder before giving up.
+LOCK_WAIT_SECONDS = 300.0
+LOCK_NAME = ".calcsheet-writing.lock"
+
+
+@contextlib.contextmanager
+def folder_lock(
+    folder: Path,
+    *,
+    wait_seconds: float | None = None,
+    waiting: Callable[[str], None] | None = None,
+) -> Iterator[None]:
+    """Hold the output folder's lock while writing: a second build waits, then gives up.
+
+    The lock is an advisory ``flock`` on a hidden file in the folder; the system
+    releases it when the process ends, however it ends, so a killed build never
+    leaves the folder locked. The file is removed when the lock is released.
+    ``waiting`` is told once, with a message, when the build has to wait.
+    """
+    try:
+        import fcntl
+    except ImportError:  # not POSIX: no advisory locks; builds are not serialised
+        yield
+        return
+    limit = LOCK_WAIT_SECONDS if wait_seconds is None else wait_seconds
+    path = Path(folder) / LOCK_NAME
+    deadline = time.monotonic() + limit
+    told = False
+    while True:
+        try:
+            descriptor = os.open(path, os.O_RDWR | os.O_CREAT, 0o666)
+        except OSError:
+            # A folder that takes no new file takes no output either: the write that
+            # follows says so, naming the output rather than this lock file.
+            yield
+            return
+        try:
+            fcntl.flock(descriptor, fcntl.LOCK_EX | fcntl.LOCK_NB)
+        except OSError:
+            holder = _lock_holder(path)
+            os.close(descriptor)
+            if time.monotonic() >= deadline:
+                raise ExportError(
+                    f"another calcsheet build{holder} has been writing into {folder} for "
+                    f"over {limit:g} s (lock file {path}); nothing was written: try again "
+                    "when it has finished"
+                ) from None
+            if not told:
+                told = True
+                message = (
+                    f"waiting for another calcsheet build{holder} writing into {folder} "
+                    f"(lock file {path})"
+                )
+                (waiting or _say_waiting)(message)
+            time.sleep(0.1)
+            continue
+        # The holder before us may have removed the file after we opened it: then our
+        # lock is on a file nobody else sees, so try again on the current one.
+        try:
+            same = os.fstat(descriptor).st_ino == os.stat(path).st_ino
+        except OSError:
+            same = False
+        if not same:
+            os.close(descriptor)
+            continue
+        break
+    try:
+        os.ftruncate(descriptor, 0)
+        os.write(descriptor, f"{os.getpid()}\n".encode())
+        yield
+    finally:
+        with contextlib.suppress(OSError):
+            path.unlink()
+        os.close(descriptor)  # releases the lock
+
+
+def _lock_holder(path: Path) -> str:
+    try:
+        pid = path.read_text(encoding="ascii").strip()
+    except (OSError, UnicodeDecodeError):
+        return ""
+    return f" (process {pid})" if pid.isdigit() else ""
+
+
+def _say_waiting(message: str) -> None:
+    print(message, file=sys.stderr, flush=True)
 
 
 def make_folder(folder: Path) -> None:
