@@ -160,7 +160,13 @@ def _new(arguments: argparse.Namespace) -> int:
         with open(path, "x", encoding="utf-8") as handle:
             handle.write(STARTER)
     except FileExistsError:
-        print(f"{path}: already exists; not overwritten", file=sys.stderr)
+        if path.is_dir():
+            print(
+                f"{path}: is a folder; give a file name such as {path / 'job.toml'}",
+                file=sys.stderr,
+            )
+        else:
+            print(f"{path}: already exists; not overwritten", file=sys.stderr)
         return BAD_INPUT
     except FileNotFoundError:
         print(
@@ -168,9 +174,6 @@ def _new(arguments: argparse.Namespace) -> int:
             "(mkdir) or give a path in an existing folder",
             file=sys.stderr,
         )
-        return BAD_INPUT
-    except IsADirectoryError:
-        print(f"{path}: is a folder; give a file name such as {path / 'job.toml'}", file=sys.stderr)
         return BAD_INPUT
     except (OSError, ValueError) as error:  # ValueError: a NUL byte in the name
         reason = getattr(error, "strerror", None) or str(error)
