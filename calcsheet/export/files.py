@@ -140,21 +140,23 @@ def new_file_mode() -> int:
 def _interrupts_deferred() -> Iterator[None]:
     """Hold Ctrl-C (SIGINT) until the block ends, so a set of renames is never cut in two.
 
-    The signal stays pending and is delivered (as KeyboardInterrupt) when the block
-    ends. Only the main thread receives it; elsewhere, or without POSIX signal
-    masks, the block runs as is.
+    The handler is swapped for one that only notes the signal; when the block ends
+    the signal is raised again with the previous handler in place (KeyboardInterrupt
+    by default). Blocking the signal with a thread mask would not do: the PDF
+    engine's threads would still take it. Outside the main thread, where no handler
+    can be set, the block runs as is.
     """
-    can_block = hasattr(signal, "pthread_sigmask") and (
-        threading.current_thread() is threading.main_thread()
-    )
-    if not can_block:
+    if threading.current_thread() is not threading.main_thread():
         yield
         return
-    previous = signal.pthread_sigmask(signal.SIG_BLOCK, {signal.SIGINT})
+    noted: list[int] = []
+    previous = signal.signal(signal.SIGINT, lambda number, frame: noted.append(number))
     try:
         yield
     finally:
-        signal.pthread_sigmask(signal.SIG_SETMASK, previous)
+        signal.signal(signal.SIGINT, previous)
+        if noted:
+            signal.raise_signal(signal.SIGINT)
 
 
 def _staged_copy(path: Path, data: bytes, mode: int = 0o644) -> str:
