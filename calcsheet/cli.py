@@ -204,16 +204,19 @@ def _compare(arguments: argparse.Namespace) -> int:
     return OK
 
 
-def _read_table(path: Path, *, limit: int) -> str:
+def _read_text(path: Path, *, limit: int, kind: str) -> str:
+    """A batch table or base job as text (a byte-order mark is dropped); JobError if not."""
     from calcsheet.job import JobError
 
     try:
         size = path.stat().st_size
         if size > limit:
-            raise JobError(str(path), [("", f"{size:,} bytes; a batch table is at most {limit:,}")])
+            raise JobError(str(path), [("", f"{size:,} bytes; a {kind} is at most {limit:,}")])
         return path.read_text(encoding="utf-8-sig")
+    except FileNotFoundError:
+        raise JobError(str(path), [("", "no such file")]) from None
     except IsADirectoryError:
-        raise JobError(str(path), [("", "this is a folder, not a batch table")]) from None
+        raise JobError(str(path), [("", f"this is a folder, not a {kind}")]) from None
     except (OSError, UnicodeDecodeError) as error:
         reason = getattr(error, "strerror", None) or str(error)
         raise JobError(str(path), [("", f"cannot read it: {reason}")]) from None
@@ -234,13 +237,13 @@ def _batch(arguments: argparse.Namespace) -> int:
     from calcsheet.job.load import MAX_JOB_BYTES
 
     table: Path = arguments.table
-    text = _read_table(table, limit=MAX_TABLE_BYTES)
+    text = _read_text(table, limit=MAX_TABLE_BYTES, kind="batch table")
     base = None
     if arguments.base is not None:
         import tomllib
 
         try:
-            base = tomllib.loads(_read_table(arguments.base, limit=MAX_JOB_BYTES))
+            base = tomllib.loads(_read_text(arguments.base, limit=MAX_JOB_BYTES, kind="job file"))
         except tomllib.TOMLDecodeError as error:
             raise JobError(str(arguments.base), [("", f"TOML syntax error: {error}")]) from None
     if table.suffix.lower() == ".csv":

@@ -252,3 +252,25 @@ def test_fewer_than_one_worker_is_refused(workers: int, tmp_path: Path) -> None:
     members = members_from_csv("member.name\nK1\n", _base(), source="k.csv")
     with pytest.raises(InputError, match="workers: got .*at least 1"):
         run_batch(members, tmp_path, source="k.csv", workers=workers)
+
+
+def _readme_block(language: str, after: str) -> str:
+    readme = (Path(__file__).resolve().parents[2] / "README.md").read_text(encoding="utf-8")
+    start = readme.index(f"```{language}\n", readme.index(after)) + len(language) + 4
+    return readme[start : readme.index("```", start)]
+
+
+def test_the_readme_batch_examples_build(tmp_path: Path) -> None:
+    csv_members = members_from_csv(
+        _readme_block("csv", "A CSV table names"), _base(), source="readme.csv"
+    )
+    toml_members = members_from_toml(
+        _readme_block("toml", "A TOML batch has"), source="readme.toml", base=_base()
+    )
+    for folder, members in (("csv", csv_members), ("toml", toml_members)):
+        outcomes = run_batch(members, tmp_path / folder, source="readme", workers=1)
+        assert [outcome.ok for outcome in outcomes] == [True, True], outcomes
+    page = (tmp_path / "toml" / "OA-2-revA.html").read_text(encoding="utf-8")
+    assert "Outrigger arm OA-2: combined stresses" in page and "S-OA-2" in page
+    page = (tmp_path / "csv" / "OA-2-revA.html").read_text(encoding="utf-8")
+    assert "Outrigger arm OA-2" in page and "Davit arm OA-2" in page
