@@ -415,8 +415,11 @@ def build_member(
 
     member = _personalized(_as_member(0, member))
     name = member.name or "?"
-    section = member.data.get("member", {}).get("section", "")
-    section_text = section if isinstance(section, str) else str(section.get("kind", ""))
+    table = member.data.get("member")
+    section = table.get("section", "") if isinstance(table, dict) else ""
+    if isinstance(section, dict):
+        section = section.get("kind", "")
+    section_text = section if isinstance(section, str) else ""
     where = f"{source} {member.where}".strip() if member.where.startswith("row") else source
     label = f"{where}: member {name}"
     try:
