@@ -70,7 +70,7 @@ class BuildResult:
     @property
     def governing_utilization(self) -> float:
         values = [
-            check.utilization
+            check.worst_utilization
             for built in self.sheets
             for check in built.sheet.checks
             if check.utilization is not None
@@ -83,10 +83,10 @@ class BuildResult:
             for built in self.sheets
             if built.sheet.governing_check() is not None
         ]
-        return max(governing, key=lambda pair: pair[1].utilization, default=None)
+        return max(governing, key=lambda pair: pair[1].worst_utilization, default=None)
 
     def governing_text(self) -> str:
-        """The governing check and where it governs (station too, with several stations)."""
+        """The governing check, where and under which case it governs (and the station)."""
         found = self._governing()
         if found is None:
             return ""
@@ -95,7 +95,8 @@ class BuildResult:
         where = f", at {at}" if at else ""
         if built.station:
             where += f", station {built.station}"
-        return f"{check.description}{where}"
+        case = f", under {check.cases.case}" if check.cases is not None else ""
+        return f"{check.description}{where}{case}"
 
     def summary(self) -> str:
         """``OA-1: OK, utilization 0.507 (…, at point 6 …) [inputs 3fa9…]``."""
@@ -104,7 +105,7 @@ class BuildResult:
         if found is None:
             return f"{self.member}: {status} (no checks) [inputs {self.hash}]"
         return (
-            f"{self.member}: {status}, utilization {found[1].utilization:.3f} "
+            f"{self.member}: {status}, utilization {found[1].worst_utilization:.3f} "
             f"({self.governing_text()}) [inputs {self.hash}]"
         )
 

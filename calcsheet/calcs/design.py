@@ -12,7 +12,7 @@ search use the same numeric path.
 from __future__ import annotations
 
 import math
-from collections.abc import Sequence
+from collections.abc import Mapping, Sequence
 from dataclasses import dataclass, field
 from functools import lru_cache
 
@@ -28,6 +28,7 @@ from calcsheet.standards.combinations import Combination, combinations, factor_m
 from calcsheet.units import Quantity
 
 KINDS = ("allowable stress", "AISC 360-22", "EN 1993-1-1")
+GENERIC_CHECK_TITLE = "Von Mises stress, largest over the points"
 
 
 @dataclass(frozen=True)
@@ -44,6 +45,11 @@ class DesignBasis:
     gamma_M0: float = 1.00
     gamma_M1: float = 1.00
     S_DS: float | None = None
+    reverse_lateral: bool = False  # wind and earthquake also reversed
+    en1990_expression: str = "6.10"  # or "6.10a/b"
+    imposed_category: str = "A"  # EN 1990 Table A1.1
+    snow_site: str = "H <= 1000 m"  # ψ0 of snow, EN 1990 Table A1.1
+    psi0: Mapping[str, float] | None = None  # ψ0 given directly (EN 1990)
     grade: str = ""
     deflection_ratio: float | None = None  # L/n; None: no deflection check
     sweep_load: str | None = None
@@ -75,6 +81,18 @@ class DesignBasis:
             return "EN 1990"
         return None
 
+    def combination_options(self, load_names: Mapping[str, Sequence[str]] | None = None) -> dict:
+        """The keyword options of :func:`combinations` this basis sets."""
+        return {
+            "S_DS": self.S_DS,
+            "reverse_lateral": self.reverse_lateral,
+            "en1990_expression": self.en1990_expression,
+            "imposed_category": self.imposed_category,
+            "snow_site": self.snow_site,
+            "psi0": self.psi0,
+            "load_names": load_names,
+        }
+
     @property
     def effective_length_factor(self) -> float:
         if self.K is not None:
@@ -95,7 +113,9 @@ class CombinationPlan:
     utilization: np.ndarray  # (n_combos,)
     measure: str
     governing: int
-    # AISC: the utilization of every check under every combination (check -> (n_combos,))
+    basis: DesignBasis
+    # The utilization of every check under every combination (check key -> (n_combos,)),
+    # from the procedure the sheet writes out for the governing combination.
     per_check: dict[str, np.ndarray] = field(default_factory=dict)
 
     @property
@@ -170,10 +190,8 @@ def utilizations(
     """Utilization of each row of ``forces`` (n, 6) in N, N·m, the utilization of each
     AISC check per row (empty for the other kinds), and what the utilization measures."""
     if basis.kind == "AISC 360-22":
-        from calcsheet.standards.aisc360 import CHECKS
-
         checks = _aisc_numeric(_section_table(section), forces, basis, Fy, length)
-        per_check = {name: checks[name][0] for name in CHECKS}
+        per_check = {name: values[0] for name, values in checks.items()}
         worst = np.max(np.stack(list(per_check.values())), axis=0)
         return worst, per_check, "governing AISC 360-22 check"
     # Elastic proxy (stated on the sheet): the largest von Mises stress at the points
@@ -185,10 +203,21 @@ def utilizations(
     if basis.kind == "allowable stress":
         allowable = Fy.to("Pa").m / basis.factor_of_safety
         measure = "largest von Mises stress / (F_y/Ω)"
-    else:
-        allowable = Fy.to("Pa").m / basis.gamma_M0
-        measure = "largest von Mises stress / (f_y/γM0), EN 1993-1-1 6.2.1(5)"
+        return vm / allowable, {"von_mises": vm / allowable}, measure
+    allowable = Fy.to("Pa").m / basis.gamma_M0
+    measure = "largest von Mises stress / (f_y/γM0), EN 1993-1-1 6.2.1(5)"
     return vm / allowable, {}, measure
+
+
+def check_titles(basis: DesignBasis) -> dict[str, str]:
+    """The sheet's title of each check key of :func:`utilizations`."""
+    if basis.kind == "AISC 360-22":
+        from calcsheet.standards.aisc360 import CHECK_TITLES
+
+        return dict(CHECK_TITLES)
+    if basis.kind == "allowable stress":
+        return {"von_mises": GENERIC_CHECK_TITLE}
+    return {}
 
 
 def plan_combinations(
@@ -205,14 +234,9 @@ def plan_combinations(
     if standard is None:
         return None
     present, by_type = forces_by_type(loads, types, length, station)
-    combos = combinations(standard, present, S_DS=basis.S_DS)
-    if not combos:
-        raise InputError(
-            "loads type",
-            ", ".join(present),
-            f"load types that {standard} combines (D, L, Lr, S, R, W, E; EN: G, Q, S, W)",
-            "no combination applies",
-        )
+    names = {kind: [load.name for load, t in zip(loads, types, strict=True) if t == kind]
+             for kind in present}  # fmt: skip
+    combos = combinations(standard, present, **basis.combination_options(names))
     from calcsheet.standards.combinations import combine_numeric
 
     forces = combine_numeric(by_type, combos, present)
@@ -224,6 +248,7 @@ def plan_combinations(
             "loads", ", ".join(present), "loads whose combined forces are finite numbers"
         )
     return CombinationPlan(
+        basis=basis,
         per_check=per_check,
         standard=standard,
         types=present,
@@ -310,7 +335,7 @@ def angle_sweep(
     by_angle[:, present.index(types[index])] += swept_forces
     standard = basis.combination_standard
     if standard is not None:
-        combos = combinations(standard, present, S_DS=basis.S_DS)
+        combos = combinations(standard, present, **basis.combination_options())
         factors = factor_matrix(combos, present)  # (combos, types)
         combined = np.einsum("ct,atk->ack", factors, by_angle)  # (angles, combos, 6)
     else:
@@ -357,20 +382,18 @@ def lightest_section(
     """The lightest section of ``basis.lightest_in`` passing every AISC check, and the
     (up to) two lighter sections before it, which fail."""
     from calcsheet.sections.catalog import find_entry
-    from calcsheet.standards.aisc360 import CHECKS
 
     names, family_table = _family_table(basis.lightest_in or "")
     checks = _aisc_numeric(family_table, plan.forces, basis, Fy, length)
-    table = np.stack([checks[name] for name in CHECKS])  # (checks, sections, combos)
+    keys = list(checks)
+    table = np.stack([checks[name] for name in keys])  # (checks, sections, combos)
     per_check = table.max(axis=2)  # (checks, sections)
     worst = per_check.max(axis=0)
     which = per_check.argmax(axis=0)
 
     def candidate(i: int) -> Candidate:
         weight = find_entry(names[i]).values.get("weight", math.nan)
-        return Candidate(
-            names[i], Quantity(weight, "lbf/ft"), float(worst[i]), CHECKS[int(which[i])]
-        )
+        return Candidate(names[i], Quantity(weight, "lbf/ft"), float(worst[i]), keys[int(which[i])])
 
     passing = np.flatnonzero(worst <= 1.0)
     if passing.size == 0:
@@ -380,12 +403,14 @@ def lightest_section(
 
 
 __all__ = [
+    "GENERIC_CHECK_TITLE",
     "KINDS",
     "Candidate",
     "CombinationPlan",
     "DesignBasis",
     "Sweep",
     "angle_sweep",
+    "check_titles",
     "forces_by_type",
     "lightest_section",
     "plan_combinations",

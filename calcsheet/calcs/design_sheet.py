@@ -15,9 +15,11 @@ import pint
 import sympy as sp
 
 from calcsheet.calcs.design import (
+    GENERIC_CHECK_TITLE,
     CombinationPlan,
     DesignBasis,
     angle_sweep,
+    check_titles,
     lightest_section,
     plan_combinations,
 )
@@ -25,6 +27,7 @@ from calcsheet.engine import Check, Sheet
 from calcsheet.figures.chart import sweep_chart
 from calcsheet.mechanics.loads import AppliedMoment, PointLoad
 from calcsheet.sections import Section
+from calcsheet.standards.combinations import combination_rules_text
 from calcsheet.units import Quantity, format_number, ureg
 
 CHOSEN_AT_BUILD = (
@@ -35,14 +38,13 @@ _FORCE_COLUMNS = (("N", "force"), ("V_x", "force"), ("V_y", "force"), ("T", "mom
                   ("M_x", "moment"), ("M_y", "moment"))  # fmt: skip
 
 
-CHECK_TITLES = {
-    "axial": "Axial force",
-    "flexure_x": "Flexure about x",
-    "flexure_y": "Flexure about y",
-    "shear_x": "Shear along x",
-    "shear_y": "Shear along y",
-    "combined": "Combined axial force and flexure",
-}
+__all__ = [
+    "GENERIC_CHECK_TITLE",
+    "write_check_cases",
+    "write_combinations",
+    "write_exploration",
+    "write_standard_checks",
+]
 
 
 def _named(combo) -> str:
@@ -69,6 +71,9 @@ def write_combinations(
 ) -> dict[str, sp.Symbol]:
     """The envelope table and the governing combination's load factors (by load suffix)."""
     sheet.heading(f"Load combinations ({plan.standard})")
+    sheet.text(
+        combination_rules_text(plan.standard, plan.types, **plan.basis.combination_options())
+    )
     force_unit, moment_unit = preset["force"], preset["moment"]
     rows = []
     for index, combo in enumerate(plan.combos):
@@ -89,25 +94,14 @@ def write_combinations(
         ),
     )
     if plan.per_check:
-        rows = []
-        for check, values in plan.per_check.items():
-            worst = int(np.argmax(values))
-            shown = f"{values[worst]:.3f}" if np.isfinite(values[worst]) else "∞"
-            rows.append([CHECK_TITLES.get(check, check), plan.combos[worst].name, shown])
-        sheet.table(
-            ["Check", "Governing combination", "Utilization"],
-            rows,
-            caption=(
-                "The combination that governs each check (the same clauses evaluated for "
-                "every combination when the sheet was built); the sheet writes out the "
-                "combination that governs overall"
-            ),
-        )
+        _write_check_matrix(sheet, plan)
     chosen = plan.governing_combination
     sheet.text(
-        f"Governing combination: {_named(chosen)} ({plan.measure} "
-        f"{plan.utilization[plan.governing]:.3f}). Its load factors multiply each load in "
-        "the statics below; every other combination gives a lower utilization."
+        "Governing combination: "
+        f"{_named(chosen)} ({plan.measure} {plan.utilization[plan.governing]:.3f}). Its load "
+        "factors multiply each load in the statics below; every other combination gives a "
+        "lower governing utilization. Where another combination governs a single check, the "
+        "summary names it with its utilization."
     )
     factor_symbols: dict[str, sp.Symbol] = {}
     for load_type in dict.fromkeys(types):
@@ -120,6 +114,53 @@ def write_combinations(
             fixed=CHOSEN_AT_BUILD,
         )
     return {suffix: factor_symbols[types[int(suffix) - 1]] for suffix in free_suffixes}
+
+
+def _shown_utilization(value: float) -> str:
+    return f"{value:.3f}" if np.isfinite(value) else "∞"
+
+
+def _write_check_matrix(sheet: Sheet, plan: CombinationPlan) -> None:
+    """Every check under every combination, numbered columns with a key below."""
+    titles = check_titles(plan.basis)
+    keys = list(plan.per_check)
+    rows = []
+    for index, combo in enumerate(plan.combos):
+        cells = [_shown_utilization(float(plan.per_check[key][index])) for key in keys]
+        mark = " (governs)" if index == plan.governing else ""
+        rows.append([_named(combo) + mark, *cells])
+    worst = ["Worst", *(_shown_utilization(float(np.max(plan.per_check[key]))) for key in keys)]
+    sheet.table(
+        ["Combination", *(f"({number})" for number in range(1, len(keys) + 1))],
+        [*rows, worst],
+        caption=(
+            "Utilization of every check under every combination, by the procedure written "
+            "out below for the governing one, computed when the sheet was built. Checks: "
+            + "; ".join(
+                f"({number}) {titles.get(key, key)}" for number, key in enumerate(keys, start=1)
+            )
+        ),
+    )
+
+
+def write_check_cases(
+    sheet: Sheet, plan: CombinationPlan, checks: Sequence[Check], station: pint.Quantity
+) -> None:
+    """Give each written check the worst of its utilizations over every combination."""
+    titles = check_titles(plan.basis)
+    by_title = {check.description: check for check in checks}
+    where = f"z = {format_number(float(station.m)).plain()} {_unit(str(station.units))}"
+    for key, values in plan.per_check.items():
+        check = by_title.get(titles.get(key, ""))
+        if check is None:
+            continue
+        worst = int(np.argmax(values))
+        sheet.set_cases(
+            check,
+            float(values[worst]),
+            f"{_named(plan.combos[worst])}, station {where}",
+            len(plan.combos),
+        )
 
 
 def write_standard_checks(
@@ -219,7 +260,7 @@ def write_exploration(
                 candidate.name,
                 f"{candidate.weight.to('lbf/ft').m:g} lb/ft",
                 f"{candidate.utilization:.3f}" if np.isfinite(candidate.utilization) else "—",
-                candidate.governing_check.replace("_", " "),
+                check_titles(basis).get(candidate.governing_check, candidate.governing_check),
                 "passes" if candidate.passes else "fails",
             ]
             for candidate in [*lighter, *([chosen] if chosen else [])]

@@ -19,14 +19,17 @@ import sympy as sp
 
 from calcsheet.calcs.design import DesignBasis, plan_combinations
 from calcsheet.calcs.design_sheet import (
+    GENERIC_CHECK_TITLE,
+    write_check_cases,
     write_combinations,
     write_exploration,
     write_standard_checks,
 )
 from calcsheet.calcs.member_figures import member_drawing, section_drawing, stress_drawing
+from calcsheet.calcs.member_rebuild import rebuild_on_change
 from calcsheet.calcs.points import PointSymbols, write_combined
 from calcsheet.calcs.round_section import write_round_point_stresses
-from calcsheet.engine import Sheet, TitleBlock
+from calcsheet.engine import Check, Sheet, TitleBlock
 from calcsheet.engine.functions import Abs, cos, sin, sqrt
 from calcsheet.errors import InputError
 from calcsheet.mechanics.deflection import write_tip_deflection
@@ -96,6 +99,20 @@ def member_sheet(
     check and the design exploration. Bad input raises :class:`InputError`
     naming the field (``member length``, ``station z``, ``load P1 z``, ``Fy``...).
     """
+    arguments = {
+        "section": section,
+        "loads": list(loads),
+        "length": length,
+        "station": station,
+        "Fy": Fy,
+        "Fy_reference": Fy_reference,
+        "Omega": Omega,
+        "title": title,
+        "title_block": title_block,
+        "units": units,
+        "design": design,
+        "load_types": load_types,
+    }
     basis = design or DesignBasis(factor_of_safety=Omega)
     if design is not None:
         Omega = design.factor_of_safety
@@ -156,9 +173,11 @@ def member_sheet(
         _write_point_table(sheet, points, stress)
         governing = _write_governing(sheet, points, stress)
         if generic:
-            _write_generic_check(sheet, governing, symbols, stress)
+            checks = [_write_generic_check(sheet, governing, symbols, stress)]
         else:
-            write_standard_checks(sheet, section, basis, forces, (fy_q, length_q))
+            checks = write_standard_checks(sheet, section, basis, forces, (fy_q, length_q))
+        if plan is not None:
+            write_check_cases(sheet, plan, checks, station_q.to(length_unit))
         if basis.deflection_ratio:
             # E as the standard states it (AISC 360-22: 29,000 ksi; EN 1993-1-1 3.2.6:
             # 210,000 N/mm²), so that the deflection shares the checks' input E.
@@ -167,6 +186,7 @@ def member_sheet(
                 sheet, section, loads, length=length_q, E=modulus, n=basis.deflection_ratio
             )
         write_exploration(sheet, section, (loads, types), (length_q, station_q), basis, fy_q, plan)
+    rebuild_on_change(sheet, member_sheet, arguments)
     return sheet
 
 
@@ -720,14 +740,14 @@ def _write_governing(sheet: Sheet, points: list[PointSymbols], stress: str) -> d
 
 def _write_generic_check(
     sheet: Sheet, governing: dict[str, sp.Symbol], symbols: dict[str, sp.Symbol], stress: str
-) -> None:
+) -> Check:
     sheet.heading("Allowable-stress check")
     F_allow = sheet.step(
         "F_allow", symbols["F_y"] / symbols["Omega"], "Generic allowable stress", unit=stress
     )
     sheet.text(NOT_A_SPEC_CHECK)
-    sheet.check(
-        "Von Mises stress, largest over the points",
+    return sheet.check(
+        GENERIC_CHECK_TITLE,
         governing["sigma_vm_max"],
         F_allow,
         reference="generic F_y/Ω; not a specification check",

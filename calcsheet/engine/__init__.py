@@ -9,6 +9,7 @@ Public API for calc authors (built-in calcs use nothing else)::
 from calcsheet.engine.parts import (
     CAUTIONS,
     Check,
+    CheckCases,
     Figure,
     Heading,
     Input,
@@ -25,6 +26,7 @@ __all__ = [
     "CAUTIONS",
     "TARGETS",
     "Check",
+    "CheckCases",
     "CheckText",
     "Equation",
     "Figure",

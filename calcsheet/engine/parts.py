@@ -149,9 +149,27 @@ class Step(_Defined):
     largest: bool = True
 
 
+@dataclass(frozen=True)
+class CheckCases:
+    """The same check evaluated for cases the sheet does not write out step by step.
+
+    ``worst`` is the largest utilization over ``count`` cases (the written case
+    among them), ``case`` names the case that gives it (a load combination, a
+    station). A calc computes these with the same procedure as its written steps.
+    """
+
+    worst: float
+    case: str
+    count: int
+
+
 @dataclass(eq=False)
 class Check:
-    """Demand against capacity: utilization = demand / capacity, pass when it is at most 1."""
+    """Demand against capacity: utilization = demand / capacity, pass when it is at most 1.
+
+    With :attr:`cases` the check also stands for cases not written out: it passes
+    only when the worst of them passes too.
+    """
 
     description: str
     demand: sp.Basic
@@ -161,11 +179,31 @@ class Check:
     capacity_value: pint.Quantity | None = None
     utilization: float | None = None
     sheet: Sheet | None = field(default=None, repr=False)
+    cases: CheckCases | None = None
+
+    @property
+    def worst_utilization(self) -> float | None:
+        """The larger of the written utilization and the worst of the other cases."""
+        if self.utilization is None:
+            return None
+        if self.cases is None:
+            return self.utilization
+        return max(self.utilization, self.cases.worst)
+
+    @property
+    def worst_case(self) -> str:
+        """The case of :attr:`worst_utilization` when another case than the written one
+        governs; empty when the written case governs or there are no other cases."""
+        if self.cases is None or self.utilization is None:
+            return ""
+        # The written case is among the cases; its two evaluations differ in round-off.
+        return self.cases.case if self.cases.worst > self.utilization * (1 + 1e-9) else ""
 
     @property
     def passes(self) -> bool:
-        """True when the utilization is at most 1."""
-        return self.utilization is not None and self.utilization <= 1.0
+        """True when the utilization, and the worst of its cases, is at most 1."""
+        worst = self.worst_utilization
+        return worst is not None and worst <= 1.0
 
     @property
     def status(self) -> str:
@@ -174,12 +212,17 @@ class Check:
 
     def summary(self) -> dict[str, Any]:
         """The check's result as plain data (for JSON and tables)."""
-        return {
+        result = {
             "description": self.description,
             "reference": self.reference,
-            "utilization": self.utilization,
+            "utilization": self.worst_utilization,
+            "written_utilization": self.utilization,
             "status": self.status,
         }
+        if self.cases is not None:
+            result["governing_case"] = self.cases.case
+            result["cases"] = self.cases.count
+        return result
 
 
 Part = Heading | Prose | Figure | Table | Input | Step | Check

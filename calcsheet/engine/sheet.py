@@ -30,6 +30,7 @@ from calcsheet.engine.functions import Max, Min
 from calcsheet.engine.names import parse_symbol_name
 from calcsheet.engine.parts import (
     Check,
+    CheckCases,
     Figure,
     Heading,
     Input,
@@ -97,6 +98,7 @@ class CheckText:
     symbolic: str
     numeric: str
     utilization: str
+    worst: str = ""  # the worst utilization over the check's cases (see Check.cases)
 
 
 class Sheet:
@@ -345,15 +347,16 @@ class Sheet:
         self.set_inputs({name: value})
 
     def set_inputs(self, changes: dict[str, str | float | pint.Quantity]) -> None:
-        """Change several inputs at once, then re-evaluate the calc once."""
+        """Change several inputs at once, then re-evaluate (or rebuild) the calc once."""
         values = dict(self._values)
+        rebuild = getattr(self, "_rebuild", None)
         for name, value in changes.items():
             part = self._defined.get(name)
             if not isinstance(part, Input):
                 known = ", ".join(n for n, p in self._defined.items() if isinstance(p, Input))
                 raise InputError("input name", name, f"one of: {known}")
             field = f"input {name}"
-            if part.fixed:
+            if part.fixed and rebuild is None:
                 raise InputError(
                     field, value, "no change here: build the sheet again", problem=part.fixed
                 )
@@ -364,6 +367,14 @@ class Sheet:
                     field, value, f"{_article(describe_dimension(old))}, like {old:~P}"
                 )
             values[part.symbol] = _to_display(quantity, part.unit, field)
+        if rebuild is not None:
+            current = {
+                name: values[part.symbol]
+                for name, part in self._defined.items()
+                if isinstance(part, Input)
+            }
+            self._adopt(rebuild(current))
+            return
         checks: list[tuple[Check, tuple]] = []
         for part in self.parts:
             if isinstance(part, Step):
@@ -383,6 +394,21 @@ class Sheet:
             part.value = values[part.symbol]
         self._shown.clear()
 
+    def _adopt(self, built: Sheet) -> None:
+        """Take the contents of a sheet built anew; what was added afterwards stays."""
+        kept = {
+            "revisions": self.revisions,
+            "stamp": self.stamp,
+            "title_block": self.title_block,
+            "title": self.title,
+        }
+        vars(self).clear()
+        vars(self).update(vars(built))
+        for part in self.parts:
+            if hasattr(part, "sheet"):
+                part.sheet = self
+        vars(self).update(kept)
+
     # -- reading results -------------------------------------------------------------------
 
     def __getitem__(self, name: str) -> Input | Step:
@@ -395,6 +421,15 @@ class Sheet:
         """The current value of an input or step, in its display unit."""
         key = name.name if isinstance(name, sp.Symbol) else name
         return self[key].value
+
+    def evaluate(self, expr: sp.Basic, *, where: str = "a decision") -> pint.Quantity:
+        """The current value of an expression over this sheet's symbols (nothing is added).
+
+        For a calc that settles a decision from the values it has now (which equation
+        of a standard applies); errors name ``where``.
+        """
+        self._require_defined(expr, where)
+        return evaluate(expr, self._values, step=where)
 
     @property
     def checks(self) -> list[Check]:
@@ -412,9 +447,35 @@ class Sheet:
         return [part for part in self.parts if isinstance(part, Input)]
 
     def governing_check(self) -> Check | None:
-        """The check with the highest utilization."""
+        """The check with the highest utilization (the worst of its cases, where it has them)."""
         checks = [check for check in self.checks if check.utilization is not None]
-        return max(checks, key=lambda check: check.utilization, default=None)
+        return max(checks, key=lambda check: check.worst_utilization, default=None)
+
+    def set_cases(self, check: Check, worst: float, case: str, count: int) -> None:
+        """Say that ``check`` was also evaluated for ``count`` cases not written out.
+
+        The calc computes them with the procedure that wrote the check; ``worst`` is
+        the largest utilization among them and ``case`` names where it occurs. The
+        summary, the status and :meth:`governing_check` then take the worst case.
+        """
+        if check not in self.checks:
+            raise DefinitionError(f"check {check.description!r} is not on this sheet")
+        if not (math.isfinite(worst) or worst == math.inf) or worst < 0:
+            raise EvaluationError(
+                f"check {check.description!r}: the worst utilization of its cases is {worst}"
+            )
+        check.cases = CheckCases(float(worst), str(case), int(count))
+
+    def rebuild_with(self, build: Callable[[dict[str, pint.Quantity]], Sheet]) -> None:
+        """Let :meth:`set_inputs` rebuild this calc instead of re-evaluating it.
+
+        For a calc whose layout, or whose parts computed when it was built (a search
+        over load combinations), depend on its inputs: ``build`` takes every input's
+        current value by name (with the changes) and returns the calc built anew,
+        which then replaces this sheet's contents. Inputs that ``build`` cannot take
+        are refused by it with an :class:`InputError`.
+        """
+        self._rebuild = build
 
     def governing_label(self, part: Step | sp.Symbol) -> str:
         """The label of the candidate that governs a governing step, from current values."""
@@ -465,13 +526,14 @@ class Sheet:
         )
         numeric = printer.relation(
             slot_printer.quantity(self._format(check.demand_value), False, standalone=True),
-            "≤" if check.passes else ">",
+            "≤" if check.utilization is not None and check.utilization <= 1.0 else ">",
             slot_printer.quantity(self._format(check.capacity_value), False, standalone=True),
         )
-        utilization = slot_printer.quantity(
-            self._format(ureg.Quantity(check.utilization)), False, standalone=True
+        utilization, worst = (
+            slot_printer.quantity(self._format(ureg.Quantity(value)), False, standalone=True)
+            for value in (check.utilization, check.worst_utilization)
         )
-        return CheckText(symbolic, numeric, utilization)
+        return CheckText(symbolic, numeric, utilization, worst)
 
     def cell_text(self, table: Table, cell: sp.Symbol, target: str) -> str:
         """A symbol cell of ``table`` printed for ``target`` from the current value."""

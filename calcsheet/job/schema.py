@@ -125,6 +125,10 @@ class CheckSpec(_Table):
     (``method`` LRFD or ASD) or "EN 1993-1-1". ``combinations``: the load
     combination standard; by default ASCE 7-22 (strength for LRFD, ASD for ASD)
     with AISC, EN 1990 with EN 1993, none with the allowable-stress check.
+    ``reverse_lateral``: wind and earthquake loads act also reversed. EN 1990 only:
+    ``en1990_expression`` ("6.10", or "6.10a/b" for Eq. 6.10a and 6.10b),
+    ``imposed_category`` (A-H, Table A1.1: ψ0 of Q), ``snow_site`` (ψ0 of S) and
+    ``psi0`` (ψ0 of Q, S or W given directly, e.g. ``{ S = 0.7 }``).
     """
 
     kind: Literal["allowable stress", "AISC 360-22", "EN 1993-1-1"] = "allowable stress"
@@ -147,6 +151,11 @@ class CheckSpec(_Table):
     gamma_M0: float = Field(default=1.0, ge=1.0, le=2.0)
     gamma_M1: float = Field(default=1.0, ge=1.0, le=2.0)
     S_DS: float | None = Field(default=None, ge=0, le=5)
+    reverse_lateral: bool = False
+    en1990_expression: Literal["6.10", "6.10a/b"] = "6.10"
+    imposed_category: Literal["A", "B", "C", "D", "E", "F", "G", "H"] = "A"
+    snow_site: Literal["H <= 1000 m", "H > 1000 m", "Nordic"] = "H <= 1000 m"
+    psi0: dict[Literal["Q", "S", "W"], Annotated[float, Field(ge=0, le=1)]] | None = None
     deflection_limit: float | None = Field(default=None, gt=0, le=10000)
 
 

@@ -43,6 +43,12 @@ class PartView:
     reference: str = ""
     svg: str = ""
     location: str = ""  # where a governing step or a check governs, from current values
+    # A check standing for cases not written out (every load combination): the worst
+    # utilization over them, its status, the case that gives it, and how many there are.
+    worst: str = ""
+    worst_status: str = ""
+    case: str = ""
+    cases: int = 0
     columns: tuple[str, ...] = ()
     text_columns: tuple[bool, ...] = ()  # per column: all text (left-aligned) or has values
     cells: tuple[tuple[tuple[bool, str], ...], ...] = ()  # (is math, content) per cell
@@ -135,15 +141,20 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
             )
         elif isinstance(part, Check):
             text = sheet.check_text(part, target)
+            written_passes = part.utilization is not None and part.utilization <= 1.0
             view = PartView(
                 "check",
                 text=part.description,
                 symbolic=text.symbolic,
                 numeric=text.numeric,
                 utilization=text.utilization,
-                status=part.status,
+                status="OK" if written_passes else "NOT OK",
                 reference=part.reference,
                 location=sheet.check_location(part),
+                worst=text.worst,
+                worst_status=part.status,
+                case=part.worst_case,
+                cases=part.cases.count if part.cases is not None else 0,
             )
             check_views[id(part)] = view
             checks.append(view)

@@ -2,20 +2,28 @@
 
 Load types (:data:`LOAD_TYPES`): ASCE 7 uses D, L, Lr, S, R, W and E; EN 1990 uses
 G (permanent), Q (imposed), S (snow) and W (wind). :func:`combinations` lists the
-basic combinations of a standard for the types present; :func:`user_combinations`
+basic combinations of a standard for the types present; :func:`combination_rules_text`
+says in words how many were made and by which rules; :func:`user_combinations`
 checks combinations an engineer writes; :func:`combine_numeric` applies factors
 to forces by load type (vectorised) and :func:`envelope` finds the governing
 combination of every measure.
 
 Rules of the automatic list
 ---------------------------
-* "(Lr or S or R)" and "(L or 0.5W)" expand to one combination per type present.
+* ASCE 7 2.3.1 / 2.4.1 require the effects of one or more loads not acting to be
+  investigated: every companion variable load of a basic combination is taken both
+  acting and not acting ("(Lr or S or R)" gives one combination per type present and
+  one without any of them). Dead load always acts.
 * Each combination has principal types (1.6L in 1.2D + 1.6L + 0.5S, W in 0.9D + 1.0W);
-  it is skipped when a principal type has no load. A companion type with no load
-  contributes nothing and drops out.
-* Combinations that end with the same factors as an earlier one are listed once.
-* Every variable load is taken as acting (unfavourable). Dead load appears both at
-  its upper and lower factors where the standard gives both.
+  it is skipped when no principal type has a load. D + 0.75L + 0.75(Lr or S or R)
+  (ASD 4) has two principal groups, and at least one of them acts.
+* EN 1990 Eq. (6.10), or Eq. (6.10a) and (6.10b) on request: each variable action leads
+  in turn; each accompanying variable action is taken at γQ·ψ0 and also omitted (a
+  favourable variable action takes γQ = 0, Table A1.2(B)); permanent actions at
+  γG,sup = 1.35 and γG,inf = 1.00.
+* With ``reverse_lateral``, wind (W) and earthquake (E) act both as given and reversed.
+* Combinations that end with the same factors as an earlier one are listed once, and
+  the count is bounded by :data:`MAX_COMBINATIONS`.
 
 Seismic combinations (ASCE 7 2.3.6, 2.4.5) take E as the horizontal effect E_h and
 fold the vertical effect E_v = 0.2·S_DS·D (ASCE 7 12.4.2.2) into the factor on D,
@@ -27,6 +35,7 @@ against the standards when the project is reviewed.
 
 from __future__ import annotations
 
+import itertools
 import math
 from collections.abc import Iterable, Mapping, Sequence
 from dataclasses import dataclass, field
@@ -51,6 +60,13 @@ LOAD_TYPES: dict[str, str] = {
 
 ASCE_TYPES = ("D", "L", "Lr", "S", "R", "W", "E")
 EN_TYPES = ("G", "Q", "S", "W")
+PERMANENT_TYPES = ("D", "G")  # always acting: never left out of a combination
+LATERAL_TYPES = ("W", "E")  # reversed too when the job asks (``reverse_lateral``)
+
+# The most combinations one call may give. The largest sets the tables below can make
+# are far smaller (all seven ASCE 7 types, both senses: 45 strength, 44 ASD; all four
+# EN 1990 types with Eq. 6.10a/b and both senses: 63); the bound guards later tables.
+MAX_COMBINATIONS = 300
 
 # EN 1990 Table A1.1, ψ0 (from memory).
 PSI0_IMPOSED: dict[str, float] = {
@@ -66,10 +82,23 @@ PSI0_IMPOSED: dict[str, float] = {
 PSI0_SNOW = 0.5  # sites at altitude H <= 1000 m a.s.l. outside the Nordic countries
 PSI0_SNOW_HIGH = 0.7  # Finland, Iceland, Norway, Sweden, and H > 1000 m a.s.l.
 PSI0_WIND = 0.6
+# ψ0 of snow by site, EN 1990 Table A1.1 (from memory); the keys are our own names.
+SNOW_SITES: dict[str, float] = {
+    "H <= 1000 m": PSI0_SNOW,
+    "H > 1000 m": PSI0_SNOW_HIGH,
+    "Nordic": PSI0_SNOW_HIGH,  # Finland, Iceland, Norway, Sweden
+}
+_SNOW_SITE_WORDS = {
+    "H <= 1000 m": "site at altitude H ≤ 1000 m",
+    "H > 1000 m": "site at altitude H > 1000 m",
+    "Nordic": "Finland, Iceland, Norway, Sweden",
+}
 # EN 1990 Table A1.2(B), set B (STR/GEO), recommended values (from memory).
 GAMMA_G_SUP = 1.35
 GAMMA_G_INF = 1.00
 GAMMA_Q = 1.5
+XI = 0.85  # reduction of unfavourable permanent actions in Eq. (6.10b), recommended
+EN1990_EXPRESSIONS = ("6.10", "6.10a/b")
 
 
 @dataclass(frozen=True)
@@ -85,13 +114,16 @@ class Combination:
         return float(self.factors.get(load_type, 0.0))
 
     def text(self) -> str:
-        """The combination as written: ``1.2D + 1.6L + 0.5S``."""
+        """The combination as written: ``1.2D + 1.6L + 0.5S``, ``0.9D − W``."""
         pieces = []
         for load_type, value in self.factors.items():
-            number = f"{value:g}"
+            number = f"{abs(value):g}"
             term = f"{'' if number == '1' else number}{load_type}"
-            pieces.append(term if not pieces or value < 0 else f"+ {term}")
-        return " ".join(pieces).replace("-", "− ") if pieces else "0"
+            if value < 0:
+                pieces.append(f"− {term}" if pieces else f"−{term}")
+            else:
+                pieces.append(f"+ {term}" if pieces else term)
+        return " ".join(pieces) if pieces else "0"
 
 
 # --- tables of the standards -------------------------------------------------------------------
@@ -99,7 +131,12 @@ class Combination:
 
 @dataclass(frozen=True)
 class _Template:
-    """A basic combination before expansion: groups of alternatives, some principal."""
+    """A basic combination before expansion: groups of alternatives, some principal.
+
+    A group lists alternative terms (type, factor), e.g. 0.5(Lr or S or R). A group
+    of permanent types always acts; any other group may also not act. At least one
+    ``principal`` group acts in every combination made from the template.
+    """
 
     number: str
     groups: tuple[tuple[tuple[str, float | str], ...], ...]
@@ -117,6 +154,7 @@ _ASD_EV_UP, _ASD_EV_9, _ASD_EV_DOWN = "1.0+0.14SDS", "1.0+0.105SDS", "0.6-0.14SD
 
 
 def _asce_strength(edition: str, snow_2: float, snow_3: float, snow_seismic: float):
+    """ASCE 7 2.3.1 combinations 1-5 and 2.3.6 combinations 6-7 (factors from memory)."""
     ref = f"ASCE 7-{edition} 2.3.1"
     seismic = f"ASCE 7-{edition} 2.3.6"
     companions = (("Lr", 0.5), ("S", snow_2), ("R", 0.5))
@@ -134,6 +172,7 @@ def _asce_strength(edition: str, snow_2: float, snow_3: float, snow_seismic: flo
 
 
 def _asce_allowable(edition: str, snow: float, snow_seismic: float):
+    """ASCE 7 2.4.1 combinations 1-7 and 2.4.5 combinations 8-10 (factors from memory)."""
     ref = f"ASCE 7-{edition} 2.4.1"
     seismic = f"ASCE 7-{edition} 2.4.5"
     roof = (("Lr", 1.0), ("S", snow), ("R", 1.0))
@@ -181,15 +220,104 @@ def _standard(name: str) -> str:
     raise InputError("standard", name, f"one of: {', '.join(STANDARDS)}")
 
 
-def _types(types_present: Iterable[str], standard: str) -> tuple[str, ...]:
+def _types(
+    types_present: Iterable[str], standard: str, load_names: Mapping[str, Sequence[str]] | None
+) -> tuple[str, ...]:
     allowed = EN_TYPES if standard == EN_1990 else ASCE_TYPES
     present = []
     for load_type in types_present:
         if load_type not in allowed:
-            raise InputError("load type", load_type, f"for {standard}: one of {', '.join(allowed)}")
+            names = [str(name) for name in (load_names or {}).get(load_type, ())]
+            listed = ", ".join(repr(name) for name in names)
+            problem = f"the type of load{'s' if len(names) > 1 else ''} {listed}" if names else ""
+            raise InputError(
+                "load type", load_type, f"for {standard}: one of {', '.join(allowed)}", problem
+            )
         if load_type not in present:
             present.append(load_type)
     return tuple(present)
+
+
+@dataclass(frozen=True)
+class _Options:
+    """The checked options of a combination set (see :func:`combinations`)."""
+
+    S_DS: float | None
+    imposed_category: str
+    psi0: Mapping[str, float]  # ψ0 of Q, S and W in use (EN 1990)
+    psi0_given: tuple[str, ...]  # the types whose ψ0 the caller gave
+    reverse_lateral: bool
+    en1990_expression: str
+    snow_site: str
+
+
+def _options(
+    name: str,
+    *,
+    S_DS: float | None,
+    imposed_category: str,
+    psi0: Mapping[str, float] | None,
+    reverse_lateral: bool,
+    en1990_expression: str,
+    snow_site: str,
+    present: Sequence[str],
+) -> _Options:
+    if not isinstance(reverse_lateral, bool):
+        raise InputError("reverse_lateral", reverse_lateral, "true or false")
+    expression = str(en1990_expression).strip().replace(" ", "")
+    expression = {"6.10a/6.10b": "6.10a/b", "6.10a,6.10b": "6.10a/b"}.get(expression, expression)
+    if expression not in EN1990_EXPRESSIONS:
+        raise InputError(
+            "en1990_expression",
+            en1990_expression,
+            '"6.10" (EN 1990 Eq. 6.10) or "6.10a/b" (the less favourable of Eq. 6.10a and 6.10b)',
+        )
+    site = " ".join(str(snow_site).split())
+    if site not in SNOW_SITES:
+        raise InputError("snow_site", snow_site, f"one of {', '.join(map(repr, SNOW_SITES))}")
+    category = str(imposed_category).strip().upper()
+    if category not in PSI0_IMPOSED:
+        raise InputError(
+            "imposed_category",
+            imposed_category,
+            f"a category of EN 1990 Table A1.1: one of {', '.join(PSI0_IMPOSED)}",
+        )
+    if name != EN_1990 and psi0:
+        raise InputError("psi0", dict(psi0), f"nothing for {name} (ψ0 belongs to EN 1990)")
+    psi = {"Q": PSI0_IMPOSED[category], "S": SNOW_SITES[site], "W": PSI0_WIND}
+    for load_type, value in (psi0 or {}).items():
+        if load_type not in psi:
+            raise InputError("psi0", load_type, "ψ0 of Q, S or W")
+        try:
+            number = float(value)
+        except (TypeError, ValueError):
+            number = math.nan
+        if not (math.isfinite(number) and 0.0 <= number <= 1.0):
+            raise InputError(f"psi0.{load_type}", value, "a factor ψ0 from 0 to 1")
+        psi[load_type] = number
+    if name != EN_1990 and "E" in present:
+        bad = S_DS is None
+        if not bad:
+            try:
+                bad = not (math.isfinite(float(S_DS)) and float(S_DS) >= 0)
+            except (TypeError, ValueError):
+                bad = True
+        if bad:
+            raise InputError(
+                "S_DS",
+                S_DS,
+                "the design spectral acceleration S_DS (ASCE 7 11.4.5), a number ≥ 0",
+                "E is present and E_v = 0.2·S_DS·D (12.4.2.2) enters the factor on D",
+            )
+    return _Options(
+        S_DS=None if S_DS is None else float(S_DS),
+        imposed_category=category,
+        psi0=MappingProxyType(psi),
+        psi0_given=tuple(psi0 or ()),
+        reverse_lateral=reverse_lateral,
+        en1990_expression=expression,
+        snow_site=site,
+    )
 
 
 # --- the automatic list ------------------------------------------------------------------------
@@ -202,59 +330,113 @@ def combinations(
     S_DS: float | None = None,
     imposed_category: str = "A",
     psi0: Mapping[str, float] | None = None,
+    reverse_lateral: bool = False,
+    en1990_expression: str = "6.10",
+    snow_site: str = "H <= 1000 m",
+    load_names: Mapping[str, Sequence[str]] | None = None,
+    max_count: int = MAX_COMBINATIONS,
 ) -> list[Combination]:
     """The basic combinations of ``standard`` for the load types that have loads.
 
     ``standard`` is one of :data:`STANDARDS` (case-insensitive; "ASCE 7-22 LRFD"
     and "EN 1990" are accepted too). ``S_DS`` (ASCE 7 11.4.5) is needed when E is
-    present. For EN 1990, ``imposed_category`` (A–H, Table A1.1) gives ψ0 of Q,
-    and ``psi0`` overrides ψ0 of Q, S or W (e.g. ``{"S": 0.7}`` above 1000 m).
+    present. ``reverse_lateral`` adds W and E reversed (−1 times their factor).
+    For EN 1990: ``en1990_expression`` is "6.10" or "6.10a/b"; ``imposed_category``
+    (A–H, Table A1.1) gives ψ0 of Q and ``snow_site`` (a key of :data:`SNOW_SITES`)
+    ψ0 of S; ``psi0`` overrides ψ0 of Q, S or W (e.g. ``{"S": 0.7}``).
+    ``load_names`` (type -> names of the loads of that type) lets an unknown type
+    be reported with the loads that have it. Raises :class:`InputError` naming
+    the key for an unknown type or option, an empty set or more than ``max_count``.
     """
     name = _standard(standard)
-    present = _types(types_present, name)
+    present = _types(types_present, name, load_names)
+    options = _options(
+        name,
+        S_DS=S_DS,
+        imposed_category=imposed_category,
+        psi0=psi0,
+        reverse_lateral=reverse_lateral,
+        en1990_expression=en1990_expression,
+        snow_site=snow_site,
+        present=present,
+    )
     if name == EN_1990:
-        return _en_1990(present, imposed_category, psi0)
-    if psi0 is not None:
-        raise InputError("psi0", dict(psi0), f"nothing for {name} (ψ0 belongs to EN 1990)")
-    bad_S_DS = S_DS is None or not (math.isfinite(float(S_DS)) and float(S_DS) >= 0)
-    if "E" in present and bad_S_DS:
+        made = _en_1990(present, options)
+    else:
+        made = [
+            combo for template in _TEMPLATES[name] for combo in _expand(template, present, options)
+        ]
+    result = _distinct(made)
+    if not result:
         raise InputError(
-            "S_DS",
-            S_DS,
-            "the design spectral acceleration S_DS (ASCE 7 11.4.5), a number ≥ 0",
-            "E is present and E_v = 0.2·S_DS·D (12.4.2.2) enters the factor on D",
+            "load types",
+            ", ".join(present) or "none",
+            f"loads of a type that {name} combines: "
+            + ", ".join(EN_TYPES if name == EN_1990 else ASCE_TYPES),
+            "no combination applies",
         )
-    result: list[Combination] = []
-    for template in _TEMPLATES[name]:
-        for combo in _expand(template, present, S_DS):
-            if all(dict(combo.factors) != dict(other.factors) for other in result):
-                result.append(combo)
+    if len(result) > max_count:
+        raise InputError(
+            "reverse_lateral" if reverse_lateral else "load types",
+            reverse_lateral if reverse_lateral else ", ".join(present),
+            f"a set of at most {max_count} combinations (these give {len(result)}): "
+            "fewer load types" + (", or reverse_lateral = false" if reverse_lateral else ""),
+        )
     return result
 
 
-def _expand(template: _Template, present: Sequence[str], S_DS: float | None) -> list[Combination]:
-    options: list[list[tuple[str, float | str]]] = []
-    for index, group in enumerate(template.groups):
-        available = [term for term in group if term[0] in present]
-        if not available:
-            if index in template.principal:
-                return []
-            continue
-        options.append(available)
+def _distinct(made: Iterable[Combination]) -> list[Combination]:
+    """The combinations in order, each set of factors once (the first name kept)."""
+    seen: set[frozenset[tuple[str, float]]] = set()
     result = []
-    for choice in _product(options):
-        factors = {load_type: _resolve_factor(value, S_DS) for load_type, value in choice}
+    for combo in made:
+        key = frozenset(combo.factors.items())
+        if key not in seen:
+            seen.add(key)
+            result.append(combo)
+    return result
+
+
+def _senses(term: tuple[str, float | str], options: _Options) -> list[tuple[str, float | str]]:
+    """A term as given, and reversed for wind and earthquake when the job asks."""
+    load_type, value = term
+    if options.reverse_lateral and load_type in LATERAL_TYPES and isinstance(value, float):
+        return [term, (load_type, -value)]
+    return [term]
+
+
+def _expand(template: _Template, present: Sequence[str], options: _Options) -> list[Combination]:
+    """Every combination of one template: each variable group acting or not (ASCE 7 2.3.1)."""
+    choices: list[list[tuple[tuple[str, float | str], ...]]] = []
+    principal_at: list[int] = []  # positions in ``choices`` of the principal groups
+    for index, group in enumerate(template.groups):
+        available = [
+            sense for term in group if term[0] in present for sense in _senses(term, options)
+        ]
+        if not available:
+            continue
+        acting: list[tuple[tuple[str, float | str], ...]] = [(term,) for term in available]
+        permanent = all(load_type in PERMANENT_TYPES for load_type, _ in group)
+        if index in template.principal:
+            principal_at.append(len(choices))
+        choices.append(acting if permanent else [*acting, ()])
+    if not principal_at:
+        return []
+    result = []
+    for choice in itertools.product(*choices):
+        if not any(choice[at] for at in principal_at):
+            continue  # no principal load acts: another template covers it
+        factors = {
+            load_type: _resolve_factor(value, options.S_DS)
+            for option in choice
+            for load_type, value in option
+        }
         factors = {key: value for key, value in factors.items() if value != 0.0}
+        if not factors:
+            continue
         combo = Combination("", MappingProxyType(factors), template.reference)
         name = f"{template.reference} ({template.number}): {combo.text()}"
         result.append(Combination(name, combo.factors, template.reference))
-    return result
-
-
-def _product(options: list[list[tuple[str, float | str]]]) -> list[list[tuple[str, float | str]]]:
-    result: list[list[tuple[str, float | str]]] = [[]]
-    for group in options:
-        result = [[*chosen, term] for chosen in result for term in group]
     return result
 
 
@@ -268,47 +450,206 @@ def _resolve_factor(value: float | str, S_DS: float | None) -> float:
     return round(base + sign * coefficient * float(S_DS or 0.0), 12)
 
 
-def _en_1990(
-    present: Sequence[str], category: str, psi0: Mapping[str, float] | None
-) -> list[Combination]:
-    key = str(category).strip().upper()
-    if key not in PSI0_IMPOSED:
-        raise InputError("imposed_category", category, f"one of {', '.join(PSI0_IMPOSED)}")
-    psi = {"Q": PSI0_IMPOSED[key], "S": PSI0_SNOW, "W": PSI0_WIND}
-    for load_type, value in (psi0 or {}).items():
-        if load_type not in psi:
-            raise InputError("psi0", load_type, "ψ0 of Q, S or W")
-        number = float(value)
-        if not 0.0 <= number <= 1.0:
-            raise InputError(f"psi0 {load_type}", value, "a factor from 0 to 1")
-        psi[load_type] = number
+def _en_1990(present: Sequence[str], options: _Options) -> list[Combination]:
+    """EN 1990 Eq. (6.10) or Eq. (6.10a) and (6.10b), Table A1.2(B) (set B, STR/GEO)."""
     variables = [load_type for load_type in ("Q", "S", "W") if load_type in present]
-    reference = f"{EN_1990}, Table A1.2(B)"
-    templates: list[tuple[str, dict[str, float]]] = []
-    if "G" in present:
-        templates.append(("", {"G": GAMMA_G_SUP}))
-    for leading in variables:
-        for gamma_G in (GAMMA_G_SUP, GAMMA_G_INF):
-            factors = {"G": gamma_G} if "G" in present else {}
-            factors[leading] = GAMMA_Q
-            # Imposed loads on roofs (category H) are not combined with snow or wind
-            # (EN 1990 A1.2.1(3), from memory).
-            roof_leading = leading == "Q" and key == "H"
-            for other in variables:
-                if other == leading or roof_leading:
-                    continue
-                factor = round(GAMMA_Q * psi[other], 12)
-                if factor != 0.0:
-                    factors[other] = factor
-            templates.append((leading, factors))
+    permanent = "G" in present
     result: list[Combination] = []
-    for leading, factors in templates:
-        if any(factors == dict(other.factors) for other in result):
-            continue
-        combo = Combination("", MappingProxyType(factors), reference)
-        role = f", {leading} leading" if leading else ""
-        result.append(Combination(f"{EN_1990}{role}: {combo.text()}", combo.factors, reference))
+    if options.en1990_expression == "6.10":
+        if permanent:
+            result.append(_en_combination("6.10", "", {"G": GAMMA_G_SUP}))
+        result += _en_leading("6.10", GAMMA_G_SUP, variables, permanent, options)
+        return result
+    # Eq. (6.10a): permanent actions and every variable action at its combination value.
+    for gamma_G in (GAMMA_G_SUP, GAMMA_G_INF):
+        for factors in _en_accompanying({"G": gamma_G} if permanent else {}, variables, options):
+            if set(factors) == {"G"} and gamma_G != GAMMA_G_SUP:
+                continue  # permanent actions alone: 1.35G only
+            result.append(_en_combination("6.10a", "", factors))
+    # Eq. (6.10b): ξ·γG,sup on unfavourable permanent actions, one variable action leading.
+    result += _en_leading("6.10b", round(XI * GAMMA_G_SUP, 12), variables, permanent, options)
     return result
+
+
+def _en_leading(
+    expression: str,
+    gamma_G_sup: float,
+    variables: Sequence[str],
+    permanent: bool,
+    options: _Options,
+) -> list[Combination]:
+    """Each variable action leading at γQ = 1.5, the others at γQ·ψ0 or omitted."""
+    result = []
+    for leading in variables:
+        # Imposed loads on roofs (category H) are not combined with snow or wind
+        # (EN 1991-1-1 3.3.2(1), from memory).
+        roof_leading = leading == "Q" and options.imposed_category == "H"
+        others = [] if roof_leading else [other for other in variables if other != leading]
+        for gamma_G in (gamma_G_sup, GAMMA_G_INF):
+            for sense in _senses((leading, GAMMA_Q), options):
+                start = {"G": gamma_G} if permanent else {}
+                start[leading] = float(sense[1])
+                for factors in _en_accompanying(start, others, options):
+                    result.append(_en_combination(expression, leading, factors))
+    return result
+
+
+def _en_accompanying(
+    start: dict[str, float], others: Sequence[str], options: _Options
+) -> list[dict[str, float]]:
+    """``start`` with each accompanying action at γQ·ψ0 (either sense if asked) or omitted.
+
+    A favourable variable action takes γQ = 0 (EN 1990 Table A1.2(B)), so each one
+    is also left out. The sets with every action acting come first.
+    """
+    result = [dict(start)]
+    for other in others:
+        factor = round(GAMMA_Q * options.psi0[other], 12)
+        if factor == 0.0:
+            continue
+        senses = [value for _, value in _senses((other, factor), options)]
+        result = [{**factors, other: value} for factors in result for value in senses] + result
+    return result
+
+
+def _en_combination(expression: str, leading: str, factors: dict[str, float]) -> Combination:
+    reference = f"EN 1990 Eq. ({expression}), Table A1.2(B)"
+    combo = Combination("", MappingProxyType(factors), reference)
+    role = f", {leading} leading" if leading else ""
+    return Combination(
+        f"EN 1990 Eq. ({expression}){role}: {combo.text()}", combo.factors, reference
+    )
+
+
+# --- the rules in words, for the sheet ---------------------------------------------------------
+
+
+def combination_rules_text(
+    standard: str,
+    types_present: Iterable[str],
+    *,
+    S_DS: float | None = None,
+    imposed_category: str = "A",
+    psi0: Mapping[str, float] | None = None,
+    reverse_lateral: bool = False,
+    en1990_expression: str = "6.10",
+    snow_site: str = "H <= 1000 m",
+    load_names: Mapping[str, Sequence[str]] | None = None,
+) -> str:
+    """How many combinations :func:`combinations` gives, and by which rules, in words.
+
+    Takes the same arguments; the text cites the clauses it applies, for a sheet.
+    """
+    types = list(types_present)
+    combos = combinations(
+        standard,
+        types,
+        S_DS=S_DS,
+        imposed_category=imposed_category,
+        psi0=psi0,
+        reverse_lateral=reverse_lateral,
+        en1990_expression=en1990_expression,
+        snow_site=snow_site,
+        load_names=load_names,
+    )
+    name = _standard(standard)
+    present = _types(types, name, load_names)
+    options = _options(
+        name,
+        S_DS=S_DS,
+        imposed_category=imposed_category,
+        psi0=psi0,
+        reverse_lateral=reverse_lateral,
+        en1990_expression=en1990_expression,
+        snow_site=snow_site,
+        present=present,
+    )
+    count = f"{len(combos)} load combination{'s' if len(combos) != 1 else ''}"
+    loads = f"for the load types {', '.join(present)}"
+    if name == EN_1990:
+        return f"{count} of EN 1990:2002 {loads}. " + _en_rules(present, options)
+    edition = " ".join(name.split()[:2])  # "ASCE 7-22"
+    return f"{count} of {edition} {loads}. " + _asce_rules(name, present, options)
+
+
+def _sense_words(options: _Options, lateral: str) -> str:
+    verb = "act" if lateral.endswith("s") else "acts"
+    if options.reverse_lateral:
+        return f"{lateral} {verb} both as given and reversed (−1 times the factor)."
+    return f"{lateral} {verb} in the sense given."
+
+
+def _asce_rules(name: str, present: Sequence[str], options: _Options) -> str:
+    edition = name.split(" ")[1]
+    strength = name.endswith("strength")
+    basic, seismic = ("2.3.1", "2.3.6") if strength else ("2.4.1", "2.4.5")
+    design = "strength design" if strength else "allowable stress design"
+    text = f"Basic combinations of ASCE {edition} {basic} ({design})"
+    if "E" in present:
+        text += (
+            f" and {seismic} (with seismic load effects; E is the horizontal effect E_h and "
+            f"the vertical effect E_v = 0.2·S_DS·D of 12.4.2.2 enters the factor on D, "
+            f"S_DS = {options.S_DS:g})"
+        )
+    text += (
+        f". As {basic} requires the effects of one or more loads not acting to be "
+        "investigated, each variable load other than the principal one is taken both "
+        "acting and not acting; dead load always acts; a combination whose principal "
+        "load has no load in this job is not listed; repeated sets of factors are listed once. "
+    )
+    lateral = [{"W": "wind", "E": "earthquake"}[t] for t in LATERAL_TYPES if t in present]
+    if lateral:
+        words = " and ".join(lateral).capitalize() + (" loads" if len(lateral) > 1 else " load")
+        text += _sense_words(options, words)
+    return text.strip()
+
+
+def _en_rules(present: Sequence[str], options: _Options) -> str:
+    if options.en1990_expression == "6.10":
+        text = (
+            "Fundamental combinations of Eq. (6.10) with the partial factors of Table A1.2(B) "
+            f"(set B): permanent actions at γG,sup = {GAMMA_G_SUP:.2f} and, where favourable, "
+            f"γG,inf = {GAMMA_G_INF:.2f}; each variable action leading in turn at "
+            f"γQ = {GAMMA_Q:.2f}, the others accompanying at γQ·ψ0."
+        )
+    else:
+        text = (
+            "Fundamental combinations of Eq. (6.10a) and Eq. (6.10b), the less favourable "
+            "governing, with the partial factors of Table A1.2(B) (set B): Eq. (6.10a) "
+            f"with permanent actions at γG,sup = {GAMMA_G_SUP:.2f} (γG,inf = {GAMMA_G_INF:.2f} "
+            "where favourable) and every variable action at γQ·ψ0; Eq. (6.10b) with "
+            f"ξ·γG,sup = {XI:g}·{GAMMA_G_SUP:.2f} (γG,inf = {GAMMA_G_INF:.2f} where "
+            f"favourable) and each variable action leading in turn at γQ = {GAMMA_Q:.2f}, "
+            "the others at γQ·ψ0."
+        )
+    text += (
+        " A favourable variable action takes γQ = 0 (Table A1.2(B)), so each accompanying "
+        "variable action is also omitted; repeated sets of factors are listed once."
+    )
+    psi_words = []
+    for load_type in ("Q", "S", "W"):
+        if load_type not in present:
+            continue
+        value = options.psi0[load_type]
+        if load_type in options.psi0_given:
+            source = "given for this job"
+        elif load_type == "Q":
+            source = f"Table A1.1, imposed load category {options.imposed_category}"
+        elif load_type == "S":
+            source = f"Table A1.1, snow, {_SNOW_SITE_WORDS[options.snow_site]}"
+        else:
+            source = "Table A1.1, wind"
+        psi_words.append(f"ψ0 = {value:g} for {load_type} ({source})")
+    if psi_words:
+        text += " " + "; ".join(psi_words) + "."
+    if "Q" in present and options.imposed_category == "H":
+        text += (
+            " Imposed loads on roofs (category H) are not combined with snow or wind "
+            "(EN 1991-1-1 3.3.2(1))."
+        )
+    if "W" in present:
+        text += " " + _sense_words(options, "Wind actions")
+    return text
 
 
 # --- combinations written by the engineer ------------------------------------------------------

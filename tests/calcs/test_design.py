@@ -12,7 +12,7 @@ import numpy as np
 import pytest
 
 from calcsheet.calcs import member_sheet
-from calcsheet.calcs.design import DesignBasis, lightest_section, plan_combinations
+from calcsheet.calcs.design import DesignBasis, check_titles, lightest_section, plan_combinations
 from calcsheet.errors import InputError
 from calcsheet.mechanics import point_load
 from calcsheet.sections import catalog_section
@@ -117,8 +117,16 @@ def test_each_check_names_its_governing_combination() -> None:
     assert axial.factor("D") == 1.4 and flexure_y.factor("W") == 1.0
     sheet = _sheet(basis)
     tables = [
-        part
-        for part in sheet.parts
-        if getattr(part, "columns", ())[:2] == ("Check", "Governing combination")
+        part for part in sheet.parts if getattr(part, "columns", ())[:2] == ("Combination", "(1)")
     ]
-    assert tables and len(tables[0].rows) == len(plan.per_check)
+    # Every combination x every check, and a last row with each check's worst.
+    assert tables and len(tables[0].rows) == len(plan.combos) + 1
+    assert len(tables[0].columns) == len(plan.per_check) + 1
+    # Each check on the sheet stands for its worst combination.
+    titles = check_titles(basis)
+    for check in sheet.checks:
+        key = next((k for k, title in titles.items() if title == check.description), None)
+        if key is None:
+            continue  # the deflection check: service loads as given
+        assert check.worst_utilization == pytest.approx(float(np.max(plan.per_check[key])))
+        assert check.cases is not None and check.cases.count == len(plan.combos)

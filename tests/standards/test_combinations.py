@@ -33,14 +33,16 @@ def test_load_types_are_listed() -> None:
 def test_asce_7_16_strength_combinations() -> None:
     # ASCE 7-16 2.3.1 (from memory): 1.4D; 1.2D + 1.6L + 0.5(Lr or S or R);
     # 1.2D + 1.6(Lr or S or R) + (L or 0.5W); 1.2D + 1.0W + L + 0.5(Lr or S or R); 0.9D + 1.0W.
-    # Expanded: 1 + 3 + 3·2 + 3 + 1 = 14 combinations.
+    # "Effects of one or more loads not acting shall be investigated" (2.3.1): every
+    # companion also absent. Expanded: 1 + 4 + 3·3 + 2·4 + 1 = 23 combinations.
     combos = combinations("ASCE 7-16 strength", ASCE_GRAVITY_WIND)
+    roof = [{t: 0.5} for t in ("Lr", "S", "R")] + [{}]
     expected = [{"D": 1.4}]
-    expected += [{"D": 1.2, "L": 1.6, t: 0.5} for t in ("Lr", "S", "R")]
+    expected += [{"D": 1.2, "L": 1.6, **r} for r in roof]
     expected += [
-        {"D": 1.2, t: 1.6, o: f} for t in ("Lr", "S", "R") for o, f in (("L", 1.0), ("W", 0.5))
+        {"D": 1.2, t: 1.6, **o} for t in ("Lr", "S", "R") for o in ({"L": 1.0}, {"W": 0.5}, {})
     ]
-    expected += [{"D": 1.2, "W": 1.0, "L": 1.0, t: 0.5} for t in ("Lr", "S", "R")]
+    expected += [{"D": 1.2, "W": 1.0, **live, **r} for live in ({"L": 1.0}, {}) for r in roof]
     expected += [{"D": 0.9, "W": 1.0}]
     assert factors(combos) == expected
     assert combos[0].reference == "ASCE 7-16 2.3.1"
@@ -49,9 +51,9 @@ def test_asce_7_16_strength_combinations() -> None:
 def test_asce_7_22_strength_snow_is_strength_level() -> None:
     # ASCE 7-22 2.3.1: snow maps are strength level, 1.0S where S is principal (STRUCTURE
     # magazine, "Ground Snow Loads for ASCE 7-22", Feb. 2022); 0.3S as a companion (from
-    # memory). Otherwise as 7-16.
+    # memory). Otherwise as 7-16, with every companion also absent (23 combinations).
     combos = combinations("ASCE 7-22 LRFD", ASCE_GRAVITY_WIND)
-    assert len(combos) == 14
+    assert len(combos) == 23
     assert {"D": 1.2, "S": 1.0, "L": 1.0} in factors(combos)
     assert {"D": 1.2, "L": 1.6, "S": 0.3} in factors(combos)
     assert {"D": 1.2, "W": 1.0, "L": 1.0, "S": 0.3} in factors(combos)
@@ -62,9 +64,10 @@ def test_asce_7_22_allowable_stress_combinations() -> None:
     # ASCE 7-22 2.4.1 (from memory; 0.7S confirmed by STRUCTURE magazine, "ASCE 7-22 Flat
     # Roof Snow Load versus Minimum Snow Load": 3a D + (Lr or 0.7S or R), 4a, 6a):
     # D; D + L; D + (Lr or 0.7S or R); D + 0.75L + 0.75(Lr or 0.7S or R); D + 0.6W;
-    # D + 0.75L + 0.75(0.6W) + 0.75(Lr or 0.7S or R); 0.6D + 0.6W.
+    # D + 0.75L + 0.75(0.6W) + 0.75(Lr or 0.7S or R); 0.6D + 0.6W. With loads not acting
+    # (2.4.1): (4) gives 2·4 − 1 = 7 (L or the roof load acts), (6) gives 2·4 = 8.
     combos = factors(combinations("ASCE 7-22 ASD", ASCE_GRAVITY_WIND))
-    assert len(combos) == 1 + 1 + 3 + 3 + 1 + 3 + 1
+    assert len(combos) == 1 + 1 + 3 + 7 + 1 + 8 + 1
     assert combos[:3] == [{"D": 1.0}, {"D": 1.0, "L": 1.0}, {"D": 1.0, "Lr": 1.0}]
     assert {"D": 1.0, "S": 0.7} in combos
     assert {"D": 1.0, "L": 0.75, "S": pytest.approx(0.525)} in combos
@@ -96,15 +99,20 @@ def test_seismic_combinations_need_s_ds() -> None:
 
 
 def test_en_1990_eq_6_10() -> None:
-    # EN 1990 Eq. (6.10), Table A1.2(B) (from memory): γG = 1.35 / 1.00, γQ = 1.5;
+    # EN 1990 Eq. (6.10), Table A1.2(B) (from memory): γG = 1.35 / 1.00, γQ = 1.5, and
+    # 0 for a favourable variable action (so each accompanying one is also omitted);
     # ψ0 = 0.7 (category B), 0.6 (wind), Table A1.1 (from memory).
     combos = combinations("EN 1990", ["G", "Q", "W"], imposed_category="B")
     assert factors(combos) == [
         {"G": 1.35},
         {"G": 1.35, "Q": 1.5, "W": pytest.approx(0.9)},
+        {"G": 1.35, "Q": 1.5},
         {"G": 1.0, "Q": 1.5, "W": pytest.approx(0.9)},
+        {"G": 1.0, "Q": 1.5},
         {"G": 1.35, "W": 1.5, "Q": pytest.approx(1.05)},
+        {"G": 1.35, "W": 1.5},
         {"G": 1.0, "W": 1.5, "Q": pytest.approx(1.05)},
+        {"G": 1.0, "W": 1.5},
     ]
     assert combos[1].name.startswith("EN 1990 Eq. (6.10), Q leading")
     # Category E (storage) ψ0 = 1.0; roofs (H): ψ0 = 0 and not combined with snow or wind.
@@ -142,9 +150,10 @@ def test_combine_numeric_and_envelope() -> None:
     combos = combinations("ASCE 7-22 strength", types)
     combined = combine_numeric(forces, combos, types)
     assert combined.shape == (len(combos), 1, 6)
-    # Hand calc: 1.4·10 = 14; 1.2·10 + 1.6·5 = 20; 1.2·10 − 30 + 5 = −13; 0.9·10 − 30 = −21.
+    # Hand calc: 1.4·10 = 14; 1.2·10 + 1.6·5 = 20; 1.2·10 − 30 + 5 = −13; 1.2·10 − 30 = −18
+    # (L not acting, ASCE 7-22 2.3.1); 0.9·10 − 30 = −21.
     env = envelope(combined)
-    assert combined[:, 0, 4] == pytest.approx([14.0, 20.0, -13.0, -21.0])
+    assert combined[:, 0, 4] == pytest.approx([14.0, 20.0, -13.0, -18.0, -21.0])
     assert env.maximum[0, 4] == pytest.approx(20.0)
     assert env.minimum[0, 4] == pytest.approx(0.9 * 10 - 30)
     assert env.names(combos)[0, 4] == "ASCE 7-22 2.3.1 (5): 0.9D + W"

@@ -4,7 +4,7 @@ Modules: :mod:`.factors` (φ, Ω), :mod:`.classification` (Table B4.1), :mod:`.t
 (D2), :mod:`.compression` (E3, E4-2, E7), :mod:`.flexure` (F2, F3, F6, F7, F8, F10),
 :mod:`.shear` (G2, G3, G4, G5, G6), :mod:`.combined` (H1, H2), :mod:`.second_order`
 (Appendix 8, B1). :func:`write_aisc_checks` writes a member's checks on a sheet;
-:func:`aisc_utilization_numeric` evaluates the same checks on arrays of sections.
+:func:`aisc_checks_numeric` runs the same procedure on arrays of sections and loads.
 """
 
 from calcsheet.standards.aisc360.factors import (
@@ -14,9 +14,13 @@ from calcsheet.standards.aisc360.factors import (
     design_method,
 )
 from calcsheet.standards.aisc360.inputs import Steel
-from calcsheet.standards.aisc360.member import Demands, write_aisc_checks
+from calcsheet.standards.aisc360.member import (
+    CHECK_TITLES,
+    Demands,
+    aisc_member_procedure,
+    write_aisc_checks,
+)
 from calcsheet.standards.aisc360.numeric import (
-    CHECKS,
     DemandArrays,
     aisc_checks_numeric,
     aisc_utilization_numeric,
@@ -29,7 +33,7 @@ from calcsheet.standards.aisc360.section_data import (
 )
 
 __all__ = [
-    "CHECKS",
+    "CHECK_TITLES",
     "AvailableStrength",
     "DemandArrays",
     "Demands",
@@ -37,6 +41,7 @@ __all__ = [
     "SectionTable",
     "Steel",
     "aisc_checks_numeric",
+    "aisc_member_procedure",
     "aisc_utilization_numeric",
     "available_strength",
     "catalog_table",

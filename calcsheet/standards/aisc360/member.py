@@ -11,9 +11,10 @@ factored (LRFD) or combined (ASD). Signs: P_r tension positive; M_rx about x,
 M_ry about y; V_rx along x, V_ry along y (the member sheet's N, M_x, M_y, V_x,
 V_y). For a W shape, V_ry is resisted by the web and V_rx by the flanges.
 
-The numeric twin, for searches over many sections and load combinations, is
-:func:`~calcsheet.standards.aisc360.numeric.aisc_utilization_numeric`; it uses the
-same clauses and, for the same inputs, the same decisions.
+The procedure is written once, :func:`aisc_member_procedure`, against a writer:
+:func:`write_aisc_checks` prints it on a sheet, and
+:func:`~calcsheet.standards.aisc360.numeric.aisc_checks_numeric` evaluates it on
+arrays of sections and load combinations for the searches.
 """
 
 from __future__ import annotations
@@ -26,7 +27,6 @@ import pint
 import sympy as sp
 
 from calcsheet.engine import Check, Sheet, as_written
-from calcsheet.engine.functions import Abs, Piecewise
 from calcsheet.errors import DefinitionError, InputError
 from calcsheet.sections import Section
 from calcsheet.standards.aisc360 import combined, shear
@@ -45,7 +45,12 @@ from calcsheet.standards.aisc360.member_hss import write_rectangular_hss, write_
 from calcsheet.standards.aisc360.member_i import write_i_shape
 from calcsheet.standards.aisc360.numeric import scope_problem
 from calcsheet.standards.aisc360.section_data import SUPPORTED, section_kind, section_values
-from calcsheet.standards.aisc360.writing import MATERIAL_FIXED, SPECIFICATION, Writer
+from calcsheet.standards.aisc360.writing import (
+    MATERIAL_FIXED,
+    SPECIFICATION,
+    write_section_values,
+)
+from calcsheet.standards.procedure import SheetWriter, Writer
 
 SPECIFICATION_TITLE = "ANSI/AISC 360-22, Specification for Structural Steel Buildings (AISC, 2022)"
 _WRITERS: dict[str, Callable[[Writer], Strengths]] = {
@@ -109,7 +114,7 @@ def write_aisc_checks(
             raise DefinitionError(
                 f"AISC 360-22 checks: demand {item.name} must be a symbol of the sheet"
             )
-    w = Writer(sheet, chosen)
+    w = SheetWriter(sheet, chosen)
     sheet.add_basis("Codes and editions", f"{SPECIFICATION_TITLE}, {chosen}.")
     sheet.add_basis("Material", f"{inputs.grade}: F_y, E (and G) as listed in the inputs.")
     sheet.add_reference(SPECIFICATION_TITLE)
@@ -120,13 +125,45 @@ def write_aisc_checks(
             f"V_rx and V_ry along x and y, already {'factored' if chosen == 'LRFD' else 'combined'}"
             f" for {chosen}. Torsion (H3) and connections are not checked here."
         )
-        _write_member_inputs(w, inputs, kind, second_order)
-        sheet.heading(f"Section {section.name}", 2)
-        for value in values.values():
-            w.section_value(value)
-        strengths = _WRITERS[kind](w)
-        _write_demand_side(w, strengths, demands, second_order)
-    return w.checks
+        aisc_member_procedure(w, kind, values, inputs, demands, second_order, name=section.name)
+    return list(w.checks.values())
+
+
+def aisc_member_procedure(
+    w: Writer,
+    kind: str,
+    values: dict,
+    inputs: MemberInputs,
+    demands: Demands,
+    second_order: bool,
+    *,
+    name: str = "",
+) -> None:
+    """The AISC 360-22 member checks, written once for both writers.
+
+    ``values``: the section values (:class:`SectionValue` for a sheet, arrays for an
+    array writer); ``demands``: the required strengths (symbols or arrays). The
+    checks end up in ``w.checks`` under the keys of :data:`CHECK_TITLES`.
+    """
+    _write_member_inputs(w, inputs, kind, second_order)
+    w.heading(f"Section {name}".strip(), 2)
+    write_section_values(w, values)
+    strengths = _WRITERS[kind](w)
+    _write_demand_side(w, strengths, demands, second_order)
+
+
+# The checks of the procedure by key, as titled on the sheet.
+CHECK_TITLES = {
+    "buckling_x": "Axial compression below the elastic buckling load about x",
+    "buckling_y": "Axial compression below the elastic buckling load about y",
+    "axial": "Axial force",
+    "flexure_x": "Flexure about x",
+    "flexure_y": "Flexure about y",
+    "shear": "Shear (resultant)",
+    "shear_x": "Shear along x",
+    "shear_y": "Shear along y",
+    "combined": "Combined axial force and flexure",
+}
 
 
 def _check_scope(kind: str, values: dict, inputs: MemberInputs, name: str) -> None:
@@ -139,8 +176,7 @@ def _check_scope(kind: str, values: dict, inputs: MemberInputs, name: str) -> No
 
 
 def _write_member_inputs(w: Writer, inputs: MemberInputs, kind: str, second_order: bool) -> None:
-    sheet = w.sheet
-    sheet.heading("Material and member", 2)
+    w.heading("Material and member", 2)
     w.input(
         "E",
         inputs.E,
@@ -193,13 +229,12 @@ def _write_member_inputs(w: Writer, inputs: MemberInputs, kind: str, second_orde
 def _write_demand_side(
     w: Writer, strengths: Strengths, demands: Demands, second_order: bool
 ) -> None:
-    sheet = w.sheet
     force = w.unit("force")
-    sheet.heading("Axial strength for the sign of the force", 2)
+    w.heading("Axial strength for the sign of the force", 2)
     P_r = demands.P_r
-    P_c = w.step(
+    P_c = w.branch(
         "P_c",
-        Piecewise((strengths.P_c_t, P_r / strengths.P_c_t >= 0), (strengths.P_c_c, True)),
+        [(strengths.P_c_t, P_r / strengths.P_c_t >= 0), (strengths.P_c_c, True)],
         "Available axial strength: tension when P_r >= 0, compression otherwise",
         unit=force,
         reference="AISC 360-22 Sections D2, E1",
@@ -208,70 +243,61 @@ def _write_demand_side(
     if second_order:
         M_rx, M_ry = _write_b1(w, strengths, demands)
     refs = strengths.references
-    sheet.heading("Combined axial force and flexure (AISC 360-22 Chapter H)", 2)
+    w.heading("Combined axial force and flexure (AISC 360-22 Chapter H)", 2)
+    terms = (
+        w.absolute(P_r),
+        P_c,
+        w.absolute(M_rx),
+        strengths.M_c_x,
+        w.absolute(M_ry),
+        strengths.M_c_y,
+    )
     if strengths.interaction == "H1":
-        eta = w.clause(
-            combined.h1_interaction,
-            "eta_H1",
-            Abs(P_r),
-            P_c,
-            Abs(M_rx),
-            strengths.M_c_x,
-            Abs(M_ry),
-            strengths.M_c_y,
-        )
+        eta = w.clause(combined.h1_interaction, "eta_H1", *terms)
         combined_reference = "AISC 360-22 Eq. H1-1a, H1-1b"
     else:
-        sheet.text(
+        w.text(
             "H2-1 with every term at its largest and added by magnitude: the ratios of required "
             "to available strength stand for the stress ratios at the worst point (conservative)."
         )
-        eta = w.clause(
-            combined.h2_interaction,
-            "eta_H2",
-            Abs(P_r),
-            P_c,
-            Abs(M_rx),
-            strengths.M_c_x,
-            Abs(M_ry),
-            strengths.M_c_y,
-        )
+        eta = w.clause(combined.h2_interaction, "eta_H2", *terms)
         combined_reference = "AISC 360-22 Eq. H2-1"
 
-    sheet.heading("Checks", 2)
-    add = w.checks.append
-    add(sheet.check("Axial force", Abs(P_r), P_c, reference=refs["axial"]))
-    add(sheet.check("Flexure about x", Abs(M_rx), strengths.M_c_x, reference=refs["flexure_x"]))
-    add(sheet.check("Flexure about y", Abs(M_ry), strengths.M_c_y, reference=refs["flexure_y"]))
+    w.heading("Checks", 2)
+    w.check("axial", CHECK_TITLES["axial"], w.absolute(P_r), P_c, reference=refs["axial"])
+    for axis, moment in (("x", M_rx), ("y", M_ry)):
+        key = f"flexure_{axis}"
+        w.check(
+            key,
+            CHECK_TITLES[key],
+            w.absolute(moment),
+            getattr(strengths, f"M_c_{axis}"),
+            reference=refs[key],
+        )
     if strengths.resultant_shear:
         V_r = w.clause(shear.resultant_shear, "V_r", demands.V_rx, demands.V_ry, unit=force)
-        add(sheet.check("Shear (resultant)", V_r, strengths.V_c_x, reference=refs["shear"]))
+        w.check("shear", CHECK_TITLES["shear"], V_r, strengths.V_c_x, reference=refs["shear"])
     else:
-        add(
-            sheet.check(
-                "Shear along x", Abs(demands.V_rx), strengths.V_c_x, reference=refs["shear_x"]
+        for axis in ("x", "y"):
+            key = f"shear_{axis}"
+            w.check(
+                key,
+                CHECK_TITLES[key],
+                w.absolute(getattr(demands, f"V_r{axis}")),
+                getattr(strengths, f"V_c_{axis}"),
+                reference=refs[key],
             )
-        )
-        add(
-            sheet.check(
-                "Shear along y", Abs(demands.V_ry), strengths.V_c_y, reference=refs["shear_y"]
-            )
-        )
-    add(
-        sheet.check(
-            "Combined axial force and flexure", eta, sp.Integer(1), reference=combined_reference
-        )
-    )
+    w.check("combined", CHECK_TITLES["combined"], eta, sp.Integer(1), reference=combined_reference)
 
 
-def _write_b1(w: Writer, strengths: Strengths, demands: Demands) -> tuple[sp.Symbol, sp.Symbol]:
-    sheet = w.sheet
+def _write_b1(w: Writer, strengths: Strengths, demands: Demands) -> tuple:
     force, moment = w.unit("force"), w.unit("moment")
-    sheet.heading("Second-order effects (AISC 360-22 Appendix 8)", 2)
-    sheet.text(
+    w.heading("Second-order effects (AISC 360-22 Appendix 8)", 2)
+    w.text(
         "B1 amplifies each first-order moment for P-δ (Eq. A-8-3), with Pe1 from EI* = EI and "
-        "Lc1 = K·L (the effective length method, K as above). B1 = 1 in tension. Moments from "
-        "a second-order analysis need no B1: build the checks with second_order=False."
+        "Lc1 = K·L (the effective length method, K as above). B1 = 1 in tension. B1 exists "
+        "only while α·P_r stays below Pe1, checked below for each axis. Moments from a "
+        "second-order analysis need no B1: build the checks with second_order=False."
     )
     alpha = w.input(
         "alpha",
@@ -281,37 +307,43 @@ def _write_b1(w: Writer, strengths: Strengths, demands: Demands) -> tuple[sp.Sym
         dimension="dimensionless",
         fixed=SPECIFICATION,
     )
+    P_r = demands.P_r
+    compression = w.branch(
+        "P_r_c",
+        [(-P_r, P_r < 0 * P_r), (0 * P_r, True)],
+        "Axial compression (zero in tension)",
+        unit=force,
+        reference="AISC 360-22 Appendix 8, Section 8.2.1",
+    )
     amplified = []
     for axis, I, M_r in (("x", strengths.I_x, demands.M_rx), ("y", strengths.I_y, demands.M_ry)):
         P_e1 = w.clause(
             appendix8.euler_load, f"P_e1_{axis}", w["E"] * I, w["K"], w["L"], unit=force
         )
-        compression = float(-w.sheet.value(demands.P_r).to(force).m)
-        if appendix8.amplification_alpha(w.method) * compression >= w.value(f"P_e1_{axis}"):
-            # B1 has no value: the member buckles under the load. Say so with a failing
-            # check instead of refusing to write the sheet; the moments stay first-order.
-            sheet.text(
-                f"α·|P_r| ≥ P_e1 about {axis}: the member buckles under the axial load and B1 "
+        key = f"buckling_{axis}"
+        w.check(
+            key, CHECK_TITLES[key], alpha * compression, P_e1, reference="AISC 360-22 Eq. A-8-3"
+        )
+        buckles = w.holds(alpha * compression, ">=", P_e1)
+
+        def first_order(M_r=M_r, axis=axis):
+            # B1 has no value: the member buckles under the load (the check above
+            # fails); the moments stay first-order.
+            w.text(
+                f"α·P_r ≥ P_e1 about {axis}: the member buckles under the axial load and B1 "
                 "is undefined. NOT OK: choose a stiffer section or a shorter member."
             )
-            w.checks.append(
-                sheet.check(
-                    f"Axial compression below the elastic buckling load about {axis}",
-                    alpha * Abs(demands.P_r),
-                    P_e1,
-                    reference="AISC 360-22 Eq. A-8-3",
-                )
-            )
-            amplified.append(M_r)
-            continue
-        B_1 = w.clause(appendix8.b1_multiplier, f"B_1_{axis}", w["C_m"], alpha, demands.P_r, P_e1)
-        amplified.append(
-            w.step(
+            return M_r
+
+        def second_order(M_r=M_r, axis=axis, P_e1=P_e1):
+            B_1 = w.clause(appendix8.b1_multiplier, f"B_1_{axis}", w["C_m"], alpha, P_r, P_e1)
+            return w.step(
                 f"M_r{axis}_2",
                 B_1 * M_r,
                 f"Required flexural strength about {axis} with P-δ",
                 unit=moment,
                 reference="AISC 360-22 Eq. A-8-1",
             )
-        )
+
+        amplified.append(w.choose(buckles, first_order, second_order))
     return amplified[0], amplified[1]

@@ -12,16 +12,17 @@ from __future__ import annotations
 
 from calcsheet.standards.aisc360 import classification as b4
 from calcsheet.standards.aisc360 import compression, flexure, shear
-from calcsheet.standards.aisc360.classification import Classification
 from calcsheet.standards.aisc360.factors import FLEXURE, SHEAR
 from calcsheet.standards.aisc360.member_common import (
     Strengths,
     classify_element,
     write_compression_available,
     write_flexural_buckling,
+    write_nominal_compression,
     write_tension,
 )
-from calcsheet.standards.aisc360.writing import SPECIFICATION, Writer
+from calcsheet.standards.aisc360.writing import SPECIFICATION, write_available
+from calcsheet.standards.procedure import Candidate, Writer
 
 LIMITATIONS = (
     "Limitations for single angles: flexural buckling is checked about the minor principal "
@@ -35,27 +36,24 @@ LIMITATIONS = (
 
 
 def write_single_angle(w: Writer) -> Strengths:
-    """Write the strengths of an equal-leg single angle."""
-    sheet, E, F_y, t, b = w.sheet, w["E"], w["F_y"], w["t"], w["b"]
+    """The strengths of an equal-leg single angle."""
+    E, F_y, t, b = w["E"], w["F_y"], w["t"], w["b"]
     stress, force, moment, length = (w.unit(k) for k in ("stress", "force", "moment", "length"))
-    sheet.text(LIMITATIONS)
+    w.text(LIMITATIONS)
 
-    sheet.heading("Width-to-thickness ratio (AISC 360-22 Table B4.1)", 2)
+    w.heading("Width-to-thickness ratio (AISC 360-22 Table B4.1)", 2)
     lam = w.clause(b4.width_thickness_ratio, "lambda_L", b, t)
     leg_c = classify_element(w, b4.ANGLE_LEG_COMPRESSION, lam, suffix="_c")
     leg_f = classify_element(w, b4.ANGLE_LEG_FLEXURE, lam, suffix="L")
 
     P_c_t = write_tension(w)
 
-    sheet.heading("Compression (AISC 360-22 Chapter E)", 2)
+    w.heading("Compression (AISC 360-22 Chapter E)", 2)
     F_cr = write_flexural_buckling(w, w["r_z"])
-    slender = leg_c.classification is Classification.SLENDER
-    if not slender:
-        P_n_c = w.clause(
-            compression.nominal_compressive_strength, "P_n_c", F_cr, w["A_g"], unit=force
-        )
-    else:
-        sheet.text("Slender legs: effective area per E7 (Table E7.1 case (c)), both legs alike.")
+    slender = leg_c.slender(w)
+
+    def effective_area():
+        w.text("Slender legs: effective area per E7 (Table E7.1 case (c)), both legs alike.")
         F_el = w.clause(
             compression.LOCAL_BUCKLING_STRESS["c"], "F_el", leg_c.lambda_r, lam, F_y, unit=stress
         )
@@ -70,15 +68,14 @@ def write_single_angle(w: Writer) -> Strengths:
             F_el,
             unit=length,
         )
-        A_e = w.clause(compression.effective_area_angle, "A_e", w["A_g"], b, b_e, b, b_e, t)
-        P_n_c = w.clause(
-            compression.nominal_compressive_strength_slender, "P_n_c", F_cr, A_e, unit=force
-        )
+        return w.clause(compression.effective_area_angle, "A_e", w["A_g"], b, b_e, b, b_e, t)
+
+    P_n_c = write_nominal_compression(w, F_cr, slender, effective_area)
     P_c_c = write_compression_available(w, P_n_c)
 
     M_c = {}
     for axis in ("x", "y"):
-        sheet.heading(f"Flexure about {axis} (AISC 360-22 Section F10)", 2)
+        w.heading(f"Flexure about {axis} (AISC 360-22 Section F10)", 2)
         S = w[f"S_{axis}"]
         M_y = w.clause(flexure.angle_yield_moment, f"M_y_{axis}", F_y, S, unit=moment)
         M_yield = w.clause(flexure.angle_yielding, f"M_n_Y_{axis}", M_y, unit=moment)
@@ -94,27 +91,34 @@ def write_single_angle(w: Writer) -> Strengths:
             unit=moment,
         )
         M_ltb = w.clause(flexure.angle_ltb, f"M_n_LTB_{axis}", M_y_b, M_cr, unit=moment)
-        candidates = [("yielding (F10.1)", M_yield), ("lateral-torsional buckling (F10.2)", M_ltb)]
-        if leg_f.classification is not Classification.COMPACT:
-            M_llb = w.clause(
-                flexure.angle_leg_local_buckling,
-                f"M_n_LLB_{axis}",
-                F_y,
-                S,
-                lam,
-                leg_f.lambda_r,
-                E,
-                unit=moment,
-            )
-            candidates.append(("leg local buckling (F10.3)", M_llb))
-        M_n = w.governing_min(
-            f"M_n_{axis}", candidates, f"Nominal flexural strength about {axis}", moment
+        M_n = w.smallest(
+            f"M_n_{axis}",
+            [
+                Candidate("yielding (F10.1)", lambda M=M_yield: M),
+                Candidate("lateral-torsional buckling (F10.2)", lambda M=M_ltb: M),
+                Candidate(
+                    "leg local buckling (F10.3)",
+                    lambda S=S, axis=axis: w.clause(
+                        flexure.angle_leg_local_buckling,
+                        f"M_n_LLB_{axis}",
+                        F_y,
+                        S,
+                        lam,
+                        leg_f.lambda_r,
+                        E,
+                        unit=moment,
+                    ),
+                    w.negate(leg_f.compact(w)),
+                ),
+            ],
+            f"Nominal flexural strength about {axis}",
+            moment,
         )
-        M_c[axis] = w.available(
-            f"M_c_{axis}", M_n, FLEXURE, f"Available flexural strength about {axis}", unit=moment
+        M_c[axis] = write_available(
+            w, f"M_c_{axis}", M_n, FLEXURE, f"Available flexural strength about {axis}", unit=moment
         )
 
-    sheet.heading("Shear (AISC 360-22 Section G3)", 2)
+    w.heading("Shear (AISC 360-22 Section G3)", 2)
     k_v = w.input(
         "k_v",
         shear.KV_FLANGE_OR_LEG,
@@ -125,7 +129,7 @@ def write_single_angle(w: Writer) -> Strengths:
     )
     C_v2 = w.clause(shear.shear_buckling_coefficient, "C_v2", lam, k_v, E, F_y)
     V_n = w.clause(shear.angle_shear_strength, "V_n", F_y, b, t, C_v2, unit=force)
-    V_c = w.available("V_c", V_n, SHEAR, "Available shear strength of one leg", unit=force)
+    V_c = write_available(w, "V_c", V_n, SHEAR, "Available shear strength of one leg", unit=force)
     return Strengths(
         P_c_t,
         P_c_c,
@@ -136,7 +140,7 @@ def write_single_angle(w: Writer) -> Strengths:
         w["I_x"],
         w["I_y"],
         references={
-            "axial": "AISC 360-22 Sections D2, E3" + (", E7" if slender else ""),
+            "axial": "AISC 360-22 Sections D2, E3" + (", E7" if w.prints and slender else ""),
             "flexure_x": "AISC 360-22 Section F10",
             "flexure_y": "AISC 360-22 Section F10",
             "shear_x": "AISC 360-22 Section G3",

@@ -1,0 +1,96 @@
+"""Each check's reported utilization is its worst over every combination, found by brute force.
+
+Issue 12 failure 4: the summary and the JSON showed each check at the combination
+that governs overall, not at its own worst. Here every combination is also written
+as a sheet of its own (the loads multiplied by the combination's factors and taken
+as given, so only the printed procedure is involved) and each check's reported
+worst must equal the largest utilization of that check over those sheets. The live
+load is turned through several angles so that different checks peak under
+different combinations.
+
+Scenario (our own, invented numbers): a 7 ft W8x31 outrigger with a dead-load
+hanger at the tip below the centroid, a live-load pull through a bracket and a
+wind push along x.
+"""
+
+from __future__ import annotations
+
+import pytest
+
+from calcsheet.build.results import sheet_results
+from calcsheet.calcs import member_sheet
+from calcsheet.calcs.design import DesignBasis, plan_combinations
+from calcsheet.mechanics import point_load
+from calcsheet.mechanics.loads import PointLoad
+from calcsheet.sections import catalog_section
+from calcsheet.units import Quantity
+
+SECTION = catalog_section("W8x31")
+LENGTH = Quantity(84, "in")
+TYPES = ["D", "L", "W"]
+
+
+def _loads(angle_deg: float) -> list[PointLoad]:
+    return [
+        point_load("hanger", magnitude="3 kip", angle="90 deg", z="84 in", ey="-4 in"),
+        point_load(
+            "pull", magnitude="4 kip", angle=f"{angle_deg} deg", z="60 in", ex="2 in", ey="3 in"
+        ),
+        point_load("wind", components=("0.9 kip", "0 kip", "0 kip"), z="84 in"),
+    ]
+
+
+def _scaled(loads: list[PointLoad], factors: list[float]) -> list[PointLoad]:
+    return [
+        point_load(
+            load.name,
+            components=(factor * load.Fx, factor * load.Fy, factor * load.Fz),
+            z=load.z,
+            ex=load.ex,
+            ey=load.ey,
+        )
+        for load, factor in zip(loads, factors, strict=True)
+        if factor != 0.0
+    ]
+
+
+@pytest.mark.parametrize("method", ["LRFD", "ASD"])
+@pytest.mark.parametrize("angle_deg", [0.0, 135.0, 250.0])
+def test_each_check_reports_its_worst_combination(method: str, angle_deg: float) -> None:
+    basis = DesignBasis("AISC 360-22", method=method)
+    loads = _loads(angle_deg)
+    sheet = member_sheet(SECTION, loads, length=LENGTH, design=basis, load_types=TYPES)
+    plan = plan_combinations(
+        SECTION, loads, TYPES, LENGTH, Quantity(0, "in"), basis, sheet.value("F_y")
+    )
+    given = DesignBasis("AISC 360-22", method=method, combinations="none")
+    brute: dict[str, float] = {}
+    for combo in plan.combos:
+        factors = [combo.factor(kind) for kind in TYPES]
+        acting = [kind for kind, factor in zip(TYPES, factors, strict=True) if factor != 0.0]
+        one = member_sheet(
+            SECTION, _scaled(loads, factors), length=LENGTH, design=given, load_types=acting
+        )
+        for check in one.checks:
+            brute[check.description] = max(brute.get(check.description, 0.0), check.utilization)
+    reported = {check.description: check for check in sheet.checks}
+    for description, worst in brute.items():
+        if description == "Tip deflection":
+            continue  # a service check under the loads as given, not under combinations
+        assert reported[description].worst_utilization == pytest.approx(worst, rel=1e-9, abs=1e-12)
+    results = {c["description"]: c for c in sheet_results(sheet)["checks"]}
+    for description, worst in brute.items():
+        if description != "Tip deflection":
+            assert results[description]["utilization"] == pytest.approx(worst, rel=1e-9, abs=1e-12)
+    assert sheet_results(sheet)["all_pass"] == all(v <= 1.0 for v in brute.values())
+
+
+def test_a_check_can_peak_under_another_combination_than_the_governing_one() -> None:
+    """The case issue 12 reported: the scenario has a check whose worst combination is
+    not the one written out, so the old summary understated it."""
+    basis = DesignBasis("AISC 360-22", method="LRFD")
+    sheet = member_sheet(SECTION, _loads(135.0), length=LENGTH, design=basis, load_types=TYPES)
+    moved = [check for check in sheet.checks if check.worst_case]
+    assert moved, "no check peaks under another combination: the scenario lost its point"
+    for check in moved:
+        assert check.worst_utilization > check.utilization
