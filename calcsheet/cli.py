@@ -1,9 +1,12 @@
 """The command line: ``calcsheet build | check | new | compare | batch``.
 
-Exit status: 0 done (and, for check, every check passes), 1 a check fails,
-2 bad input (the message names the file, the key and the problem), 3 an output
-could not be written (disk full, read-only folder, PDF engine), or an internal
-error. Heavy modules are imported only by the command that needs them.
+Exit status: 0 done and every check passes, 1 a check fails (build, check and
+batch alike; the files are still written), 2 bad input or usage (the message names
+the file, the key and the problem), 3 an output could not be written (disk full,
+read-only folder, PDF engine, another build holding the folder too long), 4 an
+internal error (a bug: please report it), 130 stopped by Ctrl-C (every file is
+whole: the old one or the new one). Heavy modules are imported only by the
+command that needs them.
 """
 
 from __future__ import annotations
@@ -18,16 +21,34 @@ examples:
   calcsheet new davit.toml                 write a commented starter job
   calcsheet build davit.toml               PDF, HTML and JSON into the job's output folder
   calcsheet build davit.toml --out sheets  ... into ./sheets instead
+  calcsheet build davit.toml --replace-issued   replace this revision's files with new inputs
   calcsheet check davit.toml               exit 0 if every check passes, 1 if not, 2 bad input
   calcsheet compare rev-A.toml rev-B.toml  the revision delta as PDF and HTML
   calcsheet batch members.toml             one sheet per member plus a summary
   calcsheet batch members.csv --base davit.toml
 """
 
-OK, CHECK_FAILS, BAD_INPUT, NOT_WRITTEN = 0, 1, 2, 3
+OK, CHECK_FAILS, BAD_INPUT, NOT_WRITTEN, INTERNAL = 0, 1, 2, 3, 4
+INTERRUPTED = 130  # 128 + SIGINT, as shells report a command stopped by Ctrl-C
 # A batch of 5,000 members (the batch limit) is well under this; larger is not a table.
 MAX_TABLE_BYTES = 20_000_000
-INTERNAL = NOT_WRITTEN
+REPLACE_ISSUED_HELP = (
+    "replace files already written for this revision even though the inputs changed "
+    "(without it such a build is refused: add a revision instead)"
+)
+
+
+def _processes(text: str) -> int:
+    """``--workers``: a whole number of at least 1."""
+    try:
+        value = int(text)
+    except ValueError:
+        value = 0
+    if value < 1:
+        raise argparse.ArgumentTypeError(
+            f"expected a whole number of processes, at least 1 (got {text!r})"
+        )
+    return value
 
 
 def _parser() -> argparse.ArgumentParser:
@@ -51,6 +72,7 @@ def _parser() -> argparse.ArgumentParser:
     build = command("build", "build a job file into PDF, HTML and JSON", "calcsheet build job.toml")
     build.add_argument("job", type=Path, help="the job file (TOML)")
     build.add_argument("--out", type=Path, help="output folder (default: the job's output.folder)")
+    build.add_argument("--replace-issued", action="store_true", help=REPLACE_ISSUED_HELP)
     check = command(
         "check",
         "check a job without writing files; exit 1 if a check fails",
@@ -67,15 +89,27 @@ def _parser() -> argparse.ArgumentParser:
     compare.add_argument("old", type=Path)
     compare.add_argument("new", type=Path)
     compare.add_argument("--out", type=Path, help="output folder (default: the new job's)")
+    compare.add_argument(
+        "--other-member",
+        action="store_true",
+        help="allow the two jobs to be different members (refused otherwise)",
+    )
     batch = command(
         "batch",
         "build many members from one table, in parallel",
         "calcsheet batch members.csv --base davit.toml --out sheets",
     )
     batch.add_argument("table", type=Path, help="a TOML batch ([defaults], [[members]]) or CSV")
-    batch.add_argument("--base", type=Path, help="base job for a CSV table")
+    batch.add_argument(
+        "--base",
+        type=Path,
+        help="base job: needed for a CSV table; under a TOML batch's [defaults] if given",
+    )
     batch.add_argument("--out", type=Path, help="output folder (default: ./batch-out)")
-    batch.add_argument("--workers", type=int, default=None, help="processes (default: CPUs)")
+    batch.add_argument(
+        "--workers", type=_processes, default=None, help="processes, at least 1 (default: CPUs)"
+    )
+    batch.add_argument("--replace-issued", action="store_true", help=REPLACE_ISSUED_HELP)
     return parser
 
 
@@ -86,21 +120,24 @@ def _build(arguments: argparse.Namespace) -> int:
     job = read_job(arguments.job)
     result = build_sheets(job, source=str(arguments.job))
     folder = output_folder(job, arguments.job.parent, arguments.out)
-    for path in write_outputs(result, folder):
+    for path in write_outputs(result, folder, replace_issued=arguments.replace_issued):
         print(f"wrote {path}")
     print(result.summary())
-    return OK
+    return OK if result.all_pass else CHECK_FAILS
 
 
 def _check(arguments: argparse.Namespace) -> int:
-    from calcsheet.build import build_sheets
+    from calcsheet.build import build_sheets, output_folder
     from calcsheet.errors import CalcsheetError
     from calcsheet.job import JobError, read_job
 
     status = OK
     for path in arguments.jobs:
         try:
-            result = build_sheets(read_job(path), source=str(path))
+            job = read_job(path)
+            result = build_sheets(job, source=str(path))
+            # What build would refuse, check refuses too (a folder outside the job's).
+            output_folder(job, path.parent)
         except JobError as error:
             print(str(error), file=sys.stderr)
             status = BAD_INPUT
@@ -118,25 +155,44 @@ def _check(arguments: argparse.Namespace) -> int:
 def _new(arguments: argparse.Namespace) -> int:
     from calcsheet.job.starter import STARTER
 
+    path: Path = arguments.job
     try:
-        with open(arguments.job, "x", encoding="utf-8") as handle:
+        with open(path, "x", encoding="utf-8") as handle:
             handle.write(STARTER)
     except FileExistsError:
-        print(f"{arguments.job}: already exists; not overwritten", file=sys.stderr)
+        if path.is_dir():
+            print(
+                f"{path}: is a folder; give a file name such as {path / 'job.toml'}",
+                file=sys.stderr,
+            )
+        else:
+            print(f"{path}: already exists; not overwritten", file=sys.stderr)
         return BAD_INPUT
-    print(f"wrote {arguments.job}: edit it, then run: calcsheet build {arguments.job}")
+    except FileNotFoundError:
+        print(
+            f"{path}: the folder {path.parent} does not exist; create it first "
+            "(mkdir) or give a path in an existing folder",
+            file=sys.stderr,
+        )
+        return BAD_INPUT
+    except (OSError, ValueError) as error:  # ValueError: a NUL byte in the name
+        reason = getattr(error, "strerror", None) or str(error)
+        print(f"cannot write {path}: {reason}", file=sys.stderr)
+        return NOT_WRITTEN
+    print(f"wrote {path}: edit it, then run: calcsheet build {path}")
     return OK
 
 
 def _compare(arguments: argparse.Namespace) -> int:
     from calcsheet.build import build_sheets, output_folder, safe_stem
-    from calcsheet.build.compare import changed_inputs, delta_sheet
+    from calcsheet.build.compare import changed_inputs, check_comparable, delta_sheet
     from calcsheet.export.files import export_sheet
     from calcsheet.job import read_job
 
     old_job, new_job = read_job(arguments.old), read_job(arguments.new)
     old = build_sheets(old_job, source=str(arguments.old))
     new = build_sheets(new_job, source=str(arguments.new))
+    check_comparable(old, new, other_member=arguments.other_member)
     for change in changed_inputs(old, new):
         print(f"{change.path}: {change.old} -> {change.new}")
     sheet = delta_sheet(old, new)
@@ -148,8 +204,28 @@ def _compare(arguments: argparse.Namespace) -> int:
     return OK
 
 
+def _read_text(path: Path, *, limit: int, kind: str) -> str:
+    """A batch table or base job as text (a byte-order mark is dropped); JobError if not."""
+    from calcsheet.job import JobError
+
+    try:
+        size = path.stat().st_size
+        if size > limit:
+            raise JobError(str(path), [("", f"{size:,} bytes; a {kind} is at most {limit:,}")])
+        return path.read_text(encoding="utf-8-sig")
+    except FileNotFoundError:
+        raise JobError(str(path), [("", "no such file")]) from None
+    except IsADirectoryError:
+        raise JobError(str(path), [("", f"this is a folder, not a {kind}")]) from None
+    except (OSError, UnicodeDecodeError) as error:
+        reason = getattr(error, "strerror", None) or str(error)
+        raise JobError(str(path), [("", f"cannot read it: {reason}")]) from None
+
+
 def _batch(arguments: argparse.Namespace) -> int:
     from calcsheet.build.batch import (
+        LOG_NAME,
+        batch_log,
         members_from_csv,
         members_from_toml,
         run_batch,
@@ -158,41 +234,45 @@ def _batch(arguments: argparse.Namespace) -> int:
     )
     from calcsheet.export.files import export_sheet, make_folder, write_atomically
     from calcsheet.job import JobError
+    from calcsheet.job.load import MAX_JOB_BYTES
 
     table: Path = arguments.table
-    try:
-        size = table.stat().st_size
-        if size > MAX_TABLE_BYTES:
-            raise JobError(
-                str(table), [("", f"{size:,} bytes; a batch table is at most {MAX_TABLE_BYTES:,}")]
-            )
-        text = table.read_text(encoding="utf-8")
-    except (OSError, UnicodeDecodeError) as error:
-        raise JobError(str(table), [("", f"cannot read it: {error}")]) from None
-    if table.suffix.lower() == ".csv":
-        if arguments.base is None:
-            raise JobError(str(table), [("", "a CSV batch needs --base job.toml")])
+    text = _read_text(table, limit=MAX_TABLE_BYTES, kind="batch table")
+    base = None
+    if arguments.base is not None:
         import tomllib
 
         try:
-            base = tomllib.loads(arguments.base.read_text(encoding="utf-8"))
-        except (OSError, UnicodeDecodeError, tomllib.TOMLDecodeError) as error:
-            raise JobError(str(arguments.base), [("", f"cannot read it: {error}")]) from None
+            base = tomllib.loads(_read_text(arguments.base, limit=MAX_JOB_BYTES, kind="job file"))
+        except tomllib.TOMLDecodeError as error:
+            raise JobError(str(arguments.base), [("", f"TOML syntax error: {error}")]) from None
+    if table.suffix.lower() == ".csv":
+        if base is None:
+            raise JobError(str(table), [("", "a CSV batch needs --base job.toml")])
         members = members_from_csv(text, base, source=str(table))
     else:
-        members = members_from_toml(text, source=str(table))
+        members = members_from_toml(text, source=str(table), base=base)
     folder = arguments.out or Path("batch-out")
     outcomes = run_batch(
-        members, folder, source=str(table), workers=arguments.workers, progress=_progress
+        members,
+        folder,
+        source=str(table),
+        workers=arguments.workers,
+        progress=_progress,
+        replace_issued=arguments.replace_issued,
     )
     for outcome in outcomes:
         if not outcome.ok:
             print(f"skipped {outcome.name}:\n{outcome.message}", file=sys.stderr)
     make_folder(folder)
     write_atomically(folder / "summary.csv", summary_csv(outcomes).encode())
+    write_atomically(folder / LOG_NAME, batch_log(outcomes, source=str(table)).encode())
     for path in export_sheet(summary_sheet(outcomes), folder, "summary"):
         print(f"wrote {path}")
     print(f"wrote {folder / 'summary.csv'}")
+    print(f"wrote {folder / LOG_NAME}")
+    if any(outcome.not_written for outcome in outcomes):
+        return NOT_WRITTEN
     if any(not outcome.ok for outcome in outcomes):
         return BAD_INPUT
     return OK if all(outcome.all_pass for outcome in outcomes) else CHECK_FAILS
@@ -227,8 +307,11 @@ def main(argv: list[str] | None = None) -> int:
         print(str(error), file=sys.stderr)
         return BAD_INPUT
     except KeyboardInterrupt:
-        print("stopped; files written so far are complete, none is half-written", file=sys.stderr)
-        return INTERNAL
+        print(
+            "stopped (Ctrl-C); every file is whole: the one from before, or the new one",
+            file=sys.stderr,
+        )
+        return INTERRUPTED
     except Exception as error:  # the last line of defence: a message, not a traceback
         if os.environ.get("CALCSHEET_DEBUG"):
             raise

@@ -3,6 +3,10 @@
 Written as a sheet of its own (tables, no steps) that an engineer attaches to a
 resubmittal: the changed inputs by key path with old and new text, then every
 check of every station with its old and new utilization and status.
+
+Only revisions of one member compare, the earlier first (:func:`check_comparable`):
+two different members, or a later revision given as the old one, are refused
+unless the caller asks for different members on purpose.
 """
 
 from __future__ import annotations
@@ -14,6 +18,7 @@ from typing import Any
 from calcsheet.build.run import BuildResult
 from calcsheet.build.stamp import normalized
 from calcsheet.engine import Sheet, TitleBlock
+from calcsheet.job import JobError
 
 ABSENT = "(none)"
 
@@ -58,6 +63,65 @@ def changed_inputs(old: BuildResult, new: BuildResult) -> list[InputChange]:
         if normalized(a, key) != normalized(b, key):
             changes.append(InputChange(path, _shown(a), _shown(b)))
     return changes
+
+
+def _current_mark(result: BuildResult) -> str:
+    return result.job.revisions[-1].mark if result.job.revisions else "0"
+
+
+def _mark_order(mark: str) -> tuple[int, int | str] | None:
+    """A mark's place in the usual sequences (0, 1, 2... or A, B, C...); None if neither."""
+    if mark.isdigit():
+        return (0, int(mark))
+    if len(mark) == 1 and mark.isalpha():
+        return (1, mark.upper())
+    return None
+
+
+def _is_later(old: BuildResult, new: BuildResult) -> bool:
+    """Whether the old job's revision comes after the new job's."""
+    old_mark, new_mark = _current_mark(old), _current_mark(new)
+    if old_mark == new_mark:
+        return False  # two versions of one revision: a what-if, in either order
+    old_log = [revision.mark for revision in old.job.revisions]
+    new_log = [revision.mark for revision in new.job.revisions]
+    if new_mark in old_log[:-1]:
+        return True  # the old job's log lists the new one's mark as an earlier issue
+    if old_mark in new_log[:-1]:
+        return False
+    old_place, new_place = _mark_order(old_mark), _mark_order(new_mark)
+    if old_place and new_place and old_place[0] == new_place[0]:
+        return old_place > new_place
+    return False  # nothing tells the order: compare as given
+
+
+def check_comparable(old: BuildResult, new: BuildResult, *, other_member: bool = False) -> None:
+    """Raise :class:`JobError` unless ``new`` is a later (or the same) revision of ``old``'s member.
+
+    ``other_member`` allows two different members (a delta between two similar arms).
+    """
+    problems = []
+    if not other_member and old.job.member.name != new.job.member.name:
+        problems.append(
+            (
+                "member.name",
+                f"the old job is member {old.job.member.name!r} and the new one "
+                f"{new.job.member.name!r}: a revision delta compares two revisions of one "
+                "member; pass --other-member to compare two members on purpose",
+            )
+        )
+    if _is_later(old, new):
+        old_mark, new_mark = _current_mark(old), _current_mark(new)
+        problems.append(
+            (
+                "revisions",
+                f"the old job ({old.source}) is rev. {old_mark}, later than the new job's "
+                f"rev. {new_mark}: give the earlier revision first "
+                f"(calcsheet compare {new.source} {old.source})",
+            )
+        )
+    if problems:
+        raise JobError(f"compare {old.source} with {new.source}", problems)
 
 
 def _checks(result: BuildResult) -> dict[tuple[str, str], dict]:

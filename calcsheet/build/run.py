@@ -1,23 +1,28 @@
 """Build a job: the member sheet at each station, then PDF, HTML and JSON on disk.
 
 File names carry the member, the revision and (with several stations) the
-station, so a new revision never overwrites the files of an earlier one. Every
-output of a job is built in memory before the first is written, and each file is
-written to a temporary name and renamed into place: a failed build leaves the
-previous files as they were.
+station, so a new revision never overwrites the files of an earlier one. Files
+already written for the revision are replaced only by the same inputs (the inputs
+hash in their JSON or HTML): changed inputs need a new revision, or an explicit
+``replace_issued``. Every output of a job is built in memory before the first is
+written, and each file is written to a temporary name and renamed into place: a
+failed build leaves the previous files as they were. Writing holds the output
+folder's lock, so a second build into the folder waits for the first.
 """
 
 from __future__ import annotations
 
 import json
 import re
+from collections.abc import Callable
 from dataclasses import dataclass, field
 from functools import cached_property
 from pathlib import Path
+from typing import Any
 
 from calcsheet.build.model import MemberModel, member_model
 from calcsheet.build.results import sheet_results
-from calcsheet.build.stamp import inputs_hash, stamp_text
+from calcsheet.build.stamp import hash_in_stamp, inputs_hash, stamp_text
 from calcsheet.calcs import member_sheet
 from calcsheet.engine import Sheet
 from calcsheet.errors import CalcsheetError, InputError
@@ -40,6 +45,7 @@ class BuiltSheet:
     sheet: Sheet
     stem: str
     paths: list[Path] = field(default_factory=list)
+    station: str = ""  # "z = 30 in" when the job has several stations
 
     @cached_property
     def results(self) -> dict:
@@ -55,6 +61,7 @@ class BuildResult:
     member: str
     hash: str
     sheets: list[BuiltSheet]
+    source: str = "job"
 
     @property
     def all_pass(self) -> bool:
@@ -70,23 +77,36 @@ class BuildResult:
         ]
         return max(values, default=0.0)
 
-    def summary(self) -> str:
-        """``OA-1: OK, utilization 0.507 (…, at point 6 …) [inputs 3fa9…]``."""
+    def _governing(self) -> tuple[BuiltSheet, Any] | None:
         governing = [
-            (built.sheet, built.sheet.governing_check())
+            (built, built.sheet.governing_check())
             for built in self.sheets
             if built.sheet.governing_check() is not None
         ]
-        status = "OK" if self.all_pass else "NOT OK"
-        if not governing:
-            return f"{self.member}: {status} (no checks) [inputs {self.hash}]"
-        sheet, check = max(governing, key=lambda pair: pair[1].worst_utilization)
-        at = sheet.check_location(check)
+        return max(governing, key=lambda pair: pair[1].worst_utilization, default=None)
+
+    def governing_text(self) -> str:
+        """The governing check, where and under which case it governs (and the station)."""
+        found = self._governing()
+        if found is None:
+            return ""
+        built, check = found
+        at = built.sheet.check_location(check)
         where = f", at {at}" if at else ""
+        if built.station:
+            where += f", station {built.station}"
         case = f", under {check.cases.case}" if check.cases is not None else ""
+        return f"{check.description}{where}{case}"
+
+    def summary(self) -> str:
+        """``OA-1: OK, utilization 0.507 (…, at point 6 …) [inputs 3fa9…]``."""
+        status = "OK" if self.all_pass else "NOT OK"
+        found = self._governing()
+        if found is None:
+            return f"{self.member}: {status} (no checks) [inputs {self.hash}]"
         return (
-            f"{self.member}: {status}, utilization {check.worst_utilization:.3f} "
-            f"({check.description}{where}{case}) [inputs {self.hash}]"
+            f"{self.member}: {status}, utilization {found[1].worst_utilization:.3f} "
+            f"({self.governing_text()}) [inputs {self.hash}]"
         )
 
 
@@ -124,10 +144,12 @@ def build_sheets(job: Job, *, source: str = "job") -> BuildResult:
         sheet = _member_sheet(job, model, station, index, source)
         sheet.stamp = stamp
         stem = f"{base}-rev{revision}"
+        label = ""
         if len(model.stations) > 1:
             stem += "-z" + safe_stem(f"{station.magnitude:g}{station.units:~}")
-        sheets.append(BuiltSheet(sheet, stem))
-    return BuildResult(job, job.member.name, inputs_hash(job), sheets)
+            label = f"z = {station.magnitude:g} {station.units:~}"
+        sheets.append(BuiltSheet(sheet, stem, station=label))
+    return BuildResult(job, job.member.name, inputs_hash(job), sheets, source)
 
 
 def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str) -> Sheet:
@@ -180,10 +202,25 @@ def _placed(source: str, index: int, error: InputError) -> JobError:
     return JobError(source, [(path, str(error))])
 
 
-def write_outputs(result: BuildResult, folder: Path) -> list[Path]:
-    """Render every output of the job, then write each atomically; returns the paths."""
+OUTPUT_SUFFIXES = (".pdf", ".html", ".json")
+
+
+def write_outputs(
+    result: BuildResult,
+    folder: Path,
+    *,
+    replace_issued: bool = False,
+    waiting: Callable[[str], None] | None = None,
+) -> list[Path]:
+    """Render every output of the job, then write each atomically; returns the paths.
+
+    Files already in ``folder`` under the same names (same member, revision and
+    station) are replaced only if they were built from the same inputs, or with
+    ``replace_issued``; otherwise :class:`JobError` asks for a new revision and
+    nothing is written. ``waiting`` is told when another build holds the folder.
+    """
     # Imported here: rendering and the PDF engine are only needed when writing.
-    from calcsheet.export.files import make_folder, pdf_bytes, write_all_atomically
+    from calcsheet.export.files import folder_lock, make_folder, pdf_bytes, write_all_atomically
     from calcsheet.render.html import render_html
 
     formats = result.job.output.formats
@@ -198,8 +235,67 @@ def write_outputs(result: BuildResult, folder: Path) -> list[Path]:
             text = json.dumps(built.results, indent=2, ensure_ascii=False, sort_keys=False)
             rendered.append((folder / f"{built.stem}.json", (text + "\n").encode()))
     make_folder(folder)
-    write_all_atomically(rendered)
+    # The check and the writes under one lock: a build that waited sees what the other wrote.
+    with folder_lock(folder, waiting=waiting):
+        if not replace_issued:
+            refuse_replacing_issued(result, folder)
+        write_all_atomically(rendered)
     written = [path for path, _ in rendered]
     for built in result.sheets:
         built.paths = [path for path in written if path.stem == built.stem]
     return written
+
+
+def issued_hash(folder: Path, stem: str) -> str | None:
+    """The inputs hash of the files already written as ``stem`` in ``folder``.
+
+    Read from the JSON's stamp, else from the HTML's footer (the PDF's text is
+    compressed). ``""`` when files exist but none tells its hash; ``None`` when no
+    file of that name exists.
+    """
+    existing = [folder / f"{stem}{suffix}" for suffix in OUTPUT_SUFFIXES]
+    if not any(path.is_file() for path in existing):
+        return None
+    json_path, html_path = folder / f"{stem}.json", folder / f"{stem}.html"
+    try:
+        stamp = json.loads(json_path.read_text(encoding="utf-8")).get("stamp", "")
+        found = hash_in_stamp(stamp if isinstance(stamp, str) else "")
+        if found:
+            return found
+    except (OSError, ValueError, AttributeError):
+        pass  # no JSON, or not one of ours: try the HTML
+    try:
+        page = html_path.read_text(encoding="utf-8")
+    except (OSError, ValueError):
+        return ""
+    footer = re.search(r"<footer>(.*?)</footer>", page, re.DOTALL)
+    return hash_in_stamp(footer.group(1) if footer else "") or ""
+
+
+def refuse_replacing_issued(result: BuildResult, folder: Path) -> None:
+    """Raise :class:`JobError` if writing would replace files built from other inputs."""
+    revision = result.sheets[0].sheet.title_block.revision if result.sheets else "0"
+    problems = []
+    for built in result.sheets:
+        found = issued_hash(folder, built.stem)
+        if found is None or found == result.hash:
+            continue
+        if found:
+            why = (
+                f"{folder / built.stem}.* were built from other inputs "
+                f"(inputs {found} then, {result.hash} now) under the same revision {revision!r}"
+            )
+        else:
+            why = (
+                f"{folder / built.stem}.* exist and do not say which inputs built them "
+                "(no JSON or HTML of theirs)"
+            )
+        problems.append(
+            (
+                "revisions",
+                f"{why}: add a [[revisions]] entry with a new mark to issue the change, "
+                "or replace the issued files on purpose (calcsheet build --replace-issued)",
+            )
+        )
+    if problems:
+        raise JobError(result.source, problems)

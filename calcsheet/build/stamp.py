@@ -9,6 +9,7 @@ from __future__ import annotations
 
 import hashlib
 import json
+import re
 from typing import Any
 
 from calcsheet.job import Job
@@ -60,3 +61,12 @@ def stamp_text(job: Job) -> str:
     """What the sheet prints on every page beside the tool version: inputs hash and revision."""
     revision = job.revisions[-1].mark if job.revisions else "0"
     return f"inputs {inputs_hash(job)} · rev. {revision}"
+
+
+_STAMPED_HASH = re.compile(rf"inputs ([0-9a-f]{{{HASH_LENGTH}}})\b")
+
+
+def hash_in_stamp(text: str) -> str | None:
+    """The inputs hash printed in a stamp (``inputs 3fa9c2e17b04 · rev. A``), or ``None``."""
+    found = _STAMPED_HASH.search(text)
+    return found.group(1) if found else None

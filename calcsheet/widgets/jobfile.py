@@ -22,7 +22,7 @@ import tomlkit
 from tomlkit.container import Container
 from tomlkit.items import AoT, Item
 
-from calcsheet.export.files import write_atomically
+from calcsheet.export.files import existing_mode, write_atomically
 from calcsheet.job import job_from_data
 
 FORM_MARK = "# calcsheet job file, saved from the member form"
@@ -86,7 +86,7 @@ def write_job_file(path: Path, data: dict[str, Any]) -> Path:
     previous = _readable_text(path)
     text = job_toml(data, name=path.name, previous=previous)
     path.parent.mkdir(parents=True, exist_ok=True)
-    write_atomically(path, text.encode("utf-8"))
+    write_atomically(path, text.encode("utf-8"), mode=existing_mode(path))
     return path
 
 

@@ -8,7 +8,7 @@ from pathlib import Path
 import pytest
 
 from calcsheet.build import build_sheets, inputs_hash, output_folder, safe_stem, write_outputs
-from calcsheet.build.compare import changed_inputs, delta_sheet
+from calcsheet.build.compare import changed_inputs, check_comparable, delta_sheet
 from calcsheet.export import files
 from calcsheet.export.files import ExportError
 from calcsheet.job import JobError, parse_job
@@ -144,3 +144,104 @@ def test_compare_lists_exactly_the_changed_inputs() -> None:
     assert changed_inputs(old, same_in_other_units) == []
     sheet = delta_sheet(old, new)
     assert "rev. A to rev. B" in sheet.title
+
+
+# --- an issued set is never replaced silently ----------------------------------------
+
+CHANGED_SAME_REVISION = STARTER.replace('"3 kip"', '"3.5 kip"')
+
+
+def test_changed_inputs_under_the_same_revision_are_refused(tmp_path: Path) -> None:
+    """Before, the issued PDF, HTML and JSON were replaced without a word."""
+    first = build_sheets(_job())
+    write_outputs(first, tmp_path)
+    before = {path.name: path.read_bytes() for path in tmp_path.iterdir()}
+    changed = build_sheets(_job(CHANGED_SAME_REVISION), source="job.toml")
+    with pytest.raises(JobError) as raised:
+        write_outputs(changed, tmp_path)
+    (path, message), *_ = raised.value.problems
+    assert path == "revisions"
+    assert f"inputs {first.hash} then, {changed.hash} now" in message
+    assert "add a [[revisions]] entry" in message and "--replace-issued" in message
+    assert str(raised.value).startswith("job.toml: 1 problem")
+    assert {path.name: path.read_bytes() for path in tmp_path.iterdir()} == before
+
+
+def test_the_same_inputs_rebuild_in_place_and_replacing_on_purpose_works(tmp_path) -> None:
+    write_outputs(build_sheets(_job()), tmp_path)
+    # The same inputs written another way (1 kip = 1000 lbf, NIST SP 811 Appendix B).
+    write_outputs(build_sheets(_job(STARTER.replace('"3 kip"', '"3000 lbf"'))), tmp_path)
+    changed = build_sheets(_job(CHANGED_SAME_REVISION))
+    write_outputs(changed, tmp_path, replace_issued=True)
+    data = json.loads((tmp_path / "DA-1-revA.json").read_text())
+    assert data["stamp"].startswith(f"inputs {changed.hash}")
+    assert not list(tmp_path.glob(".*"))  # no lock file or temporary file left
+
+
+def test_the_issued_hash_is_read_from_the_html_when_there_is_no_json(tmp_path) -> None:
+    write_outputs(build_sheets(_job()), tmp_path)
+    (tmp_path / "DA-1-revA.json").unlink()
+    with pytest.raises(JobError, match="built from other inputs"):
+        write_outputs(build_sheets(_job(CHANGED_SAME_REVISION)), tmp_path)
+    write_outputs(build_sheets(_job()), tmp_path)  # the same inputs: fine
+
+
+def test_a_pdf_alone_whose_inputs_cannot_be_told_is_not_replaced(tmp_path) -> None:
+    (tmp_path / "DA-1-revA.pdf").write_bytes(b"%PDF-1.7 issued by hand")
+    with pytest.raises(JobError, match="do not say which inputs built them"):
+        write_outputs(build_sheets(_job()), tmp_path)
+    assert (tmp_path / "DA-1-revA.pdf").read_bytes() == b"%PDF-1.7 issued by hand"
+
+
+def test_each_station_of_an_issued_set_is_protected(tmp_path: Path) -> None:
+    two = STARTER.replace('stations = ["0 in"]', 'stations = ["0 in", "30 in"]')
+    write_outputs(build_sheets(_job(two)), tmp_path)
+    changed = two.replace('"3 kip"', '"3.5 kip"')
+    with pytest.raises(JobError) as raised:
+        write_outputs(build_sheets(_job(changed)), tmp_path)
+    assert len(raised.value.problems) == 2  # one per station's set
+
+
+def test_several_stations_name_the_governing_station() -> None:
+    """Before, the summary named the point but not which station it is at."""
+    result = build_sheets(
+        _job(STARTER.replace('stations = ["0 in"]', 'stations = ["0 in", "30 in"]'))
+    )
+    # The support carries the larger moment (statics of a cantilever, common practice, no
+    # source), so the station at z = 0 governs.
+    assert ", station z = 0 in)" in result.summary()
+    assert result.governing_text().endswith("station z = 0 in")
+    assert "station" not in build_sheets(_job()).summary()
+
+
+# --- compare: one member, the earlier revision first ----------------------------------
+
+REVISION_B = STARTER.replace(
+    '[[revisions]]\nmark = "A"\ndate = ""\ndescription = "Issued for review"\nby = ""\n',
+    '[[revisions]]\nmark = "A"\ndescription = "Issued for review"\n\n'
+    '[[revisions]]\nmark = "B"\ndescription = "Load raised"\n',
+).replace('"3 kip"', '"4 kip"')
+
+
+def test_compare_refuses_two_different_members_unless_asked() -> None:
+    old = build_sheets(_job())
+    other = build_sheets(_job(REVISION_B.replace('name = "DA-1"', 'name = "DA-2"')))
+    with pytest.raises(JobError) as raised:
+        check_comparable(old, other)
+    assert "member 'DA-1' and the new one 'DA-2'" in dict(raised.value.problems)["member.name"]
+    check_comparable(old, other, other_member=True)
+
+
+def test_compare_refuses_a_later_revision_given_as_the_old_one() -> None:
+    assert 'mark = "B"' in REVISION_B
+    rev_a, rev_b = (
+        build_sheets(_job(), source="a.toml"),
+        build_sheets(_job(REVISION_B), source="b.toml"),
+    )
+    check_comparable(rev_a, rev_b)
+    with pytest.raises(JobError) as raised:
+        check_comparable(rev_b, rev_a)
+    message = dict(raised.value.problems)["revisions"]
+    assert "rev. B, later than the new job's rev. A" in message
+    assert "calcsheet compare a.toml b.toml" in message
+    check_comparable(rev_a, build_sheets(_job(CHANGED_SAME_REVISION)))  # a what-if: allowed

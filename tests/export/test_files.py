@@ -3,6 +3,10 @@
 from __future__ import annotations
 
 import io
+import os
+import stat
+import subprocess
+import sys
 from pathlib import Path
 
 import pypdf
@@ -177,3 +181,49 @@ def test_the_pdf_engine_can_read_no_file(tmp_path: Path, monkeypatch):
     for path in ("secret.txt", "/etc/passwd"):
         with pytest.raises(ExportError, match="file not found"):
             files.compile_pdf(f'#read("{path}")')
+
+
+@pytest.mark.parametrize(("umask", "mode"), [(0o022, 0o644), (0o027, 0o640), (0o077, 0o600)])
+def test_files_take_the_mode_the_umask_gives(tmp_path: Path, umask: int, mode: int):
+    """Before, every output was 0600 (mkstemp's), whatever the umask. 0666 & ~umask is what
+    open(2) gives a new file (POSIX.1-2017, open(): "the file permission bits ... modified
+    by the process' file mode creation mask")."""
+    previous = os.umask(umask)
+    try:
+        files.write_atomically(tmp_path / "new.txt", b"new")
+        (tmp_path / "old.txt").write_bytes(b"old")
+        os.chmod(tmp_path / "old.txt", 0o600)
+        files.write_all_atomically([(tmp_path / "old.txt", b"replaced")])
+    finally:
+        os.umask(previous)
+    assert stat.S_IMODE((tmp_path / "new.txt").stat().st_mode) == mode
+    assert stat.S_IMODE((tmp_path / "old.txt").stat().st_mode) == mode
+    files.write_atomically(tmp_path / "kept.txt", b"x", mode=0o600)
+    assert stat.S_IMODE((tmp_path / "kept.txt").stat().st_mode) == 0o600
+
+
+def test_a_second_writer_waits_for_the_folder_lock_then_gives_up(tmp_path: Path):
+    said: list[str] = []
+    with files.folder_lock(tmp_path):
+        assert (tmp_path / files.LOCK_NAME).read_text().strip() == str(os.getpid())
+        other = subprocess.run(
+            [
+                sys.executable,
+                "-c",
+                "import sys; from calcsheet.export import files\n"
+                "try:\n"
+                f"    with files.folder_lock({str(tmp_path)!r}, wait_seconds=0.5): pass\n"
+                "except files.ExportError as error:\n"
+                "    print(error); sys.exit(3)\n",
+            ],
+            capture_output=True,
+            text=True,
+            timeout=120,
+        )
+    assert other.returncode == 3, other.stderr
+    assert "waiting for another calcsheet build" in other.stderr
+    assert f"(process {os.getpid()})" in other.stderr
+    assert "has been writing into" in other.stdout and "nothing was written" in other.stdout
+    with files.folder_lock(tmp_path, waiting=said.append):  # released: no wait
+        pass
+    assert said == [] and not (tmp_path / files.LOCK_NAME).exists()

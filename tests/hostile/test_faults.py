@@ -30,6 +30,8 @@ from .support import starter_data, toml_text
 
 OUTPUTS = ("DA-1-revA.pdf", "DA-1-revA.html", "DA-1-revA.json")
 SECOND_VERSION = STARTER.replace('magnitude = "3 kip"', 'magnitude = "4 kip"')
+# The second version keeps revision A, so writing it replaces issued files on purpose.
+REPLACE = "--replace-issued"
 
 
 def write_job(folder: Path, text: str = STARTER, name: str = "job.toml") -> Path:
@@ -80,7 +82,7 @@ def test_a_read_only_output_folder_exits_3_naming_the_file(built, capsys) -> Non
     try:
         if os.access(folder, os.W_OK):
             pytest.skip("chmod does not stop this user (root) from writing")
-        status, message = run(["build", str(job)], capsys)
+        status, message = run(["build", str(job), REPLACE], capsys)
     finally:
         folder.chmod(0o755)
     assert status == 3
@@ -103,7 +105,7 @@ def test_a_folder_where_an_output_goes_exits_3_naming_it(built, capsys) -> None:
     folder = job.parent / "out"
     (folder / "DA-1-revA.html").unlink()
     (folder / "DA-1-revA.html").mkdir()
-    status, message = run(["build", str(job)], capsys)
+    status, message = run(["build", str(job), REPLACE], capsys)
     assert status == 3
     assert "DA-1-revA.html" in message and "directory" in message.lower()
     assert not list(folder.glob(".*.part"))
@@ -114,7 +116,7 @@ def test_a_failed_write_leaves_every_previous_output_as_it_was(built, capsys) ->
     folder = job.parent / "out"
     (folder / "DA-1-revA.html").unlink()
     (folder / "DA-1-revA.html").mkdir()
-    assert main(["build", str(job)]) == 3
+    assert main(["build", str(job), REPLACE]) == 3
     assert (folder / "DA-1-revA.pdf").read_bytes() == before["DA-1-revA.pdf"]
 
 
@@ -132,7 +134,7 @@ def test_a_folder_refusing_new_files_exits_3_and_keeps_the_old_ones(
         raise OSError(code, os.strerror(code))
 
     monkeypatch.setattr(files.tempfile, "mkstemp", refuse)
-    status, message = run(["build", str(job)], capsys)
+    status, message = run(["build", str(job), REPLACE], capsys)
     assert status == 3
     assert "DA-1-revA.pdf" in message and words in message
     assert "unchanged" in message
@@ -163,7 +165,7 @@ def test_a_full_disk_exits_3_naming_the_file_and_keeps_the_old_ones(
 ) -> None:
     job, before = built
     monkeypatch.setattr(files.os, "fdopen", _FullDisk)
-    status, message = run(["build", str(job)], capsys)
+    status, message = run(["build", str(job), REPLACE], capsys)
     assert status == 3
     assert "cannot write" in message and "DA-1-revA.pdf" in message
     assert "No space left on device" in message
@@ -177,7 +179,7 @@ def test_a_full_disk_at_fsync_keeps_the_old_ones(built, capsys, monkeypatch) -> 
         raise OSError(errno.ENOSPC, os.strerror(errno.ENOSPC))
 
     monkeypatch.setattr(files.os, "fsync", full)
-    status, message = run(["build", str(job)], capsys)
+    status, message = run(["build", str(job), REPLACE], capsys)
     assert status == 3 and "No space left on device" in message
     assert outputs(job.parent / "out") == before
 
@@ -190,7 +192,7 @@ def test_a_failing_pdf_engine_exits_3_and_writes_nothing(built, capsys, monkeypa
             raise RuntimeError("font cache is corrupt")
 
     monkeypatch.setattr(files, "_compiler", BrokenCompiler)
-    status, message = run(["build", str(job)], capsys)
+    status, message = run(["build", str(job), REPLACE], capsys)
     assert status == 3
     assert "PDF engine failed" in message and "font cache is corrupt" in message
     assert outputs(job.parent / "out") == before  # the HTML and JSON wait for the PDF
@@ -251,7 +253,7 @@ def test_a_build_killed_while_writing_leaves_the_previous_outputs(built, capsys)
     job, before = built
     folder = job.parent / "out"
     process = subprocess.Popen(
-        [sys.executable, "-c", SLOW_REPLACE, "build", str(job)],
+        [sys.executable, "-c", SLOW_REPLACE, "build", str(job), REPLACE],
         stdout=subprocess.PIPE,
         stderr=subprocess.PIPE,
         text=True,
@@ -281,7 +283,7 @@ def test_a_build_killed_while_writing_leaves_the_previous_outputs(built, capsys)
     past = time.time() - files.STALE_SECONDS - 60
     for path in stale:
         os.utime(path, (past, past))
-    status, message = run(["build", str(job)], capsys)
+    status, message = run(["build", str(job), REPLACE], capsys)
     assert status == 0, message
     assert not any(path.exists() for path in stale)
     assert recent.exists()
