@@ -11,15 +11,24 @@ At each point (x, y) measured from the centroid:
 
 * normal stress σ: axial plus unsymmetric bending (:func:`formulas.bending_stress`);
 * τzy from the horizontal cut through the point and τzx from the vertical cut
-  (average over the cut width, :func:`formulas.shear_flow_stress`);
+  (average over the cut width, :func:`formulas.shear_flow_stress`). On a section
+  of one ring (every open shape) the cut is the stretch of material through the
+  point, with the part that stretch cuts off: a cut through the bottom flange of a
+  channel takes the bottom flange tip, not both tips; a cut that meets no material
+  at the point (a free face, a toe) gives no shear. Tubes and built-up plates use
+  the whole line across the section;
 * τ_T from St Venant torsion (:mod:`calcsheet.mechanics.torsion`);
 * τ = √(τzx² + τzy²) + |τ_T|, then σ1, σ2, τ_max and von Mises.
 
 The centroid is added as a point (label ``centroid``) when it lies in the
-material, because the transverse shear of a symmetric section peaks there. When
-it does not (tubes, angles, most channels), the points where the centroidal axes
-leave the outline are added instead: the walls at the neutral axis of each
-bending plane, where V·Q/(I·b) peaks.
+material, because the transverse shear of a symmetric section peaks there. On
+the straight walls of an angle, channel or tee the transverse shear peaks where
+the wall's mid-line crosses the neutral axis of the bending that goes with the
+shear; with Ixy ≠ 0 that is well off the centroidal axes, and it moves with the
+direction of the shear. :func:`wall_peak_points` adds those peaks as points
+(see there how they are chosen). Sections without walls whose centroid is not in
+the material (tubes) get the points where the centroidal axes leave the outline:
+the walls at the neutral axis of each bending plane, where V·Q/(I·b) peaks.
 """
 
 from __future__ import annotations
@@ -31,10 +40,21 @@ from numpy.typing import ArrayLike, NDArray
 
 from calcsheet.mechanics import formulas
 from calcsheet.mechanics.torsion import TorsionRule, torsion_rule
-from calcsheet.sections import Section
+from calcsheet.sections import Section, SectionNumbers
+from calcsheet.sections.geometry import ChordCut, Outline
+from calcsheet.sections.shapes import Wall
 
 Array = NDArray[np.float64]
 CENTROID_LABEL = "centroid"
+
+# The wall points must give every direction of shear its peak to within 1 %; they
+# are chosen to 0.8 % on a grid of directions 0.1° apart, which leaves 0.2 % for the
+# directions between grid lines (the peaks change little over 0.1°; a test checks
+# random directions against a dense scan of every wall). A finer tolerance only adds
+# points to the sheet: 0.5 % gives an equal-leg angle 12 wall points, 0.8 % gives 11.
+PEAK_TOLERANCE = 0.008
+DIRECTION_STEPS = 1800
+_MAX_WALL_POINTS = 40
 
 MEASURES: dict[str, str] = {
     "tension": "largest normal stress (tension)",
@@ -181,20 +201,174 @@ class StressModel:
         )
 
 
+def _cut_through(outline: Outline, along: float, level: float) -> ChordCut:
+    """The stretch of material a horizontal cut at ``level`` crosses at ``along``.
+
+    On a section of several rings (a tube, plates side by side) a cut's stretches do
+    not each cut off a part of their own, so the whole line across it is used.
+    """
+    local = outline.chord_cut(along, level)
+    if local is not None:
+        return local
+    part = outline.integrals(above=level)
+    return ChordCut(float(outline.cut_width(level)[0]), part.first_x, part.first_y)
+
+
 def cut_data(section: Section, x: Array, y: Array, length_unit: str) -> CutData:
     """First moments and widths of the horizontal and vertical cuts through each point."""
     outline = section.numeric(length_unit).outline
     turned = outline.quarter_turned()  # (x, y) -> (−y, x): "above" is "to the right"
-    above = [outline.integrals(above=float(level)) for level in y]
-    right = [turned.integrals(above=float(level)) for level in x]
+    above = [_cut_through(outline, float(px), float(py)) for px, py in zip(x, y, strict=True)]
+    right = [_cut_through(turned, float(-py), float(px)) for px, py in zip(x, y, strict=True)]
     return CutData(
         Qx_above=np.array([part.first_y for part in above]),
         Qy_above=np.array([part.first_x for part in above]),
-        b=np.asarray(outline.cut_width(y), dtype=float),
+        b=np.array([part.width for part in above]),
         Qx_right=np.array([-part.first_x for part in right]),
         Qy_right=np.array([part.first_y for part in right]),
-        t=np.asarray(turned.cut_width(x), dtype=float),
+        t=np.array([part.width for part in right]),
     )
+
+
+@dataclass(frozen=True)
+class WallShear:
+    """Transverse shear across one wall per unit shear force in each direction.
+
+    ``coefficients[k, i]`` multiplies ``u**i`` (u from 0 at the wall's start to 1 at
+    its end) in τ(u) for the unit shear of ``directions[k]`` (radians from +x): on a
+    straight wall of uniform thickness Q grows by a full-thickness strip whose
+    centroid is on the mid-line, so τ is exactly quadratic in u.
+    """
+
+    wall: Wall
+    coefficients: Array
+
+    def values(self, fractions: ArrayLike) -> Array:
+        """τ at each fraction for every direction: shape (directions, fractions)."""
+        u = np.atleast_1d(np.asarray(fractions, dtype=float))
+        return self.coefficients @ np.vstack([np.ones_like(u), u, u * u])
+
+    def peak(self) -> tuple[Array, Array]:
+        """Largest |τ| on the wall for every direction, and the fraction where it is.
+
+        dτ/du = 0 where the mid-line crosses the neutral axis of the bending that goes
+        with the shear; otherwise the peak is at an end of the wall.
+        """
+        c1, c2 = self.coefficients[:, 1], self.coefficients[:, 2]
+        with np.errstate(divide="ignore", invalid="ignore"):
+            stationary = np.where(np.abs(c2) > 0, -c1 / (2.0 * c2), 0.0)
+        stationary = np.clip(np.nan_to_num(stationary), 0.0, 1.0)
+        candidates = np.column_stack([np.zeros_like(c1), np.ones_like(c1), stationary])
+        u = candidates
+        values = np.abs(
+            self.coefficients[:, :1]
+            + self.coefficients[:, 1:2] * u
+            + self.coefficients[:, 2:] * u**2
+        )
+        best = np.argmax(values, axis=1)
+        rows = np.arange(len(best))
+        return values[rows, best], candidates[rows, best]
+
+
+def wall_shear(numbers: SectionNumbers, wall: Wall, directions: Array) -> WallShear:
+    """Fit τ(u) across ``wall`` for a unit shear in each of ``directions``."""
+    outline = numbers.outline
+    samples = np.array([0.25, 0.5, 0.75])  # inside the wall: its ends touch a corner or a toe
+    first_about_x, first_about_y = [], []
+    for fraction in samples:
+        px, py = wall.at(float(fraction))
+        if wall.vertical:  # a horizontal cut, the part above
+            cut = _cut_through(outline, px, py)
+            first_about_x.append(cut.first_y)
+            first_about_y.append(cut.first_x)
+        else:  # a vertical cut, the part to the right
+            cut = _cut_through(outline.quarter_turned(), -py, px)
+            first_about_x.append(-cut.first_x)
+            first_about_y.append(cut.first_y)
+    vandermonde = np.vstack([np.ones(3), samples, samples**2]).T
+    qx_coefficients = np.linalg.solve(vandermonde, first_about_x)
+    qy_coefficients = np.linalg.solve(vandermonde, first_about_y)
+    unit_x, unit_y = np.cos(directions)[:, None], np.sin(directions)[:, None]
+    coefficients = formulas.shear_flow_stress(
+        unit_x,
+        unit_y,
+        qx_coefficients[None, :],
+        qy_coefficients[None, :],
+        wall.thickness,
+        numbers.Ix,
+        numbers.Iy,
+        numbers.Ixy,
+    )
+    return WallShear(wall, coefficients)
+
+
+def _direction_label(direction: float) -> str:
+    degrees = round(float(np.degrees(direction)), 1) % 180.0
+    if degrees == 0.0:
+        return "peak of V_x shear"
+    if degrees == 90.0:
+        return "peak of V_y shear"
+    return f"peak shear for V along {degrees:g}° (or {degrees + 180:g}°) from +x"
+
+
+def wall_peak_points(numbers: SectionNumbers) -> list[tuple[str, float, float]]:
+    """Points on the walls' mid-lines where the transverse shear of some direction peaks.
+
+    The peak on a wall sits where its mid-line crosses the neutral axis of the bending
+    that goes with the shear, so it moves along the wall as the direction of (V_x,
+    V_y) turns, and a sheet's loads may turn it after it is built. Rather than one
+    point for one direction, the points are chosen for every direction at once: first
+    the peaks of V_x alone and V_y alone, then, while some direction on a 0.1° grid
+    gets less than 99.2 % of its exact peak (the largest over all walls, in closed
+    form) from the points so far, that direction's own peak is added. The wall ends
+    are counted as covered: they are outline corners (a toe, or the corner where the
+    wall meets another), whose cuts are the same stretch of material.
+    """
+    if not numbers.walls:
+        return []
+    directions = np.linspace(0.0, np.pi, DIRECTION_STEPS, endpoint=False)
+    shears = [wall_shear(numbers, wall, directions) for wall in numbers.walls]
+    peaks = [shear.peak() for shear in shears]
+    exact = np.max(np.stack([value for value, _ in peaks]), axis=0)
+    if not np.any(exact > 0):
+        return []
+    chosen: list[list[float]] = [[0.0, 1.0] for _ in shears]
+    names: list[tuple[int, float, str]] = []
+
+    def add(wall_index: int, direction_index: int) -> bool:
+        fraction = float(peaks[wall_index][1][direction_index])
+        if min(abs(fraction - known) for known in chosen[wall_index]) < 1e-6:
+            return False
+        chosen[wall_index].append(fraction)
+        names.append((wall_index, fraction, _direction_label(directions[direction_index])))
+        return True
+
+    for direction_index in (0, DIRECTION_STEPS // 2):  # V_x alone, V_y alone
+        for wall_index in range(len(shears)):
+            add(wall_index, direction_index)
+    for _ in range(_MAX_WALL_POINTS):
+        sampled = np.max(
+            np.stack(
+                [
+                    np.abs(shear.values(chosen[index])).max(axis=1)
+                    for index, shear in enumerate(shears)
+                ]
+            ),
+            axis=0,
+        )
+        shortfall = sampled / np.where(exact > 0, exact, 1.0)
+        worst = int(np.argmin(np.where(exact > 0, shortfall, 1.0)))
+        if shortfall[worst] >= 1.0 - PEAK_TOLERANCE:
+            break
+        governing_wall = int(np.argmax([value[worst] for value, _ in peaks]))
+        if not add(governing_wall, worst):
+            break
+    points = []
+    for wall_index, fraction, name in sorted(names, key=lambda item: item[:2]):
+        wall = shears[wall_index].wall
+        px, py = wall.at(fraction)
+        points.append((f"{wall.label}, {name}", px, py))
+    return points
 
 
 def stress_model(
@@ -206,11 +380,13 @@ def stress_model(
     x, y = list(numbers.point_x), list(numbers.point_y)
     if include_centroid:
         rings = numbers.outline.rings
-        extra = (
-            [(CENTROID_LABEL, 0.0, 0.0)]
-            if point_in_material(rings, 0.0, 0.0)
-            else neutral_axis_points(rings)
-        )
+        if point_in_material(rings, 0.0, 0.0):
+            extra = [(CENTROID_LABEL, 0.0, 0.0)]
+        elif numbers.walls:
+            extra = []  # the wall peaks below take the place of the axis crossings
+        else:
+            extra = neutral_axis_points(rings)
+        extra += wall_peak_points(numbers)
         scale = max(float(np.ptp(ring[:, 0]) + np.ptp(ring[:, 1])) for ring in rings)
         for label, px, py in extra:
             # a corner already on the axis (a round tube's perimeter) is not repeated

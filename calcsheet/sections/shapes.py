@@ -16,8 +16,10 @@ Rolled shapes are drawn without fillets, flange slopes or toe rounding (tf of
 S shapes and channels is the average flange thickness the tables give).
 
 Each builder also gives labelled stress points (outline corners where the
-extreme normal stresses of combined axial force and biaxial bending can occur)
-and the torsion constant J and warping constant Cw by the usual thin-walled
+extreme normal stresses of combined axial force and biaxial bending can occur),
+the straight walls of an open section along which transverse shear flows
+(angles, channels, tees: the stress model scans them for the shear peak), and
+the torsion constant J and warping constant Cw by the usual thin-walled
 formulas, with a note saying which.
 """
 
@@ -50,6 +52,43 @@ class StressPointSpec:
 
 
 @dataclass(frozen=True)
+class Wall:
+    """A straight wall of uniform thickness: its mid-line from ``start`` to ``end``.
+
+    Walls run parallel to x or to y, so the cut across a wall is a horizontal cut
+    (a vertical wall) or a vertical one (a horizontal wall). The mid-line stops
+    where the wall meets another (the shared corner square belongs to neither), so
+    every cut across it crosses this wall alone, with width ``thickness``.
+    """
+
+    label: str
+    start: tuple[float, float]
+    end: tuple[float, float]
+    thickness: float
+
+    @property
+    def vertical(self) -> bool:
+        """True for a wall along y (cut across by horizontal lines)."""
+        return self.start[0] == self.end[0]
+
+    def at(self, fraction: float) -> tuple[float, float]:
+        """The mid-line point at ``fraction`` (0 at ``start``, 1 at ``end``)."""
+        return (
+            self.start[0] + fraction * (self.end[0] - self.start[0]),
+            self.start[1] + fraction * (self.end[1] - self.start[1]),
+        )
+
+    def moved(self, dx: float, dy: float, factor: float = 1.0) -> Wall:
+        """The wall shifted by (dx, dy), then scaled by ``factor`` (another length unit)."""
+        return Wall(
+            self.label,
+            ((self.start[0] + dx) * factor, (self.start[1] + dy) * factor),
+            ((self.end[0] + dx) * factor, (self.end[1] + dy) * factor),
+            self.thickness * factor,
+        )
+
+
+@dataclass(frozen=True)
 class ShapeOutline:
     """A section's outline, stress points, and torsion/warping constants, in one unit."""
 
@@ -59,6 +98,7 @@ class ShapeOutline:
     torsion_note: str
     warping_constant: float | None
     warping_note: str
+    walls: tuple[Wall, ...] = ()
 
 
 # --- validation ------------------------------------------------------------------------
@@ -355,7 +395,14 @@ def channel(depth: float, flange_width: float, web: float, flange: float, unit: 
         * (3 * flange_length * flange + 2 * flange_distance * web)
         / (6 * flange_length * flange + flange_distance * web)
     )
-    return ShapeOutline(Outline([ring]), points, torsion, THIN_WALLED_J, warping, THIN_WALLED_CW)
+    walls = (
+        Wall("web", (web / 2, flange), (web / 2, under_top), web),
+        Wall("top flange", (web, depth - flange / 2), (flange_width, depth - flange / 2), flange),
+        Wall("bottom flange", (web, flange / 2), (flange_width, flange / 2), flange),
+    )
+    return ShapeOutline(
+        Outline([ring]), points, torsion, THIN_WALLED_J, warping, THIN_WALLED_CW, walls
+    )
 
 
 def angle(vertical_leg: float, horizontal_leg: float, thickness: float, unit: str):
@@ -377,7 +424,13 @@ def angle(vertical_leg: float, horizontal_leg: float, thickness: float, unit: st
     leg_d, leg_b = d - t / 2, b - t / 2
     torsion = (leg_d + leg_b) * t**3 / 3.0
     warping = t**3 * (leg_d**3 + leg_b**3) / 36.0  # AISC Manual angle formula (from memory)
-    return ShapeOutline(Outline([ring]), points, torsion, THIN_WALLED_J, warping, THIN_WALLED_CW)
+    walls = (
+        Wall("vertical leg", (t / 2, t), (t / 2, d), t),
+        Wall("horizontal leg", (t, t / 2), (b, t / 2), t),
+    )
+    return ShapeOutline(
+        Outline([ring]), points, torsion, THIN_WALLED_J, warping, THIN_WALLED_CW, walls
+    )
 
 
 def tee(depth: float, flange_width: float, stem: float, flange: float, unit: str):
@@ -415,7 +468,15 @@ def tee(depth: float, flange_width: float, stem: float, flange: float, unit: str
     torsion = (flange_width * flange**3 + stem_length * stem**3) / 3.0
     # AISC Manual tee formula (from memory): Cw = tf³·bf³/144 + tw³·d'³/36.
     warping = flange**3 * flange_width**3 / 144.0 + stem**3 * stem_length**3 / 36.0
-    return ShapeOutline(Outline([ring]), points, torsion, THIN_WALLED_J, warping, THIN_WALLED_CW)
+    flange_middle = depth - flange / 2
+    walls = (
+        Wall("stem", (middle, 0.0), (middle, under), stem),
+        Wall("left flange", (stem_left, flange_middle), (0.0, flange_middle), flange),
+        Wall("right flange", (stem_right, flange_middle), (flange_width, flange_middle), flange),
+    )
+    return ShapeOutline(
+        Outline([ring]), points, torsion, THIN_WALLED_J, warping, THIN_WALLED_CW, walls
+    )
 
 
 @dataclass(frozen=True)
