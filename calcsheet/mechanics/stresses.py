@@ -18,7 +18,9 @@ At each point (x, y) measured from the centroid:
   at the point (a free face, a toe) gives no shear. Tubes and built-up plates use
   the whole line across the section;
 * τ_T from St Venant torsion (:mod:`calcsheet.mechanics.torsion`);
-* τ = √(τzx² + τzy²) + |τ_T|, then σ1, σ2, τ_max and von Mises.
+* τ = √(τzx² + τzy²) + |τ_T|, except at a re-entrant corner of an open section,
+  where the two cuts cross two different walls and τ = max(|τzx|, |τzy|) + |τ_T|
+  (:func:`formulas.junction_shear`); then σ1, σ2, τ_max and von Mises.
 
 The centroid is added as a point (label ``centroid``) when it lies in the
 material, because the transverse shear of a symmetric section peaks there. On
@@ -174,6 +176,7 @@ class StressModel:
     J: float
     cuts: CutData
     torsion: TorsionRule
+    junction: Array  # (n,) bool: a re-entrant corner where two walls meet
     normal_matrix: Array  # (6, n): σ per unit (N, Vx, Vy, T, Mx, My)
     zx_matrix: Array  # (6, n): τzx per unit force
     zy_matrix: Array  # (6, n): τzy per unit force
@@ -185,7 +188,11 @@ class StressModel:
         tau_zx = forces @ self.zx_matrix
         tau_zy = forces @ self.zy_matrix
         tau_t = forces[..., 3:4] * self.torsion.factor
-        tau = formulas.combined_shear(tau_zx, tau_zy, tau_t)
+        tau = np.where(
+            self.junction,
+            formulas.junction_shear(tau_zx, tau_zy, tau_t),
+            formulas.combined_shear(tau_zx, tau_zy, tau_t),
+        )
         sigma_1, sigma_2 = formulas.principal_stresses(sigma, tau)
         return PointStresses(
             labels=self.labels,
@@ -199,6 +206,29 @@ class StressModel:
             tau_max=formulas.max_shear_stress(sigma, tau),
             von_mises=formulas.von_mises_stress(sigma, tau),
         )
+
+
+def re_entrant_corners(outline: Outline, x: Array, y: Array) -> Array:
+    """Which points sit on a re-entrant corner of a one-ring outline (where walls meet).
+
+    A vertex is re-entrant where the boundary turns clockwise on a counter-clockwise
+    ring. Tubes and built-up plates (several rings) have none counted.
+    """
+    found = np.zeros(len(x), dtype=bool)
+    if len(outline.rings) != 1:
+        return found
+    ring = outline.rings[0]
+    incoming = ring - np.roll(ring, 1, axis=0)
+    outgoing = np.roll(ring, -1, axis=0) - ring
+    turn = incoming[:, 0] * outgoing[:, 1] - incoming[:, 1] * outgoing[:, 0]
+    orientation = np.sign(
+        np.sum(ring[:, 0] * np.roll(ring[:, 1], -1) - np.roll(ring[:, 0], -1) * ring[:, 1])
+    )
+    corners = ring[turn * orientation < 0]
+    size = max(outline.x_max - outline.x_min, outline.y_max - outline.y_min)
+    for corner_x, corner_y in corners:
+        found |= np.hypot(x - corner_x, y - corner_y) < 1e-9 * size
+    return found
 
 
 def _cut_through(outline: Outline, along: float, level: float) -> ChordCut:
@@ -430,6 +460,7 @@ def stress_model(
         J=J,
         cuts=cuts,
         torsion=torsion_rule(section, x_arr, y_arr, J, length_unit),
+        junction=re_entrant_corners(numbers.outline, x_arr, y_arr),
         normal_matrix=normal,
         zx_matrix=shear_rows(cuts.Qx_right, cuts.Qy_right, cuts.t),
         zy_matrix=shear_rows(cuts.Qx_above, cuts.Qy_above, cuts.b),
