@@ -69,6 +69,7 @@ class Outline:
         self.x_min, self.x_max = float(starts[:, 0].min()), float(starts[:, 0].max())
         self.y_min, self.y_max = float(starts[:, 1].min()), float(starts[:, 1].max())
         self._turned: Outline | None = None
+        self._counter_clockwise: bool | None = None
 
     def shifted(self, dx: float, dy: float) -> Outline:
         """The same outline moved by (dx, dy)."""
@@ -186,11 +187,13 @@ class Outline:
         """
         if len(self.rings) != 1:
             return None
-        ring = self.rings[0]
+        if self._counter_clockwise is None:
+            self._counter_clockwise = _polygon_first_moments(self.rings[0])[0] > 0
+        edges = (self._x0, self._y0, self._x1, self._y1)
         size = max(self.y_max - self.y_min, self.x_max - self.x_min)
         nudge = 1e-9 * size
-        below = _chord_of_ring(ring, x, level - nudge, 1e-7 * size)
-        above = _chord_of_ring(ring, x, level + nudge, 1e-7 * size)
+        below = _chord_of_ring(edges, self._counter_clockwise, x, level - nudge, 1e-7 * size)
+        above = _chord_of_ring(edges, self._counter_clockwise, x, level + nudge, 1e-7 * size)
         if below.width == 0.0 or above.width == 0.0:
             return NO_MATERIAL
         return below if below.width < above.width else above
@@ -218,7 +221,7 @@ class Outline:
 def _polygon_first_moments(points: NDArray[np.float64]) -> tuple[float, float, float]:
     """Signed area, ∫x dA and ∫y dA of one closed polygon (shoelace formulas)."""
     x, y = points[:, 0], points[:, 1]
-    x_next, y_next = np.roll(x, -1), np.roll(y, -1)
+    x_next, y_next = np.append(x[1:], x[0]), np.append(y[1:], y[0])
     cross = x * y_next - x_next * y
     return (
         float(np.sum(cross) / 2.0),
@@ -227,19 +230,25 @@ def _polygon_first_moments(points: NDArray[np.float64]) -> tuple[float, float, f
     )
 
 
-def _chord_of_ring(ring: NDArray[np.float64], x: float, level: float, tolerance: float) -> ChordCut:
-    """Chord of the line y = ``level`` through ``x`` in one ring, and the part above it."""
-    y0 = ring[:, 1]
-    y1 = np.roll(y0, -1)
-    x0 = ring[:, 0]
-    x1 = np.roll(x0, -1)
+def _chord_of_ring(
+    edges: tuple[NDArray[np.float64], ...],
+    counter_clockwise: bool,
+    x: float,
+    level: float,
+    tolerance: float,
+) -> ChordCut:
+    """Chord of the line y = ``level`` through ``x`` in one ring (its edges as start and
+    end coordinates), and the part above it."""
+    x0, y0, x1, y1 = edges
     crossing = ((y0 <= level) & (level < y1)) | ((y1 <= level) & (level < y0))
-    edges = np.flatnonzero(crossing)
-    if edges.size < 2:
+    crossed = np.flatnonzero(crossing)
+    if crossed.size < 2:
         return NO_MATERIAL
-    at = x0[edges] + (level - y0[edges]) * (x1[edges] - x0[edges]) / (y1[edges] - y0[edges])
+    at = x0[crossed] + (level - y0[crossed]) * (x1[crossed] - x0[crossed]) / (
+        y1[crossed] - y0[crossed]
+    )
     order = np.argsort(at, kind="stable")
-    at, edges = at[order], edges[order]
+    at, crossed = at[order], crossed[order]
     # Crossings pair up left to right into stretches of material (one ring, no holes).
     for left in range(0, len(at) - 1, 2):
         if at[left] - tolerance <= x <= at[left + 1] + tolerance:
@@ -248,16 +257,15 @@ def _chord_of_ring(ring: NDArray[np.float64], x: float, level: float, tolerance:
         return NO_MATERIAL
     start = (float(at[left]), level)
     end = (float(at[left + 1]), level)
-    first_edge, last_edge = int(edges[left]), int(edges[left + 1])
-    counter_clockwise = _polygon_first_moments(ring)[0] > 0
-    count = len(ring)
+    first_edge, last_edge = int(crossed[left]), int(crossed[left + 1])
+    count = len(x0)
 
     def walk(from_edge: int, to_edge: int) -> list[tuple[float, float]]:
         """Vertices from the end of ``from_edge`` to the start of ``to_edge``, forwards."""
         vertices = []
         index = (from_edge + 1) % count
         while True:
-            vertices.append((float(ring[index, 0]), float(ring[index, 1])))
+            vertices.append((float(x0[index]), float(y0[index])))
             if index == to_edge:
                 return vertices
             index = (index + 1) % count
