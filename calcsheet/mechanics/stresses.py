@@ -43,7 +43,7 @@ from numpy.typing import ArrayLike, NDArray
 from calcsheet.mechanics import formulas
 from calcsheet.mechanics.torsion import TorsionRule, torsion_rule
 from calcsheet.sections import Section, SectionNumbers
-from calcsheet.sections.geometry import ChordCut, Outline
+from calcsheet.sections.geometry import NO_MATERIAL, ChordCut, Outline
 from calcsheet.sections.shapes import Wall
 
 Array = NDArray[np.float64]
@@ -208,11 +208,18 @@ class StressModel:
         )
 
 
-def re_entrant_corners(outline: Outline, x: Array, y: Array) -> Array:
-    """Which points sit on a re-entrant corner of a one-ring outline (where walls meet).
+# A convex corner sharper than this (the boundary turning by more than 45°) has two
+# free faces with independent normals; a polygon drawing a curve turns far less.
+_SHARP_TURN = np.radians(45.0)
 
-    A vertex is re-entrant where the boundary turns clockwise on a counter-clockwise
-    ring. Tubes and built-up plates (several rings) have none counted.
+
+def _corner_points(outline: Outline, x: Array, y: Array, re_entrant: bool) -> Array:
+    """Which points sit on a corner of a one-ring outline, re-entrant or sharp convex.
+
+    On a counter-clockwise ring a re-entrant corner (where walls meet) turns
+    clockwise; a sharp convex corner (a toe, a heel, a flange tip) turns counter-
+    clockwise by more than 45°. Tubes and built-up plates (several rings) have none
+    counted.
     """
     found = np.zeros(len(x), dtype=bool)
     if len(outline.rings) != 1:
@@ -220,15 +227,33 @@ def re_entrant_corners(outline: Outline, x: Array, y: Array) -> Array:
     ring = outline.rings[0]
     incoming = ring - np.roll(ring, 1, axis=0)
     outgoing = np.roll(ring, -1, axis=0) - ring
-    turn = incoming[:, 0] * outgoing[:, 1] - incoming[:, 1] * outgoing[:, 0]
+    cross = incoming[:, 0] * outgoing[:, 1] - incoming[:, 1] * outgoing[:, 0]
+    dot = np.sum(incoming * outgoing, axis=1)
     orientation = np.sign(
         np.sum(ring[:, 0] * np.roll(ring[:, 1], -1) - np.roll(ring[:, 0], -1) * ring[:, 1])
     )
-    corners = ring[turn * orientation < 0]
+    turn = np.arctan2(cross * orientation, dot)
+    corners = ring[turn < 0] if re_entrant else ring[turn > _SHARP_TURN]
     size = max(outline.x_max - outline.x_min, outline.y_max - outline.y_min)
     for corner_x, corner_y in corners:
         found |= np.hypot(x - corner_x, y - corner_y) < 1e-9 * size
     return found
+
+
+def re_entrant_corners(outline: Outline, x: Array, y: Array) -> Array:
+    """Which points sit on a re-entrant corner of a one-ring outline (where walls meet)."""
+    return _corner_points(outline, x, y, re_entrant=True)
+
+
+def free_corners(outline: Outline, x: Array, y: Array) -> Array:
+    """Which points sit on a sharp convex corner of a one-ring outline (a toe or a tip).
+
+    Both faces there are free and their normals independent, so both components of
+    the transverse shear vanish (traction-free faces, common practice, no source),
+    whichever cut passes through the point: a horizontal cut at the toe of a sloped
+    flange still crosses the flange, but the toe carries no shear.
+    """
+    return _corner_points(outline, x, y, re_entrant=False)
 
 
 def _cut_through(outline: Outline, along: float, level: float) -> ChordCut:
@@ -248,8 +273,15 @@ def cut_data(section: Section, x: Array, y: Array, length_unit: str) -> CutData:
     """First moments and widths of the horizontal and vertical cuts through each point."""
     outline = section.numeric(length_unit).outline
     turned = outline.quarter_turned()  # (x, y) -> (−y, x): "above" is "to the right"
-    above = [_cut_through(outline, float(px), float(py)) for px, py in zip(x, y, strict=True)]
-    right = [_cut_through(turned, float(-py), float(px)) for px, py in zip(x, y, strict=True)]
+    free = free_corners(outline, x, y)
+    above, right = [], []
+    for px, py, at_free_corner in zip(x, y, free, strict=True):
+        if at_free_corner:  # see free_corners: no shear, whichever way it is cut
+            above.append(NO_MATERIAL)
+            right.append(NO_MATERIAL)
+            continue
+        above.append(_cut_through(outline, float(px), float(py)))
+        right.append(_cut_through(turned, float(-py), float(px)))
     return CutData(
         Qx_above=np.array([part.first_y for part in above]),
         Qy_above=np.array([part.first_x for part in above]),
@@ -264,47 +296,58 @@ def cut_data(section: Section, x: Array, y: Array, length_unit: str) -> CutData:
 class WallShear:
     """Transverse shear across one wall per unit shear force in each direction.
 
-    ``coefficients[k, i]`` multiplies ``u**i`` (u from 0 at the wall's start to 1 at
-    its end) in τ(u) for the unit shear of ``directions[k]`` (radians from +x): on a
-    straight wall of uniform thickness Q grows by a full-thickness strip whose
-    centroid is on the mid-line, so τ is exactly quadratic in u.
+    τ(u) = (Σ ``coefficients[k, i]``·u^i) / t(u) for the unit shear of ``directions[k]``
+    (radians from +x), u from 0 at the wall's start to 1 at its end. As u grows the
+    part cut off gains a strip of the wall whose area is linear in u (a uniform wall:
+    constant) and whose centroid lies on the mid-line, so Q, hence the numerator, is
+    a cubic in u (a quadratic for a uniform wall), and t(u) is linear.
     """
 
     wall: Wall
-    coefficients: Array
+    coefficients: Array  # (directions, 4)
+    thickness: tuple[float, float]  # t at u = 0 and u = 1
 
     def values(self, fractions: ArrayLike) -> Array:
         """τ at each fraction for every direction: shape (directions, fractions)."""
         u = np.atleast_1d(np.asarray(fractions, dtype=float))
-        return self.coefficients @ np.vstack([np.ones_like(u), u, u * u])
+        powers = np.vstack([np.ones_like(u), u, u * u, u**3])
+        width = self.thickness[0] + (self.thickness[1] - self.thickness[0]) * u
+        return (self.coefficients @ powers) / width
 
     def peak(self) -> tuple[Array, Array]:
         """Largest |τ| on the wall for every direction, and the fraction where it is.
 
-        dτ/du = 0 where the mid-line crosses the neutral axis of the bending that goes
-        with the shear; otherwise the peak is at an end of the wall.
+        On a uniform wall dτ/du = 0 where the mid-line crosses the neutral axis of the
+        bending that goes with the shear, otherwise the peak is at an end. It is found
+        on a grid of 129 fractions and refined by the parabola through the best grid
+        value and its neighbours (exact for a uniform wall, whose τ is a parabola).
         """
-        c1, c2 = self.coefficients[:, 1], self.coefficients[:, 2]
-        with np.errstate(divide="ignore", invalid="ignore"):
-            stationary = np.where(np.abs(c2) > 0, -c1 / (2.0 * c2), 0.0)
-        stationary = np.clip(np.nan_to_num(stationary), 0.0, 1.0)
-        candidates = np.column_stack([np.zeros_like(c1), np.ones_like(c1), stationary])
-        u = candidates
-        values = np.abs(
-            self.coefficients[:, :1]
-            + self.coefficients[:, 1:2] * u
-            + self.coefficients[:, 2:] * u**2
-        )
+        grid = np.linspace(0.0, 1.0, _WALL_GRID)
+        values = np.abs(self.values(grid))
         best = np.argmax(values, axis=1)
+        inner = np.clip(best, 1, _WALL_GRID - 2)
         rows = np.arange(len(best))
-        return values[rows, best], candidates[rows, best]
+        left, middle, right = (values[rows, inner + k] for k in (-1, 0, 1))
+        curvature = left - 2.0 * middle + right
+        with np.errstate(divide="ignore", invalid="ignore"):
+            shift = np.where(curvature < 0, 0.5 * (left - right) / curvature, 0.0)
+        refined = np.clip(grid[inner] + np.clip(shift, -1.0, 1.0) * grid[1], 0.0, 1.0)
+        at_end = (best == 0) | (best == _WALL_GRID - 1)
+        fraction = np.where(at_end, grid[best], refined)
+        powers = np.vstack([np.ones_like(fraction), fraction, fraction**2, fraction**3])
+        width = self.thickness[0] + (self.thickness[1] - self.thickness[0]) * fraction
+        value = np.abs(np.sum(self.coefficients * powers.T, axis=1) / width)
+        return value, fraction
+
+
+_WALL_GRID = 129
 
 
 def wall_shear(numbers: SectionNumbers, wall: Wall, directions: Array) -> WallShear:
     """Fit τ(u) across ``wall`` for a unit shear in each of ``directions``."""
     outline = numbers.outline
-    samples = np.array([0.25, 0.5, 0.75])  # inside the wall: its ends touch a corner or a toe
-    first_about_x, first_about_y = [], []
+    samples = np.array([0.2, 0.4, 0.6, 0.8])  # inside the wall: its ends touch a corner or toe
+    first_about_x, first_about_y, widths = [], [], []
     for fraction in samples:
         px, py = wall.at(float(fraction))
         if wall.vertical:  # a horizontal cut, the part above
@@ -315,21 +358,25 @@ def wall_shear(numbers: SectionNumbers, wall: Wall, directions: Array) -> WallSh
             cut = _cut_through(outline.quarter_turned(), -py, px)
             first_about_x.append(-cut.first_x)
             first_about_y.append(cut.first_y)
-    vandermonde = np.vstack([np.ones(3), samples, samples**2]).T
+        widths.append(cut.width)
+    vandermonde = np.vander(samples, 4, increasing=True)
     qx_coefficients = np.linalg.solve(vandermonde, first_about_x)
     qy_coefficients = np.linalg.solve(vandermonde, first_about_y)
+    width_slope = (widths[-1] - widths[0]) / (samples[-1] - samples[0])
+    thickness = (widths[0] - width_slope * samples[0], widths[0] + width_slope * (1 - samples[0]))
     unit_x, unit_y = np.cos(directions)[:, None], np.sin(directions)[:, None]
+    # The numerator of τ·t: shear_flow_stress with a unit width.
     coefficients = formulas.shear_flow_stress(
         unit_x,
         unit_y,
         qx_coefficients[None, :],
         qy_coefficients[None, :],
-        wall.thickness,
+        1.0,
         numbers.Ix,
         numbers.Iy,
         numbers.Ixy,
     )
-    return WallShear(wall, coefficients)
+    return WallShear(wall, coefficients, thickness)
 
 
 def _direction_label(direction: float) -> str:
@@ -349,10 +396,11 @@ def wall_peak_points(numbers: SectionNumbers) -> list[tuple[str, float, float]]:
     V_y) turns, and a sheet's loads may turn it after it is built. Rather than one
     point for one direction, the points are chosen for every direction at once: first
     the peaks of V_x alone and V_y alone, then, while some direction on a 0.1° grid
-    gets less than 99.2 % of its exact peak (the largest over all walls, in closed
-    form) from the points so far, that direction's own peak is added. The wall ends
-    are counted as covered: they are outline corners (a toe, or the corner where the
-    wall meets another), whose cuts are the same stretch of material.
+    gets less than 99.2 % of its peak (the largest over all walls, see
+    :meth:`WallShear.peak`) from the points so far, that direction's own peak is
+    added. The wall ends are counted as covered: they are outline corners (a toe, or
+    the corner where the wall meets another), whose cuts are the same stretch of
+    material.
     """
     if not numbers.walls:
         return []
