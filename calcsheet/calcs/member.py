@@ -414,7 +414,8 @@ def _write_section_properties(
     sheet.text(
         f"Section: {section.name} ({section.family}). Each property's source is given "
         "beside it. Stress points are the labelled points of the section outline, with the "
-        "centroid added where it lies in the material."
+        "centroid added where it lies in the material and, on open sections, points on the "
+        "walls where transverse shear peaks."
     )
     props: dict[str, sp.Symbol | None] = {}
     for name, key, description in (

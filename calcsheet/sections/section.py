@@ -20,7 +20,12 @@ Coordinates and signs
 * ``Q_x(y)`` is the first moment about the x axis of the area above a horizontal
   cut at height y, and ``b(y)`` the total width of material the cut crosses;
   ``Q_y(x)`` and ``t(x)`` are the same for a vertical cut and the area to its
-  right. Both Q are ≥ 0, so τ = V·Q/(I·b) takes the sign of V.
+  right. Both Q are ≥ 0, so τ = V·Q/(I·b) takes the sign of V. These are cuts across
+  the whole section; the stress model cuts an open section through a point only
+  across the stretch of material there (:meth:`Outline.chord_cut`).
+* ``walls`` are the straight walls of an angle, channel or tee (mid-line and
+  thickness, from the centroid), along which the stress model looks for the peak
+  of the transverse shear.
 """
 
 from __future__ import annotations
