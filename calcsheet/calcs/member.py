@@ -26,10 +26,10 @@ from calcsheet.calcs.design_sheet import (
 from calcsheet.calcs.design_standards import NOT_A_SPEC_CHECK, CheckContext
 from calcsheet.calcs.member_figures import member_drawing, section_drawing, stress_drawing
 from calcsheet.calcs.member_rebuild import rebuild_on_change
-from calcsheet.calcs.points import PointSymbols, write_combined
+from calcsheet.calcs.points import PointSymbols, shear_at_point, write_combined
 from calcsheet.calcs.round_section import write_round_point_stresses
 from calcsheet.engine import Sheet, TitleBlock
-from calcsheet.engine.functions import Abs, cos, sin, sqrt
+from calcsheet.engine.functions import cos, sin, sqrt
 from calcsheet.errors import InputError
 from calcsheet.mechanics.deflection import write_tip_deflection
 from calcsheet.mechanics.loads import AXES, AppliedMoment, PointLoad, parse_signed_axis
@@ -57,8 +57,12 @@ SIGN_TEXT = (
 SHEAR_TEXT = (
     "Shear: τ_zy is the average over the horizontal cut through the point and τ_zx the "
     "average over the vertical cut (τ = V·Q/(I·b) in its general unsymmetric form, Q of "
-    "the part cut off). The torsional shear τ_T is added to the transverse shear by "
-    "magnitude because its direction along the wall is not tracked (conservative)."
+    "the part cut off). On an open section a cut is the stretch of material through the "
+    "point and Q is of the part that stretch cuts off; a cut that meets no material at the "
+    "point (a free face or toe) carries no shear. At a re-entrant corner the two cuts "
+    "cross two different walls and the larger of the two is taken. The torsional shear "
+    "τ_T is added to the transverse shear by magnitude because its direction along the "
+    "wall is not tracked (conservative)."
 )
 LAYOUT = (
     "the member length, the station and the load positions decide which loads the cut "
@@ -429,7 +433,8 @@ def _write_section_properties(
     sheet.text(
         f"Section: {section.name} ({section.family}). Each property's source is given "
         "beside it. Stress points are the labelled points of the section outline, with the "
-        "centroid added where it lies in the material."
+        "centroid added where it lies in the material and, on open sections, points on the "
+        "walls where transverse shear peaks."
     )
     props: dict[str, sp.Symbol | None] = {}
     for name, key, description in (
@@ -505,9 +510,12 @@ def _write_point_data(
     sheet.text(
         "Stress points are the corners of the section outline (flange tips, wall corners, "
         "leg toes; bounding-box corners of rounded tube corners, which is conservative), "
-        "with the centroid where it lies in the material, or else the points where the "
-        "centroidal axes meet the walls (where transverse shear peaks). Coordinates and "
-        "first moments are computed from the section outline."
+        "with the centroid where it lies in the material. On the walls of an angle, channel "
+        "or tee, points are added on the wall mid-line where the transverse shear of a "
+        "direction of shear peaks (where the mid-line crosses the neutral axis of the "
+        "bending that goes with that shear), enough that every direction finds its peak "
+        "within 1 %; on a tube, the points where the centroidal axes meet the walls. "
+        "Coordinates and first moments are computed from the section outline."
     )
     q_scale = model.A**1.5
     volume = f"{unit}**3"
@@ -642,12 +650,7 @@ def _write_point_stresses(
         else:
             tau_T = tau_T_common
         record.terms["tau_T"] = tau_T
-        if len(transverse) == 2:
-            shear_expr = sqrt(transverse[0] ** 2 + transverse[1] ** 2) + Abs(tau_T)
-        elif transverse:
-            shear_expr = Abs(transverse[0]) + Abs(tau_T)
-        else:
-            shear_expr = Abs(tau_T)
+        shear_expr = shear_at_point(transverse, tau_T, bool(model.junction[point.index - 1]))
         tau = sheet.step(f"tau_{n}", shear_expr, "Shear stress at the point", unit=stress)
         record.terms["tau"] = tau
         write_combined(sheet, record, n, stress)

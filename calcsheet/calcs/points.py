@@ -8,7 +8,7 @@ from dataclasses import dataclass, field
 import sympy as sp
 
 from calcsheet.engine import Sheet
-from calcsheet.engine.functions import sqrt
+from calcsheet.engine.functions import Abs, Max, sqrt
 
 
 @dataclass
@@ -18,6 +18,23 @@ class PointSymbols:
     index: int
     label: str
     terms: dict[str, sp.Symbol] = field(default_factory=dict)
+
+
+def shear_at_point(transverse: list[sp.Symbol], tau_T: sp.Symbol, junction: bool) -> sp.Expr:
+    """The shear at a point from its transverse terms (one per cut through material) and τ_T.
+
+    Two cuts through the point: τ = √(τzx² + τzy²) + |τ_T|; at a re-entrant corner the
+    two cuts cross two different walls, so the larger wall shear is taken,
+    τ = max(|τzx|, |τzy|) + |τ_T| (the same rules as
+    :func:`calcsheet.mechanics.formulas.combined_shear` and ``junction_shear``).
+    """
+    if len(transverse) == 2 and junction:
+        return Max(Abs(transverse[0]), Abs(transverse[1])) + Abs(tau_T)
+    if len(transverse) == 2:
+        return sqrt(transverse[0] ** 2 + transverse[1] ** 2) + Abs(tau_T)
+    if transverse:
+        return Abs(transverse[0]) + Abs(tau_T)
+    return Abs(tau_T)
 
 
 def write_combined(sheet: Sheet, record: PointSymbols, n: str, stress: str) -> None:

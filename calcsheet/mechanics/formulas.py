@@ -89,6 +89,17 @@ def combined_shear(tau_zx: ArrayLike, tau_zy: ArrayLike, tau_torsion: ArrayLike)
     return np.hypot(tau_zx, tau_zy) + np.abs(tau_torsion)
 
 
+def junction_shear(tau_zx: ArrayLike, tau_zy: ArrayLike, tau_torsion: ArrayLike) -> Array:
+    """Shear at a re-entrant corner where two walls meet: τ = max(|τzx|, |τzy|) + |τ_T|.
+
+    There the horizontal and the vertical cut cross two different walls, so τzx and
+    τzy are the shears of two walls, not two components at one spot; the shear flow
+    turns the corner and each wall carries its own (thin-walled open section shear
+    flow, common practice, no source). The larger is taken.
+    """
+    return np.maximum(np.abs(tau_zx), np.abs(tau_zy)) + np.abs(tau_torsion)
+
+
 def principal_stresses(sigma: ArrayLike, tau: ArrayLike) -> tuple[Array, Array]:
     """σ1,2 = σ/2 ± √((σ/2)² + τ²) for a plane state with one normal stress σ and shear τ."""
     sigma = np.asarray(sigma, dtype=float)

@@ -29,6 +29,23 @@ _BISECTION_STEPS = 64
 
 
 @dataclass(frozen=True)
+class ChordCut:
+    """The stretch of material a straight cut crosses at a point, and the part it cuts off.
+
+    ``width`` is the chord's length (zero where the cut passes through no material
+    at the point: a free face or a toe); ``first_x`` = ∫x dA and ``first_y`` = ∫y dA
+    of the part on the upper side of a horizontal chord, in the outline's axes.
+    """
+
+    width: float
+    first_x: float
+    first_y: float
+
+
+NO_MATERIAL = ChordCut(0.0, 0.0, 0.0)
+
+
+@dataclass(frozen=True)
 class AreaIntegrals:
     """Integrals over a region about the outline's own origin."""
 
@@ -52,6 +69,7 @@ class Outline:
         self.x_min, self.x_max = float(starts[:, 0].min()), float(starts[:, 0].max())
         self.y_min, self.y_max = float(starts[:, 1].min()), float(starts[:, 1].max())
         self._turned: Outline | None = None
+        self._counter_clockwise: bool | None = None
 
     def shifted(self, dx: float, dy: float) -> Outline:
         """The same outline moved by (dx, dy)."""
@@ -151,6 +169,35 @@ class Outline:
         inside = winding[:-1] != 0
         return float(np.sum(np.diff(x)[inside]))
 
+    def chord_cut(self, x: float, level: float) -> ChordCut | None:
+        """The horizontal chord through (x, level) and the part of the section above it.
+
+        A horizontal line may cross an open section in several separate stretches (both
+        flanges of a channel, a flange and a stem of a tee); the shear stress at a point
+        is carried by the stretch through that point, and the flow over it comes from
+        the part of the section that this stretch alone cuts off (thin-walled open
+        section shear flow: the cut must separate the section). That part is found by
+        splitting the ring at the chord's two ends. Along a horizontal face the narrower
+        side governs, as in :meth:`cut_width`; a line that meets no material at the
+        point on one side (a free face, a toe) gives width zero.
+
+        Only a single solid ring (every open rolled shape, plate and bar) can be split
+        this way; for several rings (tubes, built-up plates) ``None`` is returned and
+        the caller uses the whole-line cut.
+        """
+        if len(self.rings) != 1:
+            return None
+        if self._counter_clockwise is None:
+            self._counter_clockwise = _polygon_first_moments(self.rings[0])[0] > 0
+        edges = (self._x0, self._y0, self._x1, self._y1)
+        size = max(self.y_max - self.y_min, self.x_max - self.x_min)
+        nudge = 1e-9 * size
+        below = _chord_of_ring(edges, self._counter_clockwise, x, level - nudge, 1e-7 * size)
+        above = _chord_of_ring(edges, self._counter_clockwise, x, level + nudge, 1e-7 * size)
+        if below.width == 0.0 or above.width == 0.0:
+            return NO_MATERIAL
+        return below if below.width < above.width else above
+
     # --- plastic modulus ------------------------------------------------------------
 
     def plastic_modulus_about_horizontal(self) -> float:
@@ -169,3 +216,67 @@ class Outline:
                 high = middle
         first_above = self.integrals(above=0.5 * (low + high)).first_y
         return 2.0 * first_above - whole.first_y
+
+
+def _polygon_first_moments(points: NDArray[np.float64]) -> tuple[float, float, float]:
+    """Signed area, ∫x dA and ∫y dA of one closed polygon (shoelace formulas)."""
+    x, y = points[:, 0], points[:, 1]
+    x_next, y_next = np.append(x[1:], x[0]), np.append(y[1:], y[0])
+    cross = x * y_next - x_next * y
+    return (
+        float(np.sum(cross) / 2.0),
+        float(np.sum((x + x_next) * cross) / 6.0),
+        float(np.sum((y + y_next) * cross) / 6.0),
+    )
+
+
+def _chord_of_ring(
+    edges: tuple[NDArray[np.float64], ...],
+    counter_clockwise: bool,
+    x: float,
+    level: float,
+    tolerance: float,
+) -> ChordCut:
+    """Chord of the line y = ``level`` through ``x`` in one ring (its edges as start and
+    end coordinates), and the part above it."""
+    x0, y0, x1, y1 = edges
+    crossing = ((y0 <= level) & (level < y1)) | ((y1 <= level) & (level < y0))
+    crossed = np.flatnonzero(crossing)
+    if crossed.size < 2:
+        return NO_MATERIAL
+    at = x0[crossed] + (level - y0[crossed]) * (x1[crossed] - x0[crossed]) / (
+        y1[crossed] - y0[crossed]
+    )
+    order = np.argsort(at, kind="stable")
+    at, crossed = at[order], crossed[order]
+    # Crossings pair up left to right into stretches of material (one ring, no holes).
+    for left in range(0, len(at) - 1, 2):
+        if at[left] - tolerance <= x <= at[left + 1] + tolerance:
+            break
+    else:
+        return NO_MATERIAL
+    start = (float(at[left]), level)
+    end = (float(at[left + 1]), level)
+    first_edge, last_edge = int(crossed[left]), int(crossed[left + 1])
+    count = len(x0)
+
+    def walk(from_edge: int, to_edge: int) -> list[tuple[float, float]]:
+        """Vertices from the end of ``from_edge`` to the start of ``to_edge``, forwards."""
+        vertices = []
+        index = (from_edge + 1) % count
+        while True:
+            vertices.append((float(x0[index]), float(y0[index])))
+            if index == to_edge:
+                return vertices
+            index = (index + 1) % count
+
+    # Walking a counter-clockwise ring forward from the right end of the chord to its
+    # left end and closing along the chord (left to right) keeps the material on the
+    # left of travel: that is the part above. A clockwise ring walks the other way.
+    if counter_clockwise:
+        piece = [end, *walk(last_edge, first_edge), start]
+    else:
+        piece = [start, *walk(first_edge, last_edge), end]
+    area, first_x, first_y = _polygon_first_moments(np.array(piece))
+    sign = 1.0 if area >= 0 else -1.0
+    return ChordCut(end[0] - start[0], sign * first_x, sign * first_y)

@@ -20,7 +20,12 @@ Coordinates and signs
 * ``Q_x(y)`` is the first moment about the x axis of the area above a horizontal
   cut at height y, and ``b(y)`` the total width of material the cut crosses;
   ``Q_y(x)`` and ``t(x)`` are the same for a vertical cut and the area to its
-  right. Both Q are ≥ 0, so τ = V·Q/(I·b) takes the sign of V.
+  right. Both Q are ≥ 0, so τ = V·Q/(I·b) takes the sign of V. These are cuts across
+  the whole section; the stress model cuts an open section through a point only
+  across the stretch of material there (:meth:`Outline.chord_cut`).
+* ``walls`` are the straight walls of an angle, channel or tee (mid-line and
+  thickness, from the centroid), along which the stress model looks for the peak
+  of the transverse shear.
 """
 
 from __future__ import annotations
@@ -35,7 +40,7 @@ import pint
 from numpy.typing import ArrayLike, NDArray
 
 from calcsheet.sections.geometry import Outline
-from calcsheet.sections.shapes import ShapeOutline
+from calcsheet.sections.shapes import ShapeOutline, Wall
 from calcsheet.units import Quantity, parse_quantity, ureg
 
 COMPUTED = "computed from the outline (no fillets or corner rounding beyond the HSS radii)"
@@ -120,6 +125,7 @@ class SectionNumbers:
     point_x: NDArray[np.float64]
     point_y: NDArray[np.float64]
     outline: Outline = field(repr=False)
+    walls: tuple[Wall, ...] = ()
 
     def Q_x(self, y: ArrayLike) -> NDArray[np.float64]:
         """First moment about x of the area above each horizontal cut at ``y``."""
@@ -157,6 +163,7 @@ class Section:
     sources: Mapping[str, str]
     tabulated: Mapping[str, pint.Quantity]
     outline: Outline = field(repr=False)
+    walls: tuple[Wall, ...] = ()  # straight walls of an open section, from the centroid
 
     def __getattr__(self, name: str) -> pint.Quantity:
         # Properties read as attributes (section.Ix); dataclass fields are found first.
@@ -213,6 +220,7 @@ class Section:
             point_x=np.array([point.x.to(unit).magnitude for point in self.points]),
             point_y=np.array([point.y.to(unit).magnitude for point in self.points]),
             outline=self.outline if scale == 1.0 else self.outline.scaled(scale),
+            walls=tuple(wall.moved(0.0, 0.0, scale) for wall in self.walls),
             **values,
         )
 
@@ -296,6 +304,7 @@ def build_section(
         sources=MappingProxyType(sources),
         tabulated=MappingProxyType(tabulated),
         outline=outline,
+        walls=tuple(wall.moved(-x_bar, -y_bar) for wall in shape.walls),
     )
 
 

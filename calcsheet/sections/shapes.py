@@ -12,12 +12,15 @@ lower-left corner of the bounding box at (0, 0):
 * Rectangular HSS: height H vertical, width B horizontal, outside corner radius
   2t and inside radius t, t the design wall thickness.
 
-Rolled shapes are drawn without fillets, flange slopes or toe rounding (tf of
-S shapes and channels is the average flange thickness the tables give).
+Rolled shapes are drawn without fillets or toe rounding, and with parallel flanges
+except C channels (tf of S shapes and channels is the average flange thickness
+the tables give; a C channel's flanges are drawn sloped, see :func:`channel`).
 
 Each builder also gives labelled stress points (outline corners where the
-extreme normal stresses of combined axial force and biaxial bending can occur)
-and the torsion constant J and warping constant Cw by the usual thin-walled
+extreme normal stresses of combined axial force and biaxial bending can occur),
+the straight walls of an open section along which transverse shear flows
+(angles, channels, tees: the stress model scans them for the shear peak), and
+the torsion constant J and warping constant Cw by the usual thin-walled
 formulas, with a note saying which.
 """
 
@@ -50,6 +53,52 @@ class StressPointSpec:
 
 
 @dataclass(frozen=True)
+class Wall:
+    """A straight wall: its mid-line from ``start`` to ``end`` and its thickness there.
+
+    Walls run parallel to x or to y, so the cut across a wall is a horizontal cut
+    (a vertical wall) or a vertical one (a horizontal wall). The mid-line stops
+    where the wall meets another (the shared corner belongs to neither), so every
+    cut across it crosses this wall alone. The thickness varies linearly from
+    ``thickness`` at the start to ``end_thickness`` at the end (a sloped flange);
+    ``end_thickness`` is None for a wall of uniform thickness.
+    """
+
+    label: str
+    start: tuple[float, float]
+    end: tuple[float, float]
+    thickness: float
+    end_thickness: float | None = None
+
+    @property
+    def vertical(self) -> bool:
+        """True for a wall along y (cut across by horizontal lines)."""
+        return self.start[0] == self.end[0]
+
+    @property
+    def thickest(self) -> float:
+        """The larger of the thicknesses at the two ends."""
+        return max(self.thickness, self.end_thickness or self.thickness)
+
+    def at(self, fraction: float) -> tuple[float, float]:
+        """The mid-line point at ``fraction`` (0 at ``start``, 1 at ``end``)."""
+        return (
+            self.start[0] + fraction * (self.end[0] - self.start[0]),
+            self.start[1] + fraction * (self.end[1] - self.start[1]),
+        )
+
+    def moved(self, dx: float, dy: float, factor: float = 1.0) -> Wall:
+        """The wall shifted by (dx, dy), then scaled by ``factor`` (another length unit)."""
+        return Wall(
+            self.label,
+            ((self.start[0] + dx) * factor, (self.start[1] + dy) * factor),
+            ((self.end[0] + dx) * factor, (self.end[1] + dy) * factor),
+            self.thickness * factor,
+            None if self.end_thickness is None else self.end_thickness * factor,
+        )
+
+
+@dataclass(frozen=True)
 class ShapeOutline:
     """A section's outline, stress points, and torsion/warping constants, in one unit."""
 
@@ -59,6 +108,7 @@ class ShapeOutline:
     torsion_note: str
     warping_constant: float | None
     warping_note: str
+    walls: tuple[Wall, ...] = ()
 
 
 # --- validation ------------------------------------------------------------------------
@@ -313,21 +363,37 @@ def i_shape(
     )
 
 
-def channel(depth: float, flange_width: float, web: float, flange: float, unit: str):
-    """Channel with the back of the web on the left and flanges pointing to +x."""
+def channel(
+    depth: float,
+    flange_width: float,
+    web: float,
+    flange: float,
+    unit: str,
+    flange_slope: float = 0.0,
+):
+    """Channel with the back of the web on the left and flanges pointing to +x.
+
+    ``flange_slope`` (rise over run of the flanges' inner faces) draws the sloped
+    flanges of a rolled channel; ``flange`` is then the thickness midway between the
+    web face and the toe (the average thickness the shape tables give), so the
+    flange's area is that of a parallel flange of that thickness.
+    """
     for field, value in (("d", depth), ("bf", flange_width), ("tw", web), ("tf", flange)):
         require_positive(field, value, unit)
-    require_less("tf", flange, depth / 2, "half the depth d/2", unit)
     require_less("tw", web, flange_width, "the flange width bf", unit)
-    under_top = depth - flange
+    half_run = (flange_width - web) / 2
+    at_web, at_toe = flange + flange_slope * half_run, flange - flange_slope * half_run
+    require_less("tf", at_web, depth / 2, "half the depth d/2 (at the web face)", unit)
+    if at_toe <= 0:
+        raise InputError("tf", f"{flange:g} {unit}", "a flange that is still solid at its toe")
     ring = _ring(
         [
             (0, 0),
             (flange_width, 0),
-            (flange_width, flange),
-            (web, flange),
-            (web, under_top),
-            (flange_width, under_top),
+            (flange_width, at_toe),
+            (web, at_web),
+            (web, depth - at_web),
+            (flange_width, depth - at_toe),
             (flange_width, depth),
             (0, depth),
         ]
@@ -335,10 +401,10 @@ def channel(depth: float, flange_width: float, web: float, flange: float, unit: 
     points = (
         StressPointSpec("back of web, top", 0, depth),
         StressPointSpec("top flange toe, outer face", flange_width, depth),
-        StressPointSpec("top flange toe, inner face", flange_width, under_top),
-        StressPointSpec("top flange to web, inside", web, under_top),
-        StressPointSpec("bottom flange to web, inside", web, flange),
-        StressPointSpec("bottom flange toe, inner face", flange_width, flange),
+        StressPointSpec("top flange toe, inner face", flange_width, depth - at_toe),
+        StressPointSpec("top flange to web, inside", web, depth - at_web),
+        StressPointSpec("bottom flange to web, inside", web, at_web),
+        StressPointSpec("bottom flange toe, inner face", flange_width, at_toe),
         StressPointSpec("bottom flange toe, outer face", flange_width, 0),
         StressPointSpec("back of web, bottom", 0, 0),
     )
@@ -355,7 +421,22 @@ def channel(depth: float, flange_width: float, web: float, flange: float, unit: 
         * (3 * flange_length * flange + 2 * flange_distance * web)
         / (6 * flange_length * flange + flange_distance * web)
     )
-    return ShapeOutline(Outline([ring]), points, torsion, THIN_WALLED_J, warping, THIN_WALLED_CW)
+    sloped = flange_slope != 0.0
+    toe_thickness = at_toe if sloped else None
+    walls = (
+        Wall("web", (web / 2, at_web), (web / 2, depth - at_web), web),
+        Wall(
+            "top flange",
+            (web, depth - at_web / 2),
+            (flange_width, depth - at_toe / 2),
+            at_web,
+            toe_thickness,
+        ),
+        Wall("bottom flange", (web, at_web / 2), (flange_width, at_toe / 2), at_web, toe_thickness),
+    )
+    return ShapeOutline(
+        Outline([ring]), points, torsion, THIN_WALLED_J, warping, THIN_WALLED_CW, walls
+    )
 
 
 def angle(vertical_leg: float, horizontal_leg: float, thickness: float, unit: str):
@@ -377,7 +458,13 @@ def angle(vertical_leg: float, horizontal_leg: float, thickness: float, unit: st
     leg_d, leg_b = d - t / 2, b - t / 2
     torsion = (leg_d + leg_b) * t**3 / 3.0
     warping = t**3 * (leg_d**3 + leg_b**3) / 36.0  # AISC Manual angle formula (from memory)
-    return ShapeOutline(Outline([ring]), points, torsion, THIN_WALLED_J, warping, THIN_WALLED_CW)
+    walls = (
+        Wall("vertical leg", (t / 2, t), (t / 2, d), t),
+        Wall("horizontal leg", (t, t / 2), (b, t / 2), t),
+    )
+    return ShapeOutline(
+        Outline([ring]), points, torsion, THIN_WALLED_J, warping, THIN_WALLED_CW, walls
+    )
 
 
 def tee(depth: float, flange_width: float, stem: float, flange: float, unit: str):
@@ -415,7 +502,15 @@ def tee(depth: float, flange_width: float, stem: float, flange: float, unit: str
     torsion = (flange_width * flange**3 + stem_length * stem**3) / 3.0
     # AISC Manual tee formula (from memory): Cw = tf³·bf³/144 + tw³·d'³/36.
     warping = flange**3 * flange_width**3 / 144.0 + stem**3 * stem_length**3 / 36.0
-    return ShapeOutline(Outline([ring]), points, torsion, THIN_WALLED_J, warping, THIN_WALLED_CW)
+    flange_middle = depth - flange / 2
+    walls = (
+        Wall("stem", (middle, 0.0), (middle, under), stem),
+        Wall("left flange", (stem_left, flange_middle), (0.0, flange_middle), flange),
+        Wall("right flange", (stem_right, flange_middle), (flange_width, flange_middle), flange),
+    )
+    return ShapeOutline(
+        Outline([ring]), points, torsion, THIN_WALLED_J, warping, THIN_WALLED_CW, walls
+    )
 
 
 @dataclass(frozen=True)

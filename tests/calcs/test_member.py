@@ -32,7 +32,16 @@ LOADS = [
 ]
 
 
-@pytest.mark.parametrize("section", [catalog_section("W10x33"), angle("6 in", "4 in", "0.5 in")])
+@pytest.mark.parametrize(
+    "section",
+    [
+        catalog_section("W10x33"),
+        angle("6 in", "4 in", "0.5 in"),
+        catalog_section("C10x20"),  # sloped flanges, wall peak points, re-entrant corners
+        catalog_section("WT8x25"),
+    ],
+    ids=lambda section: section.name,
+)
 def test_sheet_matches_the_vectorised_path(section) -> None:
     sheet = member_sheet(section, LOADS, length="60 in", station="10 in")
     forces = internal_forces("60 in", LOADS, "10 in")
@@ -41,6 +50,7 @@ def test_sheet_matches_the_vectorised_path(section) -> None:
     for index in range(len(model.labels)):
         n = index + 1
         assert sheet.value(f"sigma_z_{n}").to("ksi").m == pytest.approx(numeric.sigma[index])
+        assert sheet.value(f"tau_{n}").to("ksi").m == pytest.approx(numeric.tau[index])
         assert sheet.value(f"sigma_vm_{n}").to("ksi").m == pytest.approx(numeric.von_mises[index])
     governing = int(numeric.governing_index("von Mises"))
     check = sheet.checks[0]

@@ -134,15 +134,16 @@ def test_tube_shear_at_the_neutral_axis_against_fe() -> None:
     assert fe_tau == pytest.approx(only_vy.tau_zy[right], rel=0.10)
 
 
-def test_angle_shear_where_the_x_axis_crosses_the_long_leg_against_fe() -> None:
-    """The angle's centroid is off the legs: the long leg on the x axis carries V_y shear."""
+def test_angle_shear_at_the_long_leg_peak_against_fe() -> None:
+    """The angle's centroid is off the legs: its V_y shear peaks on the long leg where the
+    leg's mid-line crosses the neutral axis of M_x alone (above the x axis, Ixy ≠ 0)."""
     ours = angle("6 in", "4 in", "0.5 in")
     fe = _fe(angle_section(d=6, b=4, t=0.5, r_r=0, r_t=0, n_r=1), 0.05)
     model = stress_model(ours)
-    outer = model.labels.index("x axis, left face")
+    peak = model.labels.index("vertical leg, peak of V_y shear")
     Vy = -4.0
     only_vy = model.stresses(np.array([0, 0, Vy, 0, 0, 0]))
     cx, cy = fe.get_c()
-    (_, _, fe_tau) = fe.get_stress_at_points([(cx + model.x[outer] + 0.25, cy)], vy=Vy)[0]
+    (_, _, fe_tau) = fe.get_stress_at_points([(cx + model.x[peak], cy + model.y[peak])], vy=Vy)[0]
     # The long leg's shear is nearly uniform across its 0.5 in thickness (thin wall).
-    assert fe_tau == pytest.approx(only_vy.tau_zy[outer], rel=0.10)
+    assert fe_tau == pytest.approx(only_vy.tau_zy[peak], rel=0.10)
