@@ -174,6 +174,22 @@ def utilizations(
         per_check = {name: values[0] for name, values in checks.items()}
         worst = np.max(np.stack(list(per_check.values())), axis=0)
         return worst, per_check, "governing AISC 360-22 check"
+    if basis.kind == "EN 1993-1-1":
+        from calcsheet.standards.en1993 import en1993_checks_numeric, steel
+
+        grade = basis.grade if basis.grade.upper().startswith("S") else "S355"
+        per_check = en1993_checks_numeric(
+            section,
+            # EN y-y is our x-x: N, M_y,Ed = M_x, M_z,Ed = M_y, V_z,Ed = V_y, V_y,Ed = V_x.
+            {"N_Ed": forces[:, 0], "M_y_Ed": forces[:, 4], "M_z_Ed": forces[:, 5],
+             "V_z_Ed": forces[:, 2], "V_y_Ed": forces[:, 1]},
+            material=steel(grade, f_y=Fy),
+            length=length,
+            k_eff=basis.effective_length_factor,
+            gamma={"gamma_M0": basis.gamma_M0, "gamma_M1": basis.gamma_M1},
+        )  # fmt: skip
+        worst = np.max(np.stack(list(per_check.values())), axis=0)
+        return worst, per_check, "governing EN 1993-1-1 check"
     # Elastic proxy (stated on the sheet): the largest von Mises stress at the points
     # over the allowable (F_y/Ω) or the design yield stress (f_y/γM0, EN 1993-1-1 6.2.1(5)).
     unit = section.length_unit

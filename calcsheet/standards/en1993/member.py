@@ -29,6 +29,7 @@ checks by magnitude, so their signs do not matter here.
 
 from __future__ import annotations
 
+import functools
 import math
 from collections.abc import Mapping, Sequence
 from dataclasses import dataclass
@@ -456,7 +457,7 @@ def _any(w: Writer, *conditions: Any) -> Any:
     """Conditions of a branch joined by "or", kept live on a sheet (not settled now)."""
     if w.prints:
         return sp.Or(*conditions)
-    return np.logical_or.reduce([np.asarray(c, dtype=bool) for c in conditions])
+    return functools.reduce(np.logical_or, (np.asarray(c, dtype=bool) for c in conditions))
 
 
 def _largest(

@@ -111,9 +111,16 @@ def shear_buckling_limit(eps, eta):
 
 @clause("EN 1993-1-1 6.2.8(3)", "Reduction factor for shear, ρ")
 def shear_reduction(V_Ed, V_pl_Rd):
-    """ρ = (2·V_Ed/V_pl,Rd − 1)² when V_Ed > 0.5·V_pl,Rd, else 0 (6.2.8(2), (3))."""
+    """ρ = (2·V_Ed/V_pl,Rd − 1)² when 0.5·V_pl,Rd < V_Ed < V_pl,Rd, else 0 (6.2.8(2), (3)).
+
+    From V_pl,Rd on the shear check (6.2.6(1)) fails and 6.2.8 has no ρ (it would take
+    all of f_y and more); the moment resistance is then left unreduced, so the bending
+    check keeps a positive capacity while the shear check says NOT OK.
+    """
     return Piecewise(
-        (0, sp.Abs(V_Ed) <= V_pl_Rd / 2), ((2 * sp.Abs(V_Ed) / V_pl_Rd - 1) ** 2, True)
+        (0, sp.Abs(V_Ed) <= V_pl_Rd / 2),
+        ((2 * sp.Abs(V_Ed) / V_pl_Rd - 1) ** 2, sp.Abs(V_Ed) < V_pl_Rd),
+        (0, True),
     )
 
 
