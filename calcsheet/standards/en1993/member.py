@@ -78,6 +78,7 @@ DEMAND_DIMENSIONS: dict[str, str] = {
     "V_y_Ed": "force",
 }
 DEMAND_ALIASES = {"V_Ed": "V_z_Ed"}
+F_235 = Quantity(235.0, "MPa")  # the reference strength of ε (Table 5.2)
 
 # The checks of the procedure by key, as titled on the sheet (in sheet order).
 EN_CHECK_TITLES: dict[str, str] = {
@@ -247,6 +248,36 @@ def scope_problems(w: ArrayWriter) -> list[tuple[np.ndarray, str]]:
                 )
             )
     return problems
+
+
+def si_inputs(member: MemberData) -> dict[str, float]:
+    """The procedure's inputs from ``member`` in SI base units, converted once.
+
+    Given to an :class:`ArrayWriter`, they spare the unit conversions of each run
+    (the values are the ones the procedure's inputs would convert, by name).
+    """
+    steel, factors = member.steel, member.factors
+    quantities: dict[str, Any] = {
+        "f_y": steel.f_y,
+        "E": steel.E,
+        "f_235": F_235,
+        "f_u": steel.f_u,
+        "L": member.length,
+        **{name: value for name, (value, _, _) in member.values.items()},
+    }
+    if member.net_area is not None:
+        quantities["A_net"] = member.net_area
+    result = {name: float(value.to_base_units().m) for name, value in quantities.items()}
+    result.update(
+        gamma_M0=factors.gamma_M0,
+        gamma_M1=factors.gamma_M1,
+        gamma_M2=factors.gamma_M2,
+        k_cr_y=member.k[0],
+        k_cr_z=member.k[1],
+        alpha_y=member.curves["y"].alpha,
+        alpha_z=member.curves["z"].alpha,
+    )
+    return result
 
 
 # --- validation ------------------------------------------------------------------------------
@@ -514,7 +545,7 @@ class _Procedure:
             reference="EN 1993-1-1 3.2.6(1)",
         )  # fmt: skip
         w.input(
-            "f_235", Quantity(235.0, "MPa"), "Reference strength of ε", dimension="stress",
+            "f_235", F_235, "Reference strength of ε", dimension="stress",
             unit="MPa", reference="EN 1993-1-1 Table 5.2",
         )  # fmt: skip
         w.input(

@@ -16,6 +16,7 @@ infinite, so a search never picks it.
 
 from __future__ import annotations
 
+import dataclasses
 from collections.abc import Mapping, Sequence
 from typing import Any
 
@@ -32,6 +33,7 @@ from calcsheet.standards.en1993.member import (
     member_data,
     run_on_arrays,
     scope_problems,
+    si_inputs,
 )
 
 _SI_UNITS = {"force": "N", "moment": "N*m"}
@@ -70,12 +72,7 @@ def en1993_checks_numeric(
         "net_area": net_area,
         "interaction": interaction,
     }
-    if isinstance(section, Section):
-        member = member_data(section, **options)
-        given: dict[str, Any] = {}
-        refused = np.zeros((), dtype=bool)
-    else:
-        member, given, refused = _many(list(section), options)
+    member, given, refused = _prepared(section, options)
     w = run_on_arrays(member, arrays, **given)
     outside = refused
     for mask, _ in scope_problems(w):
@@ -121,6 +118,52 @@ def _demand_arrays(demands: Mapping[str, Any]) -> dict[str, np.ndarray]:
     return dict(zip(converted, shaped, strict=True))
 
 
+# Prepared sections by identity and options (reading a section's values and choosing its
+# buckling curves costs more than the checks); the sections are held, so no id is reused.
+_PREPARED: dict[tuple, tuple[object, tuple[MemberData, dict[str, Any], np.ndarray]]] = {}
+
+
+def _prepared(
+    section: Section | Sequence[Section], options: dict[str, Any]
+) -> tuple[MemberData, dict[str, Any], np.ndarray]:
+    """Member data, the inputs as SI arrays (or floats) and the sections refused."""
+    single = isinstance(section, Section)
+    held = section if single else tuple(section)
+    key = (id(section) if single else tuple(id(item) for item in held), _hashable(options))
+    kept = _PREPARED.get(key)
+    if kept is not None and _same_objects(kept[0], held):
+        return kept[1]
+    if single:
+        member = member_data(section, **options)
+        prepared = (member, si_inputs(member), np.zeros((), dtype=bool))
+    else:
+        prepared = _many(list(held), options)
+    if len(_PREPARED) >= 64:
+        _PREPARED.clear()
+    _PREPARED[key] = (held, prepared)
+    return prepared
+
+
+def _same_objects(kept: object, held: object) -> bool:
+    if isinstance(kept, tuple) and isinstance(held, tuple):
+        return len(kept) == len(held) and all(a is b for a, b in zip(kept, held, strict=True))
+    return kept is held
+
+
+def _hashable(value: Any) -> Any:
+    """A key for the options: quantities by magnitude and unit, mappings sorted."""
+    if isinstance(value, pint.Quantity):
+        return (float(value.m), str(value.units))
+    if isinstance(value, Mapping):
+        return tuple(sorted((str(k), _hashable(v)) for k, v in value.items()))
+    if dataclasses.is_dataclass(value) and not isinstance(value, type):
+        fields = dataclasses.fields(value)
+        return (type(value).__name__, *(_hashable(getattr(value, f.name)) for f in fields))
+    if isinstance(value, (list, tuple)):
+        return tuple(_hashable(item) for item in value)
+    return value
+
+
 def _many(
     sections: list[Section], options: dict[str, Any]
 ) -> tuple[MemberData, dict[str, np.ndarray], np.ndarray]:
@@ -148,12 +191,7 @@ def _many(
                 f"sections of one kind and fabrication ({first.kind}, {first.fabrication})",
             )
     filled = [m if m is not None else first for m in members]
-    given: dict[str, np.ndarray] = {}
-    for name in first.values:
-        given[name] = np.array(
-            [[float(m.values[name][0].to_base_units().m)] for m in filled], dtype=float
-        )
-    for axis in ("y", "z"):
-        given[f"alpha_{axis}"] = np.array([[m.curves[axis].alpha] for m in filled], dtype=float)
+    inputs = [si_inputs(m) for m in filled]
+    given = {name: np.array([[item[name]] for item in inputs]) for name in inputs[0]}
     refused = np.array([[m is None] for m in members], dtype=bool)
     return first, given, refused
