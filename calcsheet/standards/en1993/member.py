@@ -834,8 +834,9 @@ class _Procedure:
             shown = float(w.value_of(ratio).m)
             limit = float(w.value_of(w["hw_tw_max"]).m)
             w.text(
-                f"h_w/t_w = {shown:.3g} ≤ 72ε/η = {limit:.3g}: the {what} need no shear "
-                "buckling verification, V_pl,Rd applies (EN 1993-1-1 6.2.6(6))."
+                f"h_w/t_w = {shown:.3g} ≤ 72ε/η = {limit:.3g}: the {what} "
+                f"{'needs' if what == 'web' else 'need'} no shear buckling verification, "
+                "V_pl,Rd applies (EN 1993-1-1 6.2.6(6))."
             )
 
     def _bending(self) -> None:
@@ -875,7 +876,8 @@ class _Procedure:
         w.heading("Bending and axial force (EN 1993-1-1 6.2.9)", 2)
         N_Ed = self.demands["N_Ed"]
         axes = [axis for axis in ("y", "z") if self.has(f"M_{axis}_Ed")]
-        moments = {axis: w.absolute(self.demands[f"M_{axis}_Ed"]) for axis in axes}
+        # The clauses of 6.2.9 take magnitudes themselves; the sum of Eq. (6.2) here does not.
+        moments = {axis: self.demands[f"M_{axis}_Ed"] for axis in axes}
         if not self.has("V_z_Ed") and not self.has("V_y_Ed"):
             N_Rd = w["N_pl_Rd"]
         else:
@@ -886,7 +888,7 @@ class _Procedure:
         if member.kind == "CHS" or member.interaction == "linear":
             expr = w.absolute(N_Ed) / N_Rd
             for axis in axes:
-                expr = expr + moments[axis] / w[f"M_c_{axis}_Rd"]
+                expr = expr + w.absolute(moments[axis]) / w[f"M_c_{axis}_Rd"]
             u = w.step(
                 "u_NM", expr, "Linear interaction (valid for every class, conservative)",
                 reference="EN 1993-1-1 Eq. (6.2)",
@@ -946,7 +948,7 @@ class _Procedure:
             reference = res.biaxial_criterion.reference
         else:
             axis = axes[0]
-            criterion = moments[axis] / reduced[axis]
+            criterion = w.absolute(moments[axis]) / reduced[axis]
             reference = "EN 1993-1-1 Eq. (6.31)"
         # At n ≥ 1 the axial force alone exhausts the section and no plastic moment
         # resistance is left; the utilization shown is then n itself.
@@ -955,11 +957,11 @@ class _Procedure:
             [(stress_ratio, governing > 2), (criterion, n < 1), (n, True)],
             "Utilization under N and M: σx,Ed/(f_y/γM0) for class 3; the plastic criterion "
             "for class 1 and 2 (n itself when n ≥ 1)",
-            reference=f"{reference}; EN 1993-1-1 Eq. (6.42)",
+            reference=f"{reference}, (6.42)",
         )
         w.check(
             "combined", EN_CHECK_TITLES["combined"], u, sp.Integer(1),
-            reference=f"{reference}; EN 1993-1-1 Eq. (6.42)",
+            reference=f"{reference}, (6.42)",
         )  # fmt: skip
 
     def _buckling(self) -> None:
