@@ -89,11 +89,14 @@ def write_combinations(
         ),
     )
     if plan.per_check:
+        from calcsheet.standards.en1993 import EN_CHECK_TITLES
+
+        titles = EN_CHECK_TITLES if "EN 1993-1-1" in plan.measure else CHECK_TITLES
         rows = []
         for check, values in plan.per_check.items():
             worst = int(np.argmax(values))
             shown = f"{values[worst]:.3f}" if np.isfinite(values[worst]) else "∞"
-            rows.append([CHECK_TITLES.get(check, check), plan.combos[worst].name, shown])
+            rows.append([titles.get(check, check), plan.combos[worst].name, shown])
         sheet.table(
             ["Check", "Governing combination", "Utilization"],
             rows,

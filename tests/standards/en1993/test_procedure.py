@@ -192,6 +192,12 @@ def test_the_sheet_of_the_numeric_governing_en_1990_combination() -> None:
         if key is not None:
             expected = plan.per_check[key][plan.governing]
             assert check.utilization == pytest.approx(expected, rel=1e-9, abs=1e-12), key
+    tables = [
+        part
+        for part in sheet.parts
+        if getattr(part, "columns", ())[:2] == ("Check", "Governing combination")
+    ]
+    assert [row[0] for row in tables[0].rows] == [EN_CHECK_TITLES[key] for key in plan.per_check]
 
 
 def test_issue_12_failure_1_a_column_that_fails_under_its_own_combination() -> None:
