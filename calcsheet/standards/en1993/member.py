@@ -108,6 +108,10 @@ CURVE_FIXED = (
     "the buckling curve follows from the section, the steel grade and its forming; "
     "build the sheet again with them"
 )
+MATERIAL_FIXED = (
+    "decides through ε whether the section is within the checks (class 4 and the web limit "
+    "of EN 1993-1-1 6.2.6(6) were settled when the sheet was built); build the sheet again"
+)
 LIMIT_FIXED = (
     "decides whether the web needs a shear buckling verification (EN 1993-1-1 6.2.6(6)), "
     "stated when the sheet was built; build the sheet again"
@@ -538,7 +542,7 @@ class _Procedure:
         w.heading("Material, partial factors and section", 2)
         w.input(
             "f_y", steel.f_y, f"Yield strength, {steel.grade}", dimension="stress", unit="MPa",
-            reference=steel.source,
+            reference=steel.source, fixed=MATERIAL_FIXED,
         )  # fmt: skip
         w.input(
             "E", steel.E, "Modulus of elasticity", dimension="stress", unit="MPa",

@@ -89,6 +89,9 @@ def test_inputs_change_and_the_sheet_follows() -> None:
     sheet.set_input("gamma_M0", 1.1)  # a National Annex value
     A = section.properties["A"].to("m**2").m
     assert by_description(checks, "Axial").utilization == pytest.approx(40e3 * 1.1 / (A * 235e6))
+    # f_y settled the scope (class 4, the web limit of 6.2.6(6)) when the sheet was built.
+    with pytest.raises(InputError, match="build the sheet again"):
+        sheet.set_input("f_y", "355 MPa")
 
 
 def test_welded_default_for_user_i_shapes_and_shear_area() -> None:
