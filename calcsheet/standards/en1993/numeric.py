@@ -58,9 +58,11 @@ def en1993_checks_numeric(
     N and N·m (or pint quantities); a name left out is not checked, as on the
     sheet. Keys of the result are those of
     :data:`~calcsheet.standards.en1993.member.EN_CHECK_TITLES`. For one section
-    each array has shape ``(m,)`` and a section outside the checks is refused as
-    on the sheet; for a sequence of sections of one kind and fabrication, ``(n, m)``,
-    with ``inf`` for a section Table 3.1 or 6.2 does not cover.
+    each array has shape ``(m,)``; for a sequence of ``n`` sections of one kind and
+    fabrication, ``(n, m)``. A combination that takes the section outside the checks
+    (class 4, a web beyond 6.2.6(6): the sheet refuses these) gives ``inf`` in every
+    check. A section the checks do not cover at all (its family, Table 3.1 or 6.2)
+    raises :class:`InputError` as on the sheet, or gives ``inf`` within a sequence.
     """
     arrays = _demand_arrays(demands)
     options = {
