@@ -6,6 +6,7 @@ Targets (from the issues):
 - stresses at all points of a section for 1,000 load cases: under 50 ms.
 - the demo sheet's PDF, warm: under 150 ms; the cold command: under 2.5 s.
 - the lightest W shape under 8 combinations (numeric path): under 0.5 s.
+- EN 1993-1-1: all checks x all EN 1990 combinations of one member (numeric path): 5 ms.
 - a batch of 200 members to PDF: under 30 s.
 """
 
@@ -78,6 +79,7 @@ def report(name: str, measured_ms: float, target_ms: float | None = None) -> Non
 def main() -> None:
     print("calcsheet benchmark (median wall time)")
     bench_lightest_section()  # first: its first call includes compiling the clauses
+    bench_en1993_member()
     report("engine: build a 40-step sheet", timed(forty_step_sheet, 5))
     sheet = forty_step_sheet()
     first_print = timed(lambda: print_all(forty_step_sheet()), 3)
@@ -252,6 +254,49 @@ def bench_lightest_section() -> None:
     )
     report("design: the same search, warm", timed(search, 5), 300)
     bench_one_member_all_combinations()
+
+
+def bench_en1993_member() -> None:
+    """A W10X33 post under G, Q and W: every EN 1990 combination, every EN 1993-1-1 check.
+
+    The numeric path of the member sheet (the forces of each load type at the station
+    are known): factor them into the combinations, run the checks on the arrays.
+    Target: 5 ms.
+    """
+    import numpy as np
+
+    from calcsheet.sections import catalog_section
+    from calcsheet.standards.combinations import combinations, combine_numeric
+    from calcsheet.standards.en1993 import en1993_checks_numeric, steel
+
+    section = catalog_section("W10X33")
+    types = ["G", "Q", "W"]
+    # Internal forces (N, Vx, Vy, T, Mx, My) of each load type at the base, N and N·m.
+    by_type = np.array(
+        [
+            [-40e3, 0.0, 2e3, 0.0, 8e3, 0.0],
+            [-120e3, 0.0, 5e3, 0.0, 20e3, 1e3],
+            [0.0, 6e3, 0.0, 0.0, 0.0, 18e3],
+        ]
+    )
+    combos = combinations("EN 1990", types)
+    material = steel("S355", f_y="345 MPa")
+
+    def all_checks() -> dict:
+        forces = combine_numeric(by_type, combos, types)
+        demands = {
+            "N_Ed": forces[:, 0], "M_y_Ed": forces[:, 4], "M_z_Ed": forces[:, 5],
+            "V_z_Ed": forces[:, 2], "V_y_Ed": forces[:, 1],
+        }  # fmt: skip
+        return en1993_checks_numeric(section, demands, material=material, length="3 m")
+
+    all_checks()  # compiles the clauses and reads the section once
+    checks = all_checks()
+    report(
+        f"EN 1993-1-1: {len(checks)} checks x {len(combos)} combinations of one member, numeric",
+        timed(all_checks, 50),
+        5,
+    )
 
 
 def bench_batch() -> None:

@@ -23,7 +23,6 @@ from calcsheet.calcs.design_standards import (
     DesignStandard,
     design_standard,
     registered,
-    von_mises_ratio,
 )
 from calcsheet.errors import InputError
 from calcsheet.mechanics import internal_forces
@@ -165,15 +164,7 @@ def utilizations(
     if per_check:
         worst = np.max(np.stack(list(per_check.values())), axis=0)
         return worst, per_check, measure
-    return _proxy_utilization(section, forces, basis, Fy), per_check, measure
-
-
-def _proxy_utilization(
-    section: Section, forces: np.ndarray, basis: DesignBasis, Fy: pint.Quantity
-) -> np.ndarray:
-    # A standard without a numeric path: the largest von Mises stress over f_y/γM0
-    # (EN 1993-1-1 6.2.1(5)), stated on the sheet as the measure.
-    return von_mises_ratio(section, forces, Fy / basis.gamma_M0)
+    raise InputError("check kind", basis.kind, "a standard whose checks can be evaluated")
 
 
 def check_titles(basis: DesignBasis) -> dict[str, str]:

@@ -259,14 +259,35 @@ def _aisc_write(context: CheckContext) -> list[Check]:
 # --- EN 1993-1-1 ------------------------------------------------------------------------------
 
 
+def _en_grade(basis: DesignBasis) -> str:
+    """The EN 10025 grade that chooses the buckling curves (S355 when none is given)."""
+    return basis.grade if basis.grade.upper().startswith("S") else "S355"
+
+
+def _en_gamma(basis: DesignBasis) -> dict[str, float]:
+    return {"gamma_M0": basis.gamma_M0, "gamma_M1": basis.gamma_M1}
+
+
 def _en_evaluate(section, forces, basis, Fy, length) -> Evaluation:
-    # No numeric path yet: no per-check utilizations; the combination search falls back
-    # on the largest von Mises stress over f_y/γM0 (EN 1993-1-1 6.2.1(5)).
-    return {}, "largest von Mises stress / (f_y/γM0), EN 1993-1-1 6.2.1(5)"
+    from calcsheet.standards.en1993 import en1993_checks_numeric, steel
+
+    per_check = en1993_checks_numeric(
+        section,
+        # EN y-y is our x-x: N, M_y,Ed = M_x, M_z,Ed = M_y, V_z,Ed = V_y, V_y,Ed = V_x.
+        {"N_Ed": forces[:, 0], "M_y_Ed": forces[:, 4], "M_z_Ed": forces[:, 5],
+         "V_z_Ed": forces[:, 2], "V_y_Ed": forces[:, 1]},
+        material=steel(_en_grade(basis), f_y=Fy),
+        length=length,
+        k_eff=basis.effective_length_factor,
+        gamma=_en_gamma(basis),
+    )  # fmt: skip
+    return per_check, "governing EN 1993-1-1 check"
 
 
 def _en_titles() -> Mapping[str, str]:
-    return {}
+    from calcsheet.standards.en1993 import EN_CHECK_TITLES
+
+    return EN_CHECK_TITLES
 
 
 def _en_write(context: CheckContext) -> list[Check]:
@@ -274,7 +295,7 @@ def _en_write(context: CheckContext) -> list[Check]:
 
     sheet, basis, forces = context.sheet, context.basis, context.forces
     Fy, length = context.material
-    grade = basis.grade if basis.grade.upper().startswith("S") else "S355"
+    grade = _en_grade(basis)
     if grade != basis.grade:
         sheet.text(
             f"No EN 10025 grade given: buckling curves are chosen as for {grade} "
@@ -294,7 +315,7 @@ def _en_write(context: CheckContext) -> list[Check]:
         material=steel(grade, f_y=Fy),
         length=length,
         k_eff=basis.effective_length_factor,
-        gamma={"gamma_M0": basis.gamma_M0, "gamma_M1": basis.gamma_M1},
+        gamma=_en_gamma(basis),
     )
 
 

@@ -92,9 +92,12 @@ class Clause:
 
     def numeric(self, *args: Any) -> np.ndarray:
         """Evaluate on floats or numpy arrays given in coherent SI base units."""
+        # As numpy values, so a division by zero in a branch that does not apply gives
+        # inf or nan (then not selected) rather than Python's ZeroDivisionError.
+        values = [np.asarray(arg, dtype=float) for arg in args]
         with np.errstate(divide="ignore", invalid="ignore"):
-            result = self._numeric_function(*args)
-        return np.broadcast_to(result, np.broadcast_shapes(*(np.shape(a) for a in args)))
+            result = self._numeric_function(*values)
+        return np.broadcast_to(result, np.broadcast_shapes(*(np.shape(a) for a in values)))
 
 
 def clause(reference: str, description: str) -> Callable[[Callable[..., sp.Expr]], Clause]:

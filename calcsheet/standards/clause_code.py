@@ -11,6 +11,9 @@ import functools
 
 import numpy
 
+# The printer writes Abs as a bare abs(), which lambdify's NumPy namespace makes numpy's.
+abs = numpy.absolute
+
 def _00c8dea2b6d2c695a39b(E, f_y):
     # EN 1993-1-1 6.3.1.3(1): Slenderness at which the Euler stress equals f_y
     return numpy.pi*numpy.sqrt(E/f_y)
@@ -109,11 +112,6 @@ def _2591b6c97a2e54900118(eps):
 def _27522fc680246d1a9232(b, t):
     # AISC 360-22 Section B4.1: Width-to-thickness ratio
     return b/t
-
-
-def _276b9afd8f3925b70c5d(M_el_Rd, n):
-    # EN 1993-1-1 6.2.9.2, Eq. (6.42): Elastic moment resistance reduced for N
-    return M_el_Rd*(1 - n)
 
 
 def _2b82d3179344a75017b7(A_g, h, h_e, b, b_e, t):
@@ -321,6 +319,11 @@ def _709b39a9e897d31a3654(r_y, E, F_y):
     return 1.76*r_y*numpy.sqrt(E/F_y)
 
 
+def _7444a196e0c28f2aab0e(N_Ed, A, M_y_Ed, W_el_y, M_z_Ed, W_el_z):
+    # EN 1993-1-1 6.2.9.2(1), Eq. (6.42): Largest longitudinal stress, elastic
+    return abs(M_z_Ed)/W_el_z + abs(M_y_Ed)/W_el_y + abs(N_Ed)/A
+
+
 def _74ecd0f3e35b26b8f66a(outside, t):
     # AISC 360-22 Section B4.1b: Flat width of an HSS wall, outside dimension less 3t
     return outside - 3*t
@@ -376,6 +379,11 @@ def _92199254275541027b3b(K, L):
     return K*L
 
 
+def _987ae3cf58517372f266(N_Ed, A, M_Ed, W_el):
+    # EN 1993-1-1 6.2.9.2(1), Eq. (6.42): Largest longitudinal stress, elastic
+    return abs(M_Ed)/W_el + abs(N_Ed)/A
+
+
 def _997ab3fe735748908034(h, t):
     # AISC 360-22 Section G4: Shear area of a rectangular HSS, Aw = 2·h·t
     return 2*h*t
@@ -389,11 +397,6 @@ def _9b9bd93673a09d933586(eps, alpha):
 def _a1d811c244c23a656593(M_p, F_y, S, lam, lam_rf, E, S_e):
     # AISC 360-22 Eq. F7-2, F7-3: Nominal flexural strength, flange local buckling
     return numpy.select([numpy.less_equal(lam, lam_rf),True], [functools.reduce(numpy.minimum, [M_p, M_p - (-F_y*S + M_p)*(3.57*lam*numpy.sqrt(F_y/E) - 4.0)]),F_y*S_e], default=numpy.nan)
-
-
-def _a225cbbe6ed6362b6110(V_Ed, V_pl_Rd):
-    # EN 1993-1-1 6.2.8(3): Reduction factor for shear, ρ
-    return numpy.select([numpy.less_equal(abs(V_Ed), (1/2)*V_pl_Rd),True], [0,(-1 + 2*abs(V_Ed)/V_pl_Rd)**2], default=numpy.nan)
 
 
 def _a23b40a872992b706624(E, F_y):
@@ -541,6 +544,11 @@ def _d0f17538c605a55fa899(E, F_y):
     return 1.49*numpy.sqrt(E/F_y)
 
 
+def _d58cd29c07ed204bea32(V_Ed, V_pl_Rd):
+    # EN 1993-1-1 6.2.8(3): Reduction factor for shear, ρ
+    return numpy.select([numpy.less_equal(abs(V_Ed), (1/2)*V_pl_Rd),numpy.greater(V_pl_Rd, abs(V_Ed)),True], [0,(-1 + 2*abs(V_Ed)/V_pl_Rd)**2,0], default=numpy.nan)
+
+
 def _d5fc9885df801ff972ed(E, I, L_cr):
     # EN 1993-1-1 6.3.1.2(1): Elastic critical force for flexural buckling
     return numpy.pi**2*E*I/L_cr**2
@@ -677,7 +685,6 @@ FUNCTIONS = {
     "23b3e31a231be6b34c0c": _23b3e31a231be6b34c0c,
     "2591b6c97a2e54900118": _2591b6c97a2e54900118,
     "27522fc680246d1a9232": _27522fc680246d1a9232,
-    "276b9afd8f3925b70c5d": _276b9afd8f3925b70c5d,
     "2b82d3179344a75017b7": _2b82d3179344a75017b7,
     "2d02a653481b5f241f7d": _2d02a653481b5f241f7d,
     "31cdcda6dcc19c4a3227": _31cdcda6dcc19c4a3227,
@@ -719,6 +726,7 @@ FUNCTIONS = {
     "6b6def47ce058e80922e": _6b6def47ce058e80922e,
     "6f4216d75cf039ef8c09": _6f4216d75cf039ef8c09,
     "709b39a9e897d31a3654": _709b39a9e897d31a3654,
+    "7444a196e0c28f2aab0e": _7444a196e0c28f2aab0e,
     "74ecd0f3e35b26b8f66a": _74ecd0f3e35b26b8f66a,
     "7673888dbae4f34b7089": _7673888dbae4f34b7089,
     "770850eca8da6495e97c": _770850eca8da6495e97c,
@@ -730,10 +738,10 @@ FUNCTIONS = {
     "8ff5794b5c1fb26fd139": _8ff5794b5c1fb26fd139,
     "906cc9b7326bd407e2a2": _906cc9b7326bd407e2a2,
     "92199254275541027b3b": _92199254275541027b3b,
+    "987ae3cf58517372f266": _987ae3cf58517372f266,
     "997ab3fe735748908034": _997ab3fe735748908034,
     "9b9bd93673a09d933586": _9b9bd93673a09d933586,
     "a1d811c244c23a656593": _a1d811c244c23a656593,
-    "a225cbbe6ed6362b6110": _a225cbbe6ed6362b6110,
     "a23b40a872992b706624": _a23b40a872992b706624,
     "a46a8809267c7f4b3a3b": _a46a8809267c7f4b3a3b,
     "a4dd29e038d0bb5848b9": _a4dd29e038d0bb5848b9,
@@ -763,6 +771,7 @@ FUNCTIONS = {
     "d0583cdfdac436eea4ce": _d0583cdfdac436eea4ce,
     "d063fe98f6a4773bcaea": _d063fe98f6a4773bcaea,
     "d0f17538c605a55fa899": _d0f17538c605a55fa899,
+    "d58cd29c07ed204bea32": _d58cd29c07ed204bea32,
     "d5fc9885df801ff972ed": _d5fc9885df801ff972ed,
     "d72bab8662fac64cd090": _d72bab8662fac64cd090,
     "db064a284159df3d50f8": _db064a284159df3d50f8,

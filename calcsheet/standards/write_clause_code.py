@@ -35,6 +35,9 @@ import functools
 
 import numpy
 
+# The printer writes Abs as a bare abs(), which lambdify's NumPy namespace makes numpy's.
+abs = numpy.absolute
+
 '''
 
 

@@ -4,7 +4,8 @@ Modules: :mod:`~calcsheet.standards.en1993.factors` (partial factors, grades,
 imperfection factors), :mod:`~calcsheet.standards.en1993.classification`
 (Table 5.2), :mod:`~calcsheet.standards.en1993.resistance` (6.2),
 :mod:`~calcsheet.standards.en1993.buckling` (6.3.1, Tables 6.1 and 6.2) and
-:mod:`~calcsheet.standards.en1993.member` (:func:`write_en1993_checks`).
+:mod:`~calcsheet.standards.en1993.member` (the procedure, :func:`write_en1993_checks`)
+and :mod:`~calcsheet.standards.en1993.numeric` (:func:`en1993_checks_numeric`).
 
 The standard's axes: y-y major, z-z minor (calcsheet's x-x and y-y).
 """
@@ -16,14 +17,22 @@ from calcsheet.standards.en1993.factors import (
     Steel,
     steel,
 )
-from calcsheet.standards.en1993.member import write_en1993_checks
+from calcsheet.standards.en1993.member import (
+    EN_CHECK_TITLES,
+    en1993_member_procedure,
+    write_en1993_checks,
+)
+from calcsheet.standards.en1993.numeric import en1993_checks_numeric
 
 __all__ = [
+    "EN_CHECK_TITLES",
     "IMPERFECTION_FACTORS",
     "CurveChoice",
     "PartialFactors",
     "Steel",
     "buckling_curve",
+    "en1993_checks_numeric",
+    "en1993_member_procedure",
     "steel",
     "write_en1993_checks",
 ]

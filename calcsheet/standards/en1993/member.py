@@ -1,10 +1,21 @@
-"""EN 1993-1-1 checks of a member, written on a sheet from the sheet's design forces.
+"""EN 1993-1-1 checks of a member, written once for a sheet and for arrays.
 
-:func:`write_en1993_checks` classifies the cross-section (Table 5.2), writes the
-cross-section resistances of 6.2 and the flexural buckling resistances of 6.3.1,
-and adds one check per verification. It covers doubly symmetric rolled or
-welded I-sections, rectangular/square hollow sections and circular hollow
-sections; any other family is refused with a message saying what is covered.
+:func:`en1993_member_procedure` classifies the cross-section (Table 5.2), writes
+the cross-section resistances of 6.2 and the flexural buckling resistances of
+6.3.1, and adds one check per verification under the keys of
+:data:`EN_CHECK_TITLES`. It is written against a writer
+(:mod:`calcsheet.standards.procedure`): :func:`write_en1993_checks` prints it on
+a sheet, :func:`~calcsheet.standards.en1993.numeric.en1993_checks_numeric`
+evaluates it on arrays of load combinations (and sections). Every decision that
+depends on the demands (the class of a web under N and M, the interaction of
+6.2.9 that applies, the shear reduction of 6.2.8, whether the member is
+compressed) is a branch of the expressions, so it is taken per combination.
+
+It covers doubly symmetric rolled or welded I-sections, rectangular/square
+hollow sections and circular hollow sections; any other family is refused with
+a message saying what is covered. Class 4 cross-sections and webs that need a
+shear buckling verification (6.2.6(6)) are outside the scope: the sheet refuses
+them before writing anything, the numeric path gives an infinite utilization.
 
 Axes: the standard's y-y is the major axis and z-z the minor axis. In calcsheet's
 section coordinates (x right, y up, x-x the strong axis of a W shape) that is
@@ -18,20 +29,24 @@ checks by magnitude, so their signs do not matter here.
 
 from __future__ import annotations
 
+import functools
 import math
 from collections.abc import Mapping, Sequence
 from dataclasses import dataclass
+from typing import Any
 
+import numpy as np
 import pint
 import sympy as sp
 
-from calcsheet.engine import Check, Input, Sheet, as_written
-from calcsheet.engine.functions import Abs, Piecewise
-from calcsheet.errors import DefinitionError, InputError
+from calcsheet.engine import Check, Sheet, as_written
+from calcsheet.errors import InputError
 from calcsheet.sections import Section
+from calcsheet.standards.clause import Clause
 from calcsheet.standards.en1993 import buckling as buck
 from calcsheet.standards.en1993 import classification as cls
 from calcsheet.standards.en1993 import resistance as res
+from calcsheet.standards.en1993.buckling import CurveChoice
 from calcsheet.standards.en1993.factors import (
     NOMINAL_THICKNESS_LIMIT_MM,
     PartialFactors,
@@ -39,6 +54,7 @@ from calcsheet.standards.en1993.factors import (
     as_partial_factors,
     as_steel,
 )
+from calcsheet.standards.procedure import ArrayWriter, SheetWriter, Value, Writer
 from calcsheet.units import Quantity, parse_quantity, ureg
 
 I_FAMILIES = frozenset({"W", "M", "S", "HP", "I-shape"})
@@ -49,6 +65,10 @@ SUPPORTED_TEXT = (
     "rectangular or square hollow section (HSS_RECT, rectangular HSS) or a circular "
     "hollow section (HSS_ROUND, PIPE, round HSS)"
 )
+SCOPE_TEXT = (
+    "a class 1, 2 or 3 cross-section whose webs need no shear buckling verification "
+    "(EN 1993-1-1 5.5, 6.2.6(6))"
+)
 
 DEMAND_DIMENSIONS: dict[str, str] = {
     "N_Ed": "force",
@@ -58,6 +78,20 @@ DEMAND_DIMENSIONS: dict[str, str] = {
     "V_y_Ed": "force",
 }
 DEMAND_ALIASES = {"V_Ed": "V_z_Ed"}
+F_235 = Quantity(235.0, "MPa")  # the reference strength of ε (Table 5.2)
+
+# The checks of the procedure by key, as titled on the sheet (in sheet order).
+EN_CHECK_TITLES: dict[str, str] = {
+    "axial": "Axial force on the gross section",
+    "net_section": "Tension, net section",
+    "shear_z": "Shear along z",
+    "shear_y": "Shear along y",
+    "bending_y": "Bending about y-y",
+    "bending_z": "Bending about z-z",
+    "combined": "Bending and axial force",
+    "buckling_y": "Flexural buckling about y-y",
+    "buckling_z": "Flexural buckling about z-z",
+}
 
 AXES_TEXT = (
     "EN 1993-1-1 axes: y-y is the major axis and z-z the minor axis, i.e. calcsheet's "
@@ -74,6 +108,14 @@ CURVE_FIXED = (
     "the buckling curve follows from the section, the steel grade and its forming; "
     "build the sheet again with them"
 )
+MATERIAL_FIXED = (
+    "decides through ε whether the section is within the checks (class 4 and the web limit "
+    "of EN 1993-1-1 6.2.6(6) were settled when the sheet was built); build the sheet again"
+)
+LIMIT_FIXED = (
+    "decides whether the web needs a shear buckling verification (EN 1993-1-1 6.2.6(6)), "
+    "stated when the sheet was built; build the sheet again"
+)
 
 
 @dataclass(frozen=True)
@@ -82,6 +124,29 @@ class _Geometry:
     fabrication: str  # rolled / welded (I), hot-finished / cold-formed (hollow)
     dims: dict[str, pint.Quantity]
     reference: str
+
+
+@dataclass(frozen=True)
+class MemberData:
+    """What the procedure needs besides the demands: the section, material and member.
+
+    ``values`` maps an input name to (value, description, reference); ``curves``
+    gives the buckling curve of Table 6.2 about "y" and "z". The kind of section,
+    its fabrication, the options and which demands are given shape the sheet;
+    everything else is a value, so an array writer may be given arrays for it.
+    """
+
+    name: str
+    kind: str
+    fabrication: str
+    values: dict[str, tuple[pint.Quantity, str, str]]
+    curves: dict[str, CurveChoice]
+    steel: Steel
+    factors: PartialFactors
+    length: pint.Quantity
+    k: tuple[float, float]
+    net_area: pint.Quantity | None
+    interaction: str
 
 
 def write_en1993_checks(
@@ -111,34 +176,199 @@ def write_en1993_checks(
     I-shapes to welded), "hot-finished" or "cold-formed" for hollow sections
     (default cold-formed, as ASTM A500 tubes are: curve c, the safe choice).
     ``net_area`` adds the net-section check (6.7) in tension. ``interaction`` is
-    "plastic" (6.2.9.1 for class 1 and 2, elastic for class 3) or "linear"
-    (Eq. 6.2 throughout; always used for CHS).
+    "plastic" (6.2.9.1 for class 1 and 2, the stress criterion of 6.2.9.2 for
+    class 3) or "linear" (Eq. 6.2 throughout; always used for CHS).
 
-    Returns the checks written, in sheet order.
+    A class 4 section, or a web that needs a shear buckling verification, is
+    refused before anything is written. Returns the checks written, in sheet order.
     """
-    writer = _Writer(sheet, section, _demands(sheet, demands))
-    writer.geometry = _geometry(section, fabrication)
-    writer.steel = as_steel(material)
-    writer.factors = as_partial_factors(gamma)
-    if interaction not in ("plastic", "linear"):
-        raise InputError("interaction", interaction, "'plastic' or 'linear'")
-    writer.interaction = interaction
-    _check_thickness(writer.steel, writer.geometry)
-    return writer.write(length, _k_factors(k_eff), net_area)
+    symbols = _demands(sheet, demands)
+    member = member_data(
+        section,
+        material=material,
+        length=length,
+        k_eff=k_eff,
+        gamma=gamma,
+        fabrication=fabrication,
+        net_area=net_area,
+        interaction=interaction,
+    )
+    # The scope depends on the demands (the class of a web under N and M): settle it
+    # with the same procedure on the current values, before anything is written.
+    current = {key: float(sheet.value(symbol).to_base_units().m) for key, symbol in symbols.items()}
+    problems = scope_problems(run_on_arrays(member, current))
+    for outside, reason in problems:
+        if bool(np.any(outside)):
+            raise InputError("section", section.name, SCOPE_TEXT, reason)
+    w = SheetWriter(sheet)
+    sheet.heading("Member checks to EN 1993-1-1")
+    sheet.add_reference("EN 1993-1-1:2005 Eurocode 3: Design of steel structures, Part 1-1")
+    sheet.text(AXES_TEXT)
+    # as_written rather than ``with sheet``: the caller may already be inside its own
+    # ``with sheet`` block, whose exit would otherwise be cut short by ours.
+    with as_written():
+        en1993_member_procedure(w, member, symbols)
+    sheet.text(NOT_COVERED_TEXT)
+    return list(w.checks.values())
+
+
+def run_on_arrays(member: MemberData, demands: Mapping[str, Any], **given: Any) -> ArrayWriter:
+    """The procedure on arrays (demands in N, N·m); ``given`` replaces inputs by name."""
+    w = ArrayWriter(given_values=given)
+    with np.errstate(divide="ignore", invalid="ignore", over="ignore"):
+        en1993_member_procedure(w, member, demands)
+    return w
+
+
+def scope_problems(w: ArrayWriter) -> list[tuple[np.ndarray, str]]:
+    """Where the procedure run on arrays left its scope: (mask, reason in words) pairs."""
+    s = w.symbols
+    problems = []
+    for key, what in (("y", "bending about y-y with N"), ("z", "bending about z-z with N")):
+        if f"class_{key}" in s:
+            problems.append(
+                (
+                    np.asarray(s[f"class_{key}"]) > 3,
+                    f"class 4 in {what}: effective properties (EN 1993-1-5) are not covered",
+                )
+            )
+    if "class_N" in s:
+        compressed = np.asarray(s["N_Ed"]) < 0
+        problems.append(
+            (
+                (np.asarray(s["class_N"]) > 3) & compressed,
+                "class 4 in compression: effective properties (EN 1993-1-5) are not covered",
+            )
+        )
+    for axis in ("z", "y"):
+        if f"hw_tw_{axis}" in s:
+            ratio, limit = np.asarray(s[f"hw_tw_{axis}"]), np.asarray(s["hw_tw_max"])
+            problems.append(
+                (
+                    ratio > limit,
+                    f"web slenderness h_w/t_w = {np.max(ratio):.4g} > 72ε/η = "
+                    f"{np.min(limit):.4g} (shear along {axis}): shear buckling to EN 1993-1-5 "
+                    "Section 5 is not covered (EN 1993-1-1 6.2.6(6))",
+                )
+            )
+    return problems
+
+
+def si_inputs(member: MemberData) -> dict[str, float]:
+    """The procedure's inputs from ``member`` in SI base units, converted once.
+
+    Given to an :class:`ArrayWriter`, they spare the unit conversions of each run
+    (the values are the ones the procedure's inputs would convert, by name).
+    """
+    steel, factors = member.steel, member.factors
+    quantities: dict[str, Any] = {
+        "f_y": steel.f_y,
+        "E": steel.E,
+        "f_235": F_235,
+        "f_u": steel.f_u,
+        "L": member.length,
+        **{name: value for name, (value, _, _) in member.values.items()},
+    }
+    if member.net_area is not None:
+        quantities["A_net"] = member.net_area
+    result = {name: float(value.to_base_units().m) for name, value in quantities.items()}
+    result.update(
+        gamma_M0=factors.gamma_M0,
+        gamma_M1=factors.gamma_M1,
+        gamma_M2=factors.gamma_M2,
+        k_cr_y=member.k[0],
+        k_cr_z=member.k[1],
+        alpha_y=member.curves["y"].alpha,
+        alpha_z=member.curves["z"].alpha,
+    )
+    return result
 
 
 # --- validation ------------------------------------------------------------------------------
+
+
+def member_data(
+    section: Section,
+    *,
+    material: Steel | str | Mapping[str, object] = "S355",
+    length: pint.Quantity | str,
+    k_eff: float | tuple[float, float] = 2.0,
+    gamma: PartialFactors | Mapping[str, float] | None = None,
+    fabrication: str | None = None,
+    net_area: pint.Quantity | str | None = None,
+    interaction: str = "plastic",
+) -> MemberData:
+    """Read and check everything but the demands (arguments as :func:`write_en1993_checks`)."""
+    geometry = _geometry(section, fabrication)
+    chosen_steel = as_steel(material)
+    factors = as_partial_factors(gamma)
+    if interaction not in ("plastic", "linear"):
+        raise InputError("interaction", interaction, "'plastic' or 'linear'")
+    _check_thickness(chosen_steel, geometry)
+    k = _k_factors(k_eff)
+    member_length = parse_quantity(length, field="length", dimension="length")
+    if not member_length.m > 0:
+        raise InputError("length", f"{member_length:~P}", "a positive member length")
+    area = None
+    if net_area is not None:
+        area = parse_quantity(net_area, field="net_area", dimension="area")
+        if not area.m > 0:
+            raise InputError("net_area", f"{area:~P}", "a positive net area")
+    props, sources = section.properties, section.sources
+    values: dict[str, tuple[pint.Quantity, str, str]] = {}
+    for name, key, description in (
+        ("A", "A", "Area"),
+        ("W_pl_y", "Zx", "Plastic modulus about y-y (calcsheet Z_x)"),
+        ("W_el_y", "Sx", "Elastic modulus about y-y, smaller fibre (calcsheet S_x)"),
+        ("W_pl_z", "Zy", "Plastic modulus about z-z (calcsheet Z_y)"),
+        ("W_el_z", "Sy", "Elastic modulus about z-z, smaller fibre (calcsheet S_y)"),
+        ("i_y", "rx", "Radius of gyration about y-y (calcsheet r_x)"),
+        ("i_z", "ry", "Radius of gyration about z-z (calcsheet r_y)"),
+    ):
+        values[name] = (props[key], description, sources.get(key, ""))
+    labels = {
+        "h": "Depth",
+        "b": "Width",
+        "t_w": "Web thickness",
+        "t_f": "Flange thickness",
+        "r": "Root radius",
+        "t": "Wall thickness (design)",
+        "d": "Outside diameter",
+    }
+    for name, value in geometry.dims.items():
+        reference = geometry.reference if name == "r" else "section dimensions"
+        values[name] = (value, labels[name], reference)
+    curves = {axis: _curve(geometry, chosen_steel, axis) for axis in ("y", "z")}
+    return MemberData(
+        section.name,
+        geometry.kind,
+        geometry.fabrication,
+        values,
+        curves,
+        chosen_steel,
+        factors,
+        member_length,
+        k,
+        area,
+        interaction,
+    )
+
+
+def _curve(geometry: _Geometry, steel: Steel, axis: str) -> CurveChoice:
+    if geometry.kind == "I":
+        dims = geometry.dims
+        return buck.buckling_curve(
+            f"{geometry.fabrication} I", axis, grade=steel.grade, h=dims["h"], b=dims["b"],
+            t_f=dims["t_f"],
+        )  # fmt: skip
+    return buck.buckling_curve("hollow", axis, grade=steel.grade, forming=geometry.fabrication)
 
 
 def _demands(sheet: Sheet, demands: Mapping[str, sp.Symbol]) -> dict[str, sp.Symbol]:
     known = ", ".join([*DEMAND_DIMENSIONS, *DEMAND_ALIASES])
     result: dict[str, sp.Symbol] = {}
     for key, symbol in demands.items():
-        name = DEMAND_ALIASES.get(key, key)
-        if name not in DEMAND_DIMENSIONS:
-            raise InputError("demands", key, f"keys among {known}")
-        if name in result:
-            raise InputError("demands", key, f"{name} once (V_Ed is taken as V_z_Ed)")
+        name = demand_name(key)
         if not isinstance(symbol, sp.Symbol):
             raise InputError(f"demands {key}", symbol, "a symbol defined on the sheet")
         try:
@@ -151,10 +381,21 @@ def _demands(sheet: Sheet, demands: Mapping[str, sp.Symbol]) -> dict[str, sp.Sym
         reference = {"force": ureg.newton, "moment": ureg.newton * ureg.meter}[dimension]
         if value.dimensionality != (1 * reference).dimensionality:
             raise InputError(f"demands {key}", f"{value:~P}", f"a {dimension}")
+        if name in result:
+            raise InputError("demands", key, f"{name} once (V_Ed is taken as V_z_Ed)")
         result[name] = symbol
     if not result:
         raise InputError("demands", {}, f"at least one design force among {known}")
     return result
+
+
+def demand_name(key: str) -> str:
+    """The demand's name in the procedure (``V_Ed`` is ``V_z_Ed``); unknown keys refused."""
+    name = DEMAND_ALIASES.get(key, key)
+    if name not in DEMAND_DIMENSIONS:
+        known = ", ".join([*DEMAND_DIMENSIONS, *DEMAND_ALIASES])
+        raise InputError("demands", key, f"keys among {known}")
+    return name
 
 
 def _k_factors(k_eff: float | tuple[float, float]) -> tuple[float, float]:
@@ -228,176 +469,152 @@ def _check_thickness(steel: Steel, geometry: _Geometry) -> None:
         )
 
 
-# --- writing ---------------------------------------------------------------------------------
+# --- the procedure ---------------------------------------------------------------------------
 
 
-class _Writer:
-    """Writes the checks; holds the symbols written so far."""
+def en1993_member_procedure(w: Writer, member: MemberData, demands: Mapping[str, Value]) -> None:
+    """The EN 1993-1-1 member checks, written once for both writers.
 
-    geometry: _Geometry
-    steel: Steel
-    factors: PartialFactors
-    interaction: str
+    ``demands`` maps the names of :data:`DEMAND_DIMENSIONS` to symbols of the sheet
+    (sheet writer) or arrays in N and N·m (array writer); a name left out is not
+    checked. The checks end up in ``w.checks`` under the keys of
+    :data:`EN_CHECK_TITLES`.
+    """
+    _Procedure(w, member, {name: w.given(name, value) for name, value in demands.items()}).run()
 
-    def __init__(self, sheet: Sheet, section: Section, demands: dict[str, sp.Symbol]) -> None:
-        self.sheet = sheet
-        self.section = section
+
+def _formula(w: Writer, clause: Clause, *args: Value) -> Value:
+    """A clause's right-hand side inside a larger expression (no step of its own)."""
+    return clause(*args) if w.prints else clause.numeric(*args)
+
+
+def _any(w: Writer, *conditions: Any) -> Any:
+    """Conditions of a branch joined by "or", kept live on a sheet (not settled now)."""
+    if w.prints:
+        return sp.Or(*conditions)
+    return functools.reduce(np.logical_or, (np.asarray(c, dtype=bool) for c in conditions))
+
+
+def _largest(
+    w: Writer,
+    name: str,
+    candidates: Sequence[tuple[str, Value]],
+    description: str,
+    *,
+    reference: str = "",
+) -> Value:
+    """The largest of labelled candidates (a governing step on a sheet)."""
+    if len(candidates) == 1:
+        return w.step(name, candidates[0][1], description, reference=reference)
+    if isinstance(w, SheetWriter):
+        symbol = w.sheet.governing(name, list(candidates), description, reference=reference)
+        return w.given(name, symbol)
+    arrays = np.broadcast_arrays(*(np.asarray(value, dtype=float) for _, value in candidates))
+    return w.step(name, np.maximum.reduce(arrays))
+
+
+class _Procedure:
+    """The procedure's state while it is written: the writer, the member, the demands."""
+
+    def __init__(self, w: Writer, member: MemberData, demands: dict[str, Value]) -> None:
+        self.w = w
+        self.member = member
         self.demands = demands
-        self.s: dict[str, sp.Symbol] = {}
-        self.checks: list[Check] = []
-
-    # helpers
-
-    def input(self, name: str, value: object, description: str, **options: object) -> sp.Symbol:
-        """An input, or the sheet's own symbol when it already holds the same value."""
-        quantity = parse_quantity(value, field=f"input {name}", dimension=options.get("dimension"))
-        try:
-            existing = self.sheet[name]
-        except KeyError:
-            return self.sheet.input(name, quantity, description, **options)
-        old = existing.value
-        if (
-            isinstance(existing, Input)
-            and old.dimensionality == quantity.dimensionality
-            and math.isclose(old.to(quantity.units).m, quantity.m, rel_tol=1e-9, abs_tol=1e-12)
-        ):
-            return existing.symbol
-        raise DefinitionError(
-            f"EN 1993-1-1 checks need {name} = {quantity:~P} ({description}), but the sheet "
-            f"already defines {name} = {old:~P}; write the checks on a sheet of their own"
-        )
-
-    def check(self, description: str, demand: sp.Basic, capacity: sp.Basic, reference: str):
-        made = self.sheet.check(description, demand, capacity, reference=reference)
-        self.checks.append(made)
-        return made
+        self.strength: Value = None
 
     def has(self, *names: str) -> bool:
         return all(name in self.demands for name in names)
 
-    # the sheet
+    def run(self) -> None:
+        self._inputs()
+        self._classify()
+        if self.has("N_Ed"):
+            self._axial()
+        self._shear()
+        self._bending()
+        if self.has("N_Ed") and (self.has("M_y_Ed") or self.has("M_z_Ed")):
+            self._combined()
+        if self.has("N_Ed"):
+            self._buckling()
 
-    def write(
-        self, length: pint.Quantity | str, k: tuple[float, float], net_area: object
-    ) -> list[Check]:
-        sheet = self.sheet
-        sheet.heading("Member checks to EN 1993-1-1")
-        sheet.add_reference("EN 1993-1-1:2005 Eurocode 3: Design of steel structures, Part 1-1")
-        sheet.text(AXES_TEXT)
-        # as_written rather than ``with sheet``: the caller may already be inside its own
-        # ``with sheet`` block, whose exit would otherwise be cut short by ours.
-        with as_written():
-            self._inputs(length, k)
-            self._classify()
-            if self.has("N_Ed"):
-                self._axial(net_area)
-            self._shear()
-            self._bending()
-            if self.has("N_Ed") and (self.has("M_y_Ed") or self.has("M_z_Ed")):
-                self._combined()
-            if self.has("N_Ed"):
-                self._buckling(k)
-        sheet.text(NOT_COVERED_TEXT)
-        return list(self.checks)
-
-    def _inputs(self, length: pint.Quantity | str, k: tuple[float, float]) -> None:
-        s, steel, factors, geo = self.s, self.steel, self.factors, self.geometry
-        self.sheet.heading("Material, partial factors and section", level=2)
-        s["f_y"] = self.input(
-            "f_y", steel.f_y, f"Yield strength, {steel.grade}", dimension="stress",
-            unit="MPa", reference=steel.source,
+    def _inputs(self) -> None:
+        w, steel, factors, member = self.w, self.member.steel, self.member.factors, self.member
+        w.heading("Material, partial factors and section", 2)
+        w.input(
+            "f_y", steel.f_y, f"Yield strength, {steel.grade}", dimension="stress", unit="MPa",
+            reference=steel.source, fixed=MATERIAL_FIXED,
         )  # fmt: skip
-        s["E"] = self.input(
+        w.input(
             "E", steel.E, "Modulus of elasticity", dimension="stress", unit="MPa",
             reference="EN 1993-1-1 3.2.6(1)",
         )  # fmt: skip
-        s["f_235"] = self.input(
-            "f_235", "235 MPa", "Reference strength of ε", dimension="stress", unit="MPa",
-            reference="EN 1993-1-1 Table 5.2",
+        w.input(
+            "f_235", F_235, "Reference strength of ε", dimension="stress",
+            unit="MPa", reference="EN 1993-1-1 Table 5.2",
         )  # fmt: skip
-        s["gamma_M0"] = self.input(
+        w.input(
             "gamma_M0", factors.gamma_M0, "Partial factor, resistance of cross-sections",
             dimension="dimensionless", reference=factors.reference,
         )  # fmt: skip
         if self.has("N_Ed"):
-            s["gamma_M1"] = self.input(
+            w.input(
                 "gamma_M1", factors.gamma_M1, "Partial factor, resistance of members to "
                 "instability", dimension="dimensionless", reference=factors.reference,
             )  # fmt: skip
-        section, props = self.section, self.section.properties
-        sources = section.sources
-        for name, key, description in (
-            ("A", "A", "Area"),
-            ("W_pl_y", "Zx", "Plastic modulus about y-y (calcsheet Z_x)"),
-            ("W_el_y", "Sx", "Elastic modulus about y-y, smaller fibre (calcsheet S_x)"),
-            ("W_pl_z", "Zy", "Plastic modulus about z-z (calcsheet Z_y)"),
-            ("W_el_z", "Sy", "Elastic modulus about z-z, smaller fibre (calcsheet S_y)"),
-            ("i_y", "rx", "Radius of gyration about y-y (calcsheet r_x)"),
-            ("i_z", "ry", "Radius of gyration about z-z (calcsheet r_y)"),
-        ):
-            s[name] = self.input(name, props[key], description, reference=sources.get(key, ""))
-        labels = {
-            "h": "Depth",
-            "b": "Width",
-            "t_w": "Web thickness",
-            "t_f": "Flange thickness",
-            "r": "Root radius",
-            "t": "Wall thickness (design)",
-            "d": "Outside diameter",
-        }
-        for name, value in geo.dims.items():
-            reference = geo.reference if name == "r" else "section dimensions"
-            s[name] = self.input(name, value, labels[name], dimension="length", reference=reference)
-        s["L"] = self.input("L", length, "Member length", dimension="length")
-        for axis, factor in zip(("y", "z"), k, strict=True):
-            s[f"k_cr_{axis}"] = self.input(
-                f"k_cr_{axis}", factor, f"Effective-length factor, buckling about {axis}-{axis}",
+        for name, (value, description, reference) in member.values.items():
+            dimension = "length" if name in ("h", "b", "t_w", "t_f", "r", "t", "d") else None
+            w.input(name, value, description, reference=reference, dimension=dimension)
+        w.input("L", member.length, "Member length", dimension="length")
+        for axis, factor in zip(("y", "z"), member.k, strict=True):
+            fixed_free = " (2.0: fixed-free)" if factor == 2.0 else ""
+            w.input(
+                f"k_cr_{axis}", factor,
+                f"Effective-length factor, buckling about {axis}-{axis}{fixed_free}",
                 dimension="dimensionless",
-                reference="fixed-free: 2.0 (common practice, no source)" if factor == 2.0 else "",
             )  # fmt: skip
 
     # classification (Table 5.2)
 
     def _classify(self) -> None:
-        sheet, s, geo = self.sheet, self.s, self.geometry
+        w, kind = self.w, self.member.kind
         need_y, need_z, need_N = self.has("M_y_Ed"), self.has("M_z_Ed"), self.has("N_Ed")
-        sheet.heading("Cross-section class (EN 1993-1-1 Table 5.2)", level=2)
-        s["epsilon"] = cls.epsilon.write(sheet, "epsilon", s["f_235"], s["f_y"])
+        w.heading("Cross-section class (EN 1993-1-1 Table 5.2)", 2)
+        w.clause(cls.epsilon, "epsilon", w["f_235"], w["f_y"])
         if not (need_y or need_z or need_N):
-            sheet.text("No axial force or bending among the demands: the class is not needed.")
+            w.text("No axial force or bending among the demands: the class is not needed.")
             return
         if need_N:
-            s["N_c"] = sheet.step("N_c", -self.demands["N_Ed"], "Axial force, compression positive")
-        classes: dict[str, list[tuple[str, sp.Symbol]]] = {"y": [], "z": [], "N": []}
-        if geo.kind == "I":
-            sheet.text(
+            w.step("N_c", -self.demands["N_Ed"], "Axial force, compression positive")
+        classes: dict[str, list[tuple[str, Value]]] = {"y": [], "z": [], "N": []}
+        if kind == "I":
+            w.text(
                 "Flange outstands are classified in uniform compression for every case (exact "
                 "for M_y, on the safe side for M_z); the web under N with M_y, from the plastic "
                 "(α) and elastic (ψ) stress distributions. The web is not stressed by M_z."
             )
-            s["c_f"] = sheet.step(
-                "c_f", (s["b"] - s["t_w"] - 2 * s["r"]) / 2, "Flange outstand width",
+            w.step(
+                "c_f", (w["b"] - w["t_w"] - 2 * w["r"]) / 2, "Flange outstand width",
                 reference="EN 1993-1-1 Table 5.2 (sheet 2)",
             )  # fmt: skip
-            s["c_w"] = sheet.step(
-                "c_w", s["h"] - 2 * s["t_f"] - 2 * s["r"], "Web depth between fillets",
+            w.step(
+                "c_w", w["h"] - 2 * w["t_f"] - 2 * w["r"], "Web depth between fillets",
                 reference="EN 1993-1-1 Table 5.2 (sheet 1)",
             )  # fmt: skip
-            flange = self._outstand("f", s["c_f"], s["t_f"])
+            flange = self._outstand("f", w["c_f"], w["t_f"])
             classes["z"].append(("flange", flange))
             if need_y:
                 classes["y"] += [("flange", flange), ("web", self._web("w", "M_y_Ed"))]
             if need_N:
                 classes["N"] += [("flange", flange), ("web", self._compressed("w"))]
-        elif geo.kind == "RHS":
-            sheet.text(
+        elif kind == "RHS":
+            w.text(
                 "c = h − 3t and b − 3t (Table 5.2: c may be taken so where the corner radius "
                 "is not known; on the safe side). A wall that a moment compresses over its "
                 "whole width is classified in compression; a wall that the moment bends in "
                 "its plane is classified under N with that moment."
             )
-            s["c_h"] = sheet.step("c_h", s["h"] - 3 * s["t"], "Flat width of the webs (depth)")
-            s["c_b"] = sheet.step("c_b", s["b"] - 3 * s["t"], "Flat width of the flanges (width)")
+            w.step("c_h", w["h"] - 3 * w["t"], "Flat width of the webs (depth)")
+            w.step("c_b", w["b"] - 3 * w["t"], "Flat width of the flanges (width)")
             if need_y:
                 classes["y"] += [
                     ("flanges", self._compressed("b")),
@@ -426,47 +643,33 @@ class _Writer:
         for key, candidates in classes.items():
             if not needed[key]:
                 continue
-            if len(candidates) == 1:
-                # A copy step names the class where the checks use it.
-                s[f"class_{key}"] = sheet.step(
-                    f"class_{key}", candidates[0][1], f"Section class, {what[key]}"
-                )
-            else:
-                s[f"class_{key}"] = sheet.governing(
-                    f"class_{key}", candidates, f"Section class, {what[key]}",
-                    reference="EN 1993-1-1 5.5.2(6)",
-                )  # fmt: skip
-            value = float(sheet.value(s[f"class_{key}"]).m)
-            # Class 4 in compression matters only while the member is compressed.
-            tension = key == "N" and float(sheet.value(self.demands["N_Ed"]).m) >= 0
-            if value > 3 and tension:
-                sheet.text(
-                    "The section is class 4 in compression; a compressive N_Ed would need "
-                    "effective properties (EN 1993-1-5), which are not covered."
-                )
-            elif value > 3:
-                raise InputError(
-                    "section",
-                    self.section.name,
-                    "a class 1, 2 or 3 cross-section",
-                    f"class 4 in {what[key]}: effective properties (EN 1993-1-5) are not covered",
-                )
+            # One candidate: a copy step names the class where the checks use it.
+            _largest(
+                w, f"class_{key}", candidates, f"Section class, {what[key]}",
+                reference="EN 1993-1-1 5.5.2(6)" if len(candidates) > 1 else "",
+            )  # fmt: skip
+        if need_N and w.prints and float(w.value_of(w["class_N"]).m) > 3:
+            # The scope test refused class 4 under compression: the member is in tension.
+            w.text(
+                "The section is class 4 in compression; a compressive N_Ed would need "
+                "effective properties (EN 1993-1-5), which are not covered."
+            )
 
-    def _limits_to_class(self, tag: str, ratio: sp.Symbol, limits) -> sp.Symbol:
-        sheet = self.sheet
-        symbols = [
-            clause.write(sheet, f"ct_{tag}_{n}", *args)
+    def _limits_to_class(self, tag: str, ratio: Value, limits) -> Value:
+        w = self.w
+        written = [
+            w.clause(clause, f"ct_{tag}_{n}", *args)
             for n, (clause, args) in enumerate(limits, start=1)
         ]
-        return cls.class_from_limits.write(sheet, f"class_{tag}", ratio, *symbols)
+        return w.clause(cls.class_from_limits, f"class_{tag}", ratio, *written)
 
-    def _ratio(self, name: str, c: sp.Symbol, t: sp.Symbol, description: str) -> sp.Symbol:
-        if name not in self.s:
-            self.s[name] = self.sheet.step(name, c / t, description)
-        return self.s[name]
+    def _ratio(self, name: str, c: Value, t: Value, description: str) -> Value:
+        if name not in self.w.symbols:
+            self.w.step(name, c / t, description)
+        return self.w[name]
 
-    def _outstand(self, tag: str, c: sp.Symbol, t: sp.Symbol) -> sp.Symbol:
-        eps = self.s["epsilon"]
+    def _outstand(self, tag: str, c: Value, t: Value) -> Value:
+        eps = self.w["epsilon"]
         ratio = self._ratio(f"ct_{tag}", c, t, "c/t of the flange outstand")
         limits = [
             (cls.outstand_class_1_limit, (eps,)),
@@ -475,43 +678,43 @@ class _Writer:
         ]
         return self._limits_to_class(tag, ratio, limits)
 
-    def _part(self, tag: str) -> tuple[sp.Symbol, sp.Symbol, sp.Symbol]:
-        s = self.s
-        if self.geometry.kind == "I":
-            return s["c_w"], s["t_w"], s["t_w"]
-        c = s["c_h"] if tag.startswith("h") else s["c_b"]
-        return c, s["t"], 2 * s["t"]
+    def _part(self, tag: str) -> tuple[Value, Value, Value]:
+        w = self.w
+        if self.member.kind == "I":
+            return w["c_w"], w["t_w"], w["t_w"]
+        c = w["c_h"] if tag.startswith("h") else w["c_b"]
+        return c, w["t"], 2 * w["t"]
 
-    def _compressed(self, tag: str) -> sp.Symbol:
+    def _compressed(self, tag: str) -> Value:
         key = f"class_{tag}N"
-        if key in self.s:
-            return self.s[key]
+        if key in self.w.symbols:
+            return self.w[key]
         c, t, _ = self._part(tag)
-        eps = self.s["epsilon"]
+        eps = self.w["epsilon"]
         ratio = self._ratio(f"ct_{tag}", c, t, "c/t of the internal part")
         limits = [
             (cls.internal_compression_class_1_limit, (eps,)),
             (cls.internal_compression_class_2_limit, (eps,)),
             (cls.internal_compression_class_3_limit, (eps,)),
         ]
-        self.s[key] = self._limits_to_class(f"{tag}N", ratio, limits)
-        return self.s[key]
+        return self._limits_to_class(f"{tag}N", ratio, limits)
 
-    def _web(self, tag: str, moment: str) -> sp.Symbol:
-        sheet, s = self.sheet, self.s
+    def _web(self, tag: str, moment: str) -> Value:
+        w = self.w
         c, t, t_total = self._part(tag)
-        eps = s["epsilon"]
+        eps = w["epsilon"]
         ratio = self._ratio(f"ct_{tag}", c, t, "c/t of the internal part")
         axis = moment[2]
         if self.has("N_Ed"):
-            alpha = cls.plastic_alpha.write(sheet, f"alpha_{tag}", s["N_c"], s["f_y"], c, t_total)
-            W_el, depth = (s["W_el_y"], s["h"]) if axis == "y" else (s["W_el_z"], s["b"])
-            psi = cls.elastic_psi.write(
-                sheet, f"psi_{tag}", s["N_c"], s["A"], self.demands[moment], W_el, depth, c
-            )
+            alpha = w.clause(cls.plastic_alpha, f"alpha_{tag}", w["N_c"], w["f_y"], c, t_total)
+            W_el, depth = (w["W_el_y"], w["h"]) if axis == "y" else (w["W_el_z"], w["b"])
+            psi = w.clause(
+                cls.elastic_psi, f"psi_{tag}", w["N_c"], w["A"], self.demands[moment], W_el,
+                depth, c,
+            )  # fmt: skip
         else:
-            alpha = sheet.step(f"alpha_{tag}", 0.5, "Pure bending: half the part in compression")
-            psi = sheet.step(f"psi_{tag}", -1.0, "Pure bending: end stresses equal and opposite")
+            alpha = w.step(f"alpha_{tag}", 0.5, "Pure bending: half the part in compression")
+            psi = w.step(f"psi_{tag}", -1.0, "Pure bending: end stresses equal and opposite")
         limits = [
             (cls.internal_class_1_limit, (eps, alpha)),
             (cls.internal_class_2_limit, (eps, alpha)),
@@ -519,9 +722,10 @@ class _Writer:
         ]
         return self._limits_to_class(tag, ratio, limits)
 
-    def _tube(self) -> sp.Symbol:
-        s, eps = self.s, self.s["epsilon"]
-        ratio = self.sheet.step("dt", s["d"] / s["t"], "d/t of the tube")
+    def _tube(self) -> Value:
+        w = self.w
+        eps = w["epsilon"]
+        ratio = w.step("dt", w["d"] / w["t"], "d/t of the tube")
         limits = [
             (cls.tube_class_1_limit, (eps,)),
             (cls.tube_class_2_limit, (eps,)),
@@ -531,274 +735,272 @@ class _Writer:
 
     # resistances
 
-    def _axial(self, net_area: object) -> None:
-        sheet, s = self.sheet, self.s
-        sheet.heading("Axial force (EN 1993-1-1 6.2.3, 6.2.4)", level=2)
-        s["N_pl_Rd"] = res.plastic_axial_resistance.write(
-            sheet, "N_pl_Rd", s["A"], s["f_y"], s["gamma_M0"]
-        )
+    def _axial(self) -> None:
+        w, member = self.w, self.member
+        w.heading("Axial force (EN 1993-1-1 6.2.3, 6.2.4)", 2)
+        N_pl = w.clause(res.plastic_axial_resistance, "N_pl_Rd", w["A"], w["f_y"], w["gamma_M0"])
         N_Ed = self.demands["N_Ed"]
-        self.check(
-            "Axial force on the gross section", Abs(N_Ed), s["N_pl_Rd"],
-            "EN 1993-1-1 Eq. (6.5), (6.9)",
+        w.check(
+            "axial", EN_CHECK_TITLES["axial"], w.absolute(N_Ed), N_pl,
+            reference="EN 1993-1-1 Eq. (6.5), (6.9)",
         )  # fmt: skip
-        if net_area is None:
-            sheet.text("No fastener holes given: the net section (Eq. 6.7) is not checked.")
+        if member.net_area is None:
+            w.text("No fastener holes given: the net section (Eq. 6.7) is not checked.")
             return
-        s["A_net"] = self.input("A_net", net_area, "Net area at holes", dimension="area")
-        s["f_u"] = self.input(
-            "f_u", self.steel.f_u, "Ultimate strength", dimension="stress", unit="MPa",
-            reference=self.steel.source,
+        w.input("A_net", member.net_area, "Net area at holes", dimension="area")
+        w.input(
+            "f_u", member.steel.f_u, "Ultimate strength", dimension="stress", unit="MPa",
+            reference=member.steel.source,
         )  # fmt: skip
-        s["gamma_M2"] = self.input(
-            "gamma_M2", self.factors.gamma_M2, "Partial factor, net section in tension",
-            dimension="dimensionless", reference=self.factors.reference,
+        w.input(
+            "gamma_M2", member.factors.gamma_M2, "Partial factor, net section in tension",
+            dimension="dimensionless", reference=member.factors.reference,
         )  # fmt: skip
-        s["N_u_Rd"] = res.net_section_resistance.write(
-            sheet, "N_u_Rd", s["A_net"], s["f_u"], s["gamma_M2"]
-        )
-        s["N_t_Ed"] = sheet.step(
-            "N_t_Ed", (Abs(N_Ed) + N_Ed) / 2, "Tension force (zero in compression)"
-        )
-        self.check("Tension, net section", s["N_t_Ed"], s["N_u_Rd"], "EN 1993-1-1 Eq. (6.5), (6.7)")
+        N_u = w.clause(res.net_section_resistance, "N_u_Rd", w["A_net"], w["f_u"], w["gamma_M2"])
+        N_t = w.step("N_t_Ed", (w.absolute(N_Ed) + N_Ed) / 2, "Tension force (zero in compression)")
+        w.check(
+            "net_section", EN_CHECK_TITLES["net_section"], N_t, N_u,
+            reference="EN 1993-1-1 Eq. (6.5), (6.7)",
+        )  # fmt: skip
 
     def _shear(self) -> None:
         if not (self.has("V_z_Ed") or self.has("V_y_Ed")):
             return
-        sheet, s, geo = self.sheet, self.s, self.geometry
-        sheet.heading("Shear (EN 1993-1-1 6.2.6)", level=2)
-        if geo.kind in ("I", "RHS"):
-            s["eta"] = self.input(
+        w, kind = self.w, self.member.kind
+        w.heading("Shear (EN 1993-1-1 6.2.6)", 2)
+        if kind in ("I", "RHS"):
+            w.input(
                 "eta", 1.0, "Factor η of the shear area (1.0 may be used conservatively)",
                 dimension="dimensionless", reference="EN 1993-1-1 6.2.6(3) Note",
+                fixed=LIMIT_FIXED,
             )  # fmt: skip
         for axis, key in (("z", "V_z_Ed"), ("y", "V_y_Ed")):
             if not self.has(key):
                 continue
             area = self._shear_area(axis)
-            s[f"V_pl_{axis}_Rd"] = res.plastic_shear_resistance.write(
-                sheet, f"V_pl_{axis}_Rd", area, s["f_y"], s["gamma_M0"]
-            )
-            parts = {"I": ("web", "flanges"), "RHS": ("webs", "flanges")}.get(geo.kind)
-            along = f"along {axis}" + (f" ({parts[axis == 'y']})" if parts else "")
-            self.check(
-                f"Shear {along}", Abs(self.demands[key]), s[f"V_pl_{axis}_Rd"],
-                "EN 1993-1-1 Eq. (6.17), (6.18)",
-            )  # fmt: skip
-            if geo.kind != "CHS":
+            if kind != "CHS":
                 self._shear_buckling(axis)
+            V_pl = w.clause(
+                res.plastic_shear_resistance, f"V_pl_{axis}_Rd", area, w["f_y"], w["gamma_M0"]
+            )
+            parts = {"I": ("web", "flanges"), "RHS": ("webs", "flanges")}.get(kind)
+            if parts and w.prints:
+                w.text(f"Shear along {axis} is carried by the {parts[axis == 'y']}.")
+            key_name = f"shear_{axis}"
+            w.check(
+                key_name, EN_CHECK_TITLES[key_name], w.absolute(self.demands[key]), V_pl,
+                reference="EN 1993-1-1 Eq. (6.17), (6.18)",
+            )  # fmt: skip
 
-    def _shear_area(self, axis: str) -> sp.Symbol:
-        sheet, s, geo = self.sheet, self.s, self.geometry
-        if geo.kind == "CHS":
-            if "A_v" not in s:
-                s["A_v"] = res.shear_area_chs.write(sheet, "A_v", s["A"])
-            return s["A_v"]
+    def _shear_area(self, axis: str) -> Value:
+        w, member = self.w, self.member
+        if member.kind == "CHS":
+            if "A_v" not in w.symbols:
+                w.clause(res.shear_area_chs, "A_v", w["A"])
+            return w["A_v"]
         name = f"A_v_{axis}"
-        if geo.kind == "RHS":
-            h, b = (s["h"], s["b"]) if axis == "z" else (s["b"], s["h"])
-            s[name] = res.shear_area_rhs.write(sheet, name, s["A"], h, b)
-            return s[name]
+        if member.kind == "RHS":
+            h, b = (w["h"], w["b"]) if axis == "z" else (w["b"], w["h"])
+            return w.clause(res.shear_area_rhs, name, w["A"], h, b)
         self._web_height()
         if axis == "y":
-            s[name] = res.shear_area_i_flanges.write(sheet, name, s["A"], s["h_w"], s["t_w"])
-        elif geo.fabrication == "rolled":
-            s[name] = res.shear_area_rolled_i.write(
-                sheet, name, s["A"], s["b"], s["t_f"], s["t_w"], s["r"], s["h_w"], s["eta"]
-            )
-        else:
-            s[name] = res.shear_area_welded_i.write(sheet, name, s["h_w"], s["t_w"], s["eta"])
-        return s[name]
+            return w.clause(res.shear_area_i_flanges, name, w["A"], w["h_w"], w["t_w"])
+        if member.fabrication == "rolled":
+            return w.clause(
+                res.shear_area_rolled_i, name, w["A"], w["b"], w["t_f"], w["t_w"], w["r"],
+                w["h_w"], w["eta"],
+            )  # fmt: skip
+        return w.clause(res.shear_area_welded_i, name, w["h_w"], w["t_w"], w["eta"])
 
     def _web_height(self) -> None:
-        if "h_w" not in self.s:
-            s = self.s
-            s["h_w"] = self.sheet.step("h_w", s["h"] - 2 * s["t_f"], "Web depth between flanges")
+        w = self.w
+        if "h_w" not in w.symbols:
+            w.step("h_w", w["h"] - 2 * w["t_f"], "Web depth between flanges")
 
     def _shear_buckling(self, axis: str) -> None:
-        sheet, s, geo = self.sheet, self.s, self.geometry
-        if geo.kind == "I":
+        """6.2.6(6) as a statement: the webs are stocky enough for V_pl,Rd (else refused)."""
+        w, kind = self.w, self.member.kind
+        if kind == "I":
             if axis == "y":
                 return  # flanges in shear: no web panel to buckle
-            depth, thickness, what = s["h_w"], s["t_w"], "web"
+            self._web_height()
+            depth, thickness, what = w["h_w"], w["t_w"], "web"
         else:
             name = "h_w" if axis == "z" else "b_w"
-            if name not in s:
-                side = s["h"] if axis == "z" else s["b"]
-                s[name] = sheet.step(name, side - 2 * s["t"], "Wall depth between the other walls")
-            depth, thickness, what = s[name], s["t"], "walls"
-        if "hw_tw_max" not in s:
-            s["hw_tw_max"] = res.shear_buckling_limit.write(
-                sheet, "hw_tw_max", s["epsilon"], s["eta"]
+            if name not in w.symbols:
+                side = w["h"] if axis == "z" else w["b"]
+                w.step(name, side - 2 * w["t"], "Wall depth between the other walls")
+            depth, thickness, what = w[name], w["t"], "walls"
+        if "hw_tw_max" not in w.symbols:
+            w.clause(res.shear_buckling_limit, "hw_tw_max", w["epsilon"], w["eta"])
+        ratio = w.step(f"hw_tw_{axis}", depth / thickness, f"Slenderness of the {what} in shear")
+        if w.prints:
+            shown = float(w.value_of(ratio).m)
+            limit = float(w.value_of(w["hw_tw_max"]).m)
+            w.text(
+                f"h_w/t_w = {shown:.3g} ≤ 72ε/η = {limit:.3g}: the {what} "
+                f"{'needs' if what == 'web' else 'need'} no shear buckling verification, "
+                "V_pl,Rd applies (EN 1993-1-1 6.2.6(6))."
             )
-        ratio = sheet.step(
-            f"hw_tw_{axis}", depth / thickness, f"Slenderness of the {what} in shear"
-        )
-        self.check(
-            f"Shear buckling not governing ({what}, {axis})", ratio, s["hw_tw_max"],
-            "EN 1993-1-1 6.2.6(6)",
-        )  # fmt: skip
 
     def _bending(self) -> None:
         if not (self.has("M_y_Ed") or self.has("M_z_Ed")):
             return
-        sheet, s = self.sheet, self.s
-        sheet.heading("Bending (EN 1993-1-1 6.2.5, 6.2.8)", level=2)
-        strength = s["f_y"]
+        w = self.w
+        w.heading("Bending (EN 1993-1-1 6.2.5, 6.2.8)", 2)
+        strength = w["f_y"]
         shears = [(key[2], key) for key in ("V_z_Ed", "V_y_Ed") if self.has(key)]
         if shears:
             for axis, key in shears:
-                s[f"rho_{axis}"] = res.shear_reduction.write(
-                    sheet, f"rho_{axis}", self.demands[key], s[f"V_pl_{axis}_Rd"]
+                w.clause(
+                    res.shear_reduction, f"rho_{axis}", self.demands[key], w[f"V_pl_{axis}_Rd"]
                 )
-            if len(shears) == 1:
-                s["rho"] = s[f"rho_{shears[0][0]}"]
-            else:
-                s["rho"] = sheet.governing(
-                    "rho", [("V_z", s["rho_z"]), ("V_y", s["rho_y"])], "Larger reduction factor"
-                )
-            s["f_y_V"] = res.shear_reduced_strength.write(
-                sheet, "f_y_V", s["rho"], s["f_y"], unit="MPa"
-            )
-            strength = s["f_y_V"]
+            _largest(
+                w, "rho", [(f"V_{axis}", w[f"rho_{axis}"]) for axis, _ in shears],
+                "Larger reduction factor",
+            )  # fmt: skip
+            strength = w.clause(res.shear_reduced_strength, "f_y_V", w["rho"], w["f_y"], unit="MPa")
         self.strength = strength
         for axis in ("y", "z"):
             key = f"M_{axis}_Ed"
             if not self.has(key):
                 continue
-            name = f"M_c_{axis}_Rd"
-            s[name] = res.bending_resistance.write(
-                sheet, name, s[f"W_pl_{axis}"], s[f"W_el_{axis}"], strength, s["gamma_M0"],
-                s[f"class_{axis}"],
+            M_c = w.clause(
+                res.bending_resistance, f"M_c_{axis}_Rd", w[f"W_pl_{axis}"], w[f"W_el_{axis}"],
+                strength, w["gamma_M0"], w[f"class_{axis}"],
             )  # fmt: skip
-            self.check(
-                f"Bending about {axis}-{axis}", Abs(self.demands[key]), s[name],
-                "EN 1993-1-1 Eq. (6.12)",
+            check = f"bending_{axis}"
+            w.check(
+                check, EN_CHECK_TITLES[check], w.absolute(self.demands[key]), M_c,
+                reference="EN 1993-1-1 Eq. (6.12)",
             )  # fmt: skip
 
     def _combined(self) -> None:
-        sheet, s, geo = self.sheet, self.s, self.geometry
-        sheet.heading("Bending and axial force (EN 1993-1-1 6.2.9)", level=2)
+        w, member = self.w, self.member
+        w.heading("Bending and axial force (EN 1993-1-1 6.2.9)", 2)
         N_Ed = self.demands["N_Ed"]
         axes = [axis for axis in ("y", "z") if self.has(f"M_{axis}_Ed")]
-        if self.strength is s["f_y"]:
-            N_Rd = s["N_pl_Rd"]
+        # The clauses of 6.2.9 take magnitudes themselves; the sum of Eq. (6.2) here does not.
+        moments = {axis: self.demands[f"M_{axis}_Ed"] for axis in axes}
+        if not self.has("V_z_Ed") and not self.has("V_y_Ed"):
+            N_Rd = w["N_pl_Rd"]
         else:
-            N_Rd = s["N_pl_V_Rd"] = res.plastic_axial_resistance.write(
-                sheet, "N_pl_V_Rd", s["A"], self.strength, s["gamma_M0"]
+            N_Rd = w.clause(
+                res.plastic_axial_resistance, "N_pl_V_Rd", w["A"], self.strength, w["gamma_M0"]
             )
-            sheet.text("With shear: N_pl,Rd with the reduced yield strength as well (safe side).")
-        if geo.kind == "CHS" or self.interaction == "linear":
-            expr = Abs(N_Ed) / N_Rd
+            w.text("With shear: N_pl,Rd with the reduced yield strength as well (safe side).")
+        if member.kind == "CHS" or member.interaction == "linear":
+            expr = w.absolute(N_Ed) / N_Rd
             for axis in axes:
-                expr = expr + Abs(self.demands[f"M_{axis}_Ed"]) / s[f"M_c_{axis}_Rd"]
-            s["u_NM"] = sheet.step(
+                expr = expr + w.absolute(moments[axis]) / w[f"M_c_{axis}_Rd"]
+            u = w.step(
                 "u_NM", expr, "Linear interaction (valid for every class, conservative)",
                 reference="EN 1993-1-1 Eq. (6.2)",
             )  # fmt: skip
-            self.check("Bending and axial force", s["u_NM"], sp.Integer(1), "EN 1993-1-1 Eq. (6.2)")
+            w.check(
+                "combined", EN_CHECK_TITLES["combined"], u, sp.Integer(1),
+                reference="EN 1993-1-1 Eq. (6.2)",
+            )  # fmt: skip
             return
-        n = s["n"] = res.axial_ratio.write(sheet, "n", N_Ed, N_Rd)
+        n = w.clause(res.axial_ratio, "n", N_Ed, N_Rd)
         if len(axes) == 2:
-            governing = sheet.governing(
-                "class_NM", [("y-y", s["class_y"]), ("z-z", s["class_z"])],
+            governing = _largest(
+                w, "class_NM", [("y-y", w["class_y"]), ("z-z", w["class_z"])],
                 "Class under biaxial bending with N (the worse of the two)",
             )  # fmt: skip
-            classes = {"y": governing, "z": governing}
         else:
-            classes = {axes[0]: s[f"class_{axes[0]}"]}
-        if geo.kind == "I":
-            s["a"] = res.web_ratio_i.write(sheet, "a", s["A"], s["b"], s["t_f"])
-            ratios = {"y": s["a"], "z": s["a"]}
+            governing = w[f"class_{axes[0]}"]
+        w.text(
+            "Class 1 and 2: reduced plastic moments of 6.2.9.1. Class 3: the largest "
+            "longitudinal stress σx,Ed = N/A + M_y/W_el,y + M_z/W_el,z against f_y/γM0 "
+            "(6.2.9.2, Eq. 6.42); with shear, f_y reduced as above."
+        )
+        if len(axes) == 2:
+            sigma = w.clause(
+                res.elastic_longitudinal_stress, "sigma_x_Ed", N_Ed, w["A"], moments["y"],
+                w["W_el_y"], moments["z"], w["W_el_z"], unit="MPa",
+            )  # fmt: skip
+        else:
+            sigma = w.clause(
+                res.elastic_longitudinal_stress_uniaxial, "sigma_x_Ed", N_Ed, w["A"],
+                moments[axes[0]], w[f"W_el_{axes[0]}"], unit="MPa",
+            )  # fmt: skip
+        stress_ratio = sigma / (self.strength / w["gamma_M0"])
+        if member.kind == "I":
+            a = w.clause(res.web_ratio_i, "a", w["A"], w["b"], w["t_f"])
+            ratios = {"y": a, "z": a}
             plastic = {"y": res.reduced_moment_y_i, "z": res.reduced_moment_z_i}
         else:
-            s["a_w"] = res.web_ratio_rhs.write(sheet, "a_w", s["A"], s["b"], s["t"])
-            s["a_f"] = res.flange_ratio_rhs.write(sheet, "a_f", s["A"], s["h"], s["t"])
-            ratios = {"y": s["a_w"], "z": s["a_f"]}
+            a_w = w.clause(res.web_ratio_rhs, "a_w", w["A"], w["b"], w["t"])
+            a_f = w.clause(res.flange_ratio_rhs, "a_f", w["A"], w["h"], w["t"])
+            ratios = {"y": a_w, "z": a_f}
             plastic = {"y": res.reduced_moment_rhs, "z": res.reduced_moment_rhs}
-        sheet.text(
-            "Class 1 and 2: reduced plastic moments of 6.2.9.1. Class 3: the elastic criterion "
-            "(6.42) written as M_Ed ≤ M_el,Rd·(1 − n) with exponents 1."
-        )
-        for axis in axes:
-            M_c = s[f"M_c_{axis}_Rd"]
-            expr = Piecewise(
-                (plastic[axis](M_c, n, ratios[axis]), classes[axis] <= 2),
-                (res.reduced_moment_elastic(M_c, n), True),
-            )
-            reference = f"{plastic[axis].reference}; EN 1993-1-1 6.2.9.2"
-            s[f"M_N_{axis}_Rd"] = sheet.step(
-                f"M_N_{axis}_Rd", expr, f"Moment resistance about {axis}-{axis} reduced for N",
-                reference=reference,
-            )  # fmt: skip
+        reduced = {
+            axis: w.clause(plastic[axis], f"M_N_{axis}_Rd", w[f"M_c_{axis}_Rd"], n, ratios[axis])
+            for axis in axes
+        }
         if len(axes) == 2:
-            if geo.kind == "I":
-                alpha = res.biaxial_alpha_i.write(sheet, "alpha_NM", classes["y"])
-                beta = res.biaxial_beta_i.write(sheet, "beta_NM", n, classes["y"])
+            if member.kind == "I":
+                alpha = w.clause(res.biaxial_alpha_i, "alpha_NM", governing)
+                beta = w.clause(res.biaxial_beta_i, "beta_NM", n, governing)
             else:
-                alpha = beta = res.biaxial_exponent_rhs.write(sheet, "alpha_NM", n, classes["y"])
-            criterion = res.biaxial_criterion(
-                Abs(self.demands["M_y_Ed"]), s["M_N_y_Rd"], Abs(self.demands["M_z_Ed"]),
-                s["M_N_z_Rd"], alpha, beta,
+                alpha = beta = w.clause(res.biaxial_exponent_rhs, "alpha_NM", n, governing)
+            criterion = _formula(
+                w, res.biaxial_criterion, moments["y"], reduced["y"], moments["z"], reduced["z"],
+                alpha, beta,
             )  # fmt: skip
             reference = res.biaxial_criterion.reference
         else:
             axis = axes[0]
-            criterion = Abs(self.demands[f"M_{axis}_Ed"]) / s[f"M_N_{axis}_Rd"]
+            criterion = w.absolute(moments[axis]) / reduced[axis]
             reference = "EN 1993-1-1 Eq. (6.31)"
-        # At n ≥ 1 the axial force alone exhausts the section and no moment resistance is
-        # left; the utilization shown is then n itself.
-        s["u_NM"] = sheet.step(
-            "u_NM", Piecewise((criterion, n < 1), (n, True)),
-            "Utilization under N and M (n itself when n ≥ 1)", reference=reference,
-        )  # fmt: skip
-        self.check("Bending and axial force", s["u_NM"], sp.Integer(1), reference)
-
-    def _buckling(self, k: tuple[float, float]) -> None:
-        sheet, s, geo = self.sheet, self.s, self.geometry
-        sheet.heading("Flexural buckling (EN 1993-1-1 6.3.1)", level=2)
-        N_Ed = self.demands["N_Ed"]
-        s["N_c_Ed"] = sheet.step(
-            "N_c_Ed", (Abs(N_Ed) - N_Ed) / 2, "Compression force (zero in tension)"
+        # At n ≥ 1 the axial force alone exhausts the section and no plastic moment
+        # resistance is left; the utilization shown is then n itself.
+        u = w.branch(
+            "u_NM",
+            [(stress_ratio, governing > 2), (criterion, n < 1), (n, True)],
+            "Utilization under N and M: σx,Ed/(f_y/γM0) for class 3; the plastic criterion "
+            "for class 1 and 2 (n itself when n ≥ 1)",
+            reference=f"{reference}, (6.42)",
         )
-        s["lambda_1"] = buck.slenderness_limit.write(sheet, "lambda_1", s["E"], s["f_y"])
+        w.check(
+            "combined", EN_CHECK_TITLES["combined"], u, sp.Integer(1),
+            reference=f"{reference}, (6.42)",
+        )  # fmt: skip
+
+    def _buckling(self) -> None:
+        w, member = self.w, self.member
+        w.heading("Flexural buckling (EN 1993-1-1 6.3.1)", 2)
+        N_Ed = self.demands["N_Ed"]
+        N_c = w.step("N_c_Ed", (w.absolute(N_Ed) - N_Ed) / 2, "Compression force (zero in tension)")
+        w.clause(buck.slenderness_limit, "lambda_1", w["E"], w["f_y"])
         for axis in ("y", "z"):
-            if geo.kind == "I":
-                kind = f"{geo.fabrication} I"
-                choice = buck.buckling_curve(
-                    kind, axis, grade=self.steel.grade, h=geo.dims["h"], b=geo.dims["b"],
-                    t_f=geo.dims["t_f"],
-                )  # fmt: skip
-            else:
-                choice = buck.buckling_curve(
-                    "hollow", axis, grade=self.steel.grade, forming=geo.fabrication
-                )
-            sheet.text(f"Buckling about {axis}-{axis}: {choice.reason}.")
-            L_cr = sheet.step(
-                f"L_cr_{axis}", s[f"k_cr_{axis}"] * s["L"], f"Buckling length about {axis}-{axis}"
+            choice = member.curves[axis]
+            if w.prints:
+                w.text(f"Buckling about {axis}-{axis}: {choice.reason}.")
+            L_cr = w.step(
+                f"L_cr_{axis}", w[f"k_cr_{axis}"] * w["L"], f"Buckling length about {axis}-{axis}"
             )
-            lam = buck.relative_slenderness_from_length.write(
-                sheet, f"lambda_rel_{axis}", L_cr, s[f"i_{axis}"], s["lambda_1"]
-            )
-            alpha = self.input(
+            lam = w.clause(
+                buck.relative_slenderness_from_length, f"lambda_rel_{axis}", L_cr, w[f"i_{axis}"],
+                w["lambda_1"],
+            )  # fmt: skip
+            alpha = w.input(
                 f"alpha_{axis}", choice.alpha, f"Imperfection factor, curve {choice.curve}",
                 dimension="dimensionless", reference="EN 1993-1-1 Table 6.1", fixed=CURVE_FIXED,
             )  # fmt: skip
-            phi = buck.buckling_phi.write(sheet, f"Phi_{axis}", alpha, lam)
-            chi = buck.reduction_factor.write(sheet, f"chi_{axis}", phi, lam)
+            phi = w.clause(buck.buckling_phi, f"Phi_{axis}", alpha, lam)
+            chi = w.clause(buck.reduction_factor, f"chi_{axis}", phi, lam)
             # Eq. (6.47) holds for class 1-3; a class 4 section is accepted only while the
-            # member is in tension (then nothing buckles). Otherwise no branch applies and
-            # the sheet stops with an error naming this step.
-            applies = sp.Or(s["class_N"] <= 3, s["N_c_Ed"] / s["N_pl_Rd"] <= 0)
-            s[f"N_b_{axis}_Rd"] = sheet.step(
+            # member is in tension (then nothing buckles). Otherwise no branch applies: the
+            # sheet stops with an error naming this step, the arrays give NaN (out of scope).
+            applies = _any(w, w["class_N"] <= 3, N_c / w["N_pl_Rd"] <= 0)
+            resistance = _formula(w, buck.buckling_resistance, chi, w["A"], w["f_y"], w["gamma_M1"])
+            N_b = w.branch(
                 f"N_b_{axis}_Rd",
-                Piecewise(
-                    (buck.buckling_resistance(chi, s["A"], s["f_y"], s["gamma_M1"]), applies)
-                ),
+                [(resistance, applies)],
                 buck.buckling_resistance.description,
                 reference=buck.buckling_resistance.reference,
             )
-            self.check(
-                f"Flexural buckling about {axis}-{axis}", s["N_c_Ed"], s[f"N_b_{axis}_Rd"],
-                "EN 1993-1-1 Eq. (6.46), (6.47)",
-            )  # fmt: skip
+            key = f"buckling_{axis}"
+            w.check(key, EN_CHECK_TITLES[key], N_c, N_b, reference="EN 1993-1-1 Eq. (6.46), (6.47)")

@@ -111,9 +111,16 @@ def shear_buckling_limit(eps, eta):
 
 @clause("EN 1993-1-1 6.2.8(3)", "Reduction factor for shear, ρ")
 def shear_reduction(V_Ed, V_pl_Rd):
-    """ρ = (2·V_Ed/V_pl,Rd − 1)² when V_Ed > 0.5·V_pl,Rd, else 0 (6.2.8(2), (3))."""
+    """ρ = (2·V_Ed/V_pl,Rd − 1)² when 0.5·V_pl,Rd < V_Ed < V_pl,Rd, else 0 (6.2.8(2), (3)).
+
+    From V_pl,Rd on the shear check (6.2.6(1)) fails and 6.2.8 has no ρ (it would take
+    all of f_y and more); the moment resistance is then left unreduced, so the bending
+    check keeps a positive capacity while the shear check says NOT OK.
+    """
     return Piecewise(
-        (0, sp.Abs(V_Ed) <= V_pl_Rd / 2), ((2 * sp.Abs(V_Ed) / V_pl_Rd - 1) ** 2, True)
+        (0, sp.Abs(V_Ed) <= V_pl_Rd / 2),
+        ((2 * sp.Abs(V_Ed) / V_pl_Rd - 1) ** 2, sp.Abs(V_Ed) < V_pl_Rd),
+        (0, True),
     )
 
 
@@ -176,15 +183,26 @@ def reduced_moment_rhs(M_pl_Rd, n, a):
     return Min(M_pl_Rd * (1 - n) / (1 - a / 2), M_pl_Rd)
 
 
-@clause("EN 1993-1-1 6.2.9.2, Eq. (6.42)", "Elastic moment resistance reduced for N")
-def reduced_moment_elastic(M_el_Rd, n):
-    """M_el,Rd·(1 − n): Eq. (6.42) σx,Ed = N/A + M/W_el ≤ f_y/γM0 solved for M (class 3)."""
-    return M_el_Rd * (1 - n)
+@clause("EN 1993-1-1 6.2.9.2(1), Eq. (6.42)", "Largest longitudinal stress, elastic")
+def elastic_longitudinal_stress(N_Ed, A, M_y_Ed, W_el_y, M_z_Ed, W_el_z):
+    """σx,Ed = |N_Ed|/A + |M_y,Ed|/W_el,y + |M_z,Ed|/W_el,z (class 3, no holes).
+
+    Checked against f_y/γM0 (Eq. 6.42), this is the stress ratio n + m_y + m_z: every
+    term at the corner where all three stresses add, which a doubly symmetric section has.
+    """
+    return sp.Abs(N_Ed) / A + sp.Abs(M_y_Ed) / W_el_y + sp.Abs(M_z_Ed) / W_el_z
+
+
+@clause("EN 1993-1-1 6.2.9.2(1), Eq. (6.42)", "Largest longitudinal stress, elastic")
+def elastic_longitudinal_stress_uniaxial(N_Ed, A, M_Ed, W_el):
+    """σx,Ed = |N_Ed|/A + |M_Ed|/W_el under N with bending about one axis (class 3)."""
+    return sp.Abs(N_Ed) / A + sp.Abs(M_Ed) / W_el
 
 
 @clause("EN 1993-1-1 6.2.9.1(6)", "Exponent α of the biaxial criterion, I-section")
 def biaxial_alpha_i(section_class):
-    """α = 2 for I and H sections (class 1, 2); 1 (linear) for class 3 (6.2.9.2)."""
+    """α = 2 for I and H sections (class 1, 2); 1 (linear) otherwise (class 3 sections are
+    checked by their stress, Eq. 6.42, instead)."""
     return Piecewise((2, section_class <= 2), (1, True))
 
 

@@ -71,8 +71,10 @@ def test_bending_resistance_follows_the_class() -> None:
 
 def test_shear_reduction_rho() -> None:
     # 6.2.8(3): ρ = (2V/V_pl − 1)² above half the resistance; 0.75 V_pl gives 0.25.
-    values = res.shear_reduction.numeric(np.array([0.3, 0.5, 0.75, -0.75, 1.0]), 1.0)
-    assert values == pytest.approx([0.0, 0.0, 0.25, 0.25, 1.0])
+    values = res.shear_reduction.numeric(np.array([0.3, 0.5, 0.75, -0.75, 0.99]), 1.0)
+    assert values == pytest.approx([0.0, 0.0, 0.25, 0.25, 0.98**2])
+    # From V_pl,Rd on the shear check fails and no ρ exists: the moment is left unreduced.
+    assert res.shear_reduction.numeric(np.array([1.0, 1.5]), 1.0) == pytest.approx([0.0, 0.0])
 
 
 def test_reduced_moments_of_an_i_section() -> None:
