@@ -31,7 +31,7 @@ from calcsheet.calcs.round_section import write_round_point_stresses
 from calcsheet.engine import Sheet, TitleBlock
 from calcsheet.engine.functions import cos, sin, sqrt
 from calcsheet.errors import InputError
-from calcsheet.mechanics.deflection import write_tip_deflection
+from calcsheet.mechanics.deflection import LoadTerms, write_tip_deflection_of
 from calcsheet.mechanics.loads import AXES, AppliedMoment, PointLoad, parse_signed_axis
 from calcsheet.mechanics.statics import loads_beyond, validate_loads
 from calcsheet.mechanics.stresses import StressModel, stress_model
@@ -180,10 +180,10 @@ def member_sheet(
             write_check_cases(sheet, plan, checks, station_q.to(length_unit))
         if basis.deflection_ratio:
             # E as the standard states it, so that the deflection shares the checks' input E.
-            write_tip_deflection(
+            write_tip_deflection_of(
                 sheet,
                 section,
-                loads,
+                _deflection_loads(sheet, loads, symbols),
                 length=length_q,
                 E=standard.modulus,
                 n=basis.deflection_ratio,
@@ -738,3 +738,44 @@ def _write_governing(sheet: Sheet, points: list[PointSymbols], stress: str) -> d
             unit=stress,
         )
     return governing
+
+
+def _deflection_loads(
+    sheet: Sheet, loads: Sequence[PointLoad | AppliedMoment], symbols: dict[str, sp.Symbol]
+) -> list[LoadTerms]:
+    """The sheet's own symbols of every load (also those between support and station).
+
+    The tip deflection sums over all loads with a = z_n. A component that is zero
+    now is left out of its sums: changing an input rebuilds the sheet, which brings
+    the term back when it is no longer zero.
+    """
+
+    def own(name: str, scale: float = 0.0) -> sp.Symbol | None:
+        symbol = symbols.get(name)
+        if symbol is None or abs(sheet.value(symbol).to_base_units().m) <= scale:
+            return None
+        return symbol
+
+    terms = []
+    for number, load in enumerate(loads, start=1):
+        n = str(number)
+        if isinstance(load, AppliedMoment):
+            terms.append(
+                LoadTerms(load.name, symbols[f"z_{n}"], C_x=own(f"C_x{n}"), C_y=own(f"C_y{n}"))
+            )
+            continue
+        # A component of an inclined force is zero to round-off (cos 90°) when the
+        # force lies in a plane of the axes.
+        scale = _ZERO_Q * float(load.magnitude.to_base_units().m)
+        terms.append(
+            LoadTerms(
+                load.name,
+                symbols[f"z_{n}"],
+                F_x=own(f"F_x{n}", scale),
+                F_y=own(f"F_y{n}", scale),
+                F_z=own(f"F_z{n}", scale),
+                e_x=own(f"e_x{n}"),
+                e_y=own(f"e_y{n}"),
+            )
+        )
+    return terms

@@ -9,12 +9,17 @@ from hypothesis import strategies as st
 
 from calcsheet.calcs.member import member_sheet
 from calcsheet.engine import Sheet
+from calcsheet.errors import DefinitionError
 from calcsheet.mechanics import applied_moment, internal_forces, point_load
 from calcsheet.mechanics.deflection import (
+    LoadTerms,
     tip_deflection,
+    tip_deflection_arrays,
     tip_deflection_numeric,
     write_tip_deflection,
+    write_tip_deflection_of,
 )
+from calcsheet.render.html import render_html
 from calcsheet.sections import angle, catalog_section
 
 E = 29000.0  # ksi
@@ -56,7 +61,8 @@ def integrate_curvature(section, loads, length: float, n: int = 40001) -> tuple[
 
 
 def test_tip_load_gives_pl3_over_3ei_in_both_planes() -> None:
-    # δ = P·L³/(3EI): the tip-loaded cantilever (AISC Manual Table 3-23, from memory).
+    # δ = P·L³/(3EI): AISC Steel Construction Manual, 16th ed., Table 3-23, cantilevered
+    # beam, concentrated load at free end (from memory).
     L = 96.0
     down = point_load("P", components=("0 kip", "-2 kip", "0 kip"), z=f"{L} in")
     side = point_load("H", components=("1.5 kip", "0 kip", "0 kip"), z=f"{L} in")
@@ -67,8 +73,11 @@ def test_tip_load_gives_pl3_over_3ei_in_both_planes() -> None:
 
 
 def test_point_load_and_couple_anywhere() -> None:
-    # P at a: P·a²(3L − a)/(6EI); C at a: C·a(2L − a)/(2EI) (module docstring, from memory
-    # of the Manual's cantilever cases). C_x > 0 turns the tip toward −y, C_y > 0 toward +x.
+    # P at a from the support: Δ_max = P·b²(3l − b)/(6EI) with b = a, AISC Steel Construction
+    # Manual, 16th ed., Table 3-23, cantilevered beam, concentrated load at any point (from
+    # memory). C at a: C·a(2L − a)/(2EI), Roark's Formulas for Stress and Strain, Table 8.1,
+    # cantilever with a concentrated intermediate moment (from memory); the end couple
+    # (a = L) gives the familiar C·L²/(2EI). C_x > 0 turns the tip toward −y, C_y > 0 toward +x.
     L, a, P, C = 120.0, 45.0, 3.0, 50.0
     load = point_load("P", components=("0 kip", f"{P} kip", "0 kip"), z=f"{a} in")
     result = tip_deflection(W, [load], length=f"{L} in")
@@ -198,3 +207,108 @@ def test_on_the_member_sheet_the_section_inputs_are_reused() -> None:
 def test_no_bending_no_check() -> None:
     loads = [point_load("N", components=("0 kip", "0 kip", "5 kip"), z="60 in")]
     assert write_tip_deflection(Sheet("axial"), W, loads, length="60 in") is None
+
+
+def test_end_couple_gives_cl2_over_2ei() -> None:
+    # C at the free end: δ = C·L²/(2EI), Roark's Formulas for Stress and Strain, Table 8.1,
+    # cantilever with an end moment (from memory).
+    L, C = 90.0, 24.0
+    couple = applied_moment("C", z=f"{L} in", My=f"{C} kip*in")
+    assert tip_deflection(W, [couple], length=f"{L} in").u.m == pytest.approx(
+        C * L**2 / (2 * E * IY)
+    )
+
+
+def test_general_form_with_zero_product_of_area_equals_the_symmetric_form() -> None:
+    """The array writer uses the unsymmetric formulas as soon as one section of a batch has
+    I_xy != 0; for the symmetric sections they must give the symmetric numbers."""
+    rng = np.random.default_rng(12)
+    m = 50
+    loads = [
+        LoadTerms("P", rng.uniform(0, 100, m), F_x=rng.normal(size=m), F_y=rng.normal(size=m),
+                  F_z=rng.normal(size=m), e_x=rng.normal(size=m), e_y=rng.normal(size=m)),
+        LoadTerms("C", rng.uniform(0, 100, m), C_x=rng.normal(size=m), C_y=rng.normal(size=m)),
+    ]  # fmt: skip
+    angle_props = angle("4 in", "3 in", "0.375 in").numeric("inch")
+    Ix = np.array([[IX], [angle_props.Ix]])
+    Iy = np.array([[IY], [angle_props.Iy]])
+    Ixy = np.array([[0.0], [angle_props.Ixy]])
+    both = tip_deflection_arrays(loads, length=100.0, E=E, Ix=Ix, Iy=Iy, Ixy=Ixy, n=180)
+    alone = tip_deflection_arrays(loads, length=100.0, E=E, Ix=IX, Iy=IY, Ixy=0.0, n=180)
+    assert both.u.shape == (2, m)
+    for name in ("u", "v", "total", "utilization"):
+        np.testing.assert_allclose(getattr(both, name)[0], getattr(alone, name), rtol=1e-12)
+    # Symmetric forms, written out (module docstring): v = Φ_v/(E·I_x), u = Φ_u/(E·I_y).
+    P, C = loads
+    phi_v = P.F_y * P.a**2 * (3 * 100 - P.a) / 6 - P.F_z * P.e_y * P.a * (200 - P.a) / 2
+    phi_v -= C.C_x * C.a * (200 - C.a) / 2
+    np.testing.assert_allclose(alone.v, phi_v / (E * IX), rtol=1e-12)
+
+
+def test_sections_by_cases_broadcast() -> None:
+    """k sections (shape (k, 1)) by m load cases (shape (m,)) give (k, m) arrays, each
+    element the single evaluation."""
+    sections = [W, catalog_section("W8X31"), angle("4 in", "3 in", "0.375 in"),
+                angle("6 in", "6 in", "0.5 in")]  # fmt: skip
+    props = [s.numeric("inch") for s in sections]
+    Ix, Iy, Ixy = (np.array([[getattr(p, k)] for p in props]) for k in ("Ix", "Iy", "Ixy"))
+    forces = np.array([[[0.5, -2.0, 1.0]], [[0.0, 3.0, -4.0]], [[1.0, 0.0, 0.0]]])  # (3, 1, 3)
+    positions = np.array([[1.0, -2.0, 70.0]])
+    couples = np.array([[[2.0, -1.0, 0.0]], [[0.0, 0.0, 5.0]], [[-3.0, 4.0, 0.0]]])
+    stations = np.array([40.0])
+    kwargs = dict(length=96.0, E=E)
+    together = tip_deflection_numeric(
+        forces, positions, couples, stations, Ix=Ix, Iy=Iy, Ixy=Ixy, **kwargs
+    )
+    assert together.shape == (4, 3, 2)
+    for i, p in enumerate(props):
+        for j in range(3):
+            one = tip_deflection_numeric(
+                forces[j], positions, couples[j], stations, Ix=p.Ix, Iy=p.Iy, Ixy=p.Ixy, **kwargs
+            )
+            np.testing.assert_allclose(together[i, j], one, rtol=1e-12, atol=1e-15)
+
+
+def test_a_sheet_passes_its_own_load_symbols_and_they_stay_live() -> None:
+    """write_tip_deflection_of: no copies of the loads, so set_input moves the tip."""
+    sheet = Sheet("own loads")
+    with sheet:
+        F = sheet.input("F_1", "-2 kip", "Load along y")
+        z = sheet.input("z_1", "70 in", "Position", dimension="length")
+        C = sheet.input("C_2", "12 kip*in", "Couple about y")
+        z2 = sheet.input("z_2", "40 in", "Position", dimension="length")
+        check = write_tip_deflection_of(
+            sheet, W, [LoadTerms("P", z, F_y=F), LoadTerms("C", z2, C_y=C)], length="96 in"
+        )
+    names = {part.name for part in sheet.inputs}
+    assert not any(name.endswith(("_d1", "_d2")) for name in names)
+
+    def expected(force: str) -> float:
+        loads = [
+            point_load("P", components=("0 kip", force, "0 kip"), z="70 in"),
+            applied_moment("C", z="40 in", My="12 kip*in"),
+        ]
+        return tip_deflection(W, loads, length="96 in").total.m / (96 / 180)
+
+    assert check.utilization == pytest.approx(expected("-2 kip"), rel=1e-12)
+    sheet.set_input("F_1", "-5 kip")
+    assert check.utilization == pytest.approx(expected("-5 kip"), rel=1e-12)
+
+
+def test_sheet_symbols_are_required_by_write_tip_deflection_of() -> None:
+    with pytest.raises(DefinitionError, match="a of P must be a symbol of the sheet"):
+        write_tip_deflection_of(Sheet("x"), W, [LoadTerms("P", 10.0, F_y=1.0)], length="96 in")
+
+
+@pytest.mark.parametrize("section", [W, angle("4 in", "3 in", "0.375 in")], ids=["W", "angle"])
+def test_the_sheet_cites_published_sources_only(section) -> None:
+    """A sheet never says "from memory" or "common practice" (project rule)."""
+    loads = [
+        point_load("P", components=("0.5 kip", "-2 kip", "1 kip"), z="96 in", ey="-4 in"),
+        applied_moment("C", z="40 in", My="10 kip*in"),
+    ]
+    sheet = Sheet("deflection")
+    write_tip_deflection(sheet, section, loads, length="96 in")
+    words = render_html(sheet).lower()
+    assert "table 3-23" in words
+    assert "memory" not in words and "common practice" not in words
