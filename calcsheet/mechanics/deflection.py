@@ -29,11 +29,11 @@ v = (Φ_v·I_y − Φ_u·I_xy)/(E·D) and u = (Φ_u·I_x − Φ_v·I_xy)/(E·D);
 they are v = Φ_v/(E·I_x) and u = Φ_u/(E·I_y).
 
 The procedure, :func:`tip_deflection_procedure`, is written once against a writer
-(:mod:`calcsheet.standards.procedure`): :func:`write_tip_deflection` and
+(:mod:`calcsheet.engine.procedure`): :func:`write_tip_deflection` and
 :func:`write_tip_deflection_of` print it on a sheet, :func:`tip_deflection_numeric`
-and :func:`tip_deflection` evaluate it on numpy arrays. The writers belong to the
-checks stage; this module imports them inside the functions that run the procedure,
-so importing :mod:`calcsheet.mechanics` never loads the engine.
+and :func:`tip_deflection` evaluate it on numpy arrays. The writers live in the
+engine; this module imports them inside the functions that run the procedure, so
+importing :mod:`calcsheet.mechanics` stays light (no sympy printers).
 """
 
 from __future__ import annotations
@@ -57,8 +57,8 @@ from calcsheet.units import Quantity, parse_quantity
 
 if TYPE_CHECKING:  # the sheet is passed in; mechanics does not import the engine
     from calcsheet.engine import Check, Sheet
+    from calcsheet.engine.procedure import SheetWriter, Writer
     from calcsheet.sections import Section
-    from calcsheet.standards.procedure import SheetWriter, Writer
 
 # A value in the procedure: a sheet symbol (or expression) or a float / numpy array.
 Value = Any
@@ -183,7 +183,7 @@ def tip_deflection_procedure(
             ))  # fmt: skip
         if len(planes) == 2:
             delta = w.step(
-                "delta_tip", _root(planes[1] ** 2 + planes[0] ** 2), "Resultant tip deflection"
+                "delta_tip", w.root(planes[1] ** 2 + planes[0] ** 2), "Resultant tip deflection"
             )
         else:
             delta = w.step("delta_tip", w.absolute(planes[0]), "Tip deflection")
@@ -204,7 +204,7 @@ def tip_deflection_procedure(
             u_parts.append(-phi_v * I_xy)
         v = w.step("v_tip", _total(v_parts) / (E * D), "Tip deflection along y", reference=point)
         u = w.step("u_tip", _total(u_parts) / (E * D), "Tip deflection along x", reference=point)
-        delta = w.step("delta_tip", _root(u**2 + v**2), "Resultant tip deflection")
+        delta = w.step("delta_tip", w.root(u**2 + v**2), "Resultant tip deflection")
     if n_lim is None:
         return None
     limit = w.step("delta_lim", L / n_lim, "Deflection limit", reference=LIMIT_SOURCE)
@@ -214,17 +214,6 @@ def tip_deflection_procedure(
 def _total(terms: Sequence[Value]) -> Value:
     """The sum of the terms in the order written (a sheet prints them so)."""
     return functools.reduce(operator.add, terms)
-
-
-def _root(value: Value) -> Value:
-    """Square root of a sheet expression (printed as √) or of an array.
-
-    The writers have no square root of their own; a sheet's values are sympy
-    expressions and an array writer's are floats or arrays, so the type decides.
-    """
-    if isinstance(value, sp.Basic):
-        return sp.sqrt(value)
-    return np.sqrt(value)
 
 
 def is_symmetric(Ix: ArrayLike, Iy: ArrayLike, Ixy: ArrayLike) -> bool:
@@ -269,7 +258,7 @@ def tip_deflection_arrays(
     zero everywhere use the symmetric forms; otherwise the general forms (equal for
     I_xy = 0).
     """
-    from calcsheet.standards.procedure import ArrayWriter  # checks stage: see module doc
+    from calcsheet.engine.procedure import ArrayWriter  # imported when run: see module doc
 
     w = ArrayWriter()
     product = None if is_symmetric(Ix, Iy, Ixy) else np.asarray(Ixy, dtype=float)
@@ -461,7 +450,7 @@ def _write_on_sheet(
     write_loads: Callable[[SheetWriter], list[LoadTerms]],
     note: str = "",
 ) -> Check | None:
-    from calcsheet.standards.procedure import SheetWriter  # checks stage: see module doc
+    from calcsheet.engine.procedure import SheetWriter  # imported when run: see module doc
 
     ratio = float(n)
     if not (math.isfinite(ratio) and ratio > 0):

@@ -27,6 +27,7 @@ import pint
 import sympy as sp
 
 from calcsheet.engine import Check, Sheet, as_written
+from calcsheet.engine.procedure import SheetWriter, Writer
 from calcsheet.errors import DefinitionError, InputError
 from calcsheet.sections import Section
 from calcsheet.standards.aisc360 import combined, shear
@@ -50,7 +51,6 @@ from calcsheet.standards.aisc360.writing import (
     SPECIFICATION,
     write_section_values,
 )
-from calcsheet.standards.procedure import SheetWriter, Writer
 
 SPECIFICATION_TITLE = "ANSI/AISC 360-22, Specification for Structural Steel Buildings (AISC, 2022)"
 _WRITERS: dict[str, Callable[[Writer], Strengths]] = {

@@ -10,6 +10,7 @@ says so. E4 flexural-torsional buckling and E5 are not covered.
 
 from __future__ import annotations
 
+from calcsheet.engine.procedure import Candidate, Writer
 from calcsheet.standards.aisc360 import classification as b4
 from calcsheet.standards.aisc360 import compression, flexure, shear
 from calcsheet.standards.aisc360.factors import FLEXURE, SHEAR
@@ -22,7 +23,6 @@ from calcsheet.standards.aisc360.member_common import (
     write_tension,
 )
 from calcsheet.standards.aisc360.writing import SPECIFICATION, write_available
-from calcsheet.standards.procedure import Candidate, Writer
 
 LIMITATIONS = (
     "Limitations for single angles: flexural buckling is checked about the minor principal "

@@ -4,6 +4,7 @@ from __future__ import annotations
 
 from dataclasses import dataclass, field
 
+from calcsheet.engine.procedure import Candidate, Flag, Value, Writer
 from calcsheet.standards.aisc360 import compression, tension
 from calcsheet.standards.aisc360.classification import (
     ElementLimits,
@@ -12,7 +13,6 @@ from calcsheet.standards.aisc360.classification import (
 )
 from calcsheet.standards.aisc360.factors import COMPRESSION, TENSILE_YIELDING
 from calcsheet.standards.aisc360.writing import write_available
-from calcsheet.standards.procedure import Candidate, Flag, Value, Writer
 
 
 @dataclass

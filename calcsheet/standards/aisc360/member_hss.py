@@ -2,6 +2,7 @@
 
 from __future__ import annotations
 
+from calcsheet.engine.procedure import Candidate, Writer
 from calcsheet.standards.aisc360 import classification as b4
 from calcsheet.standards.aisc360 import compression, flexure, shear
 from calcsheet.standards.aisc360.factors import FLEXURE, SHEAR
@@ -16,7 +17,6 @@ from calcsheet.standards.aisc360.member_common import (
     write_tension,
 )
 from calcsheet.standards.aisc360.writing import SPECIFICATION, write_available
-from calcsheet.standards.procedure import Candidate, Writer
 
 
 def write_rectangular_hss(w: Writer) -> Strengths:

@@ -2,7 +2,7 @@
 
 Compression E3 (and E4-2 torsional buckling, E7 when an element is slender),
 flexure F2/F3 about x and F6 about y, shear G2.1 in the web and G6 in the flanges.
-Written once against a writer (:mod:`calcsheet.standards.procedure`): printed on a
+Written once against a writer (:mod:`calcsheet.engine.procedure`): printed on a
 sheet or evaluated on arrays.
 """
 
@@ -10,6 +10,7 @@ from __future__ import annotations
 
 import sympy as sp
 
+from calcsheet.engine.procedure import Candidate, Writer
 from calcsheet.standards.aisc360 import classification as b4
 from calcsheet.standards.aisc360 import compression, flexure, shear
 from calcsheet.standards.aisc360.factors import FLEXURE, SHEAR, SHEAR_ROLLED_I_WEB
@@ -22,7 +23,6 @@ from calcsheet.standards.aisc360.member_common import (
     write_tension,
 )
 from calcsheet.standards.aisc360.writing import SPECIFICATION, write_available
-from calcsheet.standards.procedure import Candidate, Writer
 
 
 def write_i_shape(w: Writer) -> Strengths:

@@ -1,7 +1,7 @@
 """The AISC 360-22 member checks on arrays: many sections by many load combinations at once.
 
 The procedure is the sheet's own, :func:`~calcsheet.standards.aisc360.member.aisc_member_procedure`,
-run by an :class:`~calcsheet.standards.procedure.ArrayWriter`: every clause is
+run by an :class:`~calcsheet.engine.procedure.ArrayWriter`: every clause is
 evaluated with :meth:`Clause.numeric` in SI base units (m, N, Pa) and every
 decision the sheet settles from its values (classification, which equations
 apply) is taken per element with ``numpy.where``. Section values have shape
@@ -19,13 +19,13 @@ from dataclasses import dataclass
 import numpy as np
 import pint
 
+from calcsheet.engine.procedure import ArrayWriter
 from calcsheet.errors import InputError
 from calcsheet.standards.aisc360 import classification as b4
 from calcsheet.standards.aisc360.factors import design_method
 from calcsheet.standards.aisc360.inputs import A992, Steel, parse_member_inputs
 from calcsheet.standards.aisc360.second_order import K_FIXED_FREE
 from calcsheet.standards.aisc360.section_data import SectionTable
-from calcsheet.standards.procedure import ArrayWriter
 
 Arrays = Mapping[str, np.ndarray]
 

@@ -1,8 +1,8 @@
 """Shared writing for the AISC 360-22 member procedure: section values, φ·Rn or Rn/Ω.
 
-The procedure runs on either writer of :mod:`calcsheet.standards.procedure`: a
-:class:`~calcsheet.standards.procedure.SheetWriter` (cited steps on a sheet) or an
-:class:`~calcsheet.standards.procedure.ArrayWriter` (numpy arrays for searches).
+The procedure runs on either writer of :mod:`calcsheet.engine.procedure`: a
+:class:`~calcsheet.engine.procedure.SheetWriter` (cited steps on a sheet) or an
+:class:`~calcsheet.engine.procedure.ArrayWriter` (numpy arrays for searches).
 """
 
 from __future__ import annotations
@@ -11,9 +11,9 @@ import dataclasses
 from collections.abc import Mapping
 from typing import Any
 
+from calcsheet.engine.procedure import ArrayWriter, SheetWriter, Value, Writer
 from calcsheet.standards.aisc360.factors import LimitStateFactors, available_strength
 from calcsheet.standards.aisc360.section_data import SectionValue
-from calcsheet.standards.procedure import ArrayWriter, SheetWriter, Value, Writer
 
 SPECIFICATION = "set by AISC 360-22"
 SECTION_FIXED = "a property of the section that decided its classification; build the sheet again"

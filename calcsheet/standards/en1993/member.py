@@ -4,7 +4,7 @@
 the cross-section resistances of 6.2 and the flexural buckling resistances of
 6.3.1, and adds one check per verification under the keys of
 :data:`EN_CHECK_TITLES`. It is written against a writer
-(:mod:`calcsheet.standards.procedure`): :func:`write_en1993_checks` prints it on
+(:mod:`calcsheet.engine.procedure`): :func:`write_en1993_checks` prints it on
 a sheet, :func:`~calcsheet.standards.en1993.numeric.en1993_checks_numeric`
 evaluates it on arrays of load combinations (and sections). Every decision that
 depends on the demands (the class of a web under N and M, the interaction of
@@ -29,7 +29,6 @@ checks by magnitude, so their signs do not matter here.
 
 from __future__ import annotations
 
-import functools
 import math
 from collections.abc import Mapping, Sequence
 from dataclasses import dataclass
@@ -40,6 +39,7 @@ import pint
 import sympy as sp
 
 from calcsheet.engine import Check, Sheet, as_written
+from calcsheet.engine.procedure import ArrayWriter, SheetWriter, Value, Writer
 from calcsheet.errors import InputError
 from calcsheet.sections import Section
 from calcsheet.standards.clause import Clause
@@ -54,7 +54,6 @@ from calcsheet.standards.en1993.factors import (
     as_partial_factors,
     as_steel,
 )
-from calcsheet.standards.procedure import ArrayWriter, SheetWriter, Value, Writer
 from calcsheet.units import Quantity, parse_quantity, ureg
 
 I_FAMILIES = frozenset({"W", "M", "S", "HP", "I-shape"})
@@ -488,31 +487,6 @@ def _formula(w: Writer, clause: Clause, *args: Value) -> Value:
     return clause(*args) if w.prints else clause.numeric(*args)
 
 
-def _any(w: Writer, *conditions: Any) -> Any:
-    """Conditions of a branch joined by "or", kept live on a sheet (not settled now)."""
-    if w.prints:
-        return sp.Or(*conditions)
-    return functools.reduce(np.logical_or, (np.asarray(c, dtype=bool) for c in conditions))
-
-
-def _largest(
-    w: Writer,
-    name: str,
-    candidates: Sequence[tuple[str, Value]],
-    description: str,
-    *,
-    reference: str = "",
-) -> Value:
-    """The largest of labelled candidates (a governing step on a sheet)."""
-    if len(candidates) == 1:
-        return w.step(name, candidates[0][1], description, reference=reference)
-    if isinstance(w, SheetWriter):
-        symbol = w.sheet.governing(name, list(candidates), description, reference=reference)
-        return w.given(name, symbol)
-    arrays = np.broadcast_arrays(*(np.asarray(value, dtype=float) for _, value in candidates))
-    return w.step(name, np.maximum.reduce(arrays))
-
-
 class _Procedure:
     """The procedure's state while it is written: the writer, the member, the demands."""
 
@@ -644,8 +618,8 @@ class _Procedure:
             if not needed[key]:
                 continue
             # One candidate: a copy step names the class where the checks use it.
-            _largest(
-                w, f"class_{key}", candidates, f"Section class, {what[key]}",
+            w.largest(
+                f"class_{key}", candidates, f"Section class, {what[key]}",
                 reference="EN 1993-1-1 5.5.2(6)" if len(candidates) > 1 else "",
             )  # fmt: skip
         if need_N and w.prints and float(w.value_of(w["class_N"]).m) > 3:
@@ -855,8 +829,8 @@ class _Procedure:
                 w.clause(
                     res.shear_reduction, f"rho_{axis}", self.demands[key], w[f"V_pl_{axis}_Rd"]
                 )
-            _largest(
-                w, "rho", [(f"V_{axis}", w[f"rho_{axis}"]) for axis, _ in shears],
+            w.largest(
+                "rho", [(f"V_{axis}", w[f"rho_{axis}"]) for axis, _ in shears],
                 "Larger reduction factor",
             )  # fmt: skip
             strength = w.clause(res.shear_reduced_strength, "f_y_V", w["rho"], w["f_y"], unit="MPa")
@@ -904,8 +878,8 @@ class _Procedure:
             return
         n = w.clause(res.axial_ratio, "n", N_Ed, N_Rd)
         if len(axes) == 2:
-            governing = _largest(
-                w, "class_NM", [("y-y", w["class_y"]), ("z-z", w["class_z"])],
+            governing = w.largest(
+                "class_NM", [("y-y", w["class_y"]), ("z-z", w["class_z"])],
                 "Class under biaxial bending with N (the worse of the two)",
             )  # fmt: skip
         else:
@@ -994,7 +968,7 @@ class _Procedure:
             # Eq. (6.47) holds for class 1-3; a class 4 section is accepted only while the
             # member is in tension (then nothing buckles). Otherwise no branch applies: the
             # sheet stops with an error naming this step, the arrays give NaN (out of scope).
-            applies = _any(w, w["class_N"] <= 3, N_c / w["N_pl_Rd"] <= 0)
+            applies = w.any_of(w["class_N"] <= 3, N_c / w["N_pl_Rd"] <= 0)
             resistance = _formula(w, buck.buckling_resistance, chi, w["A"], w["f_y"], w["gamma_M1"])
             N_b = w.branch(
                 f"N_b_{axis}_Rd",

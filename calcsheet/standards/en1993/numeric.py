@@ -2,7 +2,7 @@
 
 The procedure is the sheet's own,
 :func:`~calcsheet.standards.en1993.member.en1993_member_procedure`, run by an
-:class:`~calcsheet.standards.procedure.ArrayWriter`: every clause is evaluated
+:class:`~calcsheet.engine.procedure.ArrayWriter`: every clause is evaluated
 with :meth:`Clause.numeric` in SI base units (m, N, Pa) and every decision that
 depends on the values (classes, the interaction of 6.2.9, the shear reduction of
 6.2.8, tension or compression) is taken per element. Demands have shape ``(m,)``;

@@ -18,30 +18,40 @@ combinations, stations and catalog sections cannot drift apart. The rules for
 procedure authors:
 
 * arithmetic on symbols (``+ - * / **``, comparisons in branch conditions) works in
-  both writers; functions go through the writer (:meth:`~Writer.absolute`,
-  :meth:`~Writer.larger`, :meth:`~Writer.branch`);
-* a decision is ``w.holds(a, op, b)`` combined with ``w.either``/``w.both``, then
-  :meth:`~Writer.choose` or a conditional candidate of :meth:`~Writer.smallest`;
+  both writers; functions go through the writer (``absolute``, ``larger``, ``root``,
+  ``branch``; ``any_of`` joins branch conditions);
+* a decision the sheet settles when it is built is ``w.holds(a, op, b)`` combined
+  with ``w.either``/``w.both``, then ``w.choose`` or a conditional candidate of
+  ``w.smallest``; ``w.largest`` and ``w.smallest`` write governing steps;
 * text that quotes values is written only when ``w.prints``.
+
+The writers live with the engine because procedures of every stage use them (the
+deflection of the analysis, the clauses of the standards); they know a clause only
+by its ``write`` and ``numeric`` methods.
 """
 
 from __future__ import annotations
 
+import functools
 import math
 import operator
 from collections.abc import Callable, Mapping, Sequence
 from dataclasses import dataclass, field
-from typing import Any
+from typing import TYPE_CHECKING, Any
 
 import numpy as np
 import pint
 import sympy as sp
 
-from calcsheet.engine import Check, Input, Sheet
-from calcsheet.engine.functions import Abs, Max, Piecewise
+from calcsheet.engine.functions import Abs, Max, Piecewise, sqrt
+from calcsheet.engine.parts import Check, Input
+from calcsheet.engine.sheet import Sheet
 from calcsheet.errors import DefinitionError
-from calcsheet.standards.clause import Clause
 from calcsheet.units import Quantity, parse_quantity
+
+if TYPE_CHECKING:
+    # A clause of a standard: ``write`` prints it on a sheet, ``numeric`` evaluates it.
+    from calcsheet.standards.clause import Clause
 
 # A value in a procedure: a sheet symbol (or expression) or a numpy array in SI units.
 Value = Any
@@ -152,6 +162,14 @@ class SheetWriter:
     def larger(self, a: Value, b: Value) -> sp.Basic:
         return Max(a, b)
 
+    def root(self, value: Value) -> sp.Basic:
+        return sqrt(value)
+
+    @staticmethod
+    def any_of(*conditions: Any) -> Any:
+        """Branch conditions joined by "or", kept in the step (live, not settled now)."""
+        return sp.Or(*conditions)
+
     # --- decisions -----------------------------------------------------------------------
     def value_of(self, value: Value) -> pint.Quantity | float:
         """The current value of a symbol (a plain number stays as it is)."""
@@ -198,6 +216,24 @@ class SheetWriter:
         if len(written) == 1:
             return written[0][1]
         symbol = self.sheet.governing(name, written, description, largest=False, unit=unit)
+        self.symbols[name] = symbol
+        return symbol
+
+    def largest(
+        self,
+        name: str,
+        candidates: Sequence[tuple[str, Value]],
+        description: str,
+        *,
+        unit: str | None = None,
+        reference: str = "",
+    ) -> Value:
+        """The largest of labelled values, as a governing step (one: a step of it)."""
+        if len(candidates) == 1:
+            return self.step(name, candidates[0][1], description, unit=unit, reference=reference)
+        symbol = self.sheet.governing(
+            name, list(candidates), description, unit=unit, reference=reference
+        )
         self.symbols[name] = symbol
         return symbol
 
@@ -287,6 +323,14 @@ class ArrayWriter:
         return np.maximum(a, b)
 
     @staticmethod
+    def root(value: Any) -> Any:
+        return np.sqrt(value)
+
+    @staticmethod
+    def any_of(*conditions: Any) -> Any:
+        return functools.reduce(np.logical_or, (np.asarray(c, dtype=bool) for c in conditions))
+
+    @staticmethod
     def value_of(value: Any) -> Any:
         return value
 
@@ -297,11 +341,12 @@ class ArrayWriter:
 
     @staticmethod
     def either(*flags: Flag) -> np.ndarray:
-        return np.logical_or.reduce([np.asarray(flag, dtype=bool) for flag in flags])
+        # reduce pairwise: flags of sections (n, 1) and of load cases (m,) broadcast
+        return functools.reduce(np.logical_or, (np.asarray(flag, dtype=bool) for flag in flags))
 
     @staticmethod
     def both(*flags: Flag) -> np.ndarray:
-        return np.logical_and.reduce([np.asarray(flag, dtype=bool) for flag in flags])
+        return functools.reduce(np.logical_and, (np.asarray(flag, dtype=bool) for flag in flags))
 
     @staticmethod
     def negate(flag: Flag) -> np.ndarray:
@@ -330,6 +375,20 @@ class ArrayWriter:
                 continue
             values.append(np.where(applies, candidate.write(), np.inf))
         result = np.minimum.reduce(np.broadcast_arrays(*values)) if values else np.inf
+        self.symbols[name] = result
+        return result
+
+    def largest(
+        self,
+        name: str,
+        candidates: Sequence[tuple[str, Any]],
+        description: str = "",
+        *,
+        unit: Any = None,
+        reference: str = "",
+    ) -> Any:
+        values = [np.asarray(_number(value), dtype=float) for _, value in candidates]
+        result = np.maximum.reduce(np.broadcast_arrays(*values))
         self.symbols[name] = result
         return result
 
