@@ -94,3 +94,45 @@ def test_a_check_can_peak_under_another_combination_than_the_governing_one() -> 
     assert moved, "no check peaks under another combination: the scenario lost its point"
     for check in moved:
         assert check.worst_utilization > check.utilization
+
+
+def _en_loads(angle_deg: float) -> list[PointLoad]:
+    return [
+        point_load("sign", magnitude="6 kN", angle="90 deg", z="2.1 m", ey="-0.12 m"),
+        point_load("hoist", magnitude="15 kN", angle=f"{angle_deg} deg", z="1.5 m", ex="0.05 m"),
+        point_load("wind", components=("3 kN", "0 kN", "0 kN"), z="2.1 m"),
+    ]
+
+
+@pytest.mark.parametrize("angle_deg", [10.0, 160.0, 300.0])
+def test_each_en_check_reports_its_worst_combination(angle_deg: float) -> None:
+    """The same brute force for EN 1993-1-1 under EN 1990 Eq. (6.10), favourable variable
+    actions omitted (Table A1.2(B)): a 2.1 m SHS 120x120x6 outrigger (our own, invented)."""
+    from calcsheet.sections import rectangular_hss
+
+    section = rectangular_hss("120 mm", "120 mm", "6 mm")
+    types = ["G", "Q", "W"]
+    length = Quantity(2.1, "m")
+    basis = DesignBasis("EN 1993-1-1", grade="S355")
+    loads = _en_loads(angle_deg)
+    sheet = member_sheet(
+        section, loads, length=length, Fy="355 MPa", design=basis, load_types=types, units="SI"
+    )
+    plan = plan_combinations(
+        section, loads, types, length, Quantity(0, "m"), basis, Quantity(355, "MPa")
+    )
+    given = DesignBasis("EN 1993-1-1", grade="S355", combinations="none")
+    brute: dict[str, float] = {}
+    for combo in plan.combos:
+        factors = [combo.factor(kind) for kind in types]
+        acting = [kind for kind, factor in zip(types, factors, strict=True) if factor != 0.0]
+        one = member_sheet(
+            section, _scaled(loads, factors), length=length, Fy="355 MPa", design=given,
+            load_types=acting, units="SI",
+        )  # fmt: skip
+        for check in one.checks:
+            brute[check.description] = max(brute.get(check.description, 0.0), check.utilization)
+    reported = {check.description: check for check in sheet.checks}
+    assert set(brute) <= set(reported)
+    for description, worst in brute.items():
+        assert reported[description].worst_utilization == pytest.approx(worst, rel=1e-9, abs=1e-12)
