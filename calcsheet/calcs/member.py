@@ -205,8 +205,9 @@ def _write_basis(sheet: Sheet, section: Section, basis: DesignBasis) -> None:
     if basis.combination_standard:
         sheet.add_basis(
             "Load combinations",
-            f"{basis.combination_standard}: every basic combination of the load types present "
-            "is evaluated; the governing one is written out in full.",
+            f"{basis.combination_standard}: every combination of the load types present "
+            "(each variable load acting and not acting) is evaluated by the procedure written "
+            "out for the governing one; each check is reported at its own worst combination.",
         )
     sheet.add_basis(
         "Assumptions",
