@@ -63,10 +63,9 @@ def write_combinations(
     sheet: Sheet,
     plan: CombinationPlan,
     types: Sequence[str],
-    free_suffixes: Sequence[str],
     preset: dict[str, str],
 ) -> dict[str, sp.Symbol]:
-    """The envelope table and the governing combination's load factors (by load suffix)."""
+    """The envelope table and the governing combination's load factors (by load type)."""
     sheet.heading(f"Load combinations ({plan.standard})")
     sheet.text(
         combination_rules_text(plan.standard, plan.types, **plan.basis.combination_options())
@@ -110,7 +109,7 @@ def write_combinations(
             reference=chosen.reference,
             fixed=CHOSEN_AT_BUILD,
         )
-    return {suffix: factor_symbols[types[int(suffix) - 1]] for suffix in free_suffixes}
+    return factor_symbols
 
 
 def _shown_utilization(value: float) -> str:

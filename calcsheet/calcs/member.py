@@ -141,7 +141,7 @@ def member_sheet(
     generic = not standard.specification
     with sheet:
         _write_conventions(sheet, generic)
-        symbols, free_suffixes = _write_inputs(
+        symbols, written = _write_inputs(
             sheet,
             loads,
             free,
@@ -157,8 +157,8 @@ def member_sheet(
             "The member with its support, the station and each load at its angle and point "
             "of application (elevation in the y-z plane; end view in the x-y plane).",
         )
-        factors = write_combinations(sheet, plan, types, free_suffixes, preset) if plan else {}
-        forces = _write_internal_forces(sheet, free_suffixes, symbols, preset, factors)
+        factors = write_combinations(sheet, plan, types, preset) if plan else {}
+        forces = _write_internal_forces(sheet, written, preset, factors)
         props = _write_section_properties(sheet, section, model)
         sheet.figure(
             stress_drawing(section, stress),
@@ -183,7 +183,7 @@ def member_sheet(
             write_tip_deflection_of(
                 sheet,
                 section,
-                _deflection_loads(sheet, loads, symbols),
+                _deflection_loads(sheet, written),
                 length=length_q,
                 E=standard.modulus,
                 n=basis.deflection_ratio,
@@ -233,6 +233,28 @@ def _write_conventions(sheet: Sheet, generic: bool) -> None:
         sheet.text(NOT_A_SPEC_CHECK)
 
 
+@dataclass
+class WrittenLoad:
+    """A load as the member sheet wrote it: what it is, and its symbols on the sheet.
+
+    ``force`` holds the components the load has (by axis), ``couple`` the components
+    of a concentrated couple; ``a`` is the lever arm beyond the station (loads the cut
+    carries only).
+    """
+
+    number: int
+    name: str
+    type: str
+    beyond: bool
+    z: sp.Symbol
+    force: dict[str, sp.Symbol] = field(default_factory=dict)
+    couple: dict[str, sp.Symbol] = field(default_factory=dict)
+    e_x: sp.Symbol | None = None
+    e_y: sp.Symbol | None = None
+    a: sp.Symbol | None = None
+    magnitude: pint.Quantity | None = None
+
+
 def _write_inputs(
     sheet: Sheet,
     loads: Sequence[PointLoad | AppliedMoment],
@@ -243,10 +265,9 @@ def _write_inputs(
     omega: pint.Quantity | None,
     length_unit: str,
     types: Sequence[str],
-) -> tuple[dict[str, sp.Symbol], list[str]]:
+) -> tuple[dict[str, sp.Symbol], list[WrittenLoad]]:
     sheet.heading("Member, material and loads")
     symbols: dict[str, sp.Symbol] = {}
-    free_suffixes: list[str] = []
     symbols["L"] = sheet.input(
         "L", length, "Member length, support to free end", unit=length_unit, fixed=LAYOUT
     )
@@ -261,20 +282,25 @@ def _write_inputs(
             "Omega", omega, "Factor of safety (generic)", dimension="dimensionless"
         )
     free_ids = {id(load) for load in free}
+    written: list[WrittenLoad] = []
     for number, load in enumerate(loads, start=1):
         beyond = id(load) in free_ids
+        kind = types[number - 1]
         if isinstance(load, PointLoad):
-            sheet.heading(f"Load {number}: {load.name} (type {types[number - 1]})", level=2)
-            _write_point_load(sheet, number, load, beyond, symbols, length_unit)
+            sheet.heading(f"Load {number}: {load.name} (type {kind})", level=2)
+            record = _write_point_load(sheet, number, load, beyond, length_unit, kind)
+            if beyond:
+                record.a = sheet.step(
+                    f"a_{number}",
+                    record.z - symbols["z_s"],
+                    "Lever arm beyond the station",
+                    unit=length_unit,
+                )
         else:
-            sheet.heading(
-                f"Load {number}: {load.name} (concentrated couple, type {types[number - 1]})",
-                level=2,
-            )
-            _write_couple(sheet, number, load, beyond, symbols, length_unit)
-        if beyond:
-            free_suffixes.append(str(number))
-    return symbols, free_suffixes
+            sheet.heading(f"Load {number}: {load.name} (concentrated couple, type {kind})", level=2)
+            record = _write_couple(sheet, number, load, beyond, length_unit, kind)
+        written.append(record)
+    return symbols, written
 
 
 def _write_point_load(
@@ -282,10 +308,11 @@ def _write_point_load(
     number: int,
     load: PointLoad,
     beyond: bool,
-    symbols: dict[str, sp.Symbol],
     length_unit: str,
-) -> None:
+    kind: str,
+) -> WrittenLoad:
     suffix = str(number)
+    force: dict[str, sp.Symbol] = {}
     if load.direction is not None:
         direction = load.direction
         sheet.text(
@@ -307,27 +334,24 @@ def _write_point_load(
                 expr = magnitude * sin(angle) if second_sign > 0 else -magnitude * sin(angle)
             else:  # no component along this axis: the statics below leave its terms out
                 continue
-            symbols[name] = sheet.step(name, expr, f"Component along {axis}")
+            force[axis] = sheet.step(name, expr, f"Component along {axis}")
     else:
         for axis in AXES:
             name = f"F_{axis}{suffix}"
-            symbols[name] = sheet.input(
+            force[axis] = sheet.input(
                 name, load.component(axis), f"Component of {load.name} along {axis}"
             )
-    _write_position(sheet, suffix, load.z, beyond, symbols, length_unit)
-    symbols[f"e_x{suffix}"] = sheet.input(
+    z = _write_position(sheet, suffix, load.z, beyond, length_unit)
+    e_x = sheet.input(
         f"e_x{suffix}", load.ex, "Offset of the point of application in x", unit=length_unit
     )
-    symbols[f"e_y{suffix}"] = sheet.input(
+    e_y = sheet.input(
         f"e_y{suffix}", load.ey, "Offset of the point of application in y", unit=length_unit
     )
-    if beyond:
-        symbols[f"a_{suffix}"] = sheet.step(
-            f"a_{suffix}",
-            symbols[f"z_{suffix}"] - symbols["z_s"],
-            "Lever arm beyond the station",
-            unit=length_unit,
-        )
+    return WrittenLoad(
+        number, load.name, kind, beyond, z, force=force, e_x=e_x, e_y=e_y,
+        magnitude=load.magnitude,
+    )  # fmt: skip
 
 
 def _write_couple(
@@ -335,26 +359,23 @@ def _write_couple(
     number: int,
     couple: AppliedMoment,
     beyond: bool,
-    symbols: dict[str, sp.Symbol],
     length_unit: str,
-) -> None:
+    kind: str,
+) -> WrittenLoad:
     suffix = str(number)
-    for axis, value in zip(AXES, (couple.Mx, couple.My, couple.Mz), strict=True):
-        name = f"C_{axis}{suffix}"
-        symbols[name] = sheet.input(name, value, f"Couple about {axis} (right-hand rule)")
-    _write_position(sheet, suffix, couple.z, beyond, symbols, length_unit)
+    components = {
+        axis: sheet.input(f"C_{axis}{suffix}", value, f"Couple about {axis} (right-hand rule)")
+        for axis, value in zip(AXES, (couple.Mx, couple.My, couple.Mz), strict=True)
+    }
+    z = _write_position(sheet, suffix, couple.z, beyond, length_unit)
+    return WrittenLoad(number, couple.name, kind, beyond, z, couple=components)
 
 
 def _write_position(
-    sheet: Sheet,
-    suffix: str,
-    z: pint.Quantity,
-    beyond: bool,
-    symbols: dict[str, sp.Symbol],
-    length_unit: str,
-) -> None:
+    sheet: Sheet, suffix: str, z: pint.Quantity, beyond: bool, length_unit: str
+) -> sp.Symbol:
     where = "beyond the station: included" if beyond else "between support and station: excluded"
-    symbols[f"z_{suffix}"] = sheet.input(
+    return sheet.input(
         f"z_{suffix}", z, f"Position along the member ({where})", unit=length_unit, fixed=LAYOUT
     )
 
@@ -373,35 +394,34 @@ _RESULTANT_TERMS: dict[str, tuple[tuple[int, str, str], ...]] = {
 
 def _write_internal_forces(
     sheet: Sheet,
-    free_suffixes: Sequence[str],
-    symbols: dict[str, sp.Symbol],
+    written: Sequence[WrittenLoad],
     preset: dict[str, str],
     factors: dict[str, sp.Symbol],
 ) -> dict[str, sp.Symbol]:
     sheet.heading("Internal forces at the station (statics of the free part)")
     terms: dict[str, list[sp.Expr]] = {name: [] for name in ("N", "V_x", "V_y", "T", "M_x", "M_y")}
-    for suffix in free_suffixes:
+    carried = [load for load in written if load.beyond]
+    for load in carried:
         # The load factor of the governing combination multiplies each of the load's
         # terms (1 when the loads are taken as given).
-        gamma = factors.get(suffix, 1)
-        if f"C_x{suffix}" in symbols:
-            terms["M_x"].append(gamma * symbols[f"C_x{suffix}"])
-            terms["M_y"].append(gamma * symbols[f"C_y{suffix}"])
-            terms["T"].append(gamma * symbols[f"C_z{suffix}"])
+        gamma = factors.get(load.type, 1)
+        if load.couple:
+            terms["M_x"].append(gamma * load.couple["x"])
+            terms["M_y"].append(gamma * load.couple["y"])
+            terms["T"].append(gamma * load.couple["z"])
             continue
-        fx, fy, fz = (symbols.get(f"F_{axis}{suffix}") for axis in AXES)
-        if gamma != 1:
-            fx, fy, fz = (None if f is None else gamma * f for f in (fx, fy, fz))
-        ex, ey, a = symbols[f"e_x{suffix}"], symbols[f"e_y{suffix}"], symbols[f"a_{suffix}"]
+        components = {
+            axis: symbol if gamma == 1 else gamma * symbol for axis, symbol in load.force.items()
+        }
+        levers = {"": 1, "e_x": load.e_x, "e_y": load.e_y, "a": load.a}
         for name, pairs in _RESULTANT_TERMS.items():
             for sign, arm, component in pairs:
-                force = {"x": fx, "y": fy, "z": fz}[component]
+                force = components.get(component)
                 if force is None:
                     continue  # the load has no component along this axis
-                lever = {"": 1, "e_x": ex, "e_y": ey, "a": a}[arm]
-                term = lever * force if arm else force
+                term = levers[arm] * force if arm else force
                 terms[name].append(term if sign > 0 else -term)
-    included = ", ".join(f"load {suffix}" for suffix in free_suffixes)
+    included = ", ".join(f"load {load.number}" for load in carried)
     sheet.text(f"Loads at or beyond the station, carried by the cut: {included}.")
     descriptions = {
         "N": ("Axial force N = ΣF_z (tension positive)", "force"),
@@ -741,9 +761,7 @@ def _write_governing(sheet: Sheet, points: list[PointSymbols], stress: str) -> d
     return governing
 
 
-def _deflection_loads(
-    sheet: Sheet, loads: Sequence[PointLoad | AppliedMoment], symbols: dict[str, sp.Symbol]
-) -> list[LoadTerms]:
+def _deflection_loads(sheet: Sheet, written: Sequence[WrittenLoad]) -> list[LoadTerms]:
     """The sheet's own symbols of every load (also those between support and station).
 
     The tip deflection sums over all loads with a = z_n. A component that is zero
@@ -751,18 +769,16 @@ def _deflection_loads(
     the term back when it is no longer zero.
     """
 
-    def own(name: str, scale: float = 0.0) -> sp.Symbol | None:
-        symbol = symbols.get(name)
+    def own(symbol: sp.Symbol | None, scale: float = 0.0) -> sp.Symbol | None:
         if symbol is None or abs(sheet.value(symbol).to_base_units().m) <= scale:
             return None
         return symbol
 
     terms = []
-    for number, load in enumerate(loads, start=1):
-        n = str(number)
-        if isinstance(load, AppliedMoment):
+    for load in written:
+        if load.couple:
             terms.append(
-                LoadTerms(load.name, symbols[f"z_{n}"], C_x=own(f"C_x{n}"), C_y=own(f"C_y{n}"))
+                LoadTerms(load.name, load.z, C_x=own(load.couple["x"]), C_y=own(load.couple["y"]))
             )
             continue
         # A component of an inclined force is zero to round-off (cos 90°) when the
@@ -771,12 +787,12 @@ def _deflection_loads(
         terms.append(
             LoadTerms(
                 load.name,
-                symbols[f"z_{n}"],
-                F_x=own(f"F_x{n}", scale),
-                F_y=own(f"F_y{n}", scale),
-                F_z=own(f"F_z{n}", scale),
-                e_x=own(f"e_x{n}"),
-                e_y=own(f"e_y{n}"),
+                load.z,
+                F_x=own(load.force.get("x"), scale),
+                F_y=own(load.force.get("y"), scale),
+                F_z=own(load.force.get("z"), scale),
+                e_x=own(load.e_x),
+                e_y=own(load.e_y),
             )
         )
     return terms
