@@ -25,7 +25,7 @@ from calcsheet.calcs.design_sheet import (
 from calcsheet.calcs.design_standards import NOT_A_SPEC_CHECK, CheckContext
 from calcsheet.calcs.member_figures import member_drawing, section_drawing, stress_drawing
 from calcsheet.calcs.member_rebuild import rebuild_on_change
-from calcsheet.calcs.points import section_terms
+from calcsheet.calcs.points import section_terms, write_point_inputs
 from calcsheet.calcs.round_section import write_round_point_stresses
 from calcsheet.engine import Sheet, TitleBlock
 from calcsheet.engine.functions import cos, sin
@@ -37,7 +37,6 @@ from calcsheet.mechanics.loads import AXES, AppliedMoment, PointLoad, parse_sign
 from calcsheet.mechanics.point_stresses import (
     HORIZONTAL_CUT,
     VERTICAL_CUT,
-    Cut,
     ForceTerms,
     PointRecord,
     PointTerms,
@@ -487,11 +486,7 @@ def _write_section_properties(
 
 
 def _write_point_data(sheet: Sheet, section: Section, model: StressModel) -> list[PointTerms]:
-    """Coordinates and cut data of every point as inputs shown in two tables.
-
-    The cuts are those of :meth:`StressModel.point_cuts`, the ones the numeric path
-    uses too.
-    """
+    """Coordinates and cut data of every point as inputs shown in two tables."""
     unit = section.length_unit
     unsymmetric = not model.symmetric
     sheet.heading("Stress points of the section")
@@ -505,34 +500,8 @@ def _write_point_data(sheet: Sheet, section: Section, model: StressModel) -> lis
         "within 1 %; on a tube, the points where the centroidal axes meet the walls. "
         "Coordinates and first moments are computed from the section outline."
     )
-    volume = f"{unit}**3"
     short = f"{ureg.Unit(unit):~P}"
-    data: list[PointTerms] = []
-    for index, (label, cuts) in enumerate(zip(model.labels, model.point_cuts(), strict=True)):
-        n = str(index + 1)
-        written: dict[str, Cut] = {}
-        for name, cut in cuts.items():
-            own_name, other_name, width_name = _CUT_NAMES[name]
-            Q_other = None
-            if cut.Q_other is not None:
-                Q_other = sheet.input(
-                    f"{other_name}_{n}", Quantity(cut.Q_other, volume), listed=False
-                )
-            written[name] = Cut(
-                sheet.input(f"{own_name}_{n}", Quantity(cut.Q_own, volume), listed=False),
-                Q_other,
-                sheet.input(f"{width_name}_{n}", Quantity(cut.width, unit), listed=False),
-            )
-        data.append(
-            PointTerms(
-                n,
-                label,
-                sheet.input(f"x_{n}", Quantity(model.x[index], unit), listed=False),
-                sheet.input(f"y_{n}", Quantity(model.y[index], unit), listed=False),
-                written,
-                junction=bool(model.junction[index]),
-            )
-        )
+    data = write_point_inputs(sheet, model)
     sheet.figure(
         section_drawing(
             section,
@@ -573,9 +542,6 @@ def _write_point_data(sheet: Sheet, section: Section, model: StressModel) -> lis
         ),
     )
     return data
-
-
-_CUT_NAMES = {HORIZONTAL_CUT: ("Q_xa", "Q_ya", "b"), VERTICAL_CUT: ("Q_yr", "Q_xr", "t")}
 
 
 def _write_point_stresses(

@@ -45,9 +45,6 @@ def write_round_point_stresses(
     props: dict[str, sp.Symbol | None],
 ) -> list[PointRecord]:
     """Steps for the two extreme fibres of a round section; returns their values."""
-    values = model.round
-    if values is None:
-        raise ValueError(f"{section.name} is not taken by its resultant moment")
     unit = model.length_unit
     sheet.heading("Stresses at the extreme fibres of the round section")
     sheet.text(ROUND_TEXT)
@@ -56,6 +53,20 @@ def write_round_point_stresses(
         f"Section {section.name} to scale (its extreme fibres lie on the diameter normal "
         "to the resultant moment).",
     )
+    return round_stress_procedure(
+        SheetWriter(sheet),
+        ForceTerms.of(forces),
+        section_terms(props, model.torsion.kind, unit),
+        write_round_inputs(sheet, model),
+    )
+
+
+def write_round_inputs(sheet: Sheet, model: StressModel) -> RoundTerms:
+    """R_o, Q_0 and b_0 of a round section as inputs (from its outline)."""
+    values = model.round
+    if values is None:
+        raise ValueError("the section is not taken by its resultant moment")
+    unit = model.length_unit
     R_o = sheet.input(
         "R_o", Quantity(values.R_o, unit), "Outside radius", reference="section outline"
     )
@@ -71,9 +82,4 @@ def write_round_point_stresses(
         "Width of material on a cut through the centroid",
         reference="section outline",
     )
-    return round_stress_procedure(
-        SheetWriter(sheet),
-        ForceTerms.of(forces),
-        section_terms(props, model.torsion.kind, unit),
-        RoundTerms(R_o, Q_0, b_0),
-    )
+    return RoundTerms(R_o, Q_0, b_0)
