@@ -164,7 +164,7 @@ def member_sheet(
             "Normal stress over the section at the station from N, M_x and M_y "
             "(tension positive), with the neutral axis.",
         )
-        if model.round is not None:
+        if model.resultant is not None:
             points = write_round_point_stresses(sheet, section, model, forces, props)
         else:
             points = _write_point_stresses(sheet, section, model, forces, props)

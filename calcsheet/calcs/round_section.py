@@ -63,7 +63,7 @@ def write_round_point_stresses(
 
 def write_round_inputs(sheet: Sheet, model: StressModel) -> RoundTerms:
     """R_o, Q_0 and b_0 of a round section as inputs (from its outline)."""
-    values = model.round
+    values = model.resultant
     if values is None:
         raise ValueError("the section is not taken by its resultant moment")
     unit = model.length_unit

@@ -149,7 +149,12 @@ class CutData:
 
 @dataclass(frozen=True, eq=False)
 class PointStresses:
-    """Stresses at every point for every case: arrays of shape (..., n_points)."""
+    """Stresses at every point for every case: arrays of shape (..., n_points).
+
+    The two extreme fibres of a round section taken by its resultant moment have no
+    cuts: ``tau_zy`` holds the transverse shear τ_V of the resultant shear (taken at
+    both fibres) and ``tau_zx`` is zero.
+    """
 
     labels: tuple[str, ...]
     sigma: Array
@@ -183,19 +188,10 @@ class PointStresses:
         return self.labels[int(index)]
 
 
-@dataclass(frozen=True)
-class RoundValues:
-    """A round section's outside radius R_o, and Q_0, b_0 of the cut through the centroid."""
-
-    R_o: float
-    Q_0: float
-    b_0: float
-
-
-def round_values(section: Section, length_unit: str) -> RoundValues:
-    """R_o, Q_0 and b_0 of a round section from its outline, in ``length_unit``."""
+def round_values(section: Section, length_unit: str) -> RoundTerms:
+    """R_o, Q_0 and b_0 of a round section from its outline, as floats in ``length_unit``."""
     numbers = section.numeric(length_unit)
-    return RoundValues(
+    return RoundTerms(
         R_o=max(float(np.abs(ring).max()) for ring in numbers.outline.rings),
         Q_0=float(numbers.Q_x([0.0])[0]),
         b_0=float(numbers.b([0.0])[0]),
@@ -209,7 +205,7 @@ class StressModel:
     :meth:`stresses` runs the point stress procedure
     (:func:`calcsheet.mechanics.point_stresses.point_stress_procedure`) on arrays; a
     member sheet runs the same procedure on its own symbols. A round section taken by
-    its resultant moment (``round`` given) has the two extreme fibres of
+    its resultant moment (``resultant`` given) has the two extreme fibres of
     :func:`~calcsheet.mechanics.point_stresses.round_stress_procedure` as its points;
     they turn with the moment, so their ``x`` and ``y`` are NaN and they have no cuts.
     """
@@ -226,7 +222,7 @@ class StressModel:
     cuts: CutData
     torsion: TorsionRule
     junction: Array  # (n,) bool: a re-entrant corner where two walls meet
-    round: RoundValues | None = None
+    resultant: RoundTerms | None = None
 
     @property
     def symmetric(self) -> bool:
@@ -306,8 +302,10 @@ class StressModel:
         section, point = self._arrays
         w = ArrayWriter()
         with np.errstate(divide="ignore", invalid="ignore"):
-            if self.round is not None:
-                fibres = round_stress_procedure(w, terms, section, RoundTerms(**vars(self.round)))
+            if self.resultant is not None:
+                fibres = round_stress_procedure(
+                    w, terms, section, RoundTerms(**vars(self.resultant))
+                )
                 records = _joined(fibres)
             else:
                 (record,) = point_stress_procedure(w, [point], terms, section)
@@ -625,7 +623,7 @@ def stress_model(
             cuts=CutData(no_cut, no_cut, no_cut, no_cut, no_cut, no_cut),
             torsion=torsion_rule(section, nowhere, nowhere, length_unit),
             junction=np.zeros(fibres, dtype=bool),
-            round=round_values(section, length_unit),
+            resultant=round_values(section, length_unit),
         )
     labels = list(numbers.point_labels)
     x, y = list(numbers.point_x), list(numbers.point_y)

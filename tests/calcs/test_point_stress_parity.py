@@ -189,7 +189,7 @@ def _procedure_sheet(section: Section, model: StressModel) -> Sheet:
             props["t_max"] = sheet.input("t_max", Quantity(rule.thickness, unit), "thickest wall")
         terms = section_terms(props, rule.kind, unit)
         w = SheetWriter(sheet)
-        if model.round is not None:
+        if model.resultant is not None:
             round_stress_procedure(
                 w, ForceTerms.of(forces), terms, write_round_inputs(sheet, model)
             )
@@ -214,7 +214,7 @@ def _sheet_terms(sheet: Sheet, model: StressModel, stress: str) -> dict[str, np.
         for step, field in TERMS.items()
     }
     points = range(1, len(model.labels) + 1)
-    if model.round is None:
+    if model.resultant is None:
         values["tau_zy"] = np.array([value(f"tau_zy_{n}") for n in points])
         values["tau_zx"] = np.array([value(f"tau_zx_{n}") for n in points])
         common = value("tau_T", np.nan)
