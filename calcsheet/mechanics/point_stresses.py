@@ -333,14 +333,17 @@ def round_stress_procedure(
     R_o, I = round_terms.R_o, section.I_x
     M_r = w.step("M_r", formulas.resultant(w, forces.M_x, forces.M_y), "Resultant bending moment")
     V_r = w.step("V_r", formulas.resultant(w, forces.V_x, forces.V_y), "Resultant transverse shear")
-    sigma_N = w.step("sigma_N", formulas.axial_stress(forces.N, section.A), "Axial term, N/A",
-                     unit=stress)  # fmt: skip
+    sigma_N = w.step(
+        "sigma_N", formulas.axial_stress(forces.N, section.A), "Axial term, N/A", unit=stress
+    )
+    # Bending about the diameter normal to M_r (a principal axis), at the fibre y = R_o.
     sigma_b = w.step(
         "sigma_b",
         formulas.bending_stress_x(M_r, 0, R_o, I, I, None, None),
         "Bending term at the extreme fibre",
         unit=stress,
     )
+    # V_r·Q_0/(I·b_0): the shear along the resultant on the cut through the centroid.
     tau_V = w.step(
         "tau_V",
         formulas.transverse_shear(V_r, 0, round_terms.Q_0, None, round_terms.b_0, I, I, None, None),
@@ -353,6 +356,7 @@ def round_stress_procedure(
         "Torsion at the outside radius, T·R_o/J",
         unit=stress,
     )
+    # One transverse term: |τ_V| + |τ_T| (τ_V is not negative).
     tau = w.step(
         "tau",
         formulas.shear_at_point(w, [tau_V], tau_T, False),
