@@ -12,7 +12,6 @@ stress (not a specification check).
 from __future__ import annotations
 
 from collections.abc import Sequence
-from dataclasses import dataclass, field
 
 import pint
 import sympy as sp
@@ -26,13 +25,23 @@ from calcsheet.calcs.design_sheet import (
 from calcsheet.calcs.design_standards import NOT_A_SPEC_CHECK, CheckContext
 from calcsheet.calcs.member_figures import member_drawing, section_drawing, stress_drawing
 from calcsheet.calcs.member_rebuild import rebuild_on_change
-from calcsheet.calcs.points import PointSymbols, shear_at_point, write_combined
+from calcsheet.calcs.points import section_terms, write_point_inputs
 from calcsheet.calcs.round_section import write_round_point_stresses
 from calcsheet.engine import Sheet, TitleBlock
-from calcsheet.engine.functions import cos, sin, sqrt
+from calcsheet.engine.functions import cos, sin
+from calcsheet.engine.procedure import SheetWriter
 from calcsheet.errors import InputError
 from calcsheet.mechanics.deflection import LoadTerms, write_tip_deflection_of
+from calcsheet.mechanics.formulas import product_determinant
 from calcsheet.mechanics.loads import AXES, AppliedMoment, PointLoad, parse_signed_axis
+from calcsheet.mechanics.point_stresses import (
+    HORIZONTAL_CUT,
+    VERTICAL_CUT,
+    ForceTerms,
+    PointRecord,
+    PointTerms,
+    point_stress_procedure,
+)
 from calcsheet.mechanics.statics import loads_beyond, validate_loads
 from calcsheet.mechanics.stresses import StressModel, stress_model
 from calcsheet.mechanics.torsion import WARPING_NOTE
@@ -54,21 +63,11 @@ SIGN_TEXT = (
     "Positive M_x puts the top (+y) fibres in tension; positive M_y puts the left (−x) "
     "fibres in tension. Normal stress is positive in tension."
 )
-SHEAR_TEXT = (
-    "Shear: τ_zy is the average over the horizontal cut through the point and τ_zx the "
-    "average over the vertical cut (τ = V·Q/(I·b) in its general unsymmetric form, Q of "
-    "the part cut off). On an open section a cut is the stretch of material through the "
-    "point and Q is of the part that stretch cuts off; a cut that meets no material at the "
-    "point (a free face or toe) carries no shear. At a re-entrant corner the two cuts "
-    "cross two different walls and the larger of the two is taken. The torsional shear "
-    "τ_T is added to the transverse shear by magnitude because its direction along the "
-    "wall is not tracked (conservative)."
-)
 LAYOUT = (
     "the member length, the station and the load positions decide which loads the cut "
     "carries; build the member sheet again with the new value"
 )
-# Relative size below which a first moment is round-off of an exact zero.
+# Relative size below which a load component is round-off of an exact zero.
 _ZERO_Q = 1e-9
 
 
@@ -165,10 +164,10 @@ def member_sheet(
             "Normal stress over the section at the station from N, M_x and M_y "
             "(tension positive), with the neutral axis.",
         )
-        if model.torsion.kind == "round":
-            points = write_round_point_stresses(sheet, section, forces, props, stress)
+        if model.resultant is not None:
+            points = write_round_point_stresses(sheet, section, model, forces, props)
         else:
-            points = _write_point_stresses(sheet, section, model, forces, props, stress)
+            points = _write_point_stresses(sheet, section, model, forces, props)
         _write_point_table(sheet, points, stress)
         governing = _write_governing(sheet, points, stress)
         checks = standard.write(
@@ -467,7 +466,7 @@ def _write_section_properties(
         props[name] = sheet.input(
             name, section.properties[key], description, reference=section.sources.get(key, "")
         )
-    if model.Ixy != 0.0:
+    if not model.symmetric:
         props["I_xy"] = sheet.input(
             "I_xy",
             section.properties["Ixy"],
@@ -475,7 +474,7 @@ def _write_section_properties(
             reference=section.sources.get("Ixy", ""),
         )
         props["D"] = sheet.step(
-            "D", props["I_x"] * props["I_y"] - props["I_xy"] ** 2, "Ix·Iy − Ixy²"
+            "D", product_determinant(props["I_x"], props["I_y"], props["I_xy"]), "Ix·Iy − Ixy²"
         )
         sheet.text(
             "Ixy ≠ 0: bending uses the unsymmetric formula "
@@ -507,26 +506,10 @@ def _write_section_properties(
     return props
 
 
-def _significant(value: float, scale: float) -> bool:
-    return abs(value) > _ZERO_Q * scale
-
-
-@dataclass
-class _PointData:
-    """The inputs of one stress point: coordinates and the cuts through it."""
-
-    index: int
-    label: str
-    x: sp.Symbol
-    y: sp.Symbol
-    cuts: dict[str, tuple[sp.Symbol, sp.Symbol | None, sp.Symbol]] = field(default_factory=dict)
-
-
-def _write_point_data(
-    sheet: Sheet, section: Section, model: StressModel, unsymmetric: bool
-) -> list[_PointData]:
+def _write_point_data(sheet: Sheet, section: Section, model: StressModel) -> list[PointTerms]:
     """Coordinates and cut data of every point as inputs shown in two tables."""
     unit = section.length_unit
+    unsymmetric = not model.symmetric
     sheet.heading("Stress points of the section")
     sheet.text(
         "Stress points are the corners of the section outline (flange tips, wall corners, "
@@ -538,59 +521,33 @@ def _write_point_data(
         "within 1 %; on a tube, the points where the centroidal axes meet the walls. "
         "Coordinates and first moments are computed from the section outline."
     )
-    q_scale = model.A**1.5
-    volume = f"{unit}**3"
     short = f"{ureg.Unit(unit):~P}"
-    data: list[_PointData] = []
-    for index, label in enumerate(model.labels):
-        n = str(index + 1)
-        point = _PointData(
-            index + 1,
-            label,
-            sheet.input(f"x_{n}", Quantity(model.x[index], unit), listed=False),
-            sheet.input(f"y_{n}", Quantity(model.y[index], unit), listed=False),
-        )
-        cuts = model.cuts
-        for cut, (q_own, q_other, width) in (
-            ("zy", (cuts.Qx_above[index], cuts.Qy_above[index], cuts.b[index])),
-            ("zx", (cuts.Qy_right[index], cuts.Qx_right[index], cuts.t[index])),
-        ):
-            has_own, has_other = _significant(q_own, q_scale), _significant(q_other, q_scale)
-            if width <= 0 or not (has_own or has_other):
-                continue  # a free edge, or nothing cut off: no transverse shear on this cut
-            own_name, other_name, width_name = _CUT_NAMES[cut]
-            Q_a = sheet.input(f"{own_name}_{n}", Quantity(q_own, volume), listed=False)
-            Q_b = None
-            if has_other or unsymmetric:
-                Q_b = sheet.input(f"{other_name}_{n}", Quantity(q_other, volume), listed=False)
-            b = sheet.input(f"{width_name}_{n}", Quantity(width, unit), listed=False)
-            point.cuts[cut] = (Q_a, Q_b, b)
-        data.append(point)
+    data = write_point_inputs(sheet, model)
     sheet.figure(
         section_drawing(
             section,
-            [
-                (str(point.index), model.x[point.index - 1], model.y[point.index - 1])
-                for point in data
-            ],
+            [(point.number, model.x[i], model.y[i]) for i, point in enumerate(data)],
             unit,
         ),
         f"Section {section.name} to scale, with the stress points numbered as in the tables.",
     )
     sheet.table(
         ["Point", "Location", "x", "y"],
-        [[str(point.index), point.label, point.x, point.y] for point in data],
+        [[point.number, point.label, point.x, point.y] for point in data],
         caption="Stress points, from the centroid",
         unit=unit,
     )
     dash = "—"
     rows = []
     for point in data:
-        row: list[str | sp.Symbol] = [str(point.index)]
-        for cut in ("zy", "zx"):
-            Q_a, Q_b, b = point.cuts.get(cut, (dash, None, dash))
-            row += [Q_a, Q_b if Q_b is not None else dash] if unsymmetric else [Q_a]
-            row.append(b)
+        row: list[str | sp.Symbol] = [point.number]
+        for name in (HORIZONTAL_CUT, VERTICAL_CUT):
+            cut = point.cuts.get(name)
+            if cut is None:
+                row += [dash, dash, dash] if unsymmetric else [dash, dash]
+                continue
+            Q_other = cut.Q_other if cut.Q_other is not None else dash
+            row += [cut.Q_own, Q_other, cut.width] if unsymmetric else [cut.Q_own, cut.width]
         rows.append(row)
     if unsymmetric:
         columns = ["Point", "Q_x above", "Q_y above", "b", "Q_y right", "Q_x right", "t"]
@@ -608,105 +565,21 @@ def _write_point_data(
     return data
 
 
-_CUT_NAMES = {"zy": ("Q_xa", "Q_ya", "b"), "zx": ("Q_yr", "Q_xr", "t")}
-
-
 def _write_point_stresses(
     sheet: Sheet,
     section: Section,
     model: StressModel,
     forces: dict[str, sp.Symbol],
     props: dict[str, sp.Symbol | None],
-    stress: str,
-) -> list[PointSymbols]:
-    N, V_x, V_y, T, M_x, M_y = (forces[k] for k in ("N", "V_x", "V_y", "T", "M_x", "M_y"))
-    A, I_x, I_y, J = props["A"], props["I_x"], props["I_y"], props["J"]
-    I_xy, D = props["I_xy"], props["D"]
-    unit = section.length_unit
-    data = _write_point_data(sheet, section, model, D is not None)
-    sheet.heading("Stresses at the points of the section")
-    sheet.text(SHEAR_TEXT)
-    sheet.text(
-        "At each point: σ1,2 = σ/2 ± √((σ/2)² + τ²), τ_max = √((σ/2)² + τ²) (shown in the "
-        "summary table) and the von Mises stress σ_vm = √(σ² + 3·τ²) (shown below)."
+) -> list[PointRecord]:
+    """The point stress procedure on the sheet, point by point, with the sheet's symbols."""
+    data = _write_point_data(sheet, section, model)
+    return point_stress_procedure(
+        SheetWriter(sheet),
+        data,
+        ForceTerms.of(forces),
+        section_terms(props, model.torsion.kind, section.length_unit),
     )
-    sigma_N = sheet.step("sigma_N", N / A, "Axial term, N/A (same at every point)", unit=stress)
-    rule = model.torsion
-    tau_T_common = None
-    if rule.kind == "closed":
-        tau_T_common = sheet.step(
-            "tau_T", T / (2 * props["A_m"] * props["t"]), "Torsion, T/(2·A_m·t)", unit=stress
-        )
-    elif rule.kind == "open":
-        tau_T_common = sheet.step(
-            "tau_T", T * props["t_max"] / J, "Torsion, T·t_max/J", unit=stress
-        )
-    points: list[PointSymbols] = []
-    for point in data:
-        n, x, y = str(point.index), point.x, point.y
-        record = PointSymbols(point.index, point.label)
-        sheet.heading(f"Point {n}: {point.label}", level=2)
-        if D is None:
-            sigma_mx = sheet.step(f"sigma_Mx_{n}", M_x * y / I_x, "Term from M_x", unit=stress)
-            sigma_my = sheet.step(f"sigma_My_{n}", -M_y * x / I_y, "Term from M_y", unit=stress)
-        else:
-            sigma_mx = sheet.step(
-                f"sigma_Mx_{n}", M_x * (I_y * y - I_xy * x) / D, "Term from M_x", unit=stress
-            )
-            sigma_my = sheet.step(
-                f"sigma_My_{n}", M_y * (I_xy * y - I_x * x) / D, "Term from M_y", unit=stress
-            )
-        sigma = sheet.step(
-            f"sigma_z_{n}", sigma_N + sigma_mx + sigma_my, "Normal stress (sum)", unit=stress
-        )
-        record.terms.update(sigma_N=sigma_N, sigma_Mx=sigma_mx, sigma_My=sigma_my, sigma=sigma)
-        transverse = []
-        for cut, symbols in point.cuts.items():
-            term = _shear_term(sheet, cut, n, symbols, stress, (V_x, V_y, I_x, I_y, I_xy, D))
-            transverse.append(term)
-            record.terms[f"tau_{cut}"] = term
-        if tau_T_common is None:  # round: τ = T·r/J at the point's radius
-            r = sheet.step(f"r_{n}", sqrt(x**2 + y**2), "Radius of the point", unit=unit)
-            tau_T = sheet.step(f"tau_T_{n}", T * r / J, "Torsion, T·r/J", unit=stress)
-        else:
-            tau_T = tau_T_common
-        record.terms["tau_T"] = tau_T
-        shear_expr = shear_at_point(transverse, tau_T, bool(model.junction[point.index - 1]))
-        tau = sheet.step(f"tau_{n}", shear_expr, "Shear stress at the point", unit=stress)
-        record.terms["tau"] = tau
-        write_combined(sheet, record, n, stress)
-        points.append(record)
-    return points
-
-
-def _shear_term(
-    sheet: Sheet,
-    cut: str,
-    n: str,
-    cut_symbols: tuple[sp.Symbol, sp.Symbol | None, sp.Symbol],
-    stress: str,
-    section_symbols: tuple,
-) -> sp.Symbol:
-    """τzy (horizontal cut, part above) or τzx (vertical cut, part to the right)."""
-    Q_a, Q_b, b = cut_symbols
-    V_x, V_y, I_x, I_y, I_xy, D = section_symbols
-    if cut == "zy":
-        where = "horizontal cut, part above"
-        V_own, V_other, I_own, I_other = V_y, V_x, I_x, I_y
-    else:
-        where = "vertical cut, part to the right"
-        V_own, V_other, I_own, I_other = V_x, V_y, I_y, I_x
-    if D is not None:
-        # τ·b = [(V_own·I_other − V_other·I_xy)·Q_own + (V_other·I_own − V_own·I_xy)·Q_other]/D
-        expr = (
-            (V_own * I_other - V_other * I_xy) * Q_a + (V_other * I_own - V_own * I_xy) * Q_b
-        ) / (D * b)
-    elif Q_b is not None:
-        expr = V_own * Q_a / (I_own * b) + V_other * Q_b / (I_other * b)
-    else:
-        expr = V_own * Q_a / (I_own * b)
-    description = f"Transverse shear on the {where} (V·Q/(I·b))"
-    return sheet.step(f"tau_{cut}_{n}", expr, description, unit=stress)
 
 
 _TABLE_COLUMNS = (
@@ -723,13 +596,13 @@ _TABLE_COLUMNS = (
 )
 
 
-def _write_point_table(sheet: Sheet, points: list[PointSymbols], stress: str) -> None:
+def _write_point_table(sheet: Sheet, points: list[PointRecord], stress: str) -> None:
     sheet.heading("Summary by point")
     columns = [(key, title) for key, title in _TABLE_COLUMNS if key in points[0].terms]
     sheet.table(
         ["Point", *(title for _, title in columns)],
         [
-            [f"{point.index}: {point.label}", *(point.terms[key] for key, _ in columns)]
+            [f"{point.number}: {point.label}", *(point.terms[key] for key, _ in columns)]
             for point in points
         ],
         caption="Stress terms with their signs and sums at each point, tension positive",
@@ -747,13 +620,13 @@ _GOVERNING = (
 )
 
 
-def _write_governing(sheet: Sheet, points: list[PointSymbols], stress: str) -> dict[str, sp.Symbol]:
+def _write_governing(sheet: Sheet, points: list[PointRecord], stress: str) -> dict[str, sp.Symbol]:
     sheet.heading("Governing points")
     governing: dict[str, sp.Symbol] = {}
     for name, term, largest, description in _GOVERNING:
         governing[name] = sheet.governing(
             name,
-            [(f"point {point.index} ({point.label})", point.terms[term]) for point in points],
+            [(f"point {point.number} ({point.label})", point.terms[term]) for point in points],
             description + " over the points",
             largest=largest,
             unit=stress,

@@ -1,60 +1,80 @@
-"""What a calc defines at one stress point, and the combined stresses written the same way
-for every kind of section."""
+"""The sheet's values of a section and of its stress points, as the point stress
+procedures (:mod:`calcsheet.mechanics.point_stresses`) take them."""
 
 from __future__ import annotations
 
-from dataclasses import dataclass, field
+from collections.abc import Mapping
 
 import sympy as sp
 
 from calcsheet.engine import Sheet
-from calcsheet.engine.functions import Abs, Max, sqrt
+from calcsheet.mechanics.point_stresses import (
+    HORIZONTAL_CUT,
+    VERTICAL_CUT,
+    Cut,
+    PointTerms,
+    SectionTerms,
+)
+from calcsheet.mechanics.stresses import StressModel
+from calcsheet.units import Quantity
+
+# Input names of a cut's values: (Q_own, Q_other, width), then the point's number.
+CUT_NAMES = {HORIZONTAL_CUT: ("Q_xa", "Q_ya", "b"), VERTICAL_CUT: ("Q_yr", "Q_xr", "t")}
 
 
-@dataclass
-class PointSymbols:
-    """The symbols a sheet defined for one stress point (for its tables and governing steps)."""
+def section_terms(
+    props: Mapping[str, sp.Symbol | None], torsion: str, length_unit: str
+) -> SectionTerms:
+    """The sheet's section symbols (A, I_x, I_y, J; I_xy and D or ``None``; the torsion
+    rule's t and A_m, or t_max) for :mod:`calcsheet.mechanics.point_stresses`."""
+    return SectionTerms(
+        A=props["A"],
+        I_x=props["I_x"],
+        I_y=props["I_y"],
+        J=props["J"],
+        torsion=torsion,
+        I_xy=props.get("I_xy"),
+        D=props.get("D"),
+        t=props.get("t"),
+        A_m=props.get("A_m"),
+        t_max=props.get("t_max"),
+        length_unit=length_unit,
+    )
 
-    index: int
-    label: str
-    terms: dict[str, sp.Symbol] = field(default_factory=dict)
 
+def write_point_inputs(sheet: Sheet, model: StressModel) -> list[PointTerms]:
+    """x_n, y_n and the values of the cuts through every point n, as unlisted inputs.
 
-def shear_at_point(transverse: list[sp.Symbol], tau_T: sp.Symbol, junction: bool) -> sp.Expr:
-    """The shear at a point from its transverse terms (one per cut through material) and τ_T.
-
-    Two cuts through the point: τ = √(τzx² + τzy²) + |τ_T|; at a re-entrant corner the
-    two cuts cross two different walls, so the larger wall shear is taken,
-    τ = max(|τzx|, |τzy|) + |τ_T| (the same rules as
-    :func:`calcsheet.mechanics.formulas.combined_shear` and ``junction_shear``).
+    The cuts are those of :meth:`StressModel.point_cuts` (the ones the numeric path
+    uses): Q_xa_n, Q_ya_n, b_n of the horizontal cut and Q_yr_n, Q_xr_n, t_n of the
+    vertical one; the tables of the member sheet show them.
     """
-    if len(transverse) == 2 and junction:
-        return Max(Abs(transverse[0]), Abs(transverse[1])) + Abs(tau_T)
-    if len(transverse) == 2:
-        return sqrt(transverse[0] ** 2 + transverse[1] ** 2) + Abs(tau_T)
-    if transverse:
-        return Abs(transverse[0]) + Abs(tau_T)
-    return Abs(tau_T)
-
-
-def write_combined(sheet: Sheet, record: PointSymbols, n: str, stress: str) -> None:
-    """Principal stresses and maximum shear (table only), and the von Mises stress.
-
-    Plane stress at a point of a member (σ along the axis, τ on the cross-section):
-    σ1,2 = σ/2 ± √((σ/2)² + τ²), τ_max = √((σ/2)² + τ²), σ_vm = √(σ² + 3·τ²)
-    (Mohr's circle and the von Mises criterion, common practice, no source).
-    """
-    sigma, tau = record.terms["sigma"], record.terms["tau"]
-    radius = sqrt((sigma / 2) ** 2 + tau**2)
-    record.terms["sigma_1"] = sheet.step(
-        f"sigma_1_{n}", sigma / 2 + radius, "Major principal stress", unit=stress, shown=False
-    )
-    record.terms["sigma_2"] = sheet.step(
-        f"sigma_2_{n}", sigma / 2 - radius, "Minor principal stress", unit=stress, shown=False
-    )
-    record.terms["tau_max"] = sheet.step(
-        f"tau_max_{n}", radius, "Maximum in-plane shear stress", unit=stress, shown=False
-    )
-    record.terms["sigma_vm"] = sheet.step(
-        f"sigma_vm_{n}", sqrt(sigma**2 + 3 * tau**2), "Von Mises stress", unit=stress
-    )
+    unit = model.length_unit
+    volume = f"{unit}**3"
+    points: list[PointTerms] = []
+    for index, (label, cuts) in enumerate(zip(model.labels, model.point_cuts(), strict=True)):
+        n = str(index + 1)
+        written: dict[str, Cut] = {}
+        for name, cut in cuts.items():
+            own_name, other_name, width_name = CUT_NAMES[name]
+            Q_other = None
+            if cut.Q_other is not None:
+                Q_other = sheet.input(
+                    f"{other_name}_{n}", Quantity(cut.Q_other, volume), listed=False
+                )
+            written[name] = Cut(
+                sheet.input(f"{own_name}_{n}", Quantity(cut.Q_own, volume), listed=False),
+                Q_other,
+                sheet.input(f"{width_name}_{n}", Quantity(cut.width, unit), listed=False),
+            )
+        points.append(
+            PointTerms(
+                n,
+                label,
+                sheet.input(f"x_{n}", Quantity(model.x[index], unit), listed=False),
+                sheet.input(f"y_{n}", Quantity(model.y[index], unit), listed=False),
+                written,
+                junction=bool(model.junction[index]),
+            )
+        )
+    return points

@@ -1,17 +1,19 @@
 """Stresses at the points of a section under internal forces, for many load cases at once.
 
-Build a :class:`StressModel` once per section (it precomputes, for every stress
-point, the stress per unit of each internal force); then
-:meth:`StressModel.stresses` turns an array of internal forces of shape
-(..., 6) in the order (N, Vx, Vy, T, Mx, My) into stresses at every point with
-two matrix products. Units must be consistent: forces in F and moments in F·L
+Build a :class:`StressModel` once per section (its stress points and the cuts
+through them); then :meth:`StressModel.stresses` turns an array of internal forces
+of shape (..., 6) in the order (N, Vx, Vy, T, Mx, My) into stresses at every point,
+for every case at once, by running the point stress procedure of
+:mod:`calcsheet.mechanics.point_stresses` on arrays (the member sheet runs the same
+procedure on its symbols). Units must be consistent: forces in F and moments in F·L
 with the model's length unit L give stresses in F/L².
 
 At each point (x, y) measured from the centroid:
 
-* normal stress σ: axial plus unsymmetric bending (:func:`formulas.bending_stress`);
+* normal stress σ: axial plus unsymmetric bending (:func:`formulas.bending_stress_x`
+  and ``bending_stress_y``);
 * τzy from the horizontal cut through the point and τzx from the vertical cut
-  (average over the cut width, :func:`formulas.shear_flow_stress`). On a section
+  (average over the cut width, :func:`formulas.transverse_shear`). On a section
   of one ring (every open shape) the cut is the stretch of material through the
   point, with the part that stretch cuts off: a cut through the bottom flange of a
   channel takes the bottom flange tip, not both tips; a cut that meets no material
@@ -20,7 +22,11 @@ At each point (x, y) measured from the centroid:
 * τ_T from St Venant torsion (:mod:`calcsheet.mechanics.torsion`);
 * τ = √(τzx² + τzy²) + |τ_T|, except at a re-entrant corner of an open section,
   where the two cuts cross two different walls and τ = max(|τzx|, |τzy|) + |τ_T|
-  (:func:`formulas.junction_shear`); then σ1, σ2, τ_max and von Mises.
+  (:func:`formulas.shear_at_point`); then σ1, σ2, τ_max and von Mises.
+
+A round section (bar, round HSS, pipe) is taken by its resultant moment and shear
+instead: its points are the two extreme fibres of the diameter normal to the
+resultant moment (:func:`~calcsheet.mechanics.point_stresses.round_stress_procedure`).
 
 The centroid is added as a point (label ``centroid``) when it lies in the
 material, because the transverse shear of a symmetric section peaks there. On
@@ -35,13 +41,27 @@ the walls at the neutral axis of each bending plane, where V·Q/(I·b) peaks.
 
 from __future__ import annotations
 
+import functools
 from dataclasses import dataclass
 
 import numpy as np
 from numpy.typing import ArrayLike, NDArray
 
 from calcsheet.mechanics import formulas
-from calcsheet.mechanics.torsion import TorsionRule, torsion_rule
+from calcsheet.mechanics.point_stresses import (
+    HORIZONTAL_CUT,
+    ROUND_FIBRES,
+    VERTICAL_CUT,
+    Cut,
+    ForceTerms,
+    PointRecord,
+    PointTerms,
+    RoundTerms,
+    SectionTerms,
+    point_stress_procedure,
+    round_stress_procedure,
+)
+from calcsheet.mechanics.torsion import ROUND_FAMILIES, TorsionRule, torsion_rule
 from calcsheet.sections import Section, SectionNumbers
 from calcsheet.sections.geometry import NO_MATERIAL, ChordCut, Outline
 from calcsheet.sections.shapes import Wall
@@ -57,6 +77,8 @@ CENTROID_LABEL = "centroid"
 PEAK_TOLERANCE = 0.008
 DIRECTION_STEPS = 1800
 _MAX_WALL_POINTS = 40
+# Relative size (of A^1.5) below which a first moment is round-off of an exact zero.
+_ZERO_Q = 1e-9
 
 MEASURES: dict[str, str] = {
     "tension": "largest normal stress (tension)",
@@ -127,7 +149,12 @@ class CutData:
 
 @dataclass(frozen=True, eq=False)
 class PointStresses:
-    """Stresses at every point for every case: arrays of shape (..., n_points)."""
+    """Stresses at every point for every case: arrays of shape (..., n_points).
+
+    The two extreme fibres of a round section taken by its resultant moment have no
+    cuts: ``tau_zy`` holds the transverse shear τ_V of the resultant shear (taken at
+    both fibres) and ``tau_zx`` is zero.
+    """
 
     labels: tuple[str, ...]
     sigma: Array
@@ -161,9 +188,27 @@ class PointStresses:
         return self.labels[int(index)]
 
 
+def round_values(section: Section, length_unit: str) -> RoundTerms:
+    """R_o, Q_0 and b_0 of a round section from its outline, as floats in ``length_unit``."""
+    numbers = section.numeric(length_unit)
+    return RoundTerms(
+        R_o=max(float(np.abs(ring).max()) for ring in numbers.outline.rings),
+        Q_0=float(numbers.Q_x([0.0])[0]),
+        b_0=float(numbers.b([0.0])[0]),
+    )
+
+
 @dataclass(frozen=True, eq=False)
 class StressModel:
-    """Per-point stress per unit internal force for one section (module docstring)."""
+    """A section's stress points with their cuts, and its values, in one length unit.
+
+    :meth:`stresses` runs the point stress procedure
+    (:func:`calcsheet.mechanics.point_stresses.point_stress_procedure`) on arrays; a
+    member sheet runs the same procedure on its own symbols. A round section taken by
+    its resultant moment (``resultant`` given) has the two extreme fibres of
+    :func:`~calcsheet.mechanics.point_stresses.round_stress_procedure` as its points;
+    they turn with the moment, so their ``x`` and ``y`` are NaN and they have no cuts.
+    """
 
     length_unit: str
     labels: tuple[str, ...]
@@ -177,35 +222,130 @@ class StressModel:
     cuts: CutData
     torsion: TorsionRule
     junction: Array  # (n,) bool: a re-entrant corner where two walls meet
-    normal_matrix: Array  # (6, n): σ per unit (N, Vx, Vy, T, Mx, My)
-    zx_matrix: Array  # (6, n): τzx per unit force
-    zy_matrix: Array  # (6, n): τzy per unit force
+    resultant: RoundTerms | None = None
+
+    @property
+    def symmetric(self) -> bool:
+        """Whether I_xy is zero: the symmetric forms of bending and shear are written."""
+        return self.Ixy == 0.0
+
+    def point_cuts(self) -> list[dict[str, Cut]]:
+        """The cuts of each point that carry shear, by name ("zy" horizontal, "zx" vertical).
+
+        A cut through no material (zero width: a free face, a toe) or one that cuts off
+        nothing (both first moments round-off of zero) is left out; so is the other
+        first moment of a section with a symmetry axis where it is round-off of zero.
+        The sheet writes the values of these cuts as its inputs and the arrays use them.
+        """
+        q_scale = self.A**1.5
+        cuts = self.cuts
+        found = []
+        for index in range(len(self.labels)):
+            point: dict[str, Cut] = {}
+            for name, (q_own, q_other, width) in (
+                (HORIZONTAL_CUT, (cuts.Qx_above[index], cuts.Qy_above[index], cuts.b[index])),
+                (VERTICAL_CUT, (cuts.Qy_right[index], cuts.Qx_right[index], cuts.t[index])),
+            ):
+                has_own = abs(q_own) > _ZERO_Q * q_scale
+                has_other = abs(q_other) > _ZERO_Q * q_scale
+                if width <= 0 or not (has_own or has_other):
+                    continue
+                keep_other = has_other or not self.symmetric
+                point[name] = Cut(
+                    float(q_own), float(q_other) if keep_other else None, float(width)
+                )
+            found.append(point)
+        return found
+
+    def section_terms(self) -> SectionTerms:
+        """The section's values for the procedures, as floats in the model's length unit."""
+        rule = self.torsion
+        return SectionTerms(
+            A=self.A,
+            I_x=self.Ix,
+            I_y=self.Iy,
+            J=self.J,
+            torsion=rule.kind,
+            I_xy=None if self.symmetric else self.Ixy,
+            D=None if self.symmetric else formulas.product_determinant(self.Ix, self.Iy, self.Ixy),
+            t=rule.thickness if rule.kind == "closed" else None,
+            A_m=rule.enclosed_area if rule.kind == "closed" else None,
+            t_max=rule.thickness if rule.kind == "open" else None,
+        )
+
+    @functools.cached_property
+    def _arrays(self) -> tuple[SectionTerms, PointTerms]:
+        """All points as one :class:`PointTerms` of arrays (a missing cut: Q = 0 on b = 1)."""
+        selected = self.point_cuts()
+        arrays = {}
+        for name in (HORIZONTAL_CUT, VERTICAL_CUT):
+            present = [name in point for point in selected]
+            cuts = [point.get(name) for point in selected]
+            arrays[name] = Cut(
+                Q_own=np.array([c.Q_own if c else 0.0 for c in cuts]),
+                Q_other=np.array([c.Q_other if c and c.Q_other is not None else 0.0 for c in cuts]),
+                width=np.where(present, [c.width if c else 1.0 for c in cuts], 1.0),
+            )
+        point = PointTerms("all", "all points", self.x, self.y, arrays, self.junction)
+        return self.section_terms(), point
 
     def stresses(self, forces: ArrayLike) -> PointStresses:
-        """Stresses at every point for internal forces of shape (..., 6)."""
+        """Stresses at every point for internal forces of shape (..., 6).
+
+        The forces (N, Vx, Vy, T, Mx, My) in F and F·L with the model's length unit L
+        give stresses in F/L², of shape (..., n_points).
+        """
+        from calcsheet.engine.procedure import ArrayWriter  # imported when run: module doc
+
         forces = np.asarray(forces, dtype=float)
-        sigma = forces @ self.normal_matrix
-        tau_zx = forces @ self.zx_matrix
-        tau_zy = forces @ self.zy_matrix
-        tau_t = forces[..., 3:4] * self.torsion.factor
-        tau = np.where(
-            self.junction,
-            formulas.junction_shear(tau_zx, tau_zy, tau_t),
-            formulas.combined_shear(tau_zx, tau_zy, tau_t),
-        )
-        sigma_1, sigma_2 = formulas.principal_stresses(sigma, tau)
+        terms = ForceTerms(*(forces[..., i : i + 1] for i in range(6)))
+        section, point = self._arrays
+        w = ArrayWriter()
+        with np.errstate(divide="ignore", invalid="ignore"):
+            if self.resultant is not None:
+                fibres = round_stress_procedure(
+                    w, terms, section, RoundTerms(**vars(self.resultant))
+                )
+                records = _joined(fibres)
+            else:
+                (record,) = point_stress_procedure(w, [point], terms, section)
+                records = record.terms
+        shape = (*forces.shape[:-1], len(self.labels))
+        values = {key: _full(value, shape) for key, value in records.items()}
         return PointStresses(
             labels=self.labels,
-            sigma=sigma,
-            tau_zx=tau_zx,
-            tau_zy=tau_zy,
-            tau_torsion=tau_t,
-            tau=tau,
-            sigma_1=sigma_1,
-            sigma_2=sigma_2,
-            tau_max=formulas.max_shear_stress(sigma, tau),
-            von_mises=formulas.von_mises_stress(sigma, tau),
+            sigma=values["sigma"],
+            tau_zx=values["tau_zx"],
+            tau_zy=values["tau_zy"],
+            tau_torsion=values["tau_T"],
+            tau=values["tau"],
+            sigma_1=values["sigma_1"],
+            sigma_2=values["sigma_2"],
+            tau_max=values["tau_max"],
+            von_mises=values["sigma_vm"],
         )
+
+
+def _full(value: Array, shape: tuple[int, ...]) -> Array:
+    """A term spread over every case and point (terms like N/A are the same at every point)."""
+    value = np.asarray(value, dtype=float)
+    return value if value.shape == shape else np.broadcast_to(value, shape).copy()
+
+
+def _joined(fibres: list[PointRecord]) -> dict[str, Array]:
+    """The records of the round fibres as arrays over the fibres (the last axis).
+
+    The round procedure has no cuts: its transverse shear τ_V, taken at both fibres,
+    is given as τzy, and τzx is zero.
+    """
+    keys = ("sigma", "tau_V", "tau_T", "tau", "sigma_1", "sigma_2", "tau_max", "sigma_vm")
+    joined = {
+        key: np.concatenate(np.broadcast_arrays(*(np.asarray(f.terms[key]) for f in fibres)), -1)
+        for key in keys
+    }
+    joined["tau_zy"] = joined.pop("tau_V")
+    joined["tau_zx"] = np.zeros_like(joined["tau"])
+    return joined
 
 
 # A convex corner sharper than this (the boundary turning by more than 45°) has two
@@ -365,16 +505,19 @@ def wall_shear(numbers: SectionNumbers, wall: Wall, directions: Array) -> WallSh
     width_slope = (widths[-1] - widths[0]) / (samples[-1] - samples[0])
     thickness = (widths[0] - width_slope * samples[0], widths[0] + width_slope * (1 - samples[0]))
     unit_x, unit_y = np.cos(directions)[:, None], np.sin(directions)[:, None]
-    # The numerator of τ·t: shear_flow_stress with a unit width.
-    coefficients = formulas.shear_flow_stress(
-        unit_x,
+    # The numerator of τ·t: the horizontal cut's transverse shear on a unit width (its
+    # general form holds for either cut, and for I_xy = 0).
+    Ix, Iy, Ixy = numbers.Ix, numbers.Iy, numbers.Ixy
+    coefficients = formulas.transverse_shear(
         unit_y,
+        unit_x,
         qx_coefficients[None, :],
         qy_coefficients[None, :],
         1.0,
-        numbers.Ix,
-        numbers.Iy,
-        numbers.Ixy,
+        Ix,
+        Iy,
+        Ixy,
+        formulas.product_determinant(Ix, Iy, Ixy),
     )
     return WallShear(wall, coefficients, thickness)
 
@@ -450,10 +593,38 @@ def wall_peak_points(numbers: SectionNumbers) -> list[tuple[str, float, float]]:
 
 
 def stress_model(
-    section: Section, length_unit: str = "inch", *, include_centroid: bool = True
+    section: Section,
+    length_unit: str = "inch",
+    *,
+    include_centroid: bool = True,
+    by_resultant: bool = True,
 ) -> StressModel:
-    """Precompute the per-point stress factors of ``section`` in ``length_unit``."""
+    """The stress points of ``section`` with their cuts, in ``length_unit``.
+
+    A round section (bar, round HSS, pipe) is taken by its resultant moment and shear
+    (its two extreme fibres, as the member sheet writes it); ``by_resultant=False``
+    samples the points of its outline like any other section.
+    """
     numbers = section.numeric(length_unit)
+    Ix, Iy, Ixy, A, J = numbers.Ix, numbers.Iy, numbers.Ixy, numbers.A, numbers.J
+    if by_resultant and section.family in ROUND_FAMILIES:
+        fibres = len(_ROUND_LABELS)
+        nowhere, no_cut = np.full(fibres, np.nan), np.zeros(fibres)
+        return StressModel(
+            length_unit=length_unit,
+            labels=_ROUND_LABELS,
+            x=nowhere,
+            y=nowhere.copy(),
+            A=A,
+            Ix=Ix,
+            Iy=Iy,
+            Ixy=Ixy,
+            J=J,
+            cuts=CutData(no_cut, no_cut, no_cut, no_cut, no_cut, no_cut),
+            torsion=torsion_rule(section, nowhere, nowhere, length_unit),
+            junction=np.zeros(fibres, dtype=bool),
+            resultant=round_values(section, length_unit),
+        )
     labels = list(numbers.point_labels)
     x, y = list(numbers.point_x), list(numbers.point_y)
     if include_centroid:
@@ -475,27 +646,6 @@ def stress_model(
                 x.append(px)
                 y.append(py)
     x_arr, y_arr = np.array(x), np.array(y)
-    Ix, Iy, Ixy, A, J = numbers.Ix, numbers.Iy, numbers.Ixy, numbers.A, numbers.J
-    cuts = cut_data(section, x_arr, y_arr, length_unit)
-    n = len(labels)
-    unit_force = np.ones(n)
-    zeros = np.zeros(n)
-
-    normal = np.zeros((6, n))
-    normal[0] = formulas.axial_stress(unit_force, A)
-    normal[4] = formulas.bending_stress(unit_force, zeros, x_arr, y_arr, Ix, Iy, Ixy)
-    normal[5] = formulas.bending_stress(zeros, unit_force, x_arr, y_arr, Ix, Iy, Ixy)
-
-    def shear_rows(Q_about_x: Array, Q_about_y: Array, width: Array) -> Array:
-        rows = np.zeros((6, n))
-        rows[1] = formulas.shear_flow_stress(
-            unit_force, zeros, Q_about_x, Q_about_y, width, Ix, Iy, Ixy
-        )
-        rows[2] = formulas.shear_flow_stress(
-            zeros, unit_force, Q_about_x, Q_about_y, width, Ix, Iy, Ixy
-        )
-        return rows
-
     return StressModel(
         length_unit=length_unit,
         labels=tuple(labels),
@@ -506,10 +656,10 @@ def stress_model(
         Iy=Iy,
         Ixy=Ixy,
         J=J,
-        cuts=cuts,
-        torsion=torsion_rule(section, x_arr, y_arr, J, length_unit),
+        cuts=cut_data(section, x_arr, y_arr, length_unit),
+        torsion=torsion_rule(section, x_arr, y_arr, length_unit),
         junction=re_entrant_corners(numbers.outline, x_arr, y_arr),
-        normal_matrix=normal,
-        zx_matrix=shear_rows(cuts.Qx_right, cuts.Qy_right, cuts.t),
-        zy_matrix=shear_rows(cuts.Qx_above, cuts.Qy_above, cuts.b),
     )
+
+
+_ROUND_LABELS = tuple(label for label, _ in ROUND_FIBRES)

@@ -1,4 +1,4 @@
-"""Which St Venant torsion formula a section gets, and its factor at each stress point.
+"""Which St Venant torsion formula a section gets, with the values it needs.
 
 Approximations (warping stresses of open sections are not included):
 
@@ -8,6 +8,10 @@ Approximations (warping stresses of open sections are not included):
 * every other section (plate, I, channel, angle, tee): thin open walls,
   τ = T·t_max / J with t_max the thickest wall, applied at every point (conservative
   for the thinner walls).
+
+The formulas themselves are :func:`calcsheet.mechanics.formulas.torsion_stress_round`,
+``torsion_stress_closed`` and ``torsion_stress_open``, written by the point stress
+procedure (:mod:`calcsheet.mechanics.point_stresses`).
 """
 
 from __future__ import annotations
@@ -32,13 +36,11 @@ WARPING_NOTE = (
 class TorsionRule:
     """The torsion formula for a section: ``kind`` is "round", "closed" or "open".
 
-    ``factor`` is τ per unit torque at each stress point (1/length³).
     ``thickness`` is t for "closed"/"open", ``enclosed_area`` is A_m for "closed".
     """
 
     kind: str
     description: str
-    factor: NDArray[np.float64]
     thickness: float = math.nan
     enclosed_area: float = math.nan
 
@@ -50,11 +52,14 @@ def _dimension(section: Section, names: tuple[str, ...], unit: str) -> list[floa
 
 
 def torsion_rule(
-    section: Section, x: NDArray[np.float64], y: NDArray[np.float64], J: float, unit: str
+    section: Section, x: NDArray[np.float64], y: NDArray[np.float64], unit: str
 ) -> TorsionRule:
-    """Choose the torsion formula for ``section`` and evaluate τ/T at points (x, y)."""
+    """Choose the torsion formula for ``section`` (stress points at (x, y), in ``unit``).
+
+    A section without wall dimensions takes its farthest point as the thickness.
+    """
     if section.family in ROUND_FAMILIES:
-        return TorsionRule("round", "τ = T·r/J (round section)", np.hypot(x, y) / J)
+        return TorsionRule("round", "τ = T·r/J (round section)")
     if section.family in CLOSED_RECTANGULAR_FAMILIES:
         (height,) = _dimension(section, ("H", "Ht"), unit)
         (width,) = _dimension(section, ("B",), unit)
@@ -63,7 +68,6 @@ def torsion_rule(
         return TorsionRule(
             "closed",
             "τ = T/(2·A_m·t) (thin closed wall, Bredt)",
-            np.full(x.shape, 1.0 / (2.0 * enclosed * wall)),
             thickness=wall,
             enclosed_area=enclosed,
         )
@@ -77,6 +81,5 @@ def torsion_rule(
     return TorsionRule(
         "open",
         "τ = T·t_max/J (thin open walls, thickest wall)",
-        np.full(x.shape, wall / J),
         thickness=wall,
     )

@@ -32,7 +32,7 @@ from sectionproperties.pre.library import (
 )
 
 from calcsheet.mechanics import stress_model
-from calcsheet.mechanics.formulas import shear_flow_stress
+from calcsheet.mechanics.formulas import product_determinant, transverse_shear
 from calcsheet.sections import angle, catalog_section, channel, tee
 
 # Element area 0.003 in² (about 0.08 in across, six or more through a 0.4 in wall).
@@ -217,9 +217,11 @@ def _dense_wall_peak(section, vx: float, vy: float, positions: int = 801) -> flo
             else:
                 cut = numbers.outline.quarter_turned().chord_cut(-y, x)
                 q_about_x, q_about_y = -cut.first_x, cut.first_y
-            tau = shear_flow_stress(
-                vx, vy, q_about_x, q_about_y, cut.width, numbers.Ix, numbers.Iy, numbers.Ixy
-            )
+            # the general (unsymmetric) form, written for the horizontal cut: V_y, V_x
+            tau = transverse_shear(
+                vy, vx, q_about_x, q_about_y, cut.width, numbers.Ix, numbers.Iy, numbers.Ixy,
+                product_determinant(numbers.Ix, numbers.Iy, numbers.Ixy),
+            )  # fmt: skip
             largest = max(largest, abs(float(tau)))
     return largest
 

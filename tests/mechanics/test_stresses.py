@@ -9,8 +9,8 @@ import pytest
 from hypothesis import given, settings
 from hypothesis import strategies as st
 
-from calcsheet.mechanics import internal_forces, point_load, stress_model
-from calcsheet.mechanics.formulas import principal_stresses, von_mises_stress
+from calcsheet.engine.procedure import ArrayWriter
+from calcsheet.mechanics import formulas, internal_forces, point_load, stress_model
 from calcsheet.sections import angle, catalog_section, i_shape, plate, round_bar
 
 # Plate 4 in wide (x) by 6 in deep (y): Sx = b·d²/6 = 24 in³, Sy = d·b²/6 = 16 in³,
@@ -104,17 +104,27 @@ def test_unsymmetric_angle_bends_about_the_inclined_neutral_axis() -> None:
 
 def test_principal_and_von_mises_formulas() -> None:
     # σ = 6, τ = 4: σ1,2 = 3 ± 5 (Mohr's circle), von Mises = √(36 + 48) (hand calc).
-    s1, s2 = principal_stresses(6.0, 4.0)
+    w = ArrayWriter()
+    radius = formulas.mohr_radius(w, 6.0, 4.0)
+    s1 = formulas.major_principal_stress(6.0, radius)
+    s2 = formulas.minor_principal_stress(6.0, radius)
     assert (float(s1), float(s2)) == pytest.approx((8.0, -2.0))
-    assert float(von_mises_stress(6.0, 4.0)) == pytest.approx(math.sqrt(84.0))
+    assert float(formulas.von_mises_stress(w, 6.0, 4.0)) == pytest.approx(math.sqrt(84.0))
 
 
-def test_round_bar_torsion_is_tr_over_j() -> None:
+@pytest.mark.parametrize("by_resultant", [True, False])
+def test_round_bar_torsion_is_tr_over_j(by_resultant: bool) -> None:
+    """τ = T·r/J at the perimeter, on the extreme fibres and on the sampled outline."""
     section = round_bar("2 in")
-    result = stress_model(section).stresses(np.array([0, 0, 0, 10.0, 0, 0]))
+    model = stress_model(section, by_resultant=by_resultant)
+    result = model.stresses(np.array([0, 0, 0, 10.0, 0, 0]))
     J = math.pi * 2.0**4 / 32  # solid circle (common practice, no source)
-    edge = [i for i, label in enumerate(result.labels) if label.startswith("perimeter")]
-    assert np.allclose(result.tau[edge], 10.0 * 1.0 / J)
+    if by_resultant:
+        edge = [0, 1]
+        assert "extreme fibre" in result.labels[0]
+    else:
+        edge = [i for i, label in enumerate(result.labels) if label.startswith("perimeter")]
+    assert np.allclose(result.tau[edge], 10.0 * 1.0 / J, rtol=1e-3)
 
 
 forces_strategy = st.lists(st.floats(-100, 100, allow_nan=False), min_size=6, max_size=6)
