@@ -12,6 +12,7 @@ stress (not a specification check).
 from __future__ import annotations
 
 from collections.abc import Sequence
+from dataclasses import dataclass, field
 
 import pint
 import sympy as sp
