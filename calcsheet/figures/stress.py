@@ -42,6 +42,7 @@ from calcsheet.figures.style import (
     mix,
 )
 from calcsheet.figures.svg import Point, Svg
+from calcsheet.mechanics import formulas
 from calcsheet.sections import Section
 from calcsheet.units import Quantity, parse_quantity
 
@@ -130,11 +131,19 @@ class LinearStress:
         Ix, Iy, Ixy = (
             Quantity(value, f"{length}**4") for value in (numbers.Ix, numbers.Iy, numbers.Ixy)
         )
-        D = Ix * Iy - Ixy * Ixy
+        D = formulas.product_determinant(Ix, Iy, Ixy)
+
+        def bending(x: pint.Quantity, y: pint.Quantity) -> pint.Quantity:
+            # the analysis's own formulas, so the figure and the steps cannot differ
+            return formulas.bending_stress_x(Mx, x, y, Ix, Iy, Ixy, D) + formulas.bending_stress_y(
+                My, x, y, Ix, Iy, Ixy, D
+            )
+
+        one, zero = Quantity(1.0, length), Quantity(0.0, length)
         gradient = f"{stress_unit}/{length}"
-        a = float((N / A).to(stress_unit).magnitude)
-        b = float((-(My * Ix + Mx * Ixy) / D).to(gradient).magnitude)
-        c = float(((Mx * Iy + My * Ixy) / D).to(gradient).magnitude)
+        a = float(formulas.axial_stress(N, A).to(stress_unit).magnitude)
+        b = float((bending(one, zero) / one).to(gradient).magnitude)
+        c = float((bending(zero, one) / one).to(gradient).magnitude)
         return cls(a, b, c)
 
     def at(self, x: np.ndarray, y: np.ndarray) -> np.ndarray:
