@@ -314,8 +314,12 @@ def bench_batch() -> None:
         base = Path(folder) / "base.toml"
         base.write_text(STARTER, encoding="utf-8")
         tomllib.loads(STARTER)  # the base must be valid before timing
-        rows = ["member.name,member.section,loads[0].magnitude"]
-        rows += [f"M{n},{sections[n % len(sections)]},{1 + n % 7} kip" for n in range(200)]
+        # Each member's sheet carries its own title and calc number (batch refuses copies).
+        rows = ["member.name,member.section,loads[0].magnitude,sheet.title,title_block.calc_number"]
+        rows += [
+            f"M{n},{sections[n % len(sections)]},{1 + n % 7} kip,Arm M{n},C-{n:03d}"
+            for n in range(200)
+        ]
         table = Path(folder) / "members.csv"
         table.write_text("\n".join(rows) + "\n", encoding="utf-8")
         command = [
