@@ -136,3 +136,65 @@ def test_each_en_check_reports_its_worst_combination(angle_deg: float) -> None:
     assert set(brute) <= set(reported)
     for description, worst in brute.items():
         assert reported[description].worst_utilization == pytest.approx(worst, rel=1e-9, abs=1e-12)
+
+
+def test_issue_12_failure_2_a_live_load_that_helps_is_also_left_out() -> None:
+    """ASCE 7-22 2.3.1: "the effects of one or more loads not acting shall be investigated".
+
+    A 12 ft W8x31 column (our own, invented): roof dead load 20 kip on its axis, a crane
+    bracket live load 8 kip 12 in off the axis on the windward face, wind 2.95 kip the
+    other way at the top. The bracket's moment opposes the wind's, so 1.2D + 1.0W without
+    L is worse than with it. Before, every combination kept L when the job had one and the
+    sheet said OK (0.985 under 1.2D + W + L); 1.2D + W gives 1.012.
+    """
+    loads = [
+        point_load("roof", magnitude="20 kip", angle="180 deg", from_axis="+z",
+                   toward_axis="+x", z="144 in"),
+        point_load("crane bracket", magnitude="8 kip", angle="180 deg", from_axis="+z",
+                   toward_axis="+x", z="144 in", ex="12 in"),
+        point_load("wind", components=("-2.95 kip", "0 kip", "0 kip"), z="144 in"),
+    ]  # fmt: skip
+    types = ["D", "L", "W"]
+    basis = DesignBasis("AISC 360-22")
+    sheet = member_sheet(SECTION, loads, length="144 in", design=basis, load_types=types)
+    plan = plan_combinations(
+        SECTION, loads, types, Quantity(144, "in"), Quantity(0, "in"), basis, sheet.value("F_y")
+    )
+    by_text = {
+        combo.text(): float(u) for combo, u in zip(plan.combos, plan.utilization, strict=True)
+    }
+    assert by_text["1.2D + W + L"] < 1.0 < by_text["1.2D + W"]
+    governing = sheet.governing_check()
+    assert not governing.passes and governing.worst_utilization > 1.0
+    assert plan.governing_combination.text() == "1.2D + W"
+
+
+def test_issue_12_failure_3_a_favourable_imposed_load_is_omitted() -> None:
+    """EN 1990 Table A1.2(B): a favourable variable action takes 0, and γG,inf = 1.0.
+
+    A 2 m SHS 100x100x5 canopy arm (our own, invented): its own weight 1 kN and an
+    imposed maintenance load 1.5 kN down at the tip, wind uplift 4 kN. G + 1.5W without Q
+    is the worst; before, Q always accompanied the leading wind (1.5·ψ0·Q).
+    """
+    from calcsheet.sections import rectangular_hss
+
+    section = rectangular_hss("100 mm", "100 mm", "5 mm")
+    loads = [
+        point_load("canopy", magnitude="1 kN", angle="90 deg", z="2 m"),
+        point_load("maintenance", magnitude="1.5 kN", angle="90 deg", z="2 m"),
+        point_load("uplift", magnitude="4 kN", angle="-90 deg", z="2 m"),
+    ]
+    types = ["G", "Q", "W"]
+    basis = DesignBasis("EN 1993-1-1", grade="S355")
+    sheet = member_sheet(
+        section, loads, length="2 m", Fy="355 MPa", design=basis, load_types=types, units="SI"
+    )
+    plan = plan_combinations(
+        section, loads, types, Quantity(2, "m"), Quantity(0, "m"), basis, Quantity(355, "MPa")
+    )
+    governing = plan.governing_combination
+    assert governing.factor("Q") == 0.0 and governing.factor("W") == 1.5
+    assert governing.factor("G") == 1.0
+    old = [c for c in plan.combos if c.factor("W") == 1.5 and c.factor("Q") > 0]
+    worst_old = max(float(plan.utilization[plan.combos.index(c)]) for c in old)
+    assert sheet.governing_check().worst_utilization > worst_old
