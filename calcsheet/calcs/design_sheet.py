@@ -25,7 +25,7 @@ from calcsheet.calcs.design import (
 from calcsheet.engine import Check, Sheet
 from calcsheet.figures.chart import sweep_chart
 from calcsheet.mechanics.loads import AppliedMoment, PointLoad
-from calcsheet.sections import Section
+from calcsheet.sections import Section, family_title
 from calcsheet.standards.combinations import combination_rules_text
 from calcsheet.units import Quantity, format_number, ureg
 
@@ -195,7 +195,7 @@ def write_exploration(
         if plan is None:
             plan = plan_combinations(section, loads, types, length, station, basis, Fy)
         chosen, lighter = lightest_section(plan, basis, Fy, length)
-        sheet.heading(f"Design exploration: lightest {basis.lightest_in} section")
+        sheet.heading(f"Design exploration: lightest of the {family_title(basis.lightest_in)}")
         rows = [
             [
                 candidate.name,
@@ -217,4 +217,4 @@ def write_exploration(
             ),
         )
         if chosen is None:
-            sheet.text(f"No {basis.lightest_in} section passes every check.")
+            sheet.text(f"None of the {family_title(basis.lightest_in)} passes every check.")

@@ -46,7 +46,7 @@ from calcsheet.mechanics.point_stresses import (
 from calcsheet.mechanics.statics import loads_beyond, validate_loads
 from calcsheet.mechanics.stresses import StressModel, stress_model
 from calcsheet.mechanics.torsion import WARPING_NOTE
-from calcsheet.sections import Section
+from calcsheet.sections import Section, family_title
 from calcsheet.units import Quantity, parse_quantity, unit_system, ureg
 
 AXIS_TEXT = (
@@ -452,10 +452,10 @@ def _write_section_properties(
 ) -> dict[str, sp.Symbol | None]:
     sheet.heading("Section properties used")
     sheet.text(
-        f"Section: {section.name} ({section.family}). Each property's source is given "
-        "beside it. Stress points are the labelled points of the section outline, with the "
-        "centroid added where it lies in the material and, on open sections, points on the "
-        "walls where transverse shear peaks."
+        f"Section: {section.name} ({family_title(section.family)}). Each property's source "
+        "is given beside it. Stress points are the labelled points of the section outline, "
+        "with the centroid added where it lies in the material and, on open sections, points "
+        "on the walls where transverse shear peaks."
     )
     props: dict[str, sp.Symbol | None] = {}
     for name, key, description in (

@@ -17,6 +17,7 @@ Quick use::
 from calcsheet.sections.catalog import (
     FAMILIES,
     catalog_section,
+    family_title,
     find_entry,
     list_designations,
     normalise_designation,
@@ -44,6 +45,7 @@ __all__ = [
     "built_up",
     "catalog_section",
     "channel",
+    "family_title",
     "find_entry",
     "i_shape",
     "list_designations",

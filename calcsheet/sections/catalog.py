@@ -66,6 +66,14 @@ FAMILIES: dict[str, Family] = {
     )
 }
 
+
+def family_title(family: str) -> str:
+    """A family in words for a sheet ("rectangular and square HSS" for HSS_RECT); a
+    user-defined section's own kind is already words and comes back as it is."""
+    found = FAMILIES.get(str(family).upper())
+    return found.title if found is not None else str(family)
+
+
 # Unit of each tabulated column; columns not listed here are not carried.
 _LENGTH = (
     "d", "bf", "tw", "tf", "k", "k1", "x", "y", "xp", "yp", "eo", "OD", "ID", "tnom", "tdes",
