@@ -267,6 +267,7 @@ def angle_sweep(
         present,
     )
     unit_forces = []
+    quarters = []
     for quarter in (0.0, 90.0):
         turned = point_load(
             swept.name,
@@ -278,6 +279,7 @@ def angle_sweep(
             ex=swept.ex,
             ey=swept.ey,
         )
+        quarters.append(turned)
         unit_forces.append(forces_by_type([turned], ["swept"], length, station)[1][0])
     radians = np.radians(angles)
     swept_forces = (
@@ -295,8 +297,56 @@ def angle_sweep(
     flat = combined.reshape(-1, 6)
     values = utilizations(section, flat, basis, Fy, length)[0].reshape(combined.shape[:2])
     values = values.max(axis=1)
+    if basis.deflection_ratio:
+        turning = (index, quarters, radians)
+        values = np.maximum(values, _deflection_utilization(section, loads, turning, basis, length))
     drawn = float(swept.direction.angle.to("deg").m) % 360.0
     return Sweep(swept.name, angles, values, drawn)
+
+
+def _deflection_utilization(
+    section: Section,
+    loads: Sequence[PointLoad | AppliedMoment],
+    turning: tuple[int, list[PointLoad], np.ndarray],
+    basis: DesignBasis,
+    length: pint.Quantity,
+) -> np.ndarray:
+    """The tip deflection check (service loads as given) with one load turned through
+    the angles: the sheet's deflection procedure on arrays, one value per angle."""
+    from calcsheet.mechanics.deflection import LoadTerms, tip_deflection_arrays
+
+    index, (at_0, at_90), radians = turning
+    terms = []
+    for number, load in enumerate(loads):
+        z = float(load.z.to("m").m)
+        if isinstance(load, AppliedMoment):
+            terms.append(LoadTerms(load.name, z, C_x=load.Mx.to("N*m").m, C_y=load.My.to("N*m").m))
+            continue
+        if number == index:
+            F = [
+                np.cos(radians) * at_0.component(axis).to("N").m
+                + np.sin(radians) * at_90.component(axis).to("N").m
+                for axis in ("x", "y", "z")
+            ]
+        else:
+            F = [float(load.component(axis).to("N").m) for axis in ("x", "y", "z")]
+        terms.append(
+            LoadTerms(
+                load.name, z, F_x=F[0], F_y=F[1], F_z=F[2],
+                e_x=float(load.ex.to("m").m), e_y=float(load.ey.to("m").m),
+            )
+        )  # fmt: skip
+    numbers = section.numeric("m")
+    result = tip_deflection_arrays(
+        terms,
+        length=float(length.to("m").m),
+        E=float(Quantity(basis.standard.modulus).to("Pa").m),
+        Ix=numbers.Ix,
+        Iy=numbers.Iy,
+        Ixy=numbers.Ixy,
+        n=basis.deflection_ratio,
+    )
+    return np.broadcast_to(np.asarray(result.utilization, dtype=float), radians.shape)
 
 
 @dataclass(frozen=True)

@@ -178,8 +178,10 @@ def write_exploration(
         sheet.text(
             f"The load {sweep.load} is turned through 0–360° in its plane in steps of "
             f"{basis.sweep_step_deg:g}°, magnitude and point of application unchanged, and the "
-            f"governing utilization is found for each angle (computed when the sheet was "
-            f"built). Worst angle {sweep.worst_deg:g}°: {sweep.utilization.max():.3f}; "
+            f"governing utilization of every check (every combination"
+            f"{', the tip deflection under the loads as given' if basis.deflection_ratio else ''}"
+            f") is found for each angle (computed when the sheet was built). Worst angle "
+            f"{sweep.worst_deg:g}°: {sweep.utilization.max():.3f}; "
             f"drawn angle {sweep.drawn_deg:g}°: {drawn:.3f}."
         )
         sheet.figure(

@@ -130,3 +130,27 @@ def test_each_check_names_its_governing_combination() -> None:
             continue  # the deflection check: service loads as given
         assert check.worst_utilization == pytest.approx(float(np.max(plan.per_check[key])))
         assert check.cases is not None and check.cases.count == len(plan.combos)
+
+
+def test_the_sweep_includes_the_deflection_check() -> None:
+    """Issue 17: a member whose deflection governs showed a sweep maximum below it.
+
+    A 10 ft HSS4x4x1/4 arm (our own, invented) with 1.2 kip at the tip: the tip
+    deflection against L/360 governs; at the drawn angle the sweep must equal the
+    sheet's governing check, and its maximum can only be larger.
+    """
+    loads = [point_load("arm", magnitude="1.2 kip", angle="90 deg", z="120 in", ey="-2 in")]
+    basis = DesignBasis("AISC 360-22", deflection_ratio=360, sweep_load="arm")
+    sheet = member_sheet(
+        catalog_section("HSS4X4X1/4"), loads, length="120 in", design=basis, load_types=["D"]
+    )
+    governing = sheet.governing_check()
+    assert governing.description == "Tip deflection"
+    from calcsheet.calcs.design import angle_sweep
+
+    sweep = angle_sweep(
+        catalog_section("HSS4X4X1/4"), loads, ["D"], Quantity(120, "in"), Quantity(0, "in"),
+        basis, Quantity(50, "ksi"),
+    )  # fmt: skip
+    assert sweep.drawn_utilization == pytest.approx(governing.worst_utilization, rel=1e-9)
+    assert sweep.utilization.max() >= governing.worst_utilization * (1 - 1e-9)
