@@ -307,15 +307,15 @@ def angle_sweep(
 def _deflection_utilization(
     section: Section,
     loads: Sequence[PointLoad | AppliedMoment],
-    turning: tuple[int, list[PointLoad], np.ndarray],
+    turning: tuple[int, list[PointLoad], np.ndarray] | None,
     basis: DesignBasis,
     length: pint.Quantity,
 ) -> np.ndarray:
-    """The tip deflection check (service loads as given) with one load turned through
-    the angles: the sheet's deflection procedure on arrays, one value per angle."""
+    """The tip deflection check (service loads as given), optionally with one load turned
+    through angles: the sheet's deflection procedure on arrays, one value per angle."""
     from calcsheet.mechanics.deflection import LoadTerms, tip_deflection_arrays
 
-    index, (at_0, at_90), radians = turning
+    index, (at_0, at_90), radians = turning or (-1, [None, None], np.zeros(1))
     terms = []
     for number, load in enumerate(loads):
         z = float(load.z.to("m").m)
@@ -364,10 +364,19 @@ class Candidate:
 
 
 def lightest_section(
-    plan: CombinationPlan, basis: DesignBasis, Fy: pint.Quantity, length: pint.Quantity
+    plan: CombinationPlan,
+    basis: DesignBasis,
+    Fy: pint.Quantity,
+    length: pint.Quantity,
+    loads: Sequence[PointLoad | AppliedMoment] = (),
 ) -> tuple[Candidate | None, list[Candidate]]:
     """The lightest section of ``basis.lightest_in`` passing every check of the standard
-    under every combination, and the (up to) two lighter sections before it, which fail."""
+    under every combination, and the (up to) two lighter sections before it, which fail.
+
+    With a deflection limit in the basis and the service ``loads``, the tip deflection
+    is a check too (the sheet's procedure on each candidate's own section).
+    """
+    from calcsheet.sections import catalog_section
     from calcsheet.sections.catalog import find_entry
 
     search = basis.standard.search
@@ -380,15 +389,27 @@ def lightest_section(
     worst = per_check.max(axis=0)
     which = per_check.argmax(axis=0)
 
+    def deflection(i: int) -> float:
+        if not (basis.deflection_ratio and loads):
+            return 0.0
+        section = catalog_section(names[i])
+        return float(_deflection_utilization(section, loads, None, basis, length)[0])
+
     def candidate(i: int) -> Candidate:
         weight = find_entry(names[i]).values.get("weight", math.nan)
+        bending = deflection(i)
+        if bending > worst[i]:
+            return Candidate(names[i], Quantity(weight, "lbf/ft"), bending, "deflection")
         return Candidate(names[i], Quantity(weight, "lbf/ft"), float(worst[i]), keys[int(which[i])])
 
-    passing = np.flatnonzero(worst <= 1.0)
-    if passing.size == 0:
-        return None, [candidate(i) for i in range(max(0, len(names) - 2), len(names))]
-    first = int(passing[0])
-    return candidate(first), [candidate(i) for i in range(max(0, first - 2), first)]
+    # Strength first (every section at once), then the deflection of each passing section
+    # in order of weight until one passes both: the same checks as the sheet's.
+    for first in np.flatnonzero(worst <= 1.0):
+        chosen = candidate(int(first))
+        if chosen.passes:
+            first = int(first)
+            return chosen, [candidate(i) for i in range(max(0, first - 2), first)]
+    return None, [candidate(i) for i in range(max(0, len(names) - 2), len(names))]
 
 
 __all__ = [

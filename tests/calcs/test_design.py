@@ -154,3 +154,28 @@ def test_the_sweep_includes_the_deflection_check() -> None:
     )  # fmt: skip
     assert sweep.drawn_utilization == pytest.approx(governing.worst_utilization, rel=1e-9)
     assert sweep.utilization.max() >= governing.worst_utilization * (1 - 1e-9)
+
+
+def test_the_lightest_section_also_passes_the_deflection_check() -> None:
+    """Issue 17: the lightest-section table used the strength checks only.
+
+    A 10 ft cantilever (our own, invented) with 1.2 kip at the tip against L/360: the
+    lightest W passing strength fails the deflection, so the table's choice must be a
+    heavier one whose own sheet passes every check.
+    """
+    loads = [point_load("arm", magnitude="1.2 kip", angle="90 deg", z="120 in")]
+    strength_only = DesignBasis("AISC 360-22", lightest_in="W")
+    with_deflection = DesignBasis("AISC 360-22", lightest_in="W", deflection_ratio=360)
+    plan = plan_combinations(
+        catalog_section("W8X31"), loads, ["D"], Quantity(120, "in"), Quantity(0, "in"),
+        with_deflection, FY,
+    )  # fmt: skip
+    by_strength, _ = lightest_section(plan, strength_only, FY, Quantity(120, "in"), loads)
+    chosen, lighter = lightest_section(plan, with_deflection, FY, Quantity(120, "in"), loads)
+    assert chosen.name != by_strength.name and chosen.weight > by_strength.weight
+    assert any(c.governing_check == "deflection" and not c.passes for c in lighter)
+    sheet = member_sheet(
+        catalog_section(chosen.name), loads, length="120 in", Fy=FY,
+        design=DesignBasis("AISC 360-22", deflection_ratio=360), load_types=["D"],
+    )  # fmt: skip
+    assert all(check.passes for check in sheet.checks)
