@@ -133,6 +133,8 @@ class PointTerms:
     y: Value
     cuts: Mapping[str, Cut]
     junction: Flag = False
+    # False: evaluated step by step but not printed (the sheet's table shows it).
+    shown: bool = True
 
 
 @dataclass(frozen=True)
@@ -180,7 +182,9 @@ def point_stress_procedure(
     )
     tau_T_common = _common_torsion(w, forces.T, section, stress)
     records = []
+    outer = w
     for point in points:
+        w = outer if point.shown else outer.quietly()
         n = point.number
         record = PointRecord(n, point.label)
         w.heading(f"Point {n}: {point.label}", level=2)
