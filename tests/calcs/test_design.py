@@ -179,3 +179,34 @@ def test_the_lightest_section_also_passes_the_deflection_check() -> None:
         design=DesignBasis("AISC 360-22", deflection_ratio=360), load_types=["D"],
     )  # fmt: skip
     assert all(check.passes for check in sheet.checks)
+
+
+@pytest.mark.parametrize(
+    ("kind", "section"),
+    [
+        ("AISC 360-22", "W10X33"),
+        ("AISC 360-22", "HSS6X6X3/8"),
+        ("AISC 360-22", "HSS6.625X0.280"),
+        ("AISC 360-22", "Pipe4STD"),
+        ("AISC 360-22", "L4X4X1/2"),
+        ("EN 1993-1-1", "W10X33"),
+        ("EN 1993-1-1", "HSS6X6X3/8"),
+        ("EN 1993-1-1", "HSS6.625X0.280"),
+    ],
+)
+def test_a_member_sheet_builds_for_every_family_the_checks_cover(kind, section) -> None:
+    """A round HSS once stopped the AISC sheet: the stress steps and the checks both
+    named a step V_r. Every covered family builds, each check at its own worst."""
+    basis = DesignBasis(kind, deflection_ratio=180, grade="S355" if kind != "AISC 360-22" else "")
+    types = ["D", "W"] if kind == "AISC 360-22" else ["G", "W"]
+    sheet = member_sheet(
+        catalog_section(section), LOADS, length=LENGTH, Fy=FY, design=basis, load_types=types
+    )
+    plan = plan_combinations(catalog_section(section), LOADS, types, LENGTH, STATION, basis, FY)
+    titles = check_titles(basis)
+    for check in sheet.checks:
+        key = next((k for k, title in titles.items() if title == check.description), None)
+        if key is not None:
+            assert check.worst_utilization == pytest.approx(
+                float(np.max(plan.per_check[key])), rel=1e-9, abs=1e-12
+            )
