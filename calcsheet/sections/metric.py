@@ -1,0 +1,266 @@
+"""EN metric sections: I and H sections of EN 10365 and hot-finished hollow sections of EN 10210-2.
+
+The dimensions come from the files in ``calcsheet/sections/data`` (vendored from
+the eurocodepy package, MIT licence; ``data/README.md`` says which version and
+files); every property is computed here from them:
+
+* IPE, HEA, HEB, HEM (EN 10365:2017): h, b, t_w, t_f and the root radius r. The
+  outline carries the four quarter-circle root fillets, so A, I, W_el and W_pl
+  include them, as the product tables do.
+* SHS, RHS, CHS (EN 10210-2:2006, hot-finished): the source's corner radius is
+  1.5 t on every row, the hot-finished rule of EN 10210-2 for calculating
+  properties (outside corner radius r_o = 1.5 t, inside r_i = 1.0 t). The rule of
+  EN 10219-2 for cold-formed sections is :func:`corner_radii` with
+  ``forming="cold-formed"``; the catalog has no cold-formed family yet.
+
+Designations are spelled as the product standards write them ("IPE 300",
+"HE 200 B", "SHS 100x100x5", "RHS 200x100x6.3", "CHS 168.3x8") and looked up
+forgivingly by :mod:`calcsheet.sections.catalog`: case and spaces do not matter,
+"HEB 200", "HEB200" and "HE200B" are the same shape, "x" or "×" separate the
+sizes, and a decimal may be written with a point or a comma ("6,3").
+
+Axes: EN y-y (the strong axis) is calcsheet's x-x, EN z-z is calcsheet's y-y, so
+a section's ``Ix`` is the tables' I_y and ``Iy`` their I_z.
+"""
+
+from __future__ import annotations
+
+import csv
+import math
+import re
+from dataclasses import dataclass, replace
+from functools import lru_cache
+from importlib import resources
+from types import MappingProxyType
+
+import pint
+
+from calcsheet.sections import shapes
+from calcsheet.sections.section import COMPUTED, Section, build_section
+from calcsheet.units import Quantity
+
+
+@dataclass(frozen=True)
+class MetricFamily:
+    """A family of EN sections: its key, title, product standard and data file."""
+
+    key: str
+    title: str
+    standard: str
+    file: str
+
+
+METRIC_FAMILIES: dict[str, MetricFamily] = {
+    family.key: family
+    for family in (
+        MetricFamily("IPE", "IPE sections", "EN 10365:2017", "en10365_i_h_sections.csv"),
+        MetricFamily("HEA", "HE A sections", "EN 10365:2017", "en10365_i_h_sections.csv"),
+        MetricFamily("HEB", "HE B sections", "EN 10365:2017", "en10365_i_h_sections.csv"),
+        MetricFamily("HEM", "HE M sections", "EN 10365:2017", "en10365_i_h_sections.csv"),
+        MetricFamily(
+            "SHS",
+            "square hollow sections (hot-finished)",
+            "EN 10210-2:2006",
+            "en10210_rhs_shs.csv",
+        ),
+        MetricFamily(
+            "RHS",
+            "rectangular hollow sections (hot-finished)",
+            "EN 10210-2:2006",
+            "en10210_rhs_shs.csv",
+        ),
+        MetricFamily(
+            "CHS", "circular hollow sections (hot-finished)", "EN 10210-2:2006", "en10210_chs.csv"
+        ),
+    )
+}
+DATA_SOURCE = "dimensions: {standard}, as carried by eurocodepy 2026.1.1 (vendored {file})"
+
+
+@dataclass(frozen=True)
+class MetricRow:
+    """One row of a vendored file: its designation, family and values (mm, kg/m)."""
+
+    designation: str
+    family: MetricFamily
+    values: dict[str, float]
+
+
+@lru_cache(maxsize=1)
+def metric_rows() -> tuple[MetricRow, ...]:
+    """Every EN section of the vendored files, read once."""
+    rows: list[MetricRow] = []
+    folder = resources.files("calcsheet.sections") / "data"
+    for file in dict.fromkeys(family.file for family in METRIC_FAMILIES.values()):
+        with (folder / file).open(encoding="utf-8", newline="") as handle:
+            for record in csv.DictReader(handle):
+                designation = record.pop("designation")
+                family = METRIC_FAMILIES[record.pop("family")]
+                values = {name: float(text) for name, text in record.items()}
+                rows.append(MetricRow(designation, family, values))
+    return tuple(rows)
+
+
+def lookup_keys(designation: str) -> set[str]:
+    """Every key a row is found under: 'HE 200 B' -> {'HE200B', 'HEB200'}.
+
+    Keys are upper case without spaces, with "X" between sizes and "_" for the
+    decimal point, as :func:`calcsheet.sections.catalog.normalise_designation`
+    writes a typed designation.
+    """
+    key = normalise_metric(designation)
+    keys = {key}
+    match = re.fullmatch(r"HE(\d+)([ABM])", key)
+    if match:
+        keys.add(f"HE{match.group(2)}{match.group(1)}")
+    return keys
+
+
+def normalise_metric(text: str) -> str:
+    """A typed EN designation in key form: 'rhs 200 x 100 x 6,3' -> 'RHS200X100X6_3'."""
+    name = text.strip().upper().replace("×", "X").replace("*", "X")
+    name = re.sub(r"(\d),(\d)", r"\1.\2", name)  # a decimal comma
+    name = re.sub(r"\s+", "", name)
+    name = re.sub(r"(\.\d*?)0+(?=X|$)", r"\1", name).replace(".X", "X")  # 5.0 -> 5
+    name = re.sub(r"\.$", "", name)
+    match = re.fullmatch(r"HE([ABM])(\d+)", name)
+    if match:  # HEB200 -> HE200B, one key for both spellings
+        name = f"HE{match.group(2)}{match.group(1)}"
+    return name.replace(".", "_")
+
+
+# --- rules of the product standards ------------------------------------------------------
+
+
+def corner_radii(wall: float, forming: str = "hot-finished") -> tuple[float, float]:
+    """Outside and inside corner radii (r_o, r_i) used to calculate hollow-section properties.
+
+    Hot-finished, EN 10210-2:2006 Annex B: r_o = 1.5 t, r_i = 1.0 t. Cold-formed,
+    EN 10219-2:2006 Annex B: r_o = 2.0 t (t <= 6 mm), 2.5 t (6 < t <= 10 mm),
+    3.0 t (t > 10 mm), r_i = r_o − t. Both typed from memory; ``wall`` in mm for the
+    cold-formed thresholds.
+    """
+    if forming == "hot-finished":
+        return 1.5 * wall, 1.0 * wall
+    if forming != "cold-formed":
+        raise ValueError(f"forming {forming!r}: 'hot-finished' or 'cold-formed'")
+    factor = 2.0 if wall <= 6.0 else 2.5 if wall <= 10.0 else 3.0
+    return factor * wall, (factor - 1.0) * wall
+
+
+def rectangular_hollow_torsion(
+    height: float, width: float, wall: float, outer: float, inner: float
+) -> float:
+    """I_t of a rectangular hollow section, EN 10210-2:2006 Annex B (typed from memory).
+
+    I_t = t³·h/3 + 2·K·A_h with R_c = (r_o + r_i)/2 the mid-line corner radius,
+    h = 2·((B − t) + (H − t)) − 2·R_c·(4 − π) the mid-line perimeter,
+    A_h = (B − t)·(H − t) − R_c²·(4 − π) the area it encloses and K = 2·A_h·t/h.
+    """
+    midline_radius = (outer + inner) / 2
+    perimeter = 2 * ((width - wall) + (height - wall)) - 2 * midline_radius * (4 - math.pi)
+    enclosed = (width - wall) * (height - wall) - midline_radius**2 * (4 - math.pi)
+    k = 2 * enclosed * wall / perimeter
+    return wall**3 * perimeter / 3 + 2 * k * enclosed
+
+
+def rolled_i_torsion(depth: float, width: float, web: float, flange: float, root: float) -> float:
+    """I_t of a rolled I or H section with root fillets (from memory).
+
+    El Darwish and Johnston, "Torsion of structural shapes", J. Struct. Div. ASCE
+    91 (ST1), 1965, as the section tables of European producers use it:
+    I_t = 2/3·(b − 0.63·t_f)·t_f³ + 1/3·(h − 2·t_f)·t_w³ + 2·α·D⁴ − 0.420·t_f⁴, with
+    α = −0.042 + 0.2204·t_w/t_f + 0.1355·r/t_f − 0.0865·r·t_w/t_f² − 0.0725·t_w²/t_f²
+    and D = ((t_f + r)² + (r + t_w/4)·t_w)/(2·r + t_f), the diameter of the
+    circle inscribed in the web-to-flange junction.
+    """
+    b, h, tw, tf, r = width, depth, web, flange, root
+    alpha = (
+        -0.042
+        + 0.2204 * tw / tf
+        + 0.1355 * r / tf
+        - 0.0865 * r * tw / tf**2
+        - 0.0725 * tw**2 / tf**2
+    )
+    inscribed = ((tf + r) ** 2 + (r + tw / 4) * tw) / (2 * r + tf)
+    return (
+        2 / 3 * (b - 0.63 * tf) * tf**3
+        + 1 / 3 * (h - 2 * tf) * tw**3
+        + 2 * alpha * inscribed**4
+        - 0.420 * tf**4
+    )
+
+
+def rolled_i_warping(depth: float, width: float, flange: float) -> float:
+    """I_w of a doubly symmetric I: the flanges' own I_z times (h − t_f)²/4.
+
+    I_w = t_f·b³/24·(h − t_f)²: thin-walled theory (Timoshenko and Gere, Theory
+    of Elastic Stability, 2nd ed., 1961, ch. 5; from memory), the web and fillets
+    neglected.
+    """
+    return flange * width**3 / 24 * (depth - flange) ** 2
+
+
+# --- sections ------------------------------------------------------------------------------
+
+
+def metric_section(row: MetricRow) -> Section:
+    """The section of one row, every property computed from its dimensions (mm)."""
+    value, family = row.values, row.family
+    source = DATA_SOURCE.format(standard=family.standard, file=family.file)
+    if family.key in {"IPE", "HEA", "HEB", "HEM"}:
+        h, b, tw, tf, r = (value[name] for name in ("h_mm", "b_mm", "tw_mm", "tf_mm", "r_mm"))
+        outline = shapes.i_shape(h, b, tw, tf, "mm", root_radius=r)
+        outline = replace(
+            outline,
+            torsion_constant=rolled_i_torsion(h, b, tw, tf, r),
+            torsion_note="computed: rolled I with root fillets (El Darwish and Johnston, "
+            "J. Struct. Div. ASCE 91(ST1), 1965)",
+            warping_constant=rolled_i_warping(h, b, tf),
+            warping_note="computed: I_w = t_f·b³·(h − t_f)²/24 (flanges only)",
+        )
+        dimensions = {"d": h, "bf": b, "tw": tw, "tf": tf, "r": r}
+        computed = f"computed from the {family.standard} dimensions (outline with root fillets r)"
+    elif family.key in {"SHS", "RHS"}:
+        h, b, t = value["h_mm"], value["b_mm"], value["t_mm"]
+        outer, inner = corner_radii(t, "hot-finished")
+        outline = shapes.rectangular_tube(h, b, t, "mm", outer_radius=outer, inner_radius=inner)
+        outline = replace(
+            outline,
+            torsion_constant=rectangular_hollow_torsion(h, b, t, outer, inner),
+            torsion_note="computed: EN 10210-2:2006 Annex B, I_t = t³·h/3 + 2·K·A_h",
+        )
+        dimensions = {"H": h, "B": b, "t": t}
+        computed = (
+            f"computed from the {family.standard} dimensions "
+            "(corner radii r_o = 1.5t, r_i = t, EN 10210-2 Annex B)"
+        )
+    else:
+        d, t = value["d_mm"], value["t_mm"]
+        outline = shapes.round_tube(d, t, "mm")
+        dimensions = {"OD": d, "t": t}
+        computed = f"computed from the {family.standard} dimensions"
+    section = build_section(
+        name=row.designation,
+        family=family.key,
+        dimensions={name: Quantity(number, "mm") for name, number in dimensions.items()},
+        length_unit="mm",
+        shape=outline,
+        tabulated=tabulated_values(row),
+    )
+    sources = {
+        name: (f"{computed}; {source}" if text == COMPUTED else text)
+        for name, text in section.sources.items()
+    }
+    return replace(section, sources=MappingProxyType(sources))
+
+
+def tabulated_values(row: MetricRow) -> dict[str, pint.Quantity]:
+    """The row as quantities: its dimensions in mm and its mass per metre."""
+    quantities = {}
+    for column, number in row.values.items():
+        name, _, unit = column.partition("_")
+        if unit == "mm":
+            quantities[name] = Quantity(number, "mm")
+    quantities["mass"] = Quantity(row.values["mass_kg_per_m"], "kg/m")
+    return quantities
