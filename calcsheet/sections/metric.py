@@ -74,7 +74,7 @@ METRIC_FAMILIES: dict[str, MetricFamily] = {
         ),
     )
 }
-DATA_SOURCE = "dimensions: {standard}, as carried by eurocodepy 2026.1.1 (vendored {file})"
+DATA_SOURCE = "data: eurocodepy 2026.1.1, {file}"
 
 
 @dataclass(frozen=True)
@@ -165,30 +165,21 @@ def rectangular_hollow_torsion(
 
 
 def rolled_i_torsion(depth: float, width: float, web: float, flange: float, root: float) -> float:
-    """I_t of a rolled I or H section with root fillets (from memory).
+    """I_t of a rolled I or H section with root fillets (typed from memory).
 
-    El Darwish and Johnston, "Torsion of structural shapes", J. Struct. Div. ASCE
-    91 (ST1), 1965, as the section tables of European producers use it:
-    I_t = 2/3·(b − 0.63·t_f)·t_f³ + 1/3·(h − 2·t_f)·t_w³ + 2·α·D⁴ − 0.420·t_f⁴, with
-    α = −0.042 + 0.2204·t_w/t_f + 0.1355·r/t_f − 0.0865·r·t_w/t_f² − 0.0725·t_w²/t_f²
-    and D = ((t_f + r)² + (r + t_w/4)·t_w)/(2·r + t_f), the diameter of the
-    circle inscribed in the web-to-flange junction.
+    The flanges and the web as thin rectangles plus the two web-to-flange
+    junctions, after El Darwish and Johnston, "Torsion of structural shapes",
+    J. Struct. Div. ASCE 91 (ST1), 1965 (the attribution is from memory too):
+    I_t = 2/3·(b − 0.63·t_f)·t_f³ + 1/3·(h − 2·t_f)·t_w³ + 2·α·D⁴, with
+    α = (t_w/t_f)·(0.145 + 0.1·r/t_f) and D = ((r + t_w/2)² + (r + t_f)² − r²)/(2·r + t_f),
+    the diameter of the circle inscribed in the junction. It gave the tabulated
+    I_t of all 90 vendored I and H sections within −3 % / +5 % (a test); an
+    alternative form with a fitted α gave up to −10 % on HE 100 M.
     """
     b, h, tw, tf, r = width, depth, web, flange, root
-    alpha = (
-        -0.042
-        + 0.2204 * tw / tf
-        + 0.1355 * r / tf
-        - 0.0865 * r * tw / tf**2
-        - 0.0725 * tw**2 / tf**2
-    )
-    inscribed = ((tf + r) ** 2 + (r + tw / 4) * tw) / (2 * r + tf)
-    return (
-        2 / 3 * (b - 0.63 * tf) * tf**3
-        + 1 / 3 * (h - 2 * tf) * tw**3
-        + 2 * alpha * inscribed**4
-        - 0.420 * tf**4
-    )
+    alpha = tw / tf * (0.145 + 0.1 * r / tf)
+    inscribed = ((r + tw / 2) ** 2 + (r + tf) ** 2 - r**2) / (2 * r + tf)
+    return 2 / 3 * (b - 0.63 * tf) * tf**3 + 1 / 3 * (h - 2 * tf) * tw**3 + 2 * alpha * inscribed**4
 
 
 def rolled_i_warping(depth: float, width: float, flange: float) -> float:
@@ -196,7 +187,8 @@ def rolled_i_warping(depth: float, width: float, flange: float) -> float:
 
     I_w = t_f·b³/24·(h − t_f)²: thin-walled theory (Timoshenko and Gere, Theory
     of Elastic Stability, 2nd ed., 1961, ch. 5; from memory), the web and fillets
-    neglected.
+    neglected. It is 0.7 % to 5.3 % above the tabulated I_w of the vendored
+    sections (a test): the producers' tables use a refined expression.
     """
     return flange * width**3 / 24 * (depth - flange) ** 2
 
@@ -214,13 +206,13 @@ def metric_section(row: MetricRow) -> Section:
         outline = replace(
             outline,
             torsion_constant=rolled_i_torsion(h, b, tw, tf, r),
-            torsion_note="computed: rolled I with root fillets (El Darwish and Johnston, "
-            "J. Struct. Div. ASCE 91(ST1), 1965)",
+            torsion_note="computed: flanges, web and root-fillet junctions (El Darwish and "
+            "Johnston, J. Struct. Div. ASCE 91(ST1), 1965)",
             warping_constant=rolled_i_warping(h, b, tf),
             warping_note="computed: I_w = t_f·b³·(h − t_f)²/24 (flanges only)",
         )
         dimensions = {"d": h, "bf": b, "tw": tw, "tf": tf, "r": r}
-        computed = f"computed from the {family.standard} dimensions (outline with root fillets r)"
+        computed = f"computed from {family.standard} dimensions, root fillets included"
     elif family.key in {"SHS", "RHS"}:
         h, b, t = value["h_mm"], value["b_mm"], value["t_mm"]
         outer, inner = corner_radii(t, "hot-finished")
@@ -232,35 +224,38 @@ def metric_section(row: MetricRow) -> Section:
         )
         dimensions = {"H": h, "B": b, "t": t}
         computed = (
-            f"computed from the {family.standard} dimensions "
-            "(corner radii r_o = 1.5t, r_i = t, EN 10210-2 Annex B)"
+            f"computed from {family.standard} dimensions, corners r_o = 1.5t, r_i = t (Annex B)"
         )
     else:
         d, t = value["d_mm"], value["t_mm"]
         outline = shapes.round_tube(d, t, "mm")
         dimensions = {"OD": d, "t": t}
-        computed = f"computed from the {family.standard} dimensions"
+        computed = f"computed from {family.standard} dimensions"
+    tabulated = tabulated_values(row)
     section = build_section(
         name=row.designation,
         family=family.key,
-        dimensions={name: Quantity(number, "mm") for name, number in dimensions.items()},
+        dimensions={name: tabulated[name] for name in dimensions},
         length_unit="mm",
         shape=outline,
-        tabulated=tabulated_values(row),
+        tabulated=tabulated,
     )
     sources = {
-        name: (f"{computed}; {source}" if text == COMPUTED else text)
+        name: (f"{computed} ({source})" if text == COMPUTED else text)
         for name, text in section.sources.items()
     }
     return replace(section, sources=MappingProxyType(sources))
 
 
 def tabulated_values(row: MetricRow) -> dict[str, pint.Quantity]:
-    """The row as quantities: its dimensions in mm and its mass per metre."""
-    quantities = {}
-    for column, number in row.values.items():
-        name, _, unit = column.partition("_")
-        if unit == "mm":
-            quantities[name] = Quantity(number, "mm")
-    quantities["mass"] = Quantity(row.values["mass_kg_per_m"], "kg/m")
+    """The row as quantities under the section's dimension names (mm), and its mass per metre."""
+    family, value = row.family.key, row.values
+    if family in {"IPE", "HEA", "HEB", "HEM"}:
+        names = {"d": "h_mm", "bf": "b_mm", "tw": "tw_mm", "tf": "tf_mm", "r": "r_mm"}
+    elif family in {"SHS", "RHS"}:
+        names = {"H": "h_mm", "B": "b_mm", "t": "t_mm"}
+    else:
+        names = {"OD": "d_mm", "t": "t_mm"}
+    quantities = {name: Quantity(value[column], "mm") for name, column in names.items()}
+    quantities["mass"] = Quantity(value["mass_kg_per_m"], "kg/m")
     return quantities
