@@ -199,7 +199,7 @@ def rolled_i_warping(depth: float, width: float, flange: float) -> float:
 def metric_section(row: MetricRow) -> Section:
     """The section of one row, every property computed from its dimensions (mm)."""
     value, family = row.values, row.family
-    source = DATA_SOURCE.format(standard=family.standard, file=family.file)
+    source = DATA_SOURCE.format(file=family.file)
     if family.key in {"IPE", "HEA", "HEB", "HEM"}:
         h, b, tw, tf, r = (value[name] for name in ("h_mm", "b_mm", "tw_mm", "tf_mm", "r_mm"))
         outline = shapes.i_shape(h, b, tw, tf, "mm", root_radius=r)
