@@ -19,6 +19,11 @@ forgivingly by :mod:`calcsheet.sections.catalog`: case and spaces do not matter,
 "HEB 200", "HEB200" and "HE200B" are the same shape, "x" or "×" separate the
 sizes, and a decimal may be written with a point or a comma ("6,3").
 
+A hollow section's :class:`Section` carries the family of a closed tube that the
+analysis and the checks know (``HSS_RECT``, ``HSS_ROUND``, see
+:data:`SECTION_FAMILY`); its catalog entry keeps SHS, RHS or CHS. An I or H
+section's Section carries IPE, HEA, HEB or HEM.
+
 Axes: EN y-y (the strong axis) is calcsheet's x-x, EN z-z is calcsheet's y-y, so
 a section's ``Ix`` is the tables' I_y and ``Iy`` their I_z.
 """
@@ -75,6 +80,11 @@ METRIC_FAMILIES: dict[str, MetricFamily] = {
     )
 }
 DATA_SOURCE = "data: eurocodepy 2026.1.1, {file}"
+# The Section.family of a hollow section: the family the analysis and the checks already
+# know as a closed tube. With a family of its own, the torsion rule (mechanics/torsion.py)
+# would take an SHS for an open section, τ = T·t/J, about ten times too small for a
+# closed wall (Bredt); the catalog family (SHS, RHS, CHS) stays on the catalog entry.
+SECTION_FAMILY = {"SHS": "HSS_RECT", "RHS": "HSS_RECT", "CHS": "HSS_ROUND"}
 
 
 @dataclass(frozen=True)
@@ -236,7 +246,7 @@ def metric_section(row: MetricRow) -> Section:
     tabulated = tabulated_values(row)
     section = build_section(
         name=row.designation,
-        family=family.key,
+        family=SECTION_FAMILY.get(family.key, family.key),
         dimensions={name: tabulated[name] for name in dimensions},
         length_unit="mm",
         shape=outline,
