@@ -192,6 +192,10 @@ def test_the_lightest_section_also_passes_the_deflection_check() -> None:
         ("EN 1993-1-1", "W10X33"),
         ("EN 1993-1-1", "HSS6X6X3/8"),
         ("EN 1993-1-1", "HSS6.625X0.280"),
+        ("EN 1993-1-1", "IPE 300"),
+        ("EN 1993-1-1", "HE 200 B"),
+        ("EN 1993-1-1", "SHS 100x100x5"),
+        ("EN 1993-1-1", "CHS 168.3x8"),
     ],
 )
 def test_a_member_sheet_builds_for_every_family_the_checks_cover(kind, section) -> None:
@@ -210,3 +214,16 @@ def test_a_member_sheet_builds_for_every_family_the_checks_cover(kind, section) 
             assert check.worst_utilization == pytest.approx(
                 float(np.max(plan.per_check[key])), rel=1e-9, abs=1e-12
             )
+
+
+def test_en_checks_read_a_metric_section_as_its_product_standard_gives_it() -> None:
+    """EN 10365 gives the root radius r of an IPE (15 mm for IPE 300, from the vendored
+    EN 10365 table); an EN 10210 hollow section is hot-finished (buckling curve a,
+    EN 1993-1-1 Table 6.2), a section drawn from dimensions cold-formed (curve c)."""
+    from calcsheet.standards.en1993.member import member_data
+
+    ipe = member_data(catalog_section("IPE 300"), length="3 m")
+    assert ipe.values["r"][0].to("mm").m == pytest.approx(15.0)
+    shs = member_data(catalog_section("SHS 100x100x5"), length="3 m")
+    assert shs.fabrication == "hot-finished"
+    assert {choice.curve for choice in shs.curves.values()} == {"a"}
