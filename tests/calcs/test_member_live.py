@@ -12,6 +12,8 @@ pull inclined 20° at mid-length with an offset, a wind push and a twisting coup
 
 from __future__ import annotations
 
+import dataclasses
+
 import pytest
 
 from calcsheet.build.results import sheet_results
@@ -21,6 +23,7 @@ from calcsheet.engine import Figure
 from calcsheet.errors import InputError
 from calcsheet.mechanics import applied_moment, point_load
 from calcsheet.sections import catalog_section
+from calcsheet.units import Quantity
 
 SECTION = catalog_section("W8x31")
 TYPES = ["D", "L", "W", "D"]
@@ -98,3 +101,29 @@ def test_inputs_the_member_does_not_own_are_refused_with_the_reason() -> None:
         sheet.set_input("gamma_D", 1.6)
     with pytest.raises(InputError, match="input I_x"):
         sheet.set_input("I_x", "200 in^4")
+
+
+@pytest.mark.parametrize(
+    ("name", "value", "changed"),
+    [
+        ("L", "80 in", {"length": "80 in"}),
+        ("F_y", "46 ksi", {"Fy": "46 ksi"}),
+        ("K", 1.2, {"K": 1.2}),
+        ("L_b", "36 in", {"Lb": Quantity(36, "inch")}),
+        ("C_b", 1.3, {"Cb": 1.3}),
+        ("n_lim", 240, {"deflection_ratio": 240}),
+    ],
+)
+def test_member_and_design_inputs_changed_in_place_equal_a_fresh_build(name, value, changed):
+    sheet = _build()
+    sheet.set_input(name, value)
+    basis_fields = {k: v for k, v in changed.items() if k in ("K", "Lb", "Cb", "deflection_ratio")}
+    member_fields = {k: v for k, v in changed.items() if k not in basis_fields}
+    fresh = member_sheet(
+        SECTION,
+        _loads(),
+        **({"length": "72 in"} | member_fields),
+        design=dataclasses.replace(BASIS, **basis_fields),
+        load_types=TYPES,
+    )
+    assert _picture(sheet) == _picture(fresh)
