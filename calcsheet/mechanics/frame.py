@@ -46,6 +46,7 @@ values, without solving again.
 
 from __future__ import annotations
 
+import itertools
 from collections.abc import Sequence
 from dataclasses import dataclass
 from typing import Literal
@@ -81,6 +82,13 @@ DEFAULT_SUBDIVISIONS = 4
 # Stations closer than this fraction of the length are one node: a user's 120 in and
 # 10 ft must meet, and round-off in unit conversion must not make a 1e-13 in element.
 _SAME_STATION = 1e-9
+# Nodes closer than this fraction of the length would make elements so short that
+# their stiffness (∝ 1/l³) swamps the rest of the matrix and costs the solution its
+# digits (an element L/1000 long loses about nine). Loads need no node of their own
+# (shape functions keep the nodal solution exact), so a load nearer than this to a
+# node adds none; two supports must be further apart than _SUPPORT_SPACING.
+_NODE_SPACING = 1e-2
+_SUPPORT_SPACING = 1e-3
 _GAUSS_4 = np.polynomial.legendre.leggauss(4)
 _GAUSS_3 = np.polynomial.legendre.leggauss(3)
 # Interior sample points of an element for fitting a force's cubic (stationary points).
@@ -284,6 +292,9 @@ class FrameResult:
     _point_slope: NDArray[np.float64]  # (points, cases, 6)
     _dist_ranges: NDArray[np.float64]  # (distributed, 2): a, b
     _dist_coefficients: NDArray[np.float64]  # (distributed, 5, cases, 6)
+    _breakpoints: NDArray[
+        np.float64
+    ]  # nodes, loads, supports, load ends: forces are smooth between
 
     @property
     def case_count(self) -> int:
@@ -388,12 +399,21 @@ class FrameResult:
         """
         s = self._stations(stations)
         element = np.clip(np.searchsorted(self.nodes, s, side="right") - 1, 0, len(self.nodes) - 2)
-        start = self.nodes[element]
-        run = s - start
+        reference = self.nodes[element]
+        run = s - reference
+        # ∫ from the node to s, split where a load or support makes the curvature kink.
+        low, high = np.minimum(reference, s)[:, None], np.maximum(reference, s)[:, None]
+        cuts = np.sort(
+            np.concatenate([low, high, np.clip(self._breakpoints[None, :], low, high)], axis=1),
+            axis=1,
+        )
+        starts, ends = cuts[:, :-1], cuts[:, 1:]
         points, weights = _GAUSS_3
-        inner = start[:, None] + run[:, None] * (points[None, :] + 1) / 2  # (stations, 3)
+        inner = starts[..., None] + (ends - starts)[..., None] * (points + 1) / 2
+        sign = np.where(run >= 0, 1.0, -1.0)[:, None, None]
+        w_gauss = sign * weights * (ends - starts)[..., None] / 2  # (stations, pieces, 3)
         forces = self.internal_forces(inner.ravel(), side="left").reshape(
-            self.case_count, len(s), 3, 6
+            (self.case_count, *inner.shape, 6)
         )
         values = self.stiffness
         E, D = values["E"], values["Ix"] * values["Iy"] - values["Ixy"] ** 2
@@ -402,13 +422,17 @@ class FrameResult:
         curvature_v = -(Mx * values["Iy"] + My * values["Ixy"]) / (E * D)
         strain = forces[..., 0] / (E * values["A"])
         twist_rate = forces[..., 3] / (values["G"] * values["J"])
-        w_gauss = weights[None, None, :] * run[None, :, None] / 2
-        arm = (s[:, None] - inner)[None, :, :]
+        arm = (s[:, None, None] - inner)[None]
+        w_gauss = w_gauss[None]
+
+        def integral(rate: NDArray[np.float64]) -> NDArray[np.float64]:
+            return np.sum(rate, axis=(-2, -1))
+
         node = self.displacements[:, element, :]  # (cases, stations, 6)
-        u = node[..., 0] + node[..., 4] * run + np.sum(w_gauss * arm * curvature_u, axis=-1)
-        v = node[..., 1] - node[..., 3] * run + np.sum(w_gauss * arm * curvature_v, axis=-1)
-        w = node[..., 2] + np.sum(w_gauss * strain, axis=-1)
-        twist = node[..., 5] + np.sum(w_gauss * twist_rate, axis=-1)
+        u = node[..., 0] + node[..., 4] * run + integral(w_gauss * arm * curvature_u)
+        v = node[..., 1] - node[..., 3] * run + integral(w_gauss * arm * curvature_v)
+        w = node[..., 2] + integral(w_gauss * strain)
+        twist = node[..., 5] + integral(w_gauss * twist_rate)
         return self.combined(np.stack([u, v, w, twist], axis=-1), factors)
 
     def candidate_stations(
@@ -416,24 +440,25 @@ class FrameResult:
     ) -> NDArray[np.float64]:
         """Stations where a force can peak: nodes, a grid and stationary points of each force.
 
-        The nodes hold the supports, the load points and the ends of distributed
-        loads. Between nodes every internal force is a cubic at most (linear
-        loads); its stationary points (zero shear for the moments) are found from
-        the cubic through four interior samples, for every case or combination.
+        The stations of supports, load points and ends of distributed loads are
+        taken; between them every internal force is a cubic at most (linear
+        loads), and its stationary points (zero shear for the moments) are found
+        from the cubic through four interior samples, for every case or combination.
         """
-        spans = np.diff(self.nodes)
-        samples = self.nodes[:-1, None] + spans[:, None] * _SAMPLES[None, :]
+        starts = self._breakpoints[:-1]
+        spans = np.diff(self._breakpoints)
+        samples = starts[:, None] + spans[:, None] * _SAMPLES[None, :]
         forces = self.internal_forces(samples.ravel(), factors, side="left")
         forces = forces.reshape(forces.shape[0], len(spans), len(_SAMPLES), 6)
         vandermonde = np.vander(_SAMPLES, 4, increasing=True)
-        coefficients = np.einsum("ij,ceif->cejf", np.linalg.inv(vandermonde), forces)
+        coefficients = np.einsum("ji,ceif->cejf", np.linalg.inv(vandermonde), forces)
         c1, c2, c3 = coefficients[:, :, 1], 2 * coefficients[:, :, 2], 3 * coefficients[:, :, 3]
         roots = _quadratic_roots(c3, c2, c1)  # (…, 2) in ξ, NaN where none
         inside = (roots > 0) & (roots < 1)
         xi = np.where(inside, roots, np.nan)
-        stations = self.nodes[:-1][None, :, None, None] + spans[None, :, None, None] * xi
+        stations = starts[None, :, None, None] + spans[None, :, None, None] * xi
         found = stations[np.isfinite(stations)]
-        every = np.concatenate([self.nodes, np.linspace(0.0, self.length, grid + 1), found])
+        every = np.concatenate([self._breakpoints, np.linspace(0.0, self.length, grid + 1), found])
         return np.unique(np.round(every / self.length, 12)) * self.length
 
     def critical_station(
@@ -442,18 +467,21 @@ class FrameResult:
         """For each case or combination, the station of the largest |force| and its value.
 
         ``force`` is one of :data:`FORCE_NAMES`. Both sides of every candidate
-        station are looked at (a couple makes the moment jump).
+        station are looked at (a couple makes the moment jump), and the station's
+        own value (at z = 0 the loads there count and the reactions do not).
         """
         if force not in FORCE_NAMES:
             raise InputError("force", force, f"one of {', '.join(FORCE_NAMES)}")
         index = FORCE_NAMES.index(force)
         stations = self.candidate_stations(factors, grid=grid)
-        left = self.internal_forces(stations, factors, side="left")[..., index]
-        right = self.internal_forces(stations, factors, side="right")[..., index]
-        both = np.concatenate([left, right], axis=1)
-        best = np.argmax(np.abs(both), axis=1)
-        picked = both[np.arange(both.shape[0]), best]
-        return np.concatenate([stations, stations])[best], picked
+        sides: tuple[Side, ...] = ("station", "left", "right")
+        every = np.concatenate(
+            [self.internal_forces(stations, factors, side=side)[..., index] for side in sides],
+            axis=1,
+        )
+        best = np.argmax(np.abs(every), axis=1)
+        picked = every[np.arange(every.shape[0]), best]
+        return np.tile(stations, len(sides))[best], picked
 
 
 def _quadratic_roots(a: NDArray, b: NDArray, c: NDArray) -> NDArray[np.float64]:
@@ -550,17 +578,17 @@ def solve_frame(
             else:
                 raise InputError("loads", load, "point loads, couples and distributed loads")
 
+    _check_distinct_supports(supports, support_z, L)
     nodes = _node_stations(
         L,
-        support_z
-        + [z for *_, z in forces]
+        support_z,
+        [z for *_, z in forces]
         + [z for *_, z in couples]
         + [d.a for d in distributed]
         + [d.b for d in distributed],
         subdivisions,
     )
     support_nodes = [_node_of(nodes, z) for z in support_z]
-    _check_distinct_supports(supports, support_nodes)
     _check_no_mechanism(supports, support_z, L, length_unit)
 
     values = {
@@ -576,28 +604,28 @@ def solve_frame(
     dof_count = DOF_PER_NODE * node_count
     case_count = len(load_cases)
     global_stiffness = np.zeros((dof_count, dof_count))
-    nodal_loads = np.zeros((dof_count, case_count))
-    points, weights = _GAUSS_4
     for element in range(node_count - 1):
-        z_i, z_j = nodes[element], nodes[element + 1]
-        span = z_j - z_i
         dofs = slice(DOF_PER_NODE * element, DOF_PER_NODE * (element + 2))
-        global_stiffness[dofs, dofs] += element_stiffness(span, values)
-        covering = [d for d in distributed if d.a - 1e-12 * L <= (z_i + z_j) / 2 <= d.b + 1e-12 * L]
-        if covering:
-            xi = (points + 1) / 2
-            shape = element_shape(xi, span)  # (gauss, 6, 12)
-            z = z_i + span * xi
-            for load in covering:
-                work = np.einsum("g,gdk,gd->k", weights * span / 2, shape, load.densities(z))
-                nodal_loads[dofs, load.case] += work
+        global_stiffness[dofs, dofs] += element_stiffness(
+            nodes[element + 1] - nodes[element], values
+        )
+    nodal_loads = np.zeros((dof_count, case_count))
     for case, vector, offsets, z in forces:
-        base = DOF_PER_NODE * _node_of(nodes, z)
-        nodal_loads[base : base + 3, case] += vector
-        nodal_loads[base + 3 : base + 6, case] += _offset_couples(vector, *offsets)
+        generalized = np.concatenate([vector, _offset_couples(vector, *offsets)])
+        _add_concentrated(nodal_loads[:, case], nodes, z, generalized[None, :], np.ones(1))
     for case, vector, z in couples:
-        base = DOF_PER_NODE * _node_of(nodes, z)
-        nodal_loads[base + 3 : base + 6, case] += vector
+        generalized = np.concatenate([np.zeros(3), vector])
+        _add_concentrated(nodal_loads[:, case], nodes, z, generalized[None, :], np.ones(1))
+    points, weights = _GAUSS_4
+    for load in distributed:
+        # Each piece of the load between consecutive nodes (or beyond the end nodes) is
+        # integrated by Gauss quadrature: exact for a linear load times the cubics.
+        cuts = np.unique(np.clip(np.concatenate([[load.a, load.b], nodes]), load.a, load.b))
+        for low, high in itertools.pairwise(cuts):
+            z = low + (high - low) * (points + 1) / 2
+            _add_concentrated(
+                nodal_loads[:, load.case], nodes, z, load.densities(z), weights * (high - low) / 2
+            )
 
     restrained = np.zeros(dof_count, dtype=bool)
     for item, node in zip(supports, support_nodes, strict=True):
@@ -712,35 +740,83 @@ def _result(
         _point_slope=np.array(slope).reshape(-1, case_count, 6),
         _dist_ranges=np.array([[d.a, d.b] for d in distributed], dtype=float).reshape(-1, 2),
         _dist_coefficients=dist_coefficients,
+        _breakpoints=_breakpoints(
+            L, [nodes, point_z, [d.a for d in distributed], [d.b for d in distributed]]
+        ),
     )
 
 
-def _node_stations(length: float, stations: list[float], subdivisions: int) -> NDArray[np.float64]:
-    """Sorted element-end stations, merging those closer than a tolerance."""
-    grid = np.linspace(0.0, length, max(int(subdivisions), 1) + 1)
-    every = np.sort(np.concatenate([grid, np.clip(np.asarray(stations, dtype=float), 0, length)]))
+def _breakpoints(length: float, groups: list) -> NDArray[np.float64]:
+    """Sorted distinct stations from groups of them (closer than round-off are one)."""
+    every = np.sort(np.concatenate([np.asarray(group, dtype=float) for group in groups]))
     keep = np.concatenate([[True], np.diff(every) > _SAME_STATION * length])
-    nodes = every[keep]
-    nodes[-1] = length
-    return nodes
+    return every[keep]
+
+
+def _node_stations(
+    length: float, support_z: list[float], stations: list[float], subdivisions: int
+) -> NDArray[np.float64]:
+    """Sorted element-end stations: every support, then the ends, loads and a grid.
+
+    A station closer than :data:`_NODE_SPACING` × L to a node already taken adds no
+    node (a very short element would spoil the solution's precision); a load there
+    enters the element through its shape functions, or rigidly if beyond the end
+    node, so the nodal solution stays exact.
+    """
+    grid = np.linspace(0.0, length, max(int(subdivisions), 1) + 1)
+    nodes = list(dict.fromkeys(support_z))
+    for station in [0.0, length, *stations, *grid]:
+        if min(abs(station - node) for node in nodes) > _NODE_SPACING * length:
+            nodes.append(station)
+    return np.array(sorted(nodes), dtype=float)
 
 
 def _node_of(nodes: NDArray[np.float64], z: float) -> int:
     return int(np.argmin(np.abs(nodes - z)))
 
 
-def _check_distinct_supports(supports: Sequence[Support], nodes: list[int]) -> None:
-    seen: dict[int, Support] = {}
-    for item, node in zip(supports, nodes, strict=True):
-        if node in seen:
-            other = seen[node]
-            raise InputError(
-                f"support {item.name} z",
-                f"{item.z:~P}",
-                f"a station other than that of support {other.name}",
-                "two supports at one station: give one support with both restraints",
-            )
-        seen[node] = item
+def _add_concentrated(
+    target: NDArray[np.float64],
+    nodes: NDArray[np.float64],
+    stations: NDArray[np.float64] | float,
+    generalized: NDArray[np.float64],
+    weights: NDArray[np.float64],
+) -> None:
+    """Add work-equivalent nodal loads of weighted generalized loads (n, 6) at stations.
+
+    Inside an element the load enters through its shape functions; beyond the first
+    or last node (an end within the node spacing of a support) it moves rigidly to
+    that node, with the couple of its lever arm along z.
+    """
+    stations = np.atleast_1d(np.asarray(stations, dtype=float))
+    for z, load, weight in zip(stations, generalized, weights, strict=True):
+        if z < nodes[0] or z > nodes[-1]:
+            node = 0 if z < nodes[0] else len(nodes) - 1
+            arm = z - nodes[node]
+            moved = load.copy()
+            moved[3:] += np.cross([0.0, 0.0, arm], load[:3])
+            target[DOF_PER_NODE * node : DOF_PER_NODE * (node + 1)] += weight * moved
+            continue
+        element = int(np.clip(np.searchsorted(nodes, z, side="right") - 1, 0, len(nodes) - 2))
+        span = nodes[element + 1] - nodes[element]
+        xi = np.array([(z - nodes[element]) / span])
+        shape = element_shape(xi, span)[0]  # (6, 12)
+        dofs = slice(DOF_PER_NODE * element, DOF_PER_NODE * (element + 2))
+        target[dofs] += weight * (shape.T @ load)
+
+
+def _check_distinct_supports(
+    supports: Sequence[Support], stations: list[float], length: float
+) -> None:
+    for number, (item, z) in enumerate(zip(supports, stations, strict=True)):
+        for other, other_z in zip(supports[:number], stations[:number], strict=True):
+            if abs(z - other_z) <= _SUPPORT_SPACING * length:
+                raise InputError(
+                    f"support {item.name} z",
+                    f"{item.z:~P}",
+                    f"a station more than L/{1 / _SUPPORT_SPACING:g} from support {other.name}",
+                    "two supports at one station: give one support with both restraints",
+                )
 
 
 def _check_no_mechanism(
