@@ -260,7 +260,9 @@ def _offset_couples(force: NDArray[np.float64], ex: float, ey: float) -> NDArray
 def _as_cases(cases: Sequence[FrameLoad] | Sequence[Sequence[FrameLoad]]) -> list[list[FrameLoad]]:
     """One load case (a list of loads) or several (a list of lists) as a list of lists."""
     items = list(cases)
-    if items and isinstance(items[0], (PointLoad, AppliedMoment, DistributedLoad)):
+    if not items:
+        return [[]]  # one case without loads: every result is zero
+    if isinstance(items[0], (PointLoad, AppliedMoment, DistributedLoad)):
         return [items]  # type: ignore[list-item]
     return [list(case) for case in items]  # type: ignore[arg-type]
 

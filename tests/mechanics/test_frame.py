@@ -2,8 +2,9 @@
 
 Closed-form values: AISC Steel Construction Manual (15th ed.), Table 3-23 "Shears,
 Moments and Deflections", case numbers as given beside each check, and Roark's
-Formulas for Stress and Strain (7th ed.), Table 8.1. All typed from memory; where
-a maximum's location needed a root, the derivation is written beside it.
+Formulas for Stress and Strain (7th ed.), Table 8.1. All typed from memory, the
+case numbers too; where a maximum's location needed a root, the derivation is
+written beside it.
 """
 
 from __future__ import annotations
@@ -176,8 +177,9 @@ def test_overhang_with_uniform_load_on_the_whole_beam() -> None:
 
 def test_overhangs_at_both_ends_by_statics() -> None:
     # Two equal overhangs c under a uniform load: R = wL/2 each, M at a support wc²/2,
-    # at midspan w(l²/8 − c²/2) sagging positive (statics; AISC Manual Table 3-23 case 27
-    # has the same values for the symmetric case, from memory).
+    # at midspan w(l²/8 − c²/2) sagging (statics; AISC Manual Table 3-23, beam overhanging
+    # both supports, uniform load, gives the same for equal overhangs: from memory, case
+    # number not checked).
     c, l, w = 40.0, 200.0, 0.12
     L = l + 2 * c
     supports = support_case("overhang", f"{L} in", positions=(f"{c} in", f"{c + l} in"))
@@ -188,7 +190,8 @@ def test_overhangs_at_both_ends_by_statics() -> None:
 
 
 def test_two_equal_spans_uniform_load() -> None:
-    # AISC Manual Table 3-23 case 29 (from memory), continuous beam of two equal spans l:
+    # AISC Manual Table 3-23, continuous beam, two equal spans, uniform load (from memory,
+    # case number not checked), spans l:
     # R_outer = 3wl/8, R_centre = 10wl/8, M_centre = wl²/8 (hogging),
     # M_max,positive = 9wl²/128 at 3l/8 from an outer support, Δ_max = wl⁴/(185EI)
     # (exact coefficient as in the propped cantilever, by symmetry the same curve).
@@ -261,6 +264,33 @@ def test_offset_distributed_load_twists_the_member() -> None:
     assert torques[:2] == pytest.approx([torque_per_length * L / 2, 0.0], abs=1e-9)
     twist = result.deflections([L / 2])[0, 0, 3]
     assert twist == pytest.approx(torque_per_length * L**2 / (8 * 11200.0 * 3.0), rel=1e-9)
+
+
+def test_sides_of_a_station_with_a_load_or_a_support() -> None:
+    # Statics (common practice, no source): a simple span with P down at a. With
+    # Vy = Σ Fy beyond the cut (+z face), the shear just before the load is
+    # R2 − P = −Pb/L and just after it R2 = Pa/L.
+    L, P, a = 200.0, 6.0, 50.0
+    b = L - a
+    result = solve_frame(
+        f"{L} in", support_case("pinned-pinned", f"{L} in"), STIFFNESS, [down(P, a)]
+    )
+    shear = {
+        side: result.internal_forces([a], side=side)[0, 0, 2]
+        for side in ("station", "left", "right")
+    }
+    assert shear["left"] == pytest.approx(-P * b / L)
+    assert shear["station"] == pytest.approx(-P * b / L)  # a load at the cut is beyond it
+    assert shear["right"] == pytest.approx(P * a / L)
+    # At z = 0 the reaction there is behind the cut by default: the member's own shear.
+    start = {
+        side: result.internal_forces([0.0], side=side)[0, 0, 2]
+        for side in ("station", "left", "right")
+    }
+    assert start["station"] == pytest.approx(-P * b / L)
+    assert start["left"] == pytest.approx(0.0, abs=1e-12)  # everything beyond: balanced
+    empty = solve_frame(f"{L} in", support_case("pinned-pinned", f"{L} in"), STIFFNESS, [])
+    assert np.abs(empty.internal_forces([0.0, L])).max() == 0.0
 
 
 # ------------------------------------------------------------- the cantilever's statics
