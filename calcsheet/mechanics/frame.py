@@ -3,9 +3,11 @@
 Method
 ------
 The member runs along z from 0 to L (axes as in :mod:`calcsheet.mechanics.loads`)
-and is cut into 3-D frame elements by the direct stiffness method: nodes at the
-ends, at every support, at every point load and couple, at both ends of every
-distributed load and at a few equal subdivisions. Each element has 12 degrees of
+and is cut into 3-D frame elements by the direct stiffness method: nodes at every
+support, at the ends, at the point loads and couples, at both ends of every
+distributed load and at a few equal subdivisions, except that a node closer than
+L/100 to one already taken is left out (a very short element costs the solve its
+digits) and its load enters the element through the shape functions. Each element has 12 degrees of
 freedom, (ux, uy, uz, rx, ry, rz) at both ends: an axial bar (E·A), St Venant
 torsion (G·J, no warping) and Euler-Bernoulli bending in both planes (shear
 deformation neglected). Bending uses the centroidal axes x, y of the section
@@ -14,8 +16,8 @@ solved coupled (the bending energy ½·E·[u'' v'']·[[I_y, I_xy], [I_xy, I_x]]�
 so no rotation to principal axes is needed. Twist is about the centroid (the
 shear centre is not modelled, as in :mod:`calcsheet.mechanics.statics`).
 
-Distributed loads enter as consistent (work-equivalent) nodal loads, integrated by
-Gauss quadrature exactly for linearly varying loads; for a prismatic
+Loads enter as consistent (work-equivalent) nodal loads, distributed ones integrated
+by Gauss quadrature exactly for linearly varying loads; for a prismatic
 Euler-Bernoulli member the nodal displacements, and hence the reactions
 (K·d − F at the supports), are then exact (the Hermite cubics are the member's
 homogeneous solutions). Internal forces at a station are not interpolated from
@@ -23,8 +25,9 @@ the elements: they are the statics of the part beyond the cut (loads and
 reactions), integrated in closed form over the distributed loads; this is the
 element's fixed-end correction written out, and exact for polynomial loads.
 Deflections inside an element are the left node's displacement and slope plus
-the double integral of the exact curvature (three-point Gauss, exact for the
-cubic moments of linear loads).
+the double integral of the exact curvature, split at every load, support and
+load end (three-point Gauss on each piece, exact for the cubic moments of linear
+loads).
 
 Sign convention
 ---------------
@@ -294,9 +297,8 @@ class FrameResult:
     _point_slope: NDArray[np.float64]  # (points, cases, 6)
     _dist_ranges: NDArray[np.float64]  # (distributed, 2): a, b
     _dist_coefficients: NDArray[np.float64]  # (distributed, 5, cases, 6)
-    _breakpoints: NDArray[
-        np.float64
-    ]  # nodes, loads, supports, load ends: forces are smooth between
+    # Nodes, loads, supports and load ends: the forces are smooth between them.
+    _breakpoints: NDArray[np.float64]
 
     @property
     def case_count(self) -> int:
