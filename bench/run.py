@@ -8,6 +8,7 @@ Targets (from the issues):
 - the lightest W shape under 8 combinations (numeric path): under 0.5 s.
 - EN 1993-1-1: all checks x all EN 1990 combinations of one member (numeric path): 5 ms.
 - a batch of 200 members to PDF: under 30 s.
+- a member on supports: internal forces at 200 stations x 20 combinations: 10 ms.
 """
 
 from __future__ import annotations
@@ -149,6 +150,7 @@ def main() -> None:
         3,
     )
     report("document: cold command, start to PDF and HTML on disk", cold, 2500)
+    bench_frame_forces()
     bench_form()
     bench_batch()
 
@@ -296,6 +298,61 @@ def bench_en1993_member() -> None:
         f"EN 1993-1-1: {len(checks)} checks x {len(combos)} combinations of one member, numeric",
         timed(all_checks, 50),
         5,
+    )
+
+
+def bench_frame_forces() -> None:
+    """Internal forces of a two-span member at 200 stations under 20 combinations.
+
+    Six load cases (self-weight, a line load, a partial linearly varying load and
+    three offset point loads) solved once; the timing is the combination by factors
+    and the statics at the stations, as a search along the member repeats it.
+    Target: 10 ms.
+    """
+    import numpy as np
+
+    from calcsheet.mechanics import (
+        distributed_load,
+        member_stiffness,
+        point_load,
+        self_weight,
+        solve_frame,
+        support_case,
+    )
+
+    length = "360 in"
+    stiffness = member_stiffness(
+        E="29000 ksi", G="11200 ksi", A="9.71 in^2", Ix="170 in^4", Iy="36.6 in^4", J="0.583 in^4"
+    )
+    cases = [
+        [self_weight("0.0275 kip/ft", length)],
+        [distributed_load("L", z_start="0 in", z_end=length,
+                          q_start=("0 kip/in", "-0.05 kip/in", "0 kip/in"), ey="5 in")],
+        [distributed_load("W", z_start="60 in", z_end="300 in",
+                          q_start=("0.01 kip/in", "0 kip/in", "0 kip/in"),
+                          q_end=("0.03 kip/in", "0 kip/in", "0 kip/in"))],
+        [point_load("P1", magnitude="6 kip", angle="30 deg", z="90 in", ey="-5 in")],
+        [point_load("P2", magnitude="4 kip", angle="60 deg", from_axis="+x", z="250 in",
+                    ex="2 in")],
+        [point_load("P3", components=("0 kip", "-3 kip", "1 kip"), z="330 in", ey="-5 in")],
+    ]  # fmt: skip
+    result = solve_frame(length, support_case("two-span", length), stiffness, cases)
+    factors = np.random.default_rng(3).uniform(0.0, 1.6, size=(20, len(cases)))
+    stations = np.linspace(0.0, 360.0, 200)
+    result.internal_forces(stations, factors)
+    report(
+        "mechanics: member on supports, forces at 200 stations x 20 combinations",
+        timed(lambda: result.internal_forces(stations, factors), 50),
+        10,
+    )
+    supports = support_case("two-span", length)
+    report(
+        "mechanics: member on supports, solve 6 load cases",
+        timed(lambda: solve_frame(length, supports, stiffness, cases), 20),
+    )
+    report(
+        "mechanics: member on supports, largest |Mx| of 20 combinations",
+        timed(lambda: result.critical_station("Mx", factors), 20),
     )
 
 

@@ -15,6 +15,15 @@ Quick use::
     result = model.stresses(forces.as_array("kip", "inch"))   # ksi at every point
 """
 
+from calcsheet.mechanics.distributed import DistributedLoad, distributed_load, self_weight
+from calcsheet.mechanics.frame import (
+    DEFLECTION_NAMES,
+    REACTION_NAMES,
+    FrameResult,
+    MemberStiffness,
+    member_stiffness,
+    solve_frame,
+)
 from calcsheet.mechanics.loads import (
     AppliedMoment,
     Direction,
@@ -38,27 +47,48 @@ from calcsheet.mechanics.stresses import (
     StressModel,
     stress_model,
 )
+from calcsheet.mechanics.supports import (
+    MOTIONS,
+    SUPPORT_CASES,
+    Support,
+    support,
+    support_case,
+)
 from calcsheet.mechanics.torsion import WARPING_NOTE, TorsionRule, torsion_rule
 
 __all__ = [
     "CENTROID_LABEL",
+    "DEFLECTION_NAMES",
     "FORCE_NAMES",
     "MEASURES",
+    "MOTIONS",
+    "REACTION_NAMES",
+    "SUPPORT_CASES",
     "WARPING_NOTE",
     "AppliedMoment",
     "Direction",
+    "DistributedLoad",
+    "FrameResult",
     "InternalForces",
+    "MemberStiffness",
     "PointLoad",
     "PointStresses",
     "StressModel",
+    "Support",
     "TorsionRule",
     "applied_moment",
+    "distributed_load",
     "internal_forces",
     "loads_beyond",
     "member_length",
+    "member_stiffness",
     "point_load",
     "resultants_numeric",
+    "self_weight",
+    "solve_frame",
     "stress_model",
+    "support",
+    "support_case",
     "torsion_rule",
     "validate_loads",
 ]
