@@ -39,19 +39,39 @@ from calcsheet.mechanics.stresses import (
     stress_model,
 )
 from calcsheet.mechanics.torsion import WARPING_NOTE, TorsionRule, torsion_rule
+from calcsheet.mechanics.warping_torsion import (
+    FIXED,
+    FREE,
+    PINNED,
+    ConcentratedTorque,
+    DistributedTorque,
+    EndRestraint,
+    TorsionStresses,
+    TwistSolution,
+    torsion_stresses,
+    unit_twists,
+)
 
 __all__ = [
     "CENTROID_LABEL",
+    "FIXED",
     "FORCE_NAMES",
+    "FREE",
     "MEASURES",
+    "PINNED",
     "WARPING_NOTE",
     "AppliedMoment",
+    "ConcentratedTorque",
     "Direction",
+    "DistributedTorque",
+    "EndRestraint",
     "InternalForces",
     "PointLoad",
     "PointStresses",
     "StressModel",
     "TorsionRule",
+    "TorsionStresses",
+    "TwistSolution",
     "applied_moment",
     "internal_forces",
     "loads_beyond",
@@ -60,5 +80,7 @@ __all__ = [
     "resultants_numeric",
     "stress_model",
     "torsion_rule",
+    "torsion_stresses",
+    "unit_twists",
     "validate_loads",
 ]

@@ -343,13 +343,11 @@ def _at_points(props: WarpingProperties, x: Array, y: Array) -> WarpingPoints:
     count = len(x)
     if not props.warps:
         zero = np.zeros(count)
-        return WarpingPoints(
-            ("",) * count, zero, zero.copy(), zero.copy(), zero.copy(), zero.copy()
-        )
+        return WarpingPoints(("",) * count, *(zero.copy() for _ in range(6)))
     nodes, walls = props.nodes, props.walls
     beyond = _subtree_sw(props)
     shear_centre = np.array([props.x_s, props.y_s])
-    labels, wn_out, mid_out, sw_out, t_out, sx_out, sy_out = [], [], [], [], [], []
+    labels, wn_out, mid_out, sw_out, t_out, sx_out, sy_out = [], [], [], [], [], [], []
     size = float(np.ptp(nodes, axis=0).max())
     for px, py in zip(x, y, strict=True):
         candidates = []
