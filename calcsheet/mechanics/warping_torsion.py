@@ -122,14 +122,21 @@ class TwistSolution:
             np.tensordot(weights, self.per_length, axes=(-1, 0)),
         )
 
-    def derivatives(self, z: ArrayLike) -> Array:
+    def derivatives(self, z: ArrayLike, side: str = "after") -> Array:
         """φ, φ', φ'', φ''' at the stations ``z``: shape (..., 4, stations).
 
-        At a load point the value of the stretch after it is taken (φ''' jumps there).
+        φ''' jumps at a concentrated torque (φ, φ', φ'' are continuous everywhere): at a
+        load point ``side`` "after" takes the stretch beyond it, "before" the one ending
+        there. A check at a load point takes both.
         """
+        if side not in ("after", "before"):
+            raise ValueError(f"side must be 'after' or 'before', not {side!r}")
         stations = np.atleast_1d(np.asarray(z, dtype=float))
         count = len(self.boundaries) - 1
-        index = np.clip(np.searchsorted(self.boundaries, stations, side="right") - 1, 0, count - 1)
+        found = np.searchsorted(
+            self.boundaries, stations, side="right" if side == "after" else "left"
+        )
+        index = np.clip(found - 1, 0, count - 1)
         u = stations - self.boundaries[index]
         stretch = np.diff(self.boundaries)[index]
         k = self.constants[..., index, :]  # (..., stations, 4)
@@ -152,6 +159,9 @@ class TwistSolution:
 
     def peak_stations(self) -> Array:
         """Stations where φ', φ'' or φ''' can peak: the stretch ends and every interior extremum.
+
+        φ''' jumps at a concentrated torque, so take each station on both sides
+        (:meth:`derivatives` with ``side="before"`` and ``"after"``).
 
         On a stretch φ''' peaks where φ'''' = 0 and φ'' where φ''' = 0, both where
         C·e^(−u/a) = ∓D·e^(−(ℓ−u)/a), so u = (ℓ − a·ln(∓D/C))/2; φ' peaks where
