@@ -15,9 +15,10 @@ the cosh/sinh of Design Guide 9's Appendix C written so that a long member
 neither overflows nor loses digits). The four constants of each stretch follow
 from the end conditions and, at a concentrated torque T₀, continuity of φ, φ', φ''
 with φ''' jumping by T₀/(E·Cw); they are solved exactly (a small linear system),
-which gives the published solutions of every case of Design Guide 9's Appendix B
-for these end conditions (Cases 1 to 12 for concentrated and uniform torque,
-case numbers from memory) and any mix of them.
+which gives the solutions Design Guide 9 publishes in Appendix C.4 for its
+Appendix B cases with these end conditions and loads (the tests write out the
+cantilever and simply supported ones; case numbers are not quoted, they are not
+recalled reliably) and any mix of them.
 
 End conditions, each end independently (Design Guide 9, Appendix C.2, from memory):
 
@@ -420,6 +421,10 @@ def torsion_stresses(
     derivatives: ArrayLike, points: WarpingPoints, E: float, G: float
 ) -> TorsionStresses:
     """Stresses from φ', φ'', φ''' (``derivatives`` of shape (..., 4, stations)) at ``points``.
+
+    For open sections: a section that does not warp (tubes, bars: thickness 0 at its
+    points) gets zero here; its St Venant shear is that of
+    :mod:`calcsheet.mechanics.torsion` (Bredt, or T·r/J).
 
     AISC Design Guide 9, Eqs. 4.1 (τ_t = G·t·θ'), 4.2a (τ_ws = −E·Sw·θ'''/t) and 4.3a
     (σ_ws = E·Wn·θ''), equation numbers from memory.

@@ -94,8 +94,8 @@ class WarpingProperties:
 
     ``x_s``, ``y_s`` locate the shear centre from the section's centroid (the outline's,
     as every other property); ``Cw`` is in unit⁶. ``nodes`` are the mid-line nodes from
-    the centroid and ``node_wn`` the mid-line Wn at them (Wn is linear along a wall);
-    ``node_sw`` is Sw at each wall's start node, per wall.
+    the centroid and ``node_wn`` the mid-line Wn at them (Wn is linear along a wall).
+    ``Cw`` is ``Cw_midline`` plus the through-thickness part (see the module docstring).
     """
 
     length_unit: str

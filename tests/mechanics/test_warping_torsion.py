@@ -273,3 +273,11 @@ def test_bad_input_names_the_field() -> None:
     with pytest.raises(InputError):
         unit_twists(100.0, 0.0, ECW, FIXED, FREE, [ConcentratedTorque(1.0, 50.0)])
     assert tabulated_properties("W10X49")["J"].m == J  # the constants above are the table's
+
+
+def test_torsion_parameter_function() -> None:
+    """a = √(E·Cw/(G·J)) (AISC Design Guide 9, Section 3.3, from memory)."""
+    from calcsheet.sections import torsion_parameter
+
+    assert torsion_parameter(E, CW, G, J) == pytest.approx(A)
+    assert torsion_parameter(E, 0.0, G, J) == 0.0
