@@ -159,7 +159,7 @@ class TwistSolution:
         )
 
     def peak_stations(self) -> Array:
-        """Stations where φ', φ'' or φ''' can peak: the stretch ends and every interior extremum.
+        """Stations where φ, φ', φ'' or φ''' can peak: the stretch ends and every interior extremum.
 
         φ''' jumps at a concentrated torque, so take each station on both sides
         (:meth:`derivatives` with ``side="before"`` and ``"after"``).
@@ -167,10 +167,19 @@ class TwistSolution:
         On a stretch φ''' peaks where φ'''' = 0 and φ'' where φ''' = 0, both where
         C·e^(−u/a) = ∓D·e^(−(ℓ−u)/a), so u = (ℓ − a·ln(∓D/C))/2; φ' peaks where
         φ'' = 0, which is monotonic on each side of the φ''' root and is bracketed
-        there and bisected. The union over every load case is returned, sorted.
+        there and bisected; φ peaks where φ' = 0, which is monotonic between the zeros
+        of φ'', bracketed and bisected the same way. The union over every load case is
+        returned, sorted.
         """
         found = [self.boundaries]
-        if self.a == 0.0:
+        if self.a == 0.0:  # φ' = B − m·u/GJ: φ peaks where it crosses zero
+            for index, stretch in enumerate(np.diff(self.boundaries)):
+                slope = self.constants[..., index, 1].ravel()
+                m = self.per_length[..., index].ravel() / self.GJ
+                with np.errstate(divide="ignore", invalid="ignore"):
+                    u = np.where(m != 0, slope / m, -1.0)
+                inside = u[(u > 0) & (u < stretch)]
+                found.append(self.boundaries[index] + inside)
             return np.unique(np.concatenate(found))
         a = self.a
         lengths = np.diff(self.boundaries)
@@ -186,8 +195,16 @@ class TwistSolution:
                 found.append(self.boundaries[index] + np.array(inside))
                 # a²·φ'' is monotonic on each side of `crest`: bracket its zeros there
                 pieces = [0.0, *([crest] if crest is not None else []), stretch]
+                flat = []  # zeros of φ''
                 for low, high in itertools.pairwise(pieces):
                     root = _bisect(_curvature(C, D, k, stretch, a), low, high)
+                    if root is not None:
+                        flat.append(root)
+                found.append(self.boundaries[index] + np.array(flat))
+                # a·φ' is monotonic between the zeros of φ'': bracket the zeros of φ' there
+                B = constants[case, index, 1]
+                for low, high in itertools.pairwise([0.0, *flat, stretch]):
+                    root = _bisect(_slope(B, C, D, k / a, stretch, a), low, high)
                     if root is not None:
                         found.append(np.array([self.boundaries[index] + root]))
         return np.unique(np.concatenate(found))
@@ -199,6 +216,15 @@ def _balance(stretch: float, a: float, ratio: float) -> float | None:
         return None
     u = (stretch - a * math.log(ratio)) / 2
     return u if 0.0 < u < stretch else None
+
+
+def _slope(B: float, C: float, D: float, k: float, stretch: float, a: float):
+    """a·φ' on a stretch, as a function of u (k = m·a/GJ)."""
+
+    def value(u: float) -> float:
+        return B - C * math.exp(-u / a) + D * math.exp(-(stretch - u) / a) - k * u
+
+    return value
 
 
 def _curvature(C: float, D: float, k: float, stretch: float, a: float) -> Callable[[float], float]:
