@@ -180,7 +180,7 @@ class TwistSolution:
                     u = np.where(m != 0, slope / m, -1.0)
                 inside = u[(u > 0) & (u < stretch)]
                 found.append(self.boundaries[index] + inside)
-            return np.unique(np.concatenate(found))
+            return _distinct(np.concatenate(found), self.length)
         a = self.a
         lengths = np.diff(self.boundaries)
         constants = self.constants.reshape(-1, len(lengths), 4)
@@ -207,7 +207,14 @@ class TwistSolution:
                     root = _bisect(_slope(B, C, D, k / a, stretch, a), low, high)
                     if root is not None:
                         found.append(np.array([self.boundaries[index] + root]))
-        return np.unique(np.concatenate(found))
+        return _distinct(np.concatenate(found), self.length)
+
+
+def _distinct(stations: Array, length: float) -> Array:
+    """Sorted stations, those closer than 1e-9·L to the one before dropped (a root at an end)."""
+    ordered = np.clip(np.sort(stations), 0.0, length)
+    keep = np.concatenate([[True], np.diff(ordered) > 1e-9 * length])
+    return ordered[keep]
 
 
 def _balance(stretch: float, a: float, ratio: float) -> float | None:
