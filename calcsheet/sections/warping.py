@@ -48,7 +48,8 @@ from calcsheet.sections.section import Section
 
 Array = NDArray[np.float64]
 
-I_FAMILIES = frozenset({"W", "M", "S", "HP", "I-shape"})
+# IPE and HE sections are the EN 10365 families of the metric catalog on main (d, bf, tw, tf).
+I_FAMILIES = frozenset({"W", "M", "S", "HP", "I-shape", "IPE", "HEA", "HEB", "HEM"})
 CHANNEL_FAMILIES = frozenset({"C", "MC", "channel"})
 TEE_FAMILIES = frozenset({"WT", "MT", "ST", "tee"})
 ANGLE_FAMILIES = frozenset({"L", "angle"})
