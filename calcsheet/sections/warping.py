@@ -48,7 +48,7 @@ from calcsheet.sections.section import Section
 
 Array = NDArray[np.float64]
 
-# IPE and HE sections are the EN 10365 families of the metric catalog on main (d, bf, tw, tf).
+# IPE and HE: the EN 10365 I-section families of the metric catalog (dimensions d, bf, tw, tf).
 I_FAMILIES = frozenset({"W", "M", "S", "HP", "I-shape", "IPE", "HEA", "HEB", "HEM"})
 CHANNEL_FAMILIES = frozenset({"C", "MC", "channel"})
 TEE_FAMILIES = frozenset({"WT", "MT", "ST", "tee"})
