@@ -35,12 +35,21 @@ from calcsheet.sections.user_defined import (
     round_hss,
     tee,
 )
+from calcsheet.sections.warping import (
+    WarpingPoints,
+    WarpingProperties,
+    torque_about_shear_centre,
+    torsion_parameter,
+    warping_properties,
+)
 
 __all__ = [
     "FAMILIES",
     "Section",
     "SectionNumbers",
     "StressPoint",
+    "WarpingPoints",
+    "WarpingProperties",
     "angle",
     "built_up",
     "catalog_section",
@@ -56,4 +65,7 @@ __all__ = [
     "round_hss",
     "tabulated_properties",
     "tee",
+    "torque_about_shear_centre",
+    "torsion_parameter",
+    "warping_properties",
 ]
