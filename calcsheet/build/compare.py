@@ -16,7 +16,7 @@ from dataclasses import dataclass
 from typing import Any
 
 from calcsheet.build.run import BuildResult
-from calcsheet.build.stamp import normalized
+from calcsheet.build.trace import normalized
 from calcsheet.engine import Sheet, TitleBlock
 from calcsheet.job import JobError
 
@@ -150,7 +150,7 @@ def delta_sheet(old: BuildResult, new: BuildResult) -> Sheet:
         ),
         units=new.job.sheet.units,
     )
-    sheet.stamp = f"inputs {old.hash} to {new.hash}"
+    sheet.trace = f"inputs {old.hash} to {new.hash}"
     sheet.heading("Inputs changed")
     changes = changed_inputs(old, new)
     if changes:

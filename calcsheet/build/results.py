@@ -25,7 +25,7 @@ def sheet_results(sheet: Sheet) -> dict[str, Any]:
     governing = sheet.governing_check()
     return {
         "title": sheet.title,
-        "stamp": sheet.stamp,
+        "trace": sheet.trace,
         "tool": f"calcsheet {__version__}",
         "inputs": [
             {"name": part.name, "description": part.description, **_value(part.value)}

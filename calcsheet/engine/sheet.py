@@ -126,8 +126,9 @@ class Sheet:
         self.revisions: list[Revision] = []
         self.basis: dict[str, list[str]] = {}
         self.references: list[str] = []
-        # What produced this sheet (tool version, inputs hash), printed on every page.
-        self.stamp: str = ""
+        # The trace line: what produced this sheet (inputs hash, revision), printed on every
+        # page beside the tool version. Not "stamp": that is the engineer's seal.
+        self.trace: str = ""
 
     # -- writing the calc ------------------------------------------------------------
 
@@ -398,7 +399,7 @@ class Sheet:
         """Take the contents of a sheet built anew; what was added afterwards stays."""
         kept = {
             "revisions": self.revisions,
-            "stamp": self.stamp,
+            "trace": self.trace,
             "title_block": self.title_block,
             "title": self.title,
         }

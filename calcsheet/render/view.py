@@ -70,7 +70,7 @@ class SheetView:
     revisions: tuple[Revision, ...] = ()
     basis: tuple[tuple[str, tuple[str, ...]], ...] = ()
     references: tuple[str, ...] = ()
-    stamp: str = ""
+    trace: str = ""
 
 
 def build_view(sheet: Sheet, target: str) -> SheetView:
@@ -174,7 +174,7 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
         revisions=tuple(sheet.revisions),
         basis=_basis(sheet),
         references=tuple(sheet.references),
-        stamp=sheet.stamp,
+        trace=sheet.trace,
     )
 
 
