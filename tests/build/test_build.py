@@ -78,7 +78,7 @@ def test_build_writes_traced_pdf_html_and_json_named_by_revision(tmp_path: Path)
     assert data["all_pass"] is True
     assert data["governing"]["at"].startswith("point ")
     moment = next(step for step in data["steps"] if step["name"] == "M_x")
-    assert moment["si_unit"] == "kg * m ** 2 / s ** 2"  # N·m in SI base units (NIST SP 811)
+    assert moment["si_unit"] == "N·m"  # the SI unit of moment as written (NIST SP 811 Table 3)
     assert result.hash in (tmp_path / "DA-1-revA.html").read_text()
 
 
