@@ -122,3 +122,23 @@ def test_si_units_are_named_as_written_and_display_units_agree_within_the_sheet(
 )
 def test_units_are_written_force_first_with_superscripts(unit: str, written: str) -> None:
     assert unit_name(ureg.Unit(unit)) == written
+
+
+def test_a_plain_sheet_with_an_unbounded_worst_case_gives_null_and_fits_the_schema() -> None:
+    """JSON has no infinity (RFC 8259 section 6): a worst case against no capacity is null."""
+    from calcsheet.build.results import sheet_results
+    from calcsheet.engine import Sheet
+
+    sheet = Sheet("Bracket")
+    with sheet:
+        M = sheet.input("M", "12 kip*ft", "Moment", dimension="moment")
+        M_n = sheet.input("M_n", "40 kip*ft", "Moment capacity", dimension="moment")
+        check = sheet.check("Flexure", M, M_n, reference="AISC 360-22 Section F2")
+    sheet.set_cases(check, float("inf"), "case 7", 8, combination="case 7")
+    data = json.loads(json.dumps(sheet_results(sheet), ensure_ascii=False, allow_nan=False))
+    check_results_schema(data)
+    (flexure,) = data["checks"]
+    assert flexure["utilization"] is None and flexure["status"] == "NOT OK"
+    assert flexure["written_utilization"] == pytest.approx(0.3)  # 12 / 40
+    assert (flexure["combination"], flexure["station"], flexure["cases"]) == ("case 7", None, 8)
+    assert data["points"] == [] and data["trace"] == ""
