@@ -136,48 +136,62 @@ def check_data(sheet: Sheet, check: Check) -> dict[str, Any]:
     }
 
 
-# The heading the point stress procedures write above each point's steps
-# (calcsheet.mechanics.point_stresses: "Point 3: top flange tip").
-_POINT_HEADING = re.compile(r"^Point (\w+): (.+)$")
-# Terms the procedures write once for every point (no point number in the step name).
+# The steps the point stress procedures (calcsheet.mechanics.point_stresses) write for
+# each point n, named <term>_n; sigma_z_n is written for every point, shown or not.
+_POINT_TERMS = (
+    "sigma_Mx", "sigma_My", "sigma_z", "tau_zy", "tau_zx", "tau_T", "tau",
+    "sigma_1", "sigma_2", "tau_max", "sigma_vm",
+)  # fmt: skip
+# Terms they write once for every point (no point number in the step name).
 _SHARED_TERMS = ("sigma_N", "sigma_b", "tau_V", "tau_T", "tau")
+_POINT_NUMBER = re.compile(r"^sigma_z_(\d+)$")
+# How the point of a step is named where the sheet says it: the heading above a point
+# written out ("Point 3: top flange tip") and the candidates of a governing step
+# ("point 3 (top flange tip)"), which list every point, written out or not.
+_POINT_HEADING = re.compile(r"^Point (\d+): (.+)$")
+_POINT_CANDIDATE = re.compile(r"^point (\d+) \((.+)\)$")
 
 
 def _is_stress(quantity: pint.Quantity) -> bool:
     return quantity.dimensionality == ureg.Unit("pascal").dimensionality
 
 
+def _point_labels(sheet: Sheet) -> dict[str, str]:
+    labels: dict[str, str] = {}
+    for part in sheet.parts:
+        if isinstance(part, Heading) and (found := _POINT_HEADING.match(part.text)):
+            labels.setdefault(found.group(1), found.group(2))
+        elif isinstance(part, Step):
+            for text, _ in part.candidates:
+                if found := _POINT_CANDIDATE.match(text):
+                    labels.setdefault(found.group(1), found.group(2))
+    return labels
+
+
 def points_data(sheet: Sheet) -> list[dict[str, Any]]:
     """Each stress point: number, label, x and y (when fixed on the section) and every
     stress term at it by name (``sigma_Mx``, ``sigma_z``, ``tau``, ``sigma_vm``...).
 
-    The point stress procedures head each point's steps "Point n: label" and name them
-    ``<term>_n``; terms written once for all points (``sigma_N``, a common ``tau_T``)
-    are given at every point. A sheet without stress points gives an empty list.
+    Points written out step by step and points only evaluated (a concise sheet) alike:
+    the point stress procedures name each point's steps ``<term>_n``; terms written
+    once for all points (``sigma_N``, a common ``tau_T``) are given at every point. A
+    sheet without stress points gives an empty list.
     """
     steps = {part.name: part for part in sheet.steps}
-    points: list[dict[str, Any]] = []
-    current: dict[str, Any] | None = None
-    for part in sheet.parts:
-        if isinstance(part, Heading):
-            found = _POINT_HEADING.match(part.text)
-            current = None
-            if found:
-                current = {"number": found.group(1), "label": found.group(2), "own": {}}
-                points.append(current)
-        elif isinstance(part, Step) and current is not None:
-            suffix = f"_{current['number']}"
-            if part.name.endswith(suffix) and _is_stress(part.value):
-                current["own"][part.name[: -len(suffix)]] = part
+    numbers = [found.group(1) for name in steps if (found := _POINT_NUMBER.match(name))]
+    labels = _point_labels(sheet)
+    shared = {
+        term: steps[term]
+        for term in _SHARED_TERMS
+        if term in steps and _is_stress(steps[term].value)
+    }
     result = []
-    for point in points:
-        terms: dict[str, Step] = {}
-        for name in _SHARED_TERMS:
-            step = steps.get(name)
+    for number in numbers:
+        terms = dict(shared)
+        for term in _POINT_TERMS:
+            step = steps.get(f"{term}_{number}")
             if step is not None and _is_stress(step.value):
-                terms[name] = step
-        terms.update(point["own"])
-        number = point["number"]
+                terms[term] = step
         coordinates = {}
         for axis in ("x", "y"):
             try:
@@ -187,7 +201,7 @@ def points_data(sheet: Sheet) -> list[dict[str, Any]]:
         result.append(
             {
                 "number": number,
-                "label": point["label"],
+                "label": labels.get(number, ""),
                 **coordinates,
                 "stresses": {
                     term: {"step": step.name, **quantity_data(step.value)}
