@@ -166,6 +166,7 @@ def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str
             units=job.sheet.units,
             design=model.design,
             load_types=model.load_types,
+            detail=job.sheet.detail,
         )
     except (ArithmeticError, ValueError) as error:
         if isinstance(error, InputError):

@@ -267,6 +267,7 @@ def angle_sweep(
         present,
     )
     unit_forces = []
+    quarters = []
     for quarter in (0.0, 90.0):
         turned = point_load(
             swept.name,
@@ -278,6 +279,7 @@ def angle_sweep(
             ex=swept.ex,
             ey=swept.ey,
         )
+        quarters.append(turned)
         unit_forces.append(forces_by_type([turned], ["swept"], length, station)[1][0])
     radians = np.radians(angles)
     swept_forces = (
@@ -295,8 +297,56 @@ def angle_sweep(
     flat = combined.reshape(-1, 6)
     values = utilizations(section, flat, basis, Fy, length)[0].reshape(combined.shape[:2])
     values = values.max(axis=1)
+    if basis.deflection_ratio:
+        turning = (index, quarters, radians)
+        values = np.maximum(values, _deflection_utilization(section, loads, turning, basis, length))
     drawn = float(swept.direction.angle.to("deg").m) % 360.0
     return Sweep(swept.name, angles, values, drawn)
+
+
+def _deflection_utilization(
+    section: Section,
+    loads: Sequence[PointLoad | AppliedMoment],
+    turning: tuple[int, list[PointLoad], np.ndarray] | None,
+    basis: DesignBasis,
+    length: pint.Quantity,
+) -> np.ndarray:
+    """The tip deflection check (service loads as given), optionally with one load turned
+    through angles: the sheet's deflection procedure on arrays, one value per angle."""
+    from calcsheet.mechanics.deflection import LoadTerms, tip_deflection_arrays
+
+    index, (at_0, at_90), radians = turning or (-1, [None, None], np.zeros(1))
+    terms = []
+    for number, load in enumerate(loads):
+        z = float(load.z.to("m").m)
+        if isinstance(load, AppliedMoment):
+            terms.append(LoadTerms(load.name, z, C_x=load.Mx.to("N*m").m, C_y=load.My.to("N*m").m))
+            continue
+        if number == index:
+            F = [
+                np.cos(radians) * at_0.component(axis).to("N").m
+                + np.sin(radians) * at_90.component(axis).to("N").m
+                for axis in ("x", "y", "z")
+            ]
+        else:
+            F = [float(load.component(axis).to("N").m) for axis in ("x", "y", "z")]
+        terms.append(
+            LoadTerms(
+                load.name, z, F_x=F[0], F_y=F[1], F_z=F[2],
+                e_x=float(load.ex.to("m").m), e_y=float(load.ey.to("m").m),
+            )
+        )  # fmt: skip
+    numbers = section.numeric("m")
+    result = tip_deflection_arrays(
+        terms,
+        length=float(length.to("m").m),
+        E=float(Quantity(basis.standard.modulus).to("Pa").m),
+        Ix=numbers.Ix,
+        Iy=numbers.Iy,
+        Ixy=numbers.Ixy,
+        n=basis.deflection_ratio,
+    )
+    return np.broadcast_to(np.asarray(result.utilization, dtype=float), radians.shape)
 
 
 @dataclass(frozen=True)
@@ -314,10 +364,19 @@ class Candidate:
 
 
 def lightest_section(
-    plan: CombinationPlan, basis: DesignBasis, Fy: pint.Quantity, length: pint.Quantity
+    plan: CombinationPlan,
+    basis: DesignBasis,
+    Fy: pint.Quantity,
+    length: pint.Quantity,
+    loads: Sequence[PointLoad | AppliedMoment] = (),
 ) -> tuple[Candidate | None, list[Candidate]]:
     """The lightest section of ``basis.lightest_in`` passing every check of the standard
-    under every combination, and the (up to) two lighter sections before it, which fail."""
+    under every combination, and the (up to) two lighter sections before it, which fail.
+
+    With a deflection limit in the basis and the service ``loads``, the tip deflection
+    is a check too (the sheet's procedure on each candidate's own section).
+    """
+    from calcsheet.sections import catalog_section
     from calcsheet.sections.catalog import find_entry
 
     search = basis.standard.search
@@ -330,15 +389,27 @@ def lightest_section(
     worst = per_check.max(axis=0)
     which = per_check.argmax(axis=0)
 
+    def deflection(i: int) -> float:
+        if not (basis.deflection_ratio and loads):
+            return 0.0
+        section = catalog_section(names[i])
+        return float(_deflection_utilization(section, loads, None, basis, length)[0])
+
     def candidate(i: int) -> Candidate:
         weight = find_entry(names[i]).values.get("weight", math.nan)
+        bending = deflection(i)
+        if bending > worst[i]:
+            return Candidate(names[i], Quantity(weight, "lbf/ft"), bending, "deflection")
         return Candidate(names[i], Quantity(weight, "lbf/ft"), float(worst[i]), keys[int(which[i])])
 
-    passing = np.flatnonzero(worst <= 1.0)
-    if passing.size == 0:
-        return None, [candidate(i) for i in range(max(0, len(names) - 2), len(names))]
-    first = int(passing[0])
-    return candidate(first), [candidate(i) for i in range(max(0, first - 2), first)]
+    # Strength first (every section at once), then the deflection of each passing section
+    # in order of weight until one passes both: the same checks as the sheet's.
+    for first in np.flatnonzero(worst <= 1.0):
+        chosen = candidate(int(first))
+        if chosen.passes:
+            first = int(first)
+            return chosen, [candidate(i) for i in range(max(0, first - 2), first)]
+    return None, [candidate(i) for i in range(max(0, len(names) - 2), len(names))]
 
 
 __all__ = [

@@ -24,6 +24,8 @@ from calcsheet.calcs.design import (
 )
 from calcsheet.engine import Check, Sheet
 from calcsheet.figures.chart import sweep_chart
+from calcsheet.mechanics.deflection import CHECK_KEY as DEFLECTION_KEY
+from calcsheet.mechanics.deflection import CHECK_TITLE as DEFLECTION_TITLE
 from calcsheet.mechanics.loads import AppliedMoment, PointLoad
 from calcsheet.sections import Section, family_title
 from calcsheet.standards.combinations import combination_rules_text
@@ -181,8 +183,10 @@ def write_exploration(
         sheet.text(
             f"The load {sweep.load} is turned through 0–360° in its plane in steps of "
             f"{basis.sweep_step_deg:g}°, magnitude and point of application unchanged, and the "
-            f"governing utilization is found for each angle (computed when the sheet was "
-            f"built). Worst angle {sweep.worst_deg:g}°: {sweep.utilization.max():.3f}; "
+            f"governing utilization of every check (every combination"
+            f"{', the tip deflection under the loads as given' if basis.deflection_ratio else ''}"
+            f") is found for each angle (computed when the sheet was built). Worst angle "
+            f"{sweep.worst_deg:g}°: {sweep.utilization.max():.3f}; "
             f"drawn angle {sweep.drawn_deg:g}°: {drawn:.3f}."
         )
         sheet.figure(
@@ -197,14 +201,15 @@ def write_exploration(
     if basis.lightest_in:
         if plan is None:
             plan = plan_combinations(section, loads, types, length, station, basis, Fy)
-        chosen, lighter = lightest_section(plan, basis, Fy, length)
+        chosen, lighter = lightest_section(plan, basis, Fy, length, loads)
         sheet.heading(f"Design exploration: lightest of the {family_title(basis.lightest_in)}")
+        titles = {**check_titles(basis), DEFLECTION_KEY: DEFLECTION_TITLE}
         rows = [
             [
                 candidate.name,
                 f"{candidate.weight.to('lbf/ft').m:g} lb/ft",
                 f"{candidate.utilization:.3f}" if np.isfinite(candidate.utilization) else "—",
-                check_titles(basis).get(candidate.governing_check, candidate.governing_check),
+                titles.get(candidate.governing_check, candidate.governing_check),
                 "passes" if candidate.passes else "fails",
             ]
             for candidate in [*lighter, *([chosen] if chosen else [])]
@@ -213,8 +218,10 @@ def write_exploration(
             ["Section", "Weight", "Utilization", "Governing check", "Result"],
             rows,
             caption=(
-                "The lightest section of the family passing every AISC 360-22 check under "
-                "every combination, and the next lighter ones with why they fail "
+                f"The lightest section of the family passing every {basis.kind} check under "
+                "every combination"
+                + (", and the tip deflection," if basis.deflection_ratio else "")
+                + " and the next lighter ones with why they fail "
                 "(computed when the sheet was built; only this sheet's section is written "
                 "out step by step)"
             ),

@@ -11,9 +11,11 @@ stress (not a specification check).
 
 from __future__ import annotations
 
+import dataclasses
 from collections.abc import Sequence
 from dataclasses import dataclass, field
 
+import numpy as np
 import pint
 import sympy as sp
 
@@ -44,7 +46,7 @@ from calcsheet.mechanics.point_stresses import (
     point_stress_procedure,
 )
 from calcsheet.mechanics.statics import loads_beyond, validate_loads
-from calcsheet.mechanics.stresses import StressModel, stress_model
+from calcsheet.mechanics.stresses import MEASURES, StressModel, stress_model
 from calcsheet.mechanics.torsion import WARPING_NOTE
 from calcsheet.sections import Section, family_title
 from calcsheet.units import Quantity, parse_quantity, unit_system, ureg
@@ -64,6 +66,8 @@ SIGN_TEXT = (
     "Positive M_x puts the top (+y) fibres in tension; positive M_y puts the left (−x) "
     "fibres in tension. Normal stress is positive in tension."
 )
+# How much of the point-by-point derivation a member sheet writes out.
+DETAILS = ("concise", "full")
 LAYOUT = (
     "the member length, the station and the load positions decide which loads the cut "
     "carries; build the member sheet again with the new value"
@@ -86,6 +90,7 @@ def member_sheet(
     units: str = "US",
     design: DesignBasis | None = None,
     load_types: Sequence[str] | None = None,
+    detail: str = "concise",
 ) -> Sheet:
     """Build the combined-stress sheet of a cantilever member at ``station``.
 
@@ -96,7 +101,12 @@ def member_sheet(
     AISC 360-22 or EN 1993-1-1 with their load combinations, the deflection
     check and the design exploration. Bad input raises :class:`InputError`
     naming the field (``member length``, ``station z``, ``load P1 z``, ``Fy``...).
+    ``detail`` "concise" (the default) writes out the points that govern a measure step
+    by step and gives every other point in the table (evaluated by the same steps);
+    "full" writes out every point.
     """
+    if detail not in DETAILS:
+        raise InputError("sheet detail", detail, " or ".join(f'"{d}"' for d in DETAILS))
     arguments = {
         "section": section,
         "loads": list(loads),
@@ -110,6 +120,7 @@ def member_sheet(
         "units": units,
         "design": design,
         "load_types": load_types,
+        "detail": detail,
     }
     basis = design or DesignBasis(factor_of_safety=Omega)
     if design is not None:
@@ -168,7 +179,8 @@ def member_sheet(
         if model.resultant is not None:
             points = write_round_point_stresses(sheet, section, model, forces, props)
         else:
-            points = _write_point_stresses(sheet, section, model, forces, props)
+            shown = None if detail == "full" else _governing_points(sheet, model, forces)
+            points = _write_point_stresses(sheet, section, model, forces, props, shown)
         _write_point_table(sheet, points, stress)
         governing = _write_governing(sheet, points, stress)
         checks = standard.write(
@@ -566,15 +578,42 @@ def _write_point_data(sheet: Sheet, section: Section, model: StressModel) -> lis
     return data
 
 
+def _governing_points(sheet: Sheet, model: StressModel, forces: dict[str, sp.Symbol]) -> set[int]:
+    """The points that govern a measure (tension, compression, shear, max shear, von
+    Mises) under the forces written: the point procedure on arrays, from current values."""
+    unit = model.length_unit
+    units = ("N", "N", "N", f"N*{unit}", f"N*{unit}", f"N*{unit}")
+    values = [
+        float(sheet.value(forces[name]).to(to).m)
+        for name, to in zip(("N", "V_x", "V_y", "T", "M_x", "M_y"), units, strict=True)
+    ]
+    result = model.stresses(np.array([values]))
+    return {int(result.governing_index(measure)[0]) for measure in MEASURES}
+
+
 def _write_point_stresses(
     sheet: Sheet,
     section: Section,
     model: StressModel,
     forces: dict[str, sp.Symbol],
     props: dict[str, sp.Symbol | None],
+    shown: set[int] | None = None,
 ) -> list[PointRecord]:
-    """The point stress procedure on the sheet, point by point, with the sheet's symbols."""
+    """The point stress procedure on the sheet, point by point, with the sheet's symbols.
+
+    ``shown``: the indices of the points written out step by step (None: all); the
+    others are evaluated by the same steps and appear in the table only.
+    """
     data = _write_point_data(sheet, section, model)
+    if shown is not None:
+        data = [
+            dataclasses.replace(point, shown=index in shown) for index, point in enumerate(data)
+        ]
+        sheet.text(
+            "Written out step by step below: the points that govern a measure (largest "
+            "tension and compression, shear, maximum shear, von Mises). Every other point "
+            "is evaluated by the same steps and given in the summary table."
+        )
     return point_stress_procedure(
         SheetWriter(sheet),
         data,

@@ -4,7 +4,7 @@ Every diameter of a round section is a principal axis, so the bending stress pea
 at the two ends of the diameter normal to the resultant moment,
 σ = N/A ± M_r·R_o/I with M_r = √(M_x² + M_y²); sampling the perimeter would miss
 that peak by up to 1 − cos(half the spacing). Transverse shear peaks on the
-neutral axis of the resultant shear V_r = √(V_x² + V_y²): τ_V = V_r·Q_0/(I·b_0),
+neutral axis of the resultant shear V_res = √(V_x² + V_y²): τ_V = V_res·Q_0/(I·b_0),
 Q_0 and b_0 of the half section cut through the centroid. Torsion: τ_T = T·R_o/J.
 The steps are :func:`calcsheet.mechanics.point_stresses.round_stress_procedure`,
 which the numeric path (:class:`calcsheet.mechanics.stresses.StressModel`) runs too.
@@ -32,7 +32,7 @@ ROUND_TEXT = (
     "Round section: every diameter is a principal axis, so bending is taken with the "
     "resultant moment M_r = √(M_x² + M_y²), largest at the two ends of the diameter "
     "normal to it: σ = N/A ± M_r·R_o/I. The transverse shear is largest on the neutral "
-    "axis of the resultant shear V_r = √(V_x² + V_y²): τ_V = V_r·Q_0/(I·b_0). Both fibres "
+    "axis of the resultant shear V_res = √(V_x² + V_y²): τ_V = V_res·Q_0/(I·b_0). Both fibres "
     "are checked with τ = τ_V + |τ_T| (the largest shear, wherever it acts: conservative)."
 )
 

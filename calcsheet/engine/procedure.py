@@ -32,6 +32,7 @@ by its ``write`` and ``numeric`` methods.
 
 from __future__ import annotations
 
+import dataclasses
 import functools
 import math
 import operator
@@ -78,6 +79,16 @@ class SheetWriter:
     prints = True
     symbols: dict[str, sp.Symbol] = field(default_factory=dict)
     checks: dict[str, Check] = field(default_factory=dict)
+    # Steps evaluated but not printed, and no words: see :meth:`quietly`.
+    quiet: bool = False
+
+    def quietly(self) -> SheetWriter:
+        """The same writer (sheet, symbols, checks) evaluating steps without printing them.
+
+        For parts a sheet states in a table instead of step by step (the points of a
+        section other than the governing ones, say): the values stay live.
+        """
+        return dataclasses.replace(self, quiet=True)
 
     # --- values ------------------------------------------------------------------------
     def unit(self, kind: str) -> str:
@@ -134,6 +145,8 @@ class SheetWriter:
 
     def step(self, name: str, expr: sp.Basic, description: str, **options: Any) -> sp.Symbol:
         """A step, remembered by name."""
+        if self.quiet:
+            options["shown"] = False
         symbol = self.sheet.step(name, expr, description, **options)
         self.symbols[name] = symbol
         return symbol
@@ -142,7 +155,8 @@ class SheetWriter:
         self, clause: Clause, name: str, *args: sp.Basic, unit: str | None = None
     ) -> sp.Symbol:
         """A step written by a :class:`Clause`, remembered by name."""
-        symbol = clause.write(self.sheet, name, *args, unit=unit)
+        options = {"shown": False} if self.quiet else {}
+        symbol = clause.write(self.sheet, name, *args, unit=unit, **options)
         self.symbols[name] = symbol
         return symbol
 
@@ -239,10 +253,12 @@ class SheetWriter:
 
     # --- words and checks ------------------------------------------------------------------
     def heading(self, text: str, level: int = 1) -> None:
-        self.sheet.heading(text, level)
+        if not self.quiet:
+            self.sheet.heading(text, level)
 
     def text(self, text: str) -> None:
-        self.sheet.text(text)
+        if not self.quiet:
+            self.sheet.text(text)
 
     def check(
         self, key: str, title: str, demand: Value, capacity: Value, *, reference: str = ""
@@ -364,6 +380,9 @@ class ArrayWriter:
     @staticmethod
     def label(flag: Flag, when_true: str, when_false: str) -> str:
         return when_false
+
+    def quietly(self) -> ArrayWriter:
+        return self
 
     def smallest(
         self, name: str, candidates: Sequence[Candidate], description: str = "", unit: Any = None

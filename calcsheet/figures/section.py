@@ -40,7 +40,7 @@ DRAWING_SIZE = 230.0  # px taken by the larger of the section's width and depth
 AXIS_OVERRUN = 16.0  # px the centroidal axes run past the outline
 DIMENSION_OFFSET = 30.0  # px from the outline to an overall dimension line
 
-I_SHAPES = {"W", "M", "S", "HP", "I-shape"}
+I_SHAPES = {"W", "M", "S", "HP", "IPE", "HEA", "HEB", "HEM", "I-shape"}
 CHANNELS = {"C", "MC", "channel"}
 TEES = {"WT", "MT", "ST", "tee"}
 ANGLES = {"L", "angle"}

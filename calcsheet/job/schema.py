@@ -141,10 +141,13 @@ class _Table(BaseModel):
 
 
 class SheetSpec(_Table):
-    """The sheet's title and the unit system every value is shown in."""
+    """The sheet's title, the unit system every value is shown in, and how much of the
+    point-by-point derivation is written out ("concise": the governing points, every
+    other point in the table; "full": every point step by step)."""
 
     title: Text = "Member combined stresses"
     units: Literal["US", "SI"] = "US"
+    detail: Literal["concise", "full"] = "concise"
 
 
 class TitleBlockSpec(_Table):

@@ -10,6 +10,7 @@ version = 1
 [sheet]
 title = "Davit arm DA-1: combined stresses at the support"
 units = "US"                 # "US" (kip, in, ksi) or "SI" (kN, mm, MPa)
+detail = "concise"           # governing points step by step, the rest in a table; or "full"
 
 [title_block]
 project = "Pump house upgrade"

@@ -133,6 +133,8 @@ class PointTerms:
     y: Value
     cuts: Mapping[str, Cut]
     junction: Flag = False
+    # False: evaluated step by step but not printed (the sheet's table shows it).
+    shown: bool = True
 
 
 @dataclass(frozen=True)
@@ -180,7 +182,9 @@ def point_stress_procedure(
     )
     tau_T_common = _common_torsion(w, forces.T, section, stress)
     records = []
+    outer = w
     for point in points:
+        w = outer if point.shown else outer.quietly()
         n = point.number
         record = PointRecord(n, point.label)
         w.heading(f"Point {n}: {point.label}", level=2)
@@ -323,16 +327,18 @@ def round_stress_procedure(
     Every diameter of a round section is a principal axis, so the bending stress
     peaks at the two ends of the diameter normal to the resultant moment,
     σ = N/A ± M_r·R_o/I with M_r = √(M_x² + M_y²); the transverse shear peaks on the
-    neutral axis of the resultant shear V_r = √(V_x² + V_y²): τ_V = V_r·Q_0/(I·b_0);
+    neutral axis of the resultant shear V_res = √(V_x² + V_y²): τ_V = V_res·Q_0/(I·b_0);
     torsion τ_T = T·R_o/J; both fibres take τ = τ_V + |τ_T| (the largest shear,
-    wherever it acts: conservative). Steps ``M_r``, ``V_r``, ``sigma_N``, ``sigma_b``,
+    wherever it acts: conservative). Steps ``M_r``, ``V_res``, ``sigma_N``, ``sigma_b``,
     ``tau_V``, ``tau_T``, ``tau``, then ``sigma_z_1``/``sigma_z_2`` and
     :func:`combined_stress_procedure` for the fibres 1 (tension side) and 2.
     """
     stress = w.unit("stress")
     R_o, I = round_terms.R_o, section.I_x
     M_r = w.step("M_r", formulas.resultant(w, forces.M_x, forces.M_y), "Resultant bending moment")
-    V_r = w.step("V_r", formulas.resultant(w, forces.V_x, forces.V_y), "Resultant transverse shear")
+    V_r = w.step(
+        "V_res", formulas.resultant(w, forces.V_x, forces.V_y), "Resultant transverse shear"
+    )
     sigma_N = w.step(
         "sigma_N", formulas.axial_stress(forces.N, section.A), "Axial term, N/A", unit=stress
     )

@@ -12,8 +12,11 @@ write fractions with underscores (HSS6X6X3_8, L4X4X1_1_4) and decimals the same
 way (W6X8_5, HSS6_625X0_500); :func:`catalog_section` returns the Manual's
 spelling (HSS6X6X3/8, W6X8.5, HSS6.625X0.500) as the section name.
 
-Metric shapes (IPE, HEA, HEB) are not included: no reliable dimension table is
-available here. Define them with :mod:`calcsheet.sections.user_defined`.
+EN sections (IPE, HEA, HEB, HEM of EN 10365; SHS, RHS, CHS of EN 10210-2) are in
+the same catalog, from the dimension files vendored in ``sections/data`` (see
+:mod:`calcsheet.sections.metric`): "IPE 300", "ipe300", "HE 200 B", "HEB200",
+"HE200B", "SHS 100x100x5", "RHS 200x100x6.3", "CHS 168.3x8". Their properties
+are all computed from the dimensions (the vendored files carry no properties).
 """
 
 from __future__ import annotations
@@ -29,7 +32,7 @@ from pathlib import Path
 import pint
 
 from calcsheet.errors import InputError
-from calcsheet.sections import shapes
+from calcsheet.sections import metric, shapes
 from calcsheet.sections.section import Section, build_section
 from calcsheet.units import Quantity
 
@@ -45,6 +48,12 @@ class Family:
     title: str
     file: str
     fractions: bool  # designations use fractions (3/8) rather than decimals (8.5)
+    standard: str = ""  # the EN product standard of a metric family; "" for the AISC tables
+
+    @property
+    def metric(self) -> bool:
+        """True for the EN families, read from the vendored files of :mod:`metric`."""
+        return bool(self.standard)
 
 
 FAMILIES: dict[str, Family] = {
@@ -63,8 +72,14 @@ FAMILIES: dict[str, Family] = {
         Family("HSS_RECT", "rectangular and square HSS", "HSS_shapes.csv", True),
         Family("HSS_ROUND", "round HSS", "HSS_R_shapes.csv", False),
         Family("PIPE", "pipe", "PIPE_shapes.csv", True),
+        *(
+            Family(key, found.title, found.file, False, found.standard)
+            for key, found in metric.METRIC_FAMILIES.items()
+        ),
     )
 }
+# kg/m of a metric section -> the lbf/ft the catalog's "weight" column holds
+_KG_PER_M_IN_LBF_PER_FT = float(Quantity(1.0, "kg/m * gravity").to("lbf/ft").magnitude)
 
 
 def family_title(family: str) -> str:
@@ -126,6 +141,8 @@ def _catalog() -> dict[str, CatalogEntry]:
     entries: dict[str, CatalogEntry] = {}
     folder = _shape_files()
     for family in FAMILIES.values():
+        if family.metric:
+            continue
         with (folder / family.file).open(encoding="utf-8", newline="") as handle:
             for row in csv.DictReader(handle):
                 table_name = row.pop("shape").strip()
@@ -137,6 +154,12 @@ def _catalog() -> dict[str, CatalogEntry]:
                 entry = CatalogEntry(table_name, _display_name(table_name, family), family, values)
                 for key in _keys_for(table_name):
                     entries.setdefault(key, entry)
+    for row in metric.metric_rows():
+        weight = row.values["mass_kg_per_m"] * _KG_PER_M_IN_LBF_PER_FT
+        values = {**row.values, "weight": weight}
+        entry = CatalogEntry(row.designation, row.designation, FAMILIES[row.family.key], values)
+        for key in metric.lookup_keys(row.designation):
+            entries.setdefault(key, entry)
     return entries
 
 
@@ -174,16 +197,21 @@ def find_entry(designation: str) -> CatalogEntry:
         raise InputError("designation", designation, "a shape designation such as 'W10X33'")
     catalog = _catalog()
     key = normalise_designation(designation)
-    entry = catalog.get(key) or catalog.get(_without_trailing_zeros(key))
+    metric_key = metric.normalise_metric(designation)
+    entry = catalog.get(key) or catalog.get(_without_trailing_zeros(key)) or catalog.get(metric_key)
     if entry is not None:
         return entry
-    close = difflib.get_close_matches(key, list(catalog), n=6, cutoff=0.6)
+    # Suggest from the same family where the typed letters name one (IPE 310 -> IPE ...).
+    letters = re.match(r"[A-Z]*", metric_key).group(0)
+    same_start = [name for name in catalog if letters and name.startswith(letters)]
+    close = difflib.get_close_matches(metric_key, same_start or list(catalog), n=6, cutoff=0.6)
     suggestions = list(dict.fromkeys(catalog[match].designation for match in close))[:3]
     hint = f"did you mean {', '.join(suggestions)}?" if suggestions else "no similar designation"
     raise InputError(
         "designation",
         designation,
-        "a standard AISC designation such as 'W10X33', 'HSS6X6X3/8' or 'Pipe4STD'",
+        "a standard AISC or EN designation such as 'W10X33', 'HSS6X6X3/8', 'Pipe4STD', "
+        "'IPE 300', 'HE 200 B', 'SHS 100x100x5' or 'CHS 168.3x8'",
         f"not in the shape tables; {hint}",
     )
 
@@ -213,9 +241,16 @@ def _family(family: str) -> Family:
 def tabulated_properties(designation: str) -> dict[str, pint.Quantity]:
     """Every value the table gives for a shape, as quantities keyed by column name."""
     entry = find_entry(designation)
+    if entry.family.metric:
+        return metric.tabulated_values(_metric_row(entry))
     return {
         column: Quantity(value, _COLUMN_UNITS[column]) for column, value in entry.values.items()
     }
+
+
+def _metric_row(entry: CatalogEntry) -> metric.MetricRow:
+    values = {name: value for name, value in entry.values.items() if name != "weight"}
+    return metric.MetricRow(entry.designation, metric.METRIC_FAMILIES[entry.family.key], values)
 
 
 # --- sections ---------------------------------------------------------------------------
@@ -229,8 +264,13 @@ def catalog_section(designation: str, *, use_tabulated: bool = True) -> Section:
     centroid, Ixy, principal axes, fibre distances, stress points and Q come from
     the outline drawn from the tabulated dimensions. ``section.sources`` records
     which is which. With ``use_tabulated=False`` everything is computed.
+
+    An EN section (IPE, HE, SHS, RHS, CHS) has every property computed from its
+    dimensions either way: the vendored files carry dimensions only.
     """
     entry = find_entry(designation)
+    if entry.family.metric:
+        return metric.metric_section(_metric_row(entry))
     table = tabulated_properties(entry.table_name)
     shape, dimension_names = _shape_for(entry)
     tabulated_as_properties = {

@@ -12,7 +12,8 @@ lower-left corner of the bounding box at (0, 0):
 * Rectangular HSS: height H vertical, width B horizontal, outside corner radius
   2t and inside radius t, t the design wall thickness.
 
-Rolled shapes are drawn without fillets or toe rounding, and with parallel flanges
+Rolled shapes are drawn without fillets (unless a root radius is given, as for the
+EN I and H sections) or toe rounding, and with parallel flanges
 except C channels (tf of S shapes and channels is the average flange thickness
 the tables give; a C channel's flanges are drawn sloped, see :func:`channel`).
 
@@ -257,9 +258,18 @@ def round_tube(outside_diameter: float, wall: float, unit: str) -> ShapeOutline:
     )
 
 
-def rectangular_tube(height: float, width: float, wall: float, unit: str) -> ShapeOutline:
-    """Rectangular or square HSS: outside corner radius 2t, inside radius t.
+def rectangular_tube(
+    height: float,
+    width: float,
+    wall: float,
+    unit: str,
+    outer_radius: float | None = None,
+    inner_radius: float | None = None,
+) -> ShapeOutline:
+    """Rectangular or square HSS: outside corner radius 2t, inside radius t by default.
 
+    ``outer_radius`` and ``inner_radius`` draw other corners (the EN hollow sections
+    of :mod:`calcsheet.sections.metric` give their product standard's radii).
     Stress points are the corners of the bounding box, not the tangent points of
     the corner arcs: M·c/I with c to the bounding box is what the tables' S = I/c
     uses and is slightly conservative for biaxial bending.
@@ -267,11 +277,13 @@ def rectangular_tube(height: float, width: float, wall: float, unit: str) -> Sha
     require_positive("H", height, unit)
     require_positive("B", width, unit)
     require_positive("t", wall, unit)
-    require_less("t", 4 * wall, min(height, width), "the smaller outside dimension", unit)
-    outer = _rounded_rectangle(width, height, 0.0, 2 * wall)
-    inner = _rounded_rectangle(width, height, wall, wall, clockwise=True)
-    # Bredt's formula on the wall's mid-line (mid-line corner radius 1.5 t).
-    midline_radius = 1.5 * wall
+    outside = 2 * wall if outer_radius is None else outer_radius
+    inside = wall if inner_radius is None else inner_radius
+    require_less("t", 2 * outside, min(height, width), "the smaller outside dimension", unit)
+    outer = _rounded_rectangle(width, height, 0.0, outside)
+    inner = _rounded_rectangle(width, height, wall, inside, clockwise=True)
+    # Bredt's formula on the wall's mid-line.
+    midline_radius = (outside + inside) / 2
     enclosed = (width - wall) * (height - wall) - (4 - math.pi) * midline_radius**2
     perimeter = 2 * (width - wall) + 2 * (height - wall) - (8 - 2 * math.pi) * midline_radius
     points = (
@@ -284,7 +296,8 @@ def rectangular_tube(height: float, width: float, wall: float, unit: str) -> Sha
         Outline([outer, inner]),
         points,
         4 * enclosed**2 * wall / perimeter,
-        "computed: Bredt, J = 4·Am²·t/p on the wall mid-line (corner radius 1.5t)",
+        "computed: Bredt, J = 4·Am²·t/p on the wall mid-line "
+        f"(corner radius {midline_radius / wall:g}t)",
         0.0,
         ZERO_WARPING,
     )
@@ -298,8 +311,14 @@ def i_shape(
     unit: str,
     bottom_flange_width: float | None = None,
     bottom_flange: float | None = None,
+    root_radius: float = 0.0,
 ) -> ShapeOutline:
-    """I-shape; the bottom flange may differ from the top one (monosymmetric girder)."""
+    """I-shape; the bottom flange may differ from the top one (monosymmetric girder).
+
+    ``root_radius`` draws the quarter-circle fillets of a rolled section where the
+    web meets the flanges (each adds (1 − π/4)·r² of area); J and Cw stay the
+    thin-walled values here, a caller with better formulas replaces them.
+    """
     bottom_width = flange_width if bottom_flange_width is None else bottom_flange_width
     bottom_thickness = flange if bottom_flange is None else bottom_flange
     for field, value in (
@@ -323,19 +342,35 @@ def i_shape(
     bottom_left, bottom_right = middle - bottom_width / 2, middle + bottom_width / 2
     under_top = depth - flange
     over_bottom = bottom_thickness
+    if root_radius < 0 or not math.isfinite(root_radius):
+        require_positive("r", root_radius, unit)
+    if root_radius > 0:
+        require_less(
+            "r", 2 * root_radius, min(under_top - over_bottom, width - web), "the clear web", unit
+        )
+    r = root_radius
+
+    def fillet(center_x: float, center_y: float, start: float) -> list[tuple[float, float]]:
+        """A concave quarter circle, turning clockwise from angle ``start``."""
+        if r == 0:
+            return [(center_x + r * math.cos(start), center_y + r * math.sin(start))]
+        angles = start - np.linspace(0.0, 0.5 * math.pi, CHORDS_PER_QUARTER_CIRCLE + 1)
+        return [(center_x + r * math.cos(a), center_y + r * math.sin(a)) for a in angles]
+
+    half_pi = 0.5 * math.pi
     ring = _ring(
         [
             (bottom_left, 0),
             (bottom_right, 0),
             (bottom_right, over_bottom),
-            (web_right, over_bottom),
-            (web_right, under_top),
+            *fillet(web_right + r, over_bottom + r, -half_pi),
+            *fillet(web_right + r, under_top - r, math.pi),
             (top_right, under_top),
             (top_right, depth),
             (top_left, depth),
             (top_left, under_top),
-            (web_left, under_top),
-            (web_left, over_bottom),
+            *fillet(web_left - r, under_top - r, half_pi),
+            *fillet(web_left - r, over_bottom + r, 0.0),
             (bottom_left, over_bottom),
         ]
     )

@@ -156,6 +156,7 @@ class MemberForm:
         self._units_now = "US"
         self.units.observe(self._units_changed)
         self.title = TextField("sheet title", width="40em")
+        self.detail = ToggleField("derivation", ["concise", "full"], "concise")
         self.title_block = {
             key: TextField(label, width="40em" if key in ("project", "subject") else "26em")
             for key, label in TITLE_BLOCK_LABELS.items()
@@ -190,6 +191,7 @@ class MemberForm:
         self.general = MessageSlot("the form")
         simple: list[Field] = [
             self.title,
+            self.detail,
             *self.title_block.values(),
             self.member_name,
             self.length,
@@ -234,6 +236,7 @@ class MemberForm:
             [
                 _heading("1 · Project and title block"),
                 self.title.box,
+                self.detail.box,
                 *(field.box for field in self.title_block.values()),
                 self.revisions.box,
                 self.buttons["revision"],
@@ -305,6 +308,7 @@ class MemberForm:
             self.units.set(job.sheet.units)
             self._units_now = job.sheet.units
             self.title.set(job.sheet.title)
+            self.detail.set(job.sheet.detail)
             for key, field in self.title_block.items():
                 field.set(getattr(job.title_block, key))
             self.revisions.fill(list(job.revisions))
@@ -333,6 +337,7 @@ class MemberForm:
         """
         found: dict[str, Field] = {"": self.general, "sheet.units": self.units}
         found["sheet.title"] = self.title
+        found["sheet.detail"] = self.detail
         found |= {f"title_block.{key}": field for key, field in self.title_block.items()}
         found |= self.revisions.fields()
         found["member.name"] = self.member_name
@@ -365,7 +370,11 @@ class MemberForm:
         """The entries as job-file data (what Save writes), whether or not they are valid."""
         data: dict[str, Any] = {
             "version": 1,
-            "sheet": {"title": self.title.value, "units": self.units.value},
+            "sheet": {
+                "title": self.title.value,
+                "units": self.units.value,
+                "detail": self.detail.value,
+            },
             "title_block": {key: field.value for key, field in self.title_block.items()},
         }
         if self.revisions.rows:

@@ -130,3 +130,100 @@ def test_each_check_names_its_governing_combination() -> None:
             continue  # the deflection check: service loads as given
         assert check.worst_utilization == pytest.approx(float(np.max(plan.per_check[key])))
         assert check.cases is not None and check.cases.count == len(plan.combos)
+
+
+def test_the_sweep_includes_the_deflection_check() -> None:
+    """Issue 17: a member whose deflection governs showed a sweep maximum below it.
+
+    A 10 ft HSS4x4x1/4 arm (our own, invented) with 1.2 kip at the tip: the tip
+    deflection against L/360 governs; at the drawn angle the sweep must equal the
+    sheet's governing check, and its maximum can only be larger.
+    """
+    loads = [point_load("arm", magnitude="1.2 kip", angle="90 deg", z="120 in", ey="-2 in")]
+    basis = DesignBasis("AISC 360-22", deflection_ratio=360, sweep_load="arm")
+    sheet = member_sheet(
+        catalog_section("HSS4X4X1/4"), loads, length="120 in", design=basis, load_types=["D"]
+    )
+    governing = sheet.governing_check()
+    assert governing.description == "Tip deflection"
+    from calcsheet.calcs.design import angle_sweep
+
+    sweep = angle_sweep(
+        catalog_section("HSS4X4X1/4"), loads, ["D"], Quantity(120, "in"), Quantity(0, "in"),
+        basis, Quantity(50, "ksi"),
+    )  # fmt: skip
+    assert sweep.drawn_utilization == pytest.approx(governing.worst_utilization, rel=1e-9)
+    assert sweep.utilization.max() >= governing.worst_utilization * (1 - 1e-9)
+
+
+def test_the_lightest_section_also_passes_the_deflection_check() -> None:
+    """Issue 17: the lightest-section table used the strength checks only.
+
+    A 10 ft cantilever (our own, invented) with 1.2 kip at the tip against L/360: the
+    lightest W passing strength fails the deflection, so the table's choice must be a
+    heavier one whose own sheet passes every check.
+    """
+    loads = [point_load("arm", magnitude="1.2 kip", angle="90 deg", z="120 in")]
+    strength_only = DesignBasis("AISC 360-22", lightest_in="W")
+    with_deflection = DesignBasis("AISC 360-22", lightest_in="W", deflection_ratio=360)
+    plan = plan_combinations(
+        catalog_section("W8X31"), loads, ["D"], Quantity(120, "in"), Quantity(0, "in"),
+        with_deflection, FY,
+    )  # fmt: skip
+    by_strength, _ = lightest_section(plan, strength_only, FY, Quantity(120, "in"), loads)
+    chosen, lighter = lightest_section(plan, with_deflection, FY, Quantity(120, "in"), loads)
+    assert chosen.name != by_strength.name and chosen.weight > by_strength.weight
+    assert any(c.governing_check == "deflection" and not c.passes for c in lighter)
+    sheet = member_sheet(
+        catalog_section(chosen.name), loads, length="120 in", Fy=FY,
+        design=DesignBasis("AISC 360-22", deflection_ratio=360), load_types=["D"],
+    )  # fmt: skip
+    assert all(check.passes for check in sheet.checks)
+
+
+@pytest.mark.parametrize(
+    ("kind", "section"),
+    [
+        ("AISC 360-22", "W10X33"),
+        ("AISC 360-22", "HSS6X6X3/8"),
+        ("AISC 360-22", "HSS6.625X0.280"),
+        ("AISC 360-22", "Pipe4STD"),
+        ("AISC 360-22", "L4X4X1/2"),
+        ("EN 1993-1-1", "W10X33"),
+        ("EN 1993-1-1", "HSS6X6X3/8"),
+        ("EN 1993-1-1", "HSS6.625X0.280"),
+        ("EN 1993-1-1", "IPE 300"),
+        ("EN 1993-1-1", "HE 200 B"),
+        ("EN 1993-1-1", "SHS 100x100x5"),
+        ("EN 1993-1-1", "CHS 168.3x8"),
+    ],
+)
+def test_a_member_sheet_builds_for_every_family_the_checks_cover(kind, section) -> None:
+    """A round HSS once stopped the AISC sheet: the stress steps and the checks both
+    named a step V_r. Every covered family builds, each check at its own worst."""
+    basis = DesignBasis(kind, deflection_ratio=180, grade="S355" if kind != "AISC 360-22" else "")
+    types = ["D", "W"] if kind == "AISC 360-22" else ["G", "W"]
+    sheet = member_sheet(
+        catalog_section(section), LOADS, length=LENGTH, Fy=FY, design=basis, load_types=types
+    )
+    plan = plan_combinations(catalog_section(section), LOADS, types, LENGTH, STATION, basis, FY)
+    titles = check_titles(basis)
+    for check in sheet.checks:
+        key = next((k for k, title in titles.items() if title == check.description), None)
+        if key is not None:
+            assert check.worst_utilization == pytest.approx(
+                float(np.max(plan.per_check[key])), rel=1e-9, abs=1e-12
+            )
+
+
+def test_en_checks_read_a_metric_section_as_its_product_standard_gives_it() -> None:
+    """EN 10365 gives the root radius r of an IPE (15 mm for IPE 300, from the vendored
+    EN 10365 table); an EN 10210 hollow section is hot-finished (buckling curve a,
+    EN 1993-1-1 Table 6.2), a section drawn from dimensions cold-formed (curve c)."""
+    from calcsheet.standards.en1993.member import member_data
+
+    ipe = member_data(catalog_section("IPE 300"), length="3 m")
+    assert ipe.values["r"][0].to("mm").m == pytest.approx(15.0)
+    shs = member_data(catalog_section("SHS 100x100x5"), length="3 m")
+    assert shs.fabrication == "hot-finished"
+    assert {choice.curve for choice in shs.curves.values()} == {"a"}

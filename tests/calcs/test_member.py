@@ -100,10 +100,34 @@ def test_inputs_that_decide_the_layout_rebuild_the_sheet() -> None:
 
 
 def test_point_coordinates_are_in_tables_not_in_the_inputs_list() -> None:
-    sheet = member_sheet(catalog_section("W10x33"), LOADS[:1], length="60 in")
+    sheet = member_sheet(catalog_section("W10x33"), LOADS[:1], length="60 in", detail="full")
     listed = {part.name for part in sheet.inputs if part.listed}
     assert "x_1" not in listed and "P_1" in listed
     assert not sheet["sigma_1_1"].shown and sheet["sigma_vm_1"].shown
+
+
+def test_a_concise_sheet_writes_out_the_governing_points_only() -> None:
+    """detail = "concise": the points that govern a measure step by step; every other
+    point evaluated by the same steps (same values) and given in the table."""
+    section = catalog_section("W10x33")
+    concise = member_sheet(section, LOADS, length="60 in")
+    full = member_sheet(section, LOADS, length="60 in", detail="full")
+    governing = {
+        concise.governing_label(concise[name])
+        for name in ("sigma_max", "sigma_min", "tau_gov", "tau_max_gov", "sigma_vm_max")
+    }
+    shown_points = {
+        step.name.rsplit("_", 1)[1]
+        for step in concise.steps
+        if step.shown and step.name.startswith("sigma_vm_") and step.name[-1].isdigit()
+    }
+    # a governing step names its point as "point 5 (top flange to web, left)"
+    assert {label.split()[1] for label in governing} == shown_points
+    for step in full.steps:
+        assert concise.value(step.name) == full.value(step.name)
+    assert sum(s.shown for s in concise.steps) < sum(s.shown for s in full.steps)
+    with pytest.raises(InputError, match="sheet detail"):
+        member_sheet(section, LOADS, length="60 in", detail="brief")
 
 
 def test_changing_an_input_re_evaluates() -> None:

@@ -179,7 +179,7 @@ def test_list_designations_of_a_family() -> None:
         names = list_designations(family)
         assert names and len(names) == len(set(names))
     with pytest.raises(InputError) as raised:
-        list_designations("IPE")
+        list_designations("UB")  # British universal beams: not in the catalog
     assert raised.value.field == "family"
 
 

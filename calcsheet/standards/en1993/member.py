@@ -56,13 +56,14 @@ from calcsheet.standards.en1993.factors import (
 )
 from calcsheet.units import Quantity, parse_quantity, ureg
 
-I_FAMILIES = frozenset({"W", "M", "S", "HP", "I-shape"})
+# AISC rolled I-shapes, EN 10365 I and H sections, and I-sections drawn from plates.
+I_FAMILIES = frozenset({"W", "M", "S", "HP", "IPE", "HEA", "HEB", "HEM", "I-shape"})
 RHS_FAMILIES = frozenset({"HSS_RECT", "rectangular HSS"})
 CHS_FAMILIES = frozenset({"HSS_ROUND", "PIPE", "round HSS"})
 SUPPORTED_TEXT = (
-    "a doubly symmetric I-section (W, M, S, HP, or I-shape with equal flanges), a "
-    "rectangular or square hollow section (HSS_RECT, rectangular HSS) or a circular "
-    "hollow section (HSS_ROUND, PIPE, round HSS)"
+    "a doubly symmetric I-section (IPE, HEA, HEB, HEM, W, M, S, HP, or I-shape with equal "
+    "flanges), a rectangular or square hollow section (SHS, RHS, HSS_RECT, rectangular HSS) "
+    "or a circular hollow section (CHS, HSS_ROUND, PIPE, round HSS)"
 )
 SCOPE_TEXT = (
     "a class 1, 2 or 3 cross-section whose webs need no shear buckling verification "
@@ -283,6 +284,18 @@ def si_inputs(member: MemberData) -> dict[str, float]:
     return result
 
 
+def _hollow_forming(section: Section) -> str:
+    """Hot-finished for an EN 10210 catalog section; otherwise cold-formed (buckling curve
+    c, the conservative choice, EN 1993-1-1 Table 6.2) unless the job says otherwise."""
+    from calcsheet.sections.catalog import find_entry
+
+    try:
+        standard = find_entry(section.name).family.standard
+    except InputError:  # a section drawn from dimensions
+        return "cold-formed"
+    return "hot-finished" if standard.startswith("EN 10210") else "cold-formed"
+
+
 # --- validation ------------------------------------------------------------------------------
 
 
@@ -425,7 +438,10 @@ def _geometry(section: Section, fabrication: str | None) -> _Geometry:
         if chosen not in ("rolled", "welded"):
             raise InputError("fabrication", fabrication, "'rolled' or 'welded' for an I-section")
         k_design = section.tabulated.get("k")
-        if k_design is not None:
+        if "r" in dims:  # an EN 10365 section gives its root radius
+            r = dims["r"].to(unit)
+            reference = "root radius r of the EN 10365 section"
+        elif k_design is not None:
             # The AISC tables give k_des = t_f + fillet; the fillet radius is the difference.
             r = (k_design - dims["tf"]).to(unit)
             reference = "k_des − t_f of the AISC tables"
@@ -435,7 +451,7 @@ def _geometry(section: Section, fabrication: str | None) -> _Geometry:
         geometry = {"h": dims["d"], "b": dims["bf"], "t_w": dims["tw"], "t_f": dims["tf"], "r": r}
         return _Geometry("I", chosen, geometry, reference)
     if family in RHS_FAMILIES or family in CHS_FAMILIES:
-        chosen = fabrication or "cold-formed"
+        chosen = fabrication or _hollow_forming(section)
         if chosen not in buck.HOLLOW_FORMING:
             raise InputError(
                 "fabrication", fabrication, "'hot-finished' or 'cold-formed' for a hollow section"
