@@ -142,3 +142,11 @@ def test_a_plain_sheet_with_an_unbounded_worst_case_gives_null_and_fits_the_sche
     assert flexure["written_utilization"] == pytest.approx(0.3)  # 12 / 40
     assert (flexure["combination"], flexure["station"], flexure["cases"]) == ("case 7", None, 8)
     assert data["points"] == [] and data["trace"] == ""
+
+
+def test_a_concise_sheet_lists_every_point_as_the_full_one_does(demo: dict) -> None:
+    """Points only evaluated (not written out) on a concise sheet are in the JSON too."""
+    text = OUTRIGGER.replace("[sheet]", '[sheet]\ndetail = "full"', 1)
+    assert text != OUTRIGGER
+    full = build_sheets(parse_job(text, source="outrigger.toml")).sheets[0].results
+    assert json.loads(json.dumps(full["points"], ensure_ascii=False)) == demo["points"]
