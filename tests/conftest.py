@@ -31,3 +31,37 @@ class Golden:
 @pytest.fixture
 def golden(request: pytest.FixtureRequest) -> Golden:
     return Golden(Path(request.fspath).parent / "golden")
+
+
+def check_results_schema(data: dict) -> None:
+    """Fail unless ``data`` (JSON results, as read back from text) fits the shipped schema."""
+    import jsonschema
+
+    from calcsheet.build.results import results_schema
+
+    validator = jsonschema.Draft202012Validator(results_schema())
+    problems = sorted(validator.iter_errors(data), key=lambda error: list(error.absolute_path))
+    assert not problems, "results JSON does not fit results.schema.json:\n" + "\n".join(
+        f"  {'/'.join(map(str, error.absolute_path)) or '(top)'}: {error.message}"
+        for error in problems[:10]
+    )
+
+
+@pytest.fixture(autouse=True)
+def _every_results_json_fits_the_schema(monkeypatch: pytest.MonkeyPatch) -> None:
+    """Every JSON results file a test writes (in this process) is checked against the
+    schema shipped in the package, through the function that makes the results."""
+    import json
+    import sys
+
+    run = sys.modules.get("calcsheet.build.run")  # imported by the tests that build jobs
+    if run is None:
+        return
+    original = run.sheet_results
+
+    def checked(sheet: object) -> dict:
+        data = original(sheet)
+        check_results_schema(json.loads(json.dumps(data, ensure_ascii=False)))
+        return data
+
+    monkeypatch.setattr(run, "sheet_results", checked)

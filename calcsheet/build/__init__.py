@@ -2,7 +2,7 @@
 
 from calcsheet.build.model import MemberModel, member_model
 from calcsheet.build.run import BuildResult, build_sheets, output_folder, safe_stem, write_outputs
-from calcsheet.build.stamp import inputs_hash, stamp_text
+from calcsheet.build.trace import inputs_hash, trace_text
 
 __all__ = [
     "BuildResult",
@@ -12,6 +12,6 @@ __all__ = [
     "member_model",
     "output_folder",
     "safe_stem",
-    "stamp_text",
+    "trace_text",
     "write_outputs",
 ]

@@ -11,12 +11,13 @@ unless the caller asks for different members on purpose.
 
 from __future__ import annotations
 
+import math
 import re
 from dataclasses import dataclass
 from typing import Any
 
 from calcsheet.build.run import BuildResult
-from calcsheet.build.stamp import normalized
+from calcsheet.build.trace import normalized
 from calcsheet.engine import Sheet, TitleBlock
 from calcsheet.job import JobError
 
@@ -129,7 +130,12 @@ def _checks(result: BuildResult) -> dict[tuple[str, str], dict]:
     for built in result.sheets:
         station = built.stem.rsplit("-z", 1)[1] if "-z" in built.stem else ""
         for check in built.results["checks"]:
-            found[(station, check["description"])] = check
+            # The JSON gives a utilization that is not finite (zero capacity) as null.
+            worst = check["utilization"]
+            found[(station, check["description"])] = {
+                **check,
+                "utilization": math.inf if worst is None else worst,
+            }
     return found
 
 
@@ -150,7 +156,7 @@ def delta_sheet(old: BuildResult, new: BuildResult) -> Sheet:
         ),
         units=new.job.sheet.units,
     )
-    sheet.stamp = f"inputs {old.hash} to {new.hash}"
+    sheet.trace = f"inputs {old.hash} to {new.hash}"
     sheet.heading("Inputs changed")
     changes = changed_inputs(old, new)
     if changes:

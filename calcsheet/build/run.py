@@ -22,7 +22,7 @@ from typing import Any
 
 from calcsheet.build.model import MemberModel, member_model
 from calcsheet.build.results import sheet_results
-from calcsheet.build.stamp import hash_in_stamp, inputs_hash, stamp_text
+from calcsheet.build.trace import hash_in_trace, inputs_hash, trace_text
 from calcsheet.calcs import member_sheet
 from calcsheet.engine import Sheet
 from calcsheet.errors import CalcsheetError, InputError
@@ -134,15 +134,15 @@ def output_folder(job: Job, job_folder: Path, override: Path | None = None) -> P
 
 
 def build_sheets(job: Job, *, source: str = "job") -> BuildResult:
-    """The job's sheets (one per station), stamped, without writing anything."""
+    """The job's sheets (one per station), each with its trace line, without writing anything."""
     model = member_model(job, source=source)
-    stamp = stamp_text(job)
+    trace = trace_text(job)
     base = safe_stem(job.output.stem or job.member.name)
     revision = safe_stem(model.title_block.revision, fallback="0")
     sheets = []
     for index, station in enumerate(model.stations):
         sheet = _member_sheet(job, model, station, index, source)
-        sheet.stamp = stamp
+        sheet.trace = trace
         stem = f"{base}-rev{revision}"
         label = ""
         if len(model.stations) > 1:
@@ -250,17 +250,18 @@ def write_outputs(
 def issued_hash(folder: Path, stem: str) -> str | None:
     """The inputs hash of the files already written as ``stem`` in ``folder``.
 
-    Read from the JSON's stamp, else from the HTML's footer (the PDF's text is
-    compressed). ``""`` when files exist but none tells its hash; ``None`` when no
-    file of that name exists.
+    Read from the JSON's trace (``stamp`` in files of calcsheet 0.1.0), else from the
+    HTML's footer (the PDF's text is compressed). ``""`` when files exist but none tells
+    its hash; ``None`` when no file of that name exists.
     """
     existing = [folder / f"{stem}{suffix}" for suffix in OUTPUT_SUFFIXES]
     if not any(path.is_file() for path in existing):
         return None
     json_path, html_path = folder / f"{stem}.json", folder / f"{stem}.html"
     try:
-        stamp = json.loads(json_path.read_text(encoding="utf-8")).get("stamp", "")
-        found = hash_in_stamp(stamp if isinstance(stamp, str) else "")
+        written = json.loads(json_path.read_text(encoding="utf-8"))
+        trace = written.get("trace", written.get("stamp", ""))
+        found = hash_in_trace(trace if isinstance(trace, str) else "")
         if found:
             return found
     except (OSError, ValueError, AttributeError):
@@ -270,7 +271,7 @@ def issued_hash(folder: Path, stem: str) -> str | None:
     except (OSError, ValueError):
         return ""
     footer = re.search(r"<footer>(.*?)</footer>", page, re.DOTALL)
-    return hash_in_stamp(footer.group(1) if footer else "") or ""
+    return hash_in_trace(footer.group(1) if footer else "") or ""
 
 
 def refuse_replacing_issued(result: BuildResult, folder: Path) -> None:

@@ -153,11 +153,14 @@ def write_check_cases(
         if check is None:
             continue
         worst = int(np.argmax(values))
+        combination = _named(plan.combos[worst])
         sheet.set_cases(
             check,
             float(values[worst]),
-            f"{_named(plan.combos[worst])}, station {where}",
+            f"{combination}, station {where}",
             len(plan.combos),
+            combination=combination,
+            station=station,
         )
 
 

@@ -156,11 +156,15 @@ class CheckCases:
     ``worst`` is the largest utilization over ``count`` cases (the written case
     among them), ``case`` names the case that gives it (a load combination, a
     station). A calc computes these with the same procedure as its written steps.
+    ``combination`` and ``station``, when the calc gives them, are the parts of
+    ``case`` a program reads on its own (the JSON results).
     """
 
     worst: float
     case: str
     count: int
+    combination: str = ""
+    station: pint.Quantity | None = None
 
 
 @dataclass(eq=False)

@@ -126,8 +126,9 @@ class Sheet:
         self.revisions: list[Revision] = []
         self.basis: dict[str, list[str]] = {}
         self.references: list[str] = []
-        # What produced this sheet (tool version, inputs hash), printed on every page.
-        self.stamp: str = ""
+        # The trace line: what produced this sheet (inputs hash, revision), printed on every
+        # page beside the tool version. Not "stamp": that is the engineer's seal.
+        self.trace: str = ""
 
     # -- writing the calc ------------------------------------------------------------
 
@@ -398,7 +399,7 @@ class Sheet:
         """Take the contents of a sheet built anew; what was added afterwards stays."""
         kept = {
             "revisions": self.revisions,
-            "stamp": self.stamp,
+            "trace": self.trace,
             "title_block": self.title_block,
             "title": self.title,
         }
@@ -451,12 +452,23 @@ class Sheet:
         checks = [check for check in self.checks if check.utilization is not None]
         return max(checks, key=lambda check: check.worst_utilization, default=None)
 
-    def set_cases(self, check: Check, worst: float, case: str, count: int) -> None:
+    def set_cases(
+        self,
+        check: Check,
+        worst: float,
+        case: str,
+        count: int,
+        *,
+        combination: str = "",
+        station: pint.Quantity | None = None,
+    ) -> None:
         """Say that ``check`` was also evaluated for ``count`` cases not written out.
 
         The calc computes them with the procedure that wrote the check; ``worst`` is
-        the largest utilization among them and ``case`` names where it occurs. The
-        summary, the status and :meth:`governing_check` then take the worst case.
+        the largest utilization among them and ``case`` names where it occurs (as
+        printed); ``combination`` and ``station``, when given, say the same apart for
+        a program reading the results. The summary, the status and
+        :meth:`governing_check` then take the worst case.
         """
         if check not in self.checks:
             raise DefinitionError(f"check {check.description!r} is not on this sheet")
@@ -464,7 +476,9 @@ class Sheet:
             raise EvaluationError(
                 f"check {check.description!r}: the worst utilization of its cases is {worst}"
             )
-        check.cases = CheckCases(float(worst), str(case), int(count))
+        check.cases = CheckCases(
+            float(worst), str(case), int(count), combination=str(combination), station=station
+        )
 
     def rebuild_with(self, build: Callable[[dict[str, pint.Quantity]], Sheet]) -> None:
         """Let :meth:`set_inputs` rebuild this calc instead of re-evaluating it.

@@ -63,13 +63,20 @@ def _compiler_of_process(pid: int) -> Any:
     return typst.Compiler(root=root)
 
 
+# PDF/A-2b (ISO 19005-2, level b): the archival form document systems ask of a
+# submittal; fonts embedded, metadata in XMP. The markup must set a document date.
+PDF_STANDARDS = ["a-2b"]
+
+
 def compile_pdf(source: str, *, paper: str | None = None) -> bytes:
-    """Compile Typst markup from ``render_typst`` to PDF; ``paper`` overrides its paper."""
+    """Compile Typst markup from ``render_typst`` to PDF/A-2b; ``paper`` overrides its paper."""
     # Validated before the compiler runs, so a wrong paper names the field, not Typst.
     inputs = paper_inputs(paper) if paper is not None else {}
     try:
         with _COMPILER_LOCK:
-            return _compiler().compile(input=source.encode("utf-8"), sys_inputs=inputs)
+            return _compiler().compile(
+                input=source.encode("utf-8"), sys_inputs=inputs, pdf_standards=PDF_STANDARDS
+            )
     except Exception as error:  # typst raises its own error types per version
         raise ExportError(f"the PDF engine failed: {error}") from None
 

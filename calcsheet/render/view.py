@@ -2,6 +2,7 @@
 
 from __future__ import annotations
 
+import datetime
 from dataclasses import dataclass
 from typing import Any
 
@@ -70,7 +71,12 @@ class SheetView:
     revisions: tuple[Revision, ...] = ()
     basis: tuple[tuple[str, tuple[str, ...]], ...] = ()
     references: tuple[str, ...] = ()
-    stamp: str = ""
+    trace: str = ""
+    # The PDF's document information (PDF/A asks for a date: the date of issue).
+    document_date: datetime.date | None = None
+    author: str = ""
+    description: str = ""
+    keywords: tuple[str, ...] = ()
 
 
 def build_view(sheet: Sheet, target: str) -> SheetView:
@@ -174,8 +180,49 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
         revisions=tuple(sheet.revisions),
         basis=_basis(sheet),
         references=tuple(sheet.references),
-        stamp=sheet.stamp,
+        trace=sheet.trace,
+        document_date=issue_date(sheet),
+        author=sheet.title_block.prepared_by,
+        description=_description(sheet),
+        keywords=_keywords(sheet),
     )
+
+
+def issue_date(sheet: Sheet, today: datetime.date | None = None) -> datetime.date:
+    """The date the sheet is issued on: the latest dated revision's, else the date it was
+    prepared, else today (the job file's dates are ISO, YYYY-MM-DD)."""
+    written = [revision.date for revision in reversed(sheet.revisions)]
+    for text in [*written, sheet.title_block.prepared_date]:
+        try:
+            return datetime.date.fromisoformat(str(text).strip())
+        except ValueError:
+            continue
+    return today or datetime.date.today()
+
+
+def _description(sheet: Sheet) -> str:
+    block = sheet.title_block
+    return "; ".join(
+        text
+        for text in (
+            block.subject,
+            block.project,
+            f"rev. {block.revision}" if block.revision else "",
+        )
+        if text
+    )
+
+
+def _keywords(sheet: Sheet) -> tuple[str, ...]:
+    """Calc number first (what a document system files a calc under), then the project's."""
+    block = sheet.title_block
+    found = (
+        f"calc {block.calc_number}" if block.calc_number else "",
+        f"project {block.project_number}" if block.project_number else "",
+        f"rev. {block.revision}" if block.revision else "",
+        "calculation sheet",
+    )
+    return tuple(text for text in found if text)
 
 
 def _basis(sheet: Sheet) -> tuple[tuple[str, tuple[str, ...]], ...]:

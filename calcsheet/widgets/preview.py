@@ -39,7 +39,7 @@ def _cells(tag: str, *texts: str) -> str:
 
 
 def key_results_html(result: BuildResult, *, stale: bool = False) -> str:
-    """Status, governing utilization and where it governs, station by station, and the stamp.
+    """Status, governing utilization and where it governs, station by station, and the trace line.
 
     ``stale``: the entries have problems and ``result`` is the last good build, not
     theirs. The badge then says so, in grey, and the figures are marked as the last
@@ -70,7 +70,7 @@ def key_results_html(result: BuildResult, *, stale: bool = False) -> str:
             html.escape(governing.description) + at,
         )
         rows.append(f"<tr>{cells}</tr>")
-    stamp = html.escape(result.sheets[0].sheet.stamp) if result.sheets else ""
+    trace = html.escape(result.sheets[0].sheet.trace) if result.sheets else ""
     badge = (
         f"background:{colour};color:white;font-weight:bold;padding:0.15em 0.6em;border-radius:3px"
     )
@@ -87,7 +87,7 @@ def key_results_html(result: BuildResult, *, stale: bool = False) -> str:
         + "</tr>"
         + "".join(rows)
         + "</table>"
-        f'<div style="color:#555;font-size:0.85em">{stamp}</div>'
+        f'<div style="color:#555;font-size:0.85em">{trace}</div>'
         "</div>"
     )
 

@@ -1,4 +1,4 @@
-"""Building jobs: model errors by key path, the stamp, files on disk, nothing half-written."""
+"""Building jobs: model errors by key path, the trace line, files on disk, nothing half-written."""
 
 from __future__ import annotations
 
@@ -65,7 +65,7 @@ def test_the_hash_is_stable_ignores_units_and_outputs_and_sees_any_change() -> N
     assert base != inputs_hash(_job(STARTER.replace('ey = "-4 in"', 'ey = "-4.5 in"')))
 
 
-def test_build_writes_stamped_pdf_html_and_json_named_by_revision(tmp_path: Path) -> None:
+def test_build_writes_traced_pdf_html_and_json_named_by_revision(tmp_path: Path) -> None:
     result = build_sheets(_job())
     paths = write_outputs(result, tmp_path)
     assert sorted(path.name for path in paths) == [
@@ -74,11 +74,11 @@ def test_build_writes_stamped_pdf_html_and_json_named_by_revision(tmp_path: Path
         "DA-1-revA.pdf",
     ]
     data = json.loads((tmp_path / "DA-1-revA.json").read_text())
-    assert data["stamp"].startswith(f"inputs {result.hash}")
+    assert data["trace"].startswith(f"inputs {result.hash}")
     assert data["all_pass"] is True
     assert data["governing"]["at"].startswith("point ")
     moment = next(step for step in data["steps"] if step["name"] == "M_x")
-    assert moment["si_unit"] == "kg * m ** 2 / s ** 2"  # N·m in SI base units (NIST SP 811)
+    assert moment["si_unit"] == "N·m"  # the SI unit of moment as written (NIST SP 811 Table 3)
     assert result.hash in (tmp_path / "DA-1-revA.html").read_text()
 
 
@@ -174,13 +174,28 @@ def test_the_same_inputs_rebuild_in_place_and_replacing_on_purpose_works(tmp_pat
     changed = build_sheets(_job(CHANGED_SAME_REVISION))
     write_outputs(changed, tmp_path, replace_issued=True)
     data = json.loads((tmp_path / "DA-1-revA.json").read_text())
-    assert data["stamp"].startswith(f"inputs {changed.hash}")
+    assert data["trace"].startswith(f"inputs {changed.hash}")
     assert not list(tmp_path.glob(".*"))  # no lock file or temporary file left
 
 
 def test_the_issued_hash_is_read_from_the_html_when_there_is_no_json(tmp_path) -> None:
     write_outputs(build_sheets(_job()), tmp_path)
     (tmp_path / "DA-1-revA.json").unlink()
+    with pytest.raises(JobError, match="built from other inputs"):
+        write_outputs(build_sheets(_job(CHANGED_SAME_REVISION)), tmp_path)
+    write_outputs(build_sheets(_job()), tmp_path)  # the same inputs: fine
+
+
+def test_a_json_of_version_0_1_0_with_its_stamp_key_still_protects_the_issued_set(
+    tmp_path,
+) -> None:
+    """calcsheet 0.1.0 wrote the trace line under the key "stamp"; its files stay protected."""
+    write_outputs(build_sheets(_job()), tmp_path)
+    path = tmp_path / "DA-1-revA.json"
+    data = json.loads(path.read_text())
+    old = {("stamp" if key == "trace" else key): value for key, value in data.items()}
+    path.write_text(json.dumps(old))
+    (tmp_path / "DA-1-revA.html").unlink()  # only the old JSON can tell the hash
     with pytest.raises(JobError, match="built from other inputs"):
         write_outputs(build_sheets(_job(CHANGED_SAME_REVISION)), tmp_path)
     write_outputs(build_sheets(_job()), tmp_path)  # the same inputs: fine

@@ -227,3 +227,80 @@ def test_a_second_writer_waits_for_the_folder_lock_then_gives_up(tmp_path: Path)
     with files.folder_lock(tmp_path, waiting=said.append):  # released: no wait
         pass
     assert said == [] and not (tmp_path / files.LOCK_NAME).exists()
+
+
+# --- ready to attach to a submittal -------------------------------------------------------
+
+
+@pytest.fixture(scope="module")
+def demo_pdf() -> pypdf.PdfReader:
+    return pypdf.PdfReader(io.BytesIO(pdf_bytes(outrigger_sheet())))
+
+
+def test_the_pdf_declares_pdf_a_2b_in_its_xmp_metadata(demo_pdf: pypdf.PdfReader) -> None:
+    """ISO 19005-2:2011 clause 6.6.4: the file names its part (2) and conformance (B) in
+    the pdfaid schema of its XMP metadata."""
+    xmp = demo_pdf.xmp_metadata
+    assert xmp is not None
+    description = xmp.rdf_root.getElementsByTagNameNS("*", "Description")
+    found: dict[str, str] = {}
+    for node in description:
+        for name in ("part", "conformance"):
+            value = node.getAttributeNS("http://www.aiim.org/pdfa/ns/id/", name)
+            if value:
+                found[name] = value
+            for child in node.getElementsByTagNameNS("http://www.aiim.org/pdfa/ns/id/", name):
+                found[name] = child.firstChild.nodeValue
+    assert found == {"part": "2", "conformance": "B"}
+
+
+def test_the_pdf_carries_title_author_subject_keywords_and_an_issue_date(
+    demo_pdf: pypdf.PdfReader,
+) -> None:
+    sheet = outrigger_sheet()
+    info = demo_pdf.metadata
+    assert info is not None
+    assert info.title == sheet.title
+    assert info.author == sheet.title_block.prepared_by
+    assert sheet.title_block.subject in info.subject
+    assert f"calc {sheet.title_block.calc_number}" in info["/Keywords"]
+    latest = sheet.revisions[-1].date if sheet.revisions else sheet.title_block.prepared_date
+    if latest:
+        assert info["/CreationDate"].startswith("D:" + latest.replace("-", ""))
+
+
+def test_the_pdf_has_a_bookmark_outline_of_the_sections(demo_pdf: pypdf.PdfReader) -> None:
+    titles = [item.title for item in demo_pdf.outline if not isinstance(item, list)]
+    for section in ("Summary", "Design basis", "Inputs", "Calculation"):
+        assert section in titles
+    nested = [item for item in demo_pdf.outline if isinstance(item, list)]
+    assert nested and nested[0], "the calculation's own headings are bookmarked under it"
+
+
+def test_the_first_sheet_has_boxes_for_the_seal_and_the_checker(
+    demo_pdf: pypdf.PdfReader,
+) -> None:
+    first = " ".join(demo_pdf.pages[0].extract_text().split())
+    assert "Engineer of record: seal and signature" in first
+    assert "Checker" in first and "Initials" in first and "Date" in first
+    later = " ".join(page.extract_text() for page in demo_pdf.pages[1:])
+    assert "seal and signature" not in later
+    html = render_html(outrigger_sheet())
+    assert "Engineer of record: seal and signature" in html and "Initials" in html
+
+
+def test_a_sheet_without_dates_is_dated_the_day_it_is_built() -> None:
+    """PDF/A needs a document date; a sheet with none given takes the build's date."""
+    import datetime
+
+    from calcsheet.render.view import issue_date
+
+    sheet = Sheet("Undated", title_block=TitleBlock(prepared_date="2026-03-04"))
+    assert issue_date(sheet) == datetime.date(2026, 3, 4)
+    sheet.add_revision("A", "2026-05-06")
+    sheet.add_revision("B", "")  # not yet dated: the last dated issue counts
+    assert issue_date(sheet) == datetime.date(2026, 5, 6)
+    today = datetime.date(2026, 12, 2)
+    assert issue_date(Sheet("Undated"), today=today) == today
+    reader = pypdf.PdfReader(io.BytesIO(pdf_bytes(Sheet("Undated"))))
+    assert reader.metadata["/CreationDate"].startswith("D:")

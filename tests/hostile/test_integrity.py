@@ -1,6 +1,6 @@
 """The inputs hash on the sheet: recomputable from the job file, blind to layout, not to values.
 
-The hash printed in the HTML footer, the PDF and the JSON stamp must equal
+The hash printed in the HTML footer, the PDF and the JSON trace must equal
 ``inputs_hash(read_job(path))``; changing any digit of any value changes it;
 reformatting the file (spaces, key order, quoting, inline tables, units) does not.
 """
@@ -30,9 +30,9 @@ def printed_hashes(folder: Path, stem: str) -> dict[str, str]:
     page = (folder / f"{stem}.html").read_text(encoding="utf-8")
     footer = re.search(r"<footer>(.*?)</footer>", page, re.DOTALL)
     assert footer is not None
-    stamp = json.loads((folder / f"{stem}.json").read_text(encoding="utf-8"))["stamp"]
+    trace = json.loads((folder / f"{stem}.json").read_text(encoding="utf-8"))["trace"]
     pdf = pypdf.PdfReader(io.BytesIO((folder / f"{stem}.pdf").read_bytes()))
-    found = {"html footer": HASH.search(footer.group(1)), "json stamp": HASH.search(stamp)}
+    found = {"html footer": HASH.search(footer.group(1)), "json trace": HASH.search(trace)}
     found.update(
         {f"pdf page {n}": HASH.search(page.extract_text()) for n, page in enumerate(pdf.pages, 1)}
     )

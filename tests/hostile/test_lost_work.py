@@ -74,9 +74,9 @@ def write(folder: Path, name: str, text: str) -> Path:
     return path
 
 
-def stamped_hashes(folder: Path, stem: str) -> set[str]:
+def traced_hashes(folder: Path, stem: str) -> set[str]:
     """The inputs hash as the JSON and the HTML of one set print it."""
-    found = set(HASH.findall(json.loads((folder / f"{stem}.json").read_text())["stamp"]))
+    found = set(HASH.findall(json.loads((folder / f"{stem}.json").read_text())["trace"]))
     footer = re.search(r"<footer>(.*?)</footer>", (folder / f"{stem}.html").read_text(), re.DOTALL)
     assert footer is not None
     return found | set(HASH.findall(footer.group(1)))
@@ -213,7 +213,7 @@ def test_two_builds_of_different_inputs_into_one_folder_one_is_refused(tmp_path)
     (loser,) = [out_err for status, out_err in results if status == 2]
     assert "built from other inputs" in loser[1] and "Traceback" not in loser[1]
     winner_hash = HASH.search(winner[0]).group(1)
-    assert stamped_hashes(out, "DA-1-revA") == {winner_hash}
+    assert traced_hashes(out, "DA-1-revA") == {winner_hash}
     assert not list(out.glob(".*"))  # no lock file, no temporary file
 
 
@@ -252,7 +252,7 @@ def test_ctrl_c_exits_130_and_leaves_whole_consistent_files(moment, tmp_path, ca
     job = write(tmp_path / "job", "job.toml", STARTER)
     assert cli(["build", str(job)], capsys)[0] == 0
     folder = tmp_path / "job" / "out"
-    old_hash = stamped_hashes(folder, "DA-1-revA")
+    old_hash = traced_hashes(folder, "DA-1-revA")
     job.write_text(STARTER.replace('"3 kip"', '"3.5 kip"'), encoding="utf-8")
     process = subprocess.Popen(
         [sys.executable, "-c", PAUSE_AT, moment, "build", str(job), "--replace-issued"],
@@ -272,7 +272,7 @@ def test_ctrl_c_exits_130_and_leaves_whole_consistent_files(moment, tmp_path, ca
     record(status)
     assert status == 130, err
     assert "stopped (Ctrl-C)" in err and "Traceback" not in err
-    hashes = stamped_hashes(folder, "DA-1-revA")
+    hashes = traced_hashes(folder, "DA-1-revA")
     assert len(hashes) == 1  # JSON and HTML from one build
     assert (hashes == old_hash) == (moment == "staging")
     assert not list(folder.glob(".*"))

@@ -379,7 +379,7 @@ def test_a_new_revision_takes_the_next_mark_and_todays_date(form: MemberForm) ->
     form.refresh()
     last = form.results.job.revisions[-1]
     assert (last.mark, last.date, last.description) == ("C", date.today().isoformat(), "")
-    assert "rev. C" in form.results.sheets[0].sheet.stamp
+    assert "rev. C" in form.results.sheets[0].sheet.trace
 
 
 @pytest.mark.parametrize(

@@ -1,4 +1,6 @@
-"""The traceability stamp: tool version, a short hash of the normalized inputs, revision.
+"""The trace line: a short hash of the normalized inputs and the revision, printed beside
+the tool version on every page and in the JSON (key ``trace``; files written by
+calcsheet 0.1.0 called it ``stamp``, a word the trade keeps for the engineer's seal).
 
 The hash covers every input of the job (not where the outputs go). Quantities are
 normalized to SI base units first, so "6.5 kip" and "6500 lbf" hash alike and a
@@ -31,7 +33,7 @@ QUANTITY_KEYS = frozenset(
 
 def _quantity_text(text: str) -> str:
     try:
-        base = parse_quantity(text, field="stamp").to_base_units()
+        base = parse_quantity(text, field="trace").to_base_units()
         # 15 significant digits: all a double holds reliably, so 3 kip and 3000 lbf
         # agree while a change in the 13th digit still shows.
         return f"{base.magnitude:.15g} {base.units:~}"
@@ -57,16 +59,16 @@ def inputs_hash(job: Job) -> str:
     return hashlib.sha256(canonical.encode("utf-8")).hexdigest()[:HASH_LENGTH]
 
 
-def stamp_text(job: Job) -> str:
+def trace_text(job: Job) -> str:
     """What the sheet prints on every page beside the tool version: inputs hash and revision."""
     revision = job.revisions[-1].mark if job.revisions else "0"
     return f"inputs {inputs_hash(job)} · rev. {revision}"
 
 
-_STAMPED_HASH = re.compile(rf"inputs ([0-9a-f]{{{HASH_LENGTH}}})\b")
+_TRACED_HASH = re.compile(rf"inputs ([0-9a-f]{{{HASH_LENGTH}}})\b")
 
 
-def hash_in_stamp(text: str) -> str | None:
-    """The inputs hash printed in a stamp (``inputs 3fa9c2e17b04 · rev. A``), or ``None``."""
-    found = _STAMPED_HASH.search(text)
+def hash_in_trace(text: str) -> str | None:
+    """The inputs hash printed in a trace line (``inputs 3fa9c2e17b04 · rev. A``), or ``None``."""
+    found = _TRACED_HASH.search(text)
     return found.group(1) if found else None
