@@ -17,6 +17,7 @@ from __future__ import annotations
 import statistics
 import subprocess
 import sys
+import tempfile
 import time
 from collections.abc import Callable
 from pathlib import Path
@@ -133,7 +134,8 @@ def main() -> None:
         return pdf_bytes(demo)
 
     report("document: demo sheet to PDF, warm (an input changed)", timed(changed_pdf, 5), 150)
-    out = Path("out/bench")
+    # A fresh folder: files issued by an earlier version are never replaced silently.
+    out = Path(tempfile.mkdtemp(prefix="calcsheet-bench-"))
     cold = timed(
         lambda: subprocess.run(
             [

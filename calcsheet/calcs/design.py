@@ -304,8 +304,20 @@ def angle_sweep(
     return Sweep(swept.name, angles, values, drawn)
 
 
+def _bending_stiffness(designation: str) -> Section | tuple[float, float, float]:
+    """I_x, I_y, I_xy (m⁴) of a catalog shape for its deflection: tabulated for a doubly
+    symmetric shape (I_xy = 0), from the built section for any other (an angle)."""
+    from calcsheet.sections import catalog_section
+    from calcsheet.sections.catalog import find_entry, tabulated_properties
+
+    if find_entry(designation).family.key in ("L", "WT", "MT", "ST", "C", "MC"):
+        return catalog_section(designation)
+    table = tabulated_properties(designation)
+    return (float(table["Ix"].to("m**4").m), float(table["Iy"].to("m**4").m), 0.0)
+
+
 def _deflection_utilization(
-    section: Section,
+    section: Section | tuple[float, float, float],
     loads: Sequence[PointLoad | AppliedMoment],
     turning: tuple[int, list[PointLoad], np.ndarray] | None,
     basis: DesignBasis,
@@ -336,14 +348,18 @@ def _deflection_utilization(
                 e_x=float(load.ex.to("m").m), e_y=float(load.ey.to("m").m),
             )
         )  # fmt: skip
-    numbers = section.numeric("m")
+    if isinstance(section, Section):
+        numbers = section.numeric("m")
+        Ix, Iy, Ixy = numbers.Ix, numbers.Iy, numbers.Ixy
+    else:  # I_x, I_y, I_xy in m⁴
+        Ix, Iy, Ixy = section
     result = tip_deflection_arrays(
         terms,
         length=float(length.to("m").m),
         E=float(Quantity(basis.standard.modulus).to("Pa").m),
-        Ix=numbers.Ix,
-        Iy=numbers.Iy,
-        Ixy=numbers.Ixy,
+        Ix=Ix,
+        Iy=Iy,
+        Ixy=Ixy,
         n=basis.deflection_ratio,
     )
     return np.broadcast_to(np.asarray(result.utilization, dtype=float), radians.shape)
@@ -376,7 +392,6 @@ def lightest_section(
     With a deflection limit in the basis and the service ``loads``, the tip deflection
     is a check too (the sheet's procedure on each candidate's own section).
     """
-    from calcsheet.sections import catalog_section
     from calcsheet.sections.catalog import find_entry
 
     search = basis.standard.search
@@ -389,11 +404,16 @@ def lightest_section(
     worst = per_check.max(axis=0)
     which = per_check.argmax(axis=0)
 
+    kept: dict[int, float] = {}
+
     def deflection(i: int) -> float:
         if not (basis.deflection_ratio and loads):
             return 0.0
-        section = catalog_section(names[i])
-        return float(_deflection_utilization(section, loads, None, basis, length)[0])
+        if i not in kept:
+            kept[i] = float(
+                _deflection_utilization(_bending_stiffness(names[i]), loads, None, basis, length)[0]
+            )
+        return kept[i]
 
     def candidate(i: int) -> Candidate:
         weight = find_entry(names[i]).values.get("weight", math.nan)
