@@ -35,8 +35,9 @@ CHOSEN_AT_BUILD = (
     "the governing combination was chosen when the sheet was built; build the sheet again "
     "after changing the loads"
 )
-_FORCE_COLUMNS = (("N", "force"), ("V_x", "force"), ("V_y", "force"), ("T", "moment"),
-                  ("M_x", "moment"), ("M_y", "moment"))  # fmt: skip
+# Table headers as engineers write them (plain text: a header is not math).
+_FORCE_COLUMNS = (("N", "force"), ("Vx", "force"), ("Vy", "force"), ("T", "moment"),
+                  ("Mx", "moment"), ("My", "moment"))  # fmt: skip
 
 
 __all__ = [
