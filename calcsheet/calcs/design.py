@@ -11,6 +11,7 @@ search use the same numeric path.
 
 from __future__ import annotations
 
+import dataclasses
 import math
 from collections.abc import Mapping, Sequence
 from dataclasses import dataclass, field
@@ -19,7 +20,6 @@ import numpy as np
 import pint
 
 from calcsheet.calcs.design_standards import (
-    GENERIC_CHECK_TITLE,
     DesignStandard,
     design_standard,
     registered,
@@ -299,60 +299,56 @@ def angle_sweep(
     values = values.max(axis=1)
     if basis.deflection_ratio:
         turning = (index, quarters, radians)
-        values = np.maximum(values, _deflection_utilization(section, loads, turning, basis, length))
+        values = np.maximum(
+            values, _deflection_utilization(_stiffness_of(section), loads, turning, basis, length)
+        )
     drawn = float(swept.direction.angle.to("deg").m) % 360.0
     return Sweep(swept.name, angles, values, drawn)
 
 
-def _bending_stiffness(designation: str) -> Section | tuple[float, float, float]:
+def _bending_stiffness(designation: str) -> tuple[float, float, float]:
     """I_x, I_y, I_xy (m⁴) of a catalog shape for its deflection: tabulated for a doubly
     symmetric shape (I_xy = 0), from the built section for any other (an angle)."""
     from calcsheet.sections import catalog_section
     from calcsheet.sections.catalog import find_entry, tabulated_properties
 
     if find_entry(designation).family.key in ("L", "WT", "MT", "ST", "C", "MC"):
-        return catalog_section(designation)
+        return _stiffness_of(catalog_section(designation))
     table = tabulated_properties(designation)
     return (float(table["Ix"].to("m**4").m), float(table["Iy"].to("m**4").m), 0.0)
 
 
+def _stiffness_of(section: Section) -> tuple[float, float, float]:
+    numbers = section.numeric("m")
+    return numbers.Ix, numbers.Iy, numbers.Ixy
+
+
 def _deflection_utilization(
-    section: Section | tuple[float, float, float],
+    stiffness: tuple[float, float, float],
     loads: Sequence[PointLoad | AppliedMoment],
     turning: tuple[int, list[PointLoad], np.ndarray] | None,
     basis: DesignBasis,
     length: pint.Quantity,
 ) -> np.ndarray:
-    """The tip deflection check (service loads as given), optionally with one load turned
-    through angles: the sheet's deflection procedure on arrays, one value per angle."""
-    from calcsheet.mechanics.deflection import LoadTerms, tip_deflection_arrays
+    """The tip deflection check (service loads as given) of a section of ``stiffness``
+    (I_x, I_y, I_xy in m⁴), optionally with one load turned through angles: the sheet's
+    deflection procedure on arrays, one value per angle."""
+    from calcsheet.mechanics.deflection import si_load_terms, tip_deflection_arrays
 
-    index, (at_0, at_90), radians = turning or (-1, [None, None], np.zeros(1))
-    terms = []
-    for number, load in enumerate(loads):
-        z = float(load.z.to("m").m)
-        if isinstance(load, AppliedMoment):
-            terms.append(LoadTerms(load.name, z, C_x=load.Mx.to("N*m").m, C_y=load.My.to("N*m").m))
-            continue
-        if number == index:
-            F = [
-                np.cos(radians) * at_0.component(axis).to("N").m
-                + np.sin(radians) * at_90.component(axis).to("N").m
-                for axis in ("x", "y", "z")
-            ]
-        else:
-            F = [float(load.component(axis).to("N").m) for axis in ("x", "y", "z")]
-        terms.append(
-            LoadTerms(
-                load.name, z, F_x=F[0], F_y=F[1], F_z=F[2],
-                e_x=float(load.ex.to("m").m), e_y=float(load.ey.to("m").m),
-            )
-        )  # fmt: skip
-    if isinstance(section, Section):
-        numbers = section.numeric("m")
-        Ix, Iy, Ixy = numbers.Ix, numbers.Iy, numbers.Ixy
-    else:  # I_x, I_y, I_xy in m⁴
-        Ix, Iy, Ixy = section
+    terms = [si_load_terms(load) for load in loads]
+    radians = np.zeros(1)
+    if turning is not None:
+        index, quarters, radians = turning
+        at_0, at_90 = (si_load_terms(load) for load in quarters)
+        # Statics is linear in the load: at angle θ, cos θ·(its terms at 0°) + sin θ·(at 90°).
+        terms[index] = dataclasses.replace(
+            at_0,
+            **{
+                name: np.cos(radians) * getattr(at_0, name) + np.sin(radians) * getattr(at_90, name)
+                for name in ("F_x", "F_y", "F_z")
+            },
+        )
+    Ix, Iy, Ixy = stiffness
     result = tip_deflection_arrays(
         terms,
         length=float(length.to("m").m),
@@ -433,7 +429,6 @@ def lightest_section(
 
 
 __all__ = [
-    "GENERIC_CHECK_TITLE",
     "KINDS",
     "Candidate",
     "CombinationPlan",

@@ -472,7 +472,7 @@ class Sheet:
         """
         if check not in self.checks:
             raise DefinitionError(f"check {check.description!r} is not on this sheet")
-        if not (math.isfinite(worst) or worst == math.inf) or worst < 0:
+        if math.isnan(worst) or worst < 0:
             raise EvaluationError(
                 f"check {check.description!r}: the worst utilization of its cases is {worst}"
             )

@@ -353,7 +353,7 @@ def tip_deflection(
     modulus = parse_quantity(E, field="E", dimension="stress")
     props = section.properties
     result = tip_deflection_arrays(
-        [_si_terms(load) for load in loads],
+        [si_load_terms(load) for load in loads],
         length=_si(length_q),
         E=_si(modulus),
         Ix=_si(props["Ix"]),
@@ -369,8 +369,9 @@ def _si(value: pint.Quantity) -> float:
     return float(value.to_base_units().m)
 
 
-def _si_terms(load: PointLoad | AppliedMoment) -> LoadTerms:
-    """A load's values in SI base units, every component given (zeros add nothing)."""
+def si_load_terms(load: PointLoad | AppliedMoment) -> LoadTerms:
+    """A load's values in SI base units, every component given (zeros add nothing): the
+    input of :func:`tip_deflection_arrays` for loads given as objects."""
     if isinstance(load, AppliedMoment):
         return LoadTerms(load.name, _si(load.z), C_x=_si(load.Mx), C_y=_si(load.My))
     return LoadTerms(

@@ -9,6 +9,7 @@ section and the numeric path can multiply by the same number.
 from __future__ import annotations
 
 from dataclasses import dataclass
+from typing import Any
 
 import sympy as sp
 
@@ -44,6 +45,11 @@ class LimitStateFactors:
         """``phi_<suffix>`` for LRFD, ``Omega_<suffix>`` for ASD."""
         base = "phi" if design_method(method) == "LRFD" else "Omega"
         return f"{base}_{self.suffix}"
+
+    def description(self, method: str) -> str:
+        """What the factor is, as an input's description."""
+        kind = "Resistance factor" if design_method(method) == "LRFD" else "Safety factor"
+        return f"{kind}, {self.limit_state}"
 
 
 TENSILE_YIELDING = LimitStateFactors(
@@ -98,12 +104,12 @@ def available_strength(
     chosen = design_method(method)
     factor = sp.Symbol(factors.symbol_name(chosen))
     with as_written():
-        expression = factor * nominal if chosen == "LRFD" else nominal / factor
-    kind = "Resistance factor" if chosen == "LRFD" else "Safety factor"
+        expression = apply_factor(chosen, factor, nominal)
     return AvailableStrength(
-        expression,
-        factor,
-        factors.value(chosen),
-        f"{kind}, {factors.limit_state}",
-        factors.reference,
+        expression, factor, factors.value(chosen), factors.description(chosen), factors.reference
     )
+
+
+def apply_factor(method: str, factor: Any, nominal: Any) -> Any:
+    """φ·Rn (LRFD, AISC 360-22 Eq. B3-1) or Rn/Ω (ASD, Eq. B3-2): symbols or arrays."""
+    return factor * nominal if design_method(method) == "LRFD" else nominal / factor

@@ -123,7 +123,7 @@ def aisc_checks_numeric(
 
     chosen = design_method(method)
     p = parse_member_inputs(material, length, K, Lb, Cb, Cm)
-    w = ArrayWriter(given_values={}, method=chosen)
+    w = ArrayWriter(method=chosen)
     with np.errstate(divide="ignore", invalid="ignore", over="ignore"):
         aisc_member_procedure(w, table.kind, dict(table.values), p, demands, second_order)
     E, F_y = float(p.E.to("Pa").m), float(p.F_y.to("Pa").m)

@@ -12,7 +12,7 @@ from collections.abc import Mapping
 from typing import Any
 
 from calcsheet.engine.procedure import ArrayWriter, SheetWriter, Value, Writer
-from calcsheet.standards.aisc360.factors import LimitStateFactors, available_strength
+from calcsheet.standards.aisc360.factors import LimitStateFactors, apply_factor
 from calcsheet.standards.aisc360.section_data import SectionValue
 
 SPECIFICATION = "set by AISC 360-22"
@@ -67,16 +67,15 @@ def write_available(
     its section."""
     if suffix is not None:
         factors = dataclasses.replace(factors, suffix=suffix)
-    strength = available_strength(nominal if w.prints else 0, w.method, factors)
     factor = w.input(
-        strength.factor.name,
-        strength.value,
-        strength.description,
-        reference=strength.reference,
+        factors.symbol_name(w.method),
+        factors.value(w.method),
+        factors.description(w.method),
+        reference=factors.reference,
         dimension="dimensionless",
         fixed=SPECIFICATION,
     )
-    expression = factor * nominal if w.method == "LRFD" else nominal / factor
+    expression = apply_factor(w.method, factor, nominal)
     section = "B3.1" if w.method == "LRFD" else "B3.2"
     return w.step(
         name,
