@@ -77,6 +77,18 @@ class Quantityish:
     unit: tuple[tuple[str, float], ...] = ()
 
 
+# A max(...) or min(...) with more arguments than this is shortened (it would leave the page).
+LISTED_EXTREMES = 6
+
+
+def _natural_key(expr: sp.Basic) -> tuple:
+    """Sort key reading the numbers in a symbol's name as numbers (σ_2 before σ_10)."""
+    return tuple(
+        (0, int(piece), "") if piece.isdigit() else (1, 0, piece)
+        for piece in re.split(r"(\d+)", str(expr))
+    )
+
+
 class _ExpressionPrinter(Printer):
     """The structure shared by every target; subclasses give the primitives."""
 
@@ -91,6 +103,20 @@ class _ExpressionPrinter(Printer):
     def print_expression(self, expr: sp.Basic) -> str:
         """The expression printed with symbol names, or with slot tokens in substitution mode."""
         return self._print(expr)
+
+    def print_extreme_of_many(self, expr: sp.Basic) -> str:
+        """max(...) or min(...) of many symbols, shortened so that the line fits the page.
+
+        With more than :data:`LISTED_EXTREMES` arguments the line shows the first two
+        and the last in the sheet's numbering (σ_1, σ_2, …, σ_17); the full list is the
+        table the step reads from. Anything else prints whole.
+        """
+        if not isinstance(expr, (sp.Max, sp.Min)) or len(expr.args) <= LISTED_EXTREMES:
+            return self._print(expr)
+        ordered = sorted(expr.args, key=_natural_key)
+        shown = [self._print(arg) for arg in ordered[:2]]
+        shown += [self.text("…"), self._print(ordered[-1])]
+        return self.function_call(_FUNCTION_NAMES[type(expr)], shown)
 
     def emptyPrinter(self, expr: object) -> str:
         raise DefinitionError(f"calcsheet cannot print {type(expr).__name__}: {expr}")

@@ -775,7 +775,7 @@ def _template_of(
         # max(...) of many values is read from the table it comes from;
         # the line shows the rule and the result, and where it governs.
         symbolic, substituted, order = (
-            symbolic_printer.print_expression(expr),
+            symbolic_printer.print_extreme_of_many(expr),
             None,
             (),
         )
