@@ -365,7 +365,11 @@ def format_number(value: float, style: NumberStyle = DEFAULT_STYLE) -> Formatted
         return FormattedNumber(False, "0")
     negative = value < 0
     magnitude = abs(value)
+    # Ten figures first: a value that is 3.565 up to round-off (3.5649999999, from one
+    # side of a symmetric section) then rounds like its mirror image 3.5650000001.
     decimal_value = Decimal(repr(magnitude))
+    if (style.significant or 0) < _CARRIED:
+        decimal_value = _round_significant(decimal_value, _CARRIED)
     if style.significant:
         rounded = _round_significant(decimal_value, style.significant)
     else:
@@ -384,12 +388,52 @@ def format_number(value: float, style: NumberStyle = DEFAULT_STYLE) -> Formatted
     return FormattedNumber(negative, digits)
 
 
+# Figures a value keeps before it is rounded for print; the evaluator carries twelve.
+_CARRIED = 10
+# Figures a typed input may have and still print exactly as typed.
+_TYPED = 6
+
+
 def _round_significant(value: Decimal, significant: int) -> Decimal:
+    # Halves to even (ISO 80000-1 Annex B, rule A); a magnitude is rounded, so a value
+    # and its negative print alike.
     exponent10 = value.adjusted()
     rounded = value.quantize(Decimal(1).scaleb(exponent10 - significant + 1), ROUND_HALF_EVEN)
     if rounded.adjusted() != exponent10:  # 9.995 -> 10.0: one digit more, one decimal less
         rounded = rounded.quantize(Decimal(1).scaleb(rounded.adjusted() - significant + 1))
     return rounded
+
+
+def format_as_typed(value: float, style: NumberStyle = DEFAULT_STYLE) -> FormattedNumber:
+    """An input's number as it was typed: 15 not 15.0, 1.67 not 1.670, 0.375 as is.
+
+    A value with at most six significant figures (after removing round-off from a
+    unit conversion) prints with exactly its own figures; anything longer, or
+    outside the plain-notation range, prints by :func:`format_number`.
+    """
+    if not math.isfinite(value) or value == 0:
+        return format_number(value, style)
+    magnitude = abs(value)
+    if magnitude >= style.scientific_above or magnitude < style.scientific_below:
+        return format_number(value, style)
+    carried = _round_significant(Decimal(repr(magnitude)), _CARRIED).normalize()
+    if len(carried.as_tuple().digits) > _TYPED:
+        return format_number(value, style)
+    digits = f"{carried:f}"
+    if style.group_thousands:
+        whole, _, fraction = digits.partition(".")
+        digits = f"{int(whole):,}" + (f".{fraction}" if fraction else "")
+    return FormattedNumber(value < 0, digits)
+
+
+def format_count(value: float) -> FormattedNumber | None:
+    """A whole number (a class, a count) as an integer; None when ``value`` is not whole."""
+    if not math.isfinite(value) or abs(value) >= 1e6:
+        return None
+    nearest = round(value)
+    if abs(value - nearest) > 1e-9 * max(1.0, abs(value)):
+        return None
+    return FormattedNumber(nearest < 0, str(abs(nearest)))
 
 
 def _leading_digit(value: Decimal) -> int:

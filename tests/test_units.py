@@ -12,6 +12,8 @@ from calcsheet.units import (
     US_CUSTOMARY,
     NumberStyle,
     Quantity,
+    format_as_typed,
+    format_count,
     format_number,
     parse_quantity,
     unit_factors,
@@ -188,3 +190,36 @@ def test_kilograms_for_a_force_say_to_give_a_force_unit():
 def test_a_length_for_a_force_keeps_its_plain_message():
     with pytest.raises(InputError, match="that is a length, not a force"):
         parse_quantity("6.5 in", field="P", dimension="force")
+
+
+@pytest.mark.parametrize(
+    ("value", "shown"),
+    [
+        (15.0, "15"),  # "15°, not 15.00°" (issue 17)
+        (1.67, "1.67"),  # Ω of AISC 360-22 B3.2, as the code gives it
+        (18.0, "18"),
+        (0.375, "0.375"),
+        (48.00000000000001, "48"),  # 4 ft in inches, round-off of the conversion
+        (1200.0000000000002, "1200"),  # 1.2 m in mm
+        (2.4, "2.4"),
+    ],
+)
+def test_inputs_print_as_typed(value, shown):
+    # The typed figures are the input's own precision (common practice, no source).
+    assert format_as_typed(value).digits == shown
+
+
+def test_an_input_with_many_figures_prints_to_the_sheets_figures():
+    assert format_as_typed(3.14159265).digits == "3.14"
+
+
+def test_whole_numbers_print_as_integers():
+    assert format_count(4.0).digits == "4"
+    assert format_count(3.9999999999999).digits == "4"
+    assert format_count(3.5) is None
+
+
+def test_a_value_and_its_mirror_print_alike():
+    # One side of a symmetric section at 3.565 up to round-off, the other at -3.565
+    # (arithmetic, no source): both print 3.56 (ISO 80000-1 Annex B rule A, halves to even).
+    assert format_number(3.5649999999999).digits == format_number(-3.5650000000001).digits

@@ -48,6 +48,8 @@ from calcsheet.units import (
     NumberStyle,
     UnitSystem,
     describe_dimension,
+    format_as_typed,
+    format_count,
     format_number,
     parse_quantity,
     parse_unit,
@@ -57,6 +59,7 @@ from calcsheet.units import (
 )
 
 _ANGLE_UNITS = {"radian", "degree"}
+_NO_UNIT = ureg.dimensionless
 
 
 @dataclass(frozen=True)
@@ -584,11 +587,22 @@ class Sheet:
     def _shown_value(self, symbol: sp.Symbol) -> Quantityish:
         shown = self._shown.get(symbol)
         if shown is None:
-            shown = self._shown[symbol] = self._format(self._values[symbol])
+            typed = isinstance(self._defined.get(symbol.name), Input)
+            shown = self._shown[symbol] = self._format(self._values[symbol], typed=typed)
         return shown
 
-    def _format(self, quantity: pint.Quantity) -> Quantityish:
-        number = format_number(float(quantity.magnitude), self.number_style)
+    def _format(self, quantity: pint.Quantity, *, typed: bool = False) -> Quantityish:
+        """The number as an engineer writes it: an input as typed (15°, Ω = 1.67), a
+        whole dimensionless result as an integer (class 4), the rest to the sheet's
+        significant figures."""
+        value = float(quantity.magnitude)
+        number = None
+        if typed:
+            number = format_as_typed(value, self.number_style)
+        elif quantity.units == _NO_UNIT:
+            number = format_count(value)
+        if number is None:
+            number = format_number(value, self.number_style)
         # A plain number has no unit factors (pint's ``unitless`` costs a root-unit
         # conversion per value, which shows when a whole sheet is printed).
         return Quantityish(number, unit_factors(quantity.units))
