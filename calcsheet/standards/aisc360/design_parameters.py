@@ -60,17 +60,17 @@ class UnbracedSegment(NamedTuple):
 # Recommended design values of Table C-A-7.1 (the theoretical values raised where the
 # ideal end condition is seldom reached in practice), with the table's case letter.
 # Typed from memory of the Commentary (as K_FIXED_FREE in .second_order); the tests say so.
-_TABLE_CASES: dict[str, tuple[str, str, float]] = {
-    "fixed-fixed": ("a", "both ends fixed", 0.65),
-    "fixed-pinned": ("b", "one end fixed, the other pinned", 0.80),
-    "pinned-pinned": ("d", "both ends pinned", 1.0),
-    "fixed-free": ("e", "one end fixed, the other free", 2.1),
+_TABLE_CASES: dict[str, tuple[str, str, float, str]] = {
+    "fixed-fixed": ("a", "both ends fixed", 0.65, "0.65"),
+    "fixed-pinned": ("b", "one end fixed, the other pinned", 0.80, "0.80"),
+    "pinned-pinned": ("d", "both ends pinned", 1.0, "1.0"),
+    "fixed-free": ("e", "one end fixed, the other free", 2.1, "2.1"),
 }
 
 
 def _case_text(case: str) -> str:
-    letter, words, value = _TABLE_CASES[case]
-    return f"{TABLE_C_A_7_1}, case ({letter}) {words}: recommended design value K = {value:g}"
+    letter, words, _, shown = _TABLE_CASES[case]
+    return f"{TABLE_C_A_7_1}, case ({letter}) {words}: recommended design value K = {shown}"
 
 
 def effective_length_default(support_case: str) -> DesignParameter:
@@ -207,9 +207,10 @@ def unbraced_segments(
     """The laterally unbraced segments of the member (AISC 360-22 Section F1, Lb).
 
     Lb is the length between points braced against lateral displacement of the
-    compression flange or twist of the section. Every support is taken as such a
-    point (the supports of :mod:`calcsheet.mechanics.supports` restrain the twist),
-    and so is every brace station. A part of the member beyond the last braced
+    compression flange or twist of the section. Every station in ``supports_z`` is
+    taken as such a point (the named cases of :mod:`calcsheet.mechanics.supports`
+    restrain the twist; leave out a support that does not), and so is every brace
+    station. A part of the member beyond the last braced
     point (a cantilever, an overhang) is a segment with ``free_end=True``.
 
     A brace outside the member, or two braces at one station, raises
@@ -248,6 +249,12 @@ def unbraced_segments(
     return segments
 
 
+def _magnitudes(*moments: float | pint.Quantity) -> list[float]:
+    """Moments as floats: quantities in the unit of the first quantity given, floats as they are."""
+    unit = next((m.units for m in moments if isinstance(m, pint.Quantity)), None)
+    return [float(m.to(unit).m) if isinstance(m, pint.Quantity) else float(m) for m in moments]
+
+
 # --- Cb: Eq. F1-1 ----------------------------------------------------------------------
 
 
@@ -260,7 +267,7 @@ def lateral_torsional_modification_factor(
     at its quarter point, centreline and three-quarter point, all as absolute
     values. Floats or quantities of one unit; a segment without moment gives 1.0.
     """
-    values = [abs(float(getattr(m, "magnitude", m))) for m in (M_max, M_A, M_B, M_C)]
+    values = [abs(value) for value in _magnitudes(M_max, M_A, M_B, M_C)]
     m_max, m_a, m_b, m_c = values
     m_max = max(values)  # Mmax is at least every quarter-point moment
     if m_max == 0.0:
@@ -347,7 +354,7 @@ def moment_factor_cm(M_start: float, M_end: float, transverse_load: bool) -> Des
             "AISC 360-22 Appendix 8: transverse loading between the supports, "
             "Cm conservatively taken as 1.0.",
         )
-    first, second = (float(getattr(m, "magnitude", m)) for m in (M_start, M_end))
+    first, second = _magnitudes(M_start, M_end)
     small, large = sorted((first, second), key=abs)
     # Same signs on one diagram: single curvature, M1/M2 negative (Appendix 8); with no
     # end moment at all there is nothing to amplify and the ratio is taken as 0.

@@ -141,6 +141,13 @@ def test_equation_f1_1_itself():
         Quantity(40, "kip*ft"),
         Quantity(20, "kip*ft"),
     ) == pytest.approx(12.5 * 80 / (2.5 * 80 + 3 * 60 + 4 * 40 + 3 * 20))
+    # Quantities in mixed units are compared in one unit (720 kip·in = 60 kip·ft).
+    assert lateral_torsional_modification_factor(
+        Quantity(80, "kip*ft"),
+        Quantity(720, "kip*in"),
+        Quantity(40, "kip*ft"),
+        Quantity(0, "kip*ft"),
+    ) == pytest.approx(12.5 * 80 / (2.5 * 80 + 3 * 60 + 4 * 40))
     assert lateral_torsional_modification_factor(0, 0, 0, 0) == 1.0
 
 
