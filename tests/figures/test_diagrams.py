@@ -222,3 +222,36 @@ def test_bad_arguments_name_the_field():
         force_diagrams(z, forces, forces, forces, supports_m=[0.0], **{**units, "force_unit": "m"})
     with pytest.raises(InputError, match="diagram supports"):
         force_diagrams(z, forces, forces, forces, supports_m=[(0.0, "clamped")], **units)
+
+
+def test_no_text_overlaps_in_random_diagrams():
+    # Invented diagrams (random cubics, supports and load stations, fixed seed): the
+    # layout must keep every text clear of every other whatever the shapes.
+    rng = np.random.default_rng(7)
+    for _ in range(30):
+        length = float(rng.uniform(0.5, 30.0))
+        z = np.sort(np.concatenate([[0.0, length], rng.uniform(0.0, length, 60)]))
+        scales = 10 ** rng.uniform(0, 6, size=6) * (rng.random(6) < 0.6)
+        shapes = [np.polyval(rng.normal(size=4), z / length) for _ in range(6)]
+        governing = np.stack(shapes, axis=1) * scales
+        other = governing * rng.uniform(-1.5, 1.5, size=6)
+        supports = [
+            (float(at), str(rng.choice(["fixed", "pinned", "roller"])))
+            for at in rng.uniform(0.0, length, int(rng.integers(1, 4)))
+        ]
+        loads = [(float(at), f"P{i}") for i, at in enumerate(rng.uniform(0.0, length, 3))]
+        svg = force_diagrams(
+            z,
+            governing,
+            np.minimum(governing, other),
+            np.maximum(governing, other),
+            supports_m=supports,
+            length_unit="ft",
+            force_unit="kip",
+            moment_unit="kip*ft",
+            loads_m=loads,
+            governing_name="1.2D + 1.6L + 0.5S",
+        )
+        boxes = _text_boxes(parse(svg))
+        for (first, a), (second, b) in itertools.combinations(boxes, 2):
+            assert not a.overlaps(b), (first, second)
