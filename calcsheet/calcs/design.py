@@ -29,7 +29,15 @@ from calcsheet.mechanics import internal_forces
 from calcsheet.mechanics.loads import AppliedMoment, PointLoad, point_load
 from calcsheet.mechanics.statics import loads_beyond
 from calcsheet.sections import Section
-from calcsheet.standards.combinations import Combination, combinations, factor_matrix
+from calcsheet.standards.combinations import (
+    PSI0_IMPOSED,
+    PSI0_WIND,
+    SNOW_SITES,
+    Combination,
+    combinations,
+    factor_matrix,
+)
+from calcsheet.standards.national import RECOMMENDED, NationalChoices, national_choices
 from calcsheet.units import Quantity
 
 KINDS = registered()
@@ -46,14 +54,18 @@ class DesignBasis:
     K: float | None = None  # effective length factor; AISC 2.1, EN 2.0 when None
     Lb: pint.Quantity | None = None
     Cb: float = 1.0
-    gamma_M0: float = 1.00
-    gamma_M1: float = 1.00
     S_DS: float | None = None
     reverse_lateral: bool = False  # wind and earthquake also reversed
-    en1990_expression: str = "6.10"  # or "6.10a/b"
     imposed_category: str = "A"  # EN 1990 Table A1.1
     snow_site: str = "H <= 1000 m"  # ψ0 of snow, EN 1990 Table A1.1
-    psi0: Mapping[str, float] | None = None  # ψ0 given directly (EN 1990)
+    # National choices (EN 1990, EN 1993-1-1): a named set, and single values of it
+    # overridden for the job (None: the set's value); see calcsheet.standards.national.
+    national_annex: str = RECOMMENDED
+    gamma_M0: float | None = None
+    gamma_M1: float | None = None
+    gamma_M2: float | None = None
+    en1990_expression: str | None = None  # "6.10" or "6.10a/b"
+    psi0: Mapping[str, float] | None = None  # ψ0 of Q, S or W given directly (EN 1990)
     grade: str = ""
     deflection_ratio: float | None = None  # L/n; None: no deflection check
     sweep_load: str | None = None
@@ -64,6 +76,7 @@ class DesignBasis:
         standard = design_standard(self.kind)
         if standard.methods and self.method not in standard.methods:
             raise InputError("check method", self.method, " or ".join(standard.methods))
+        self.national  # noqa: B018 (refuses an unknown set or a partial factor out of range)
         if self.K is not None and not (math.isfinite(self.K) and self.K > 0):
             raise InputError("check K", self.K, "a positive effective length factor")
         if self.lightest_in and standard.search is None:
@@ -86,17 +99,55 @@ class DesignBasis:
             return None if self.combinations.lower() == "none" else self.combinations
         return self.standard.combination_standard(self.method)
 
+    @property
+    def national(self) -> NationalChoices:
+        """The national choices in use: the named set with this job's overrides."""
+        return national_choices(
+            self.national_annex,
+            gamma_M0=self.gamma_M0,
+            gamma_M1=self.gamma_M1,
+            gamma_M2=self.gamma_M2,
+            en1990_expression=self.en1990_expression,
+            psi0=self.psi0,
+            imposed_category=self.imposed_category,
+            snow_site=self.snow_site,
+        )
+
     def combination_options(self, load_names: Mapping[str, Sequence[str]] | None = None) -> dict:
         """The keyword options of :func:`combinations` this basis sets."""
+        national = self.national
         return {
             "S_DS": self.S_DS,
             "reverse_lateral": self.reverse_lateral,
-            "en1990_expression": self.en1990_expression,
+            "en1990_expression": national.en1990_expression,
             "imposed_category": self.imposed_category,
             "snow_site": self.snow_site,
-            "psi0": self.psi0,
+            "psi0": self._psi0_for_combinations(national),
             "load_names": load_names,
         }
+
+    def _psi0_for_combinations(self, national: NationalChoices) -> dict[str, float] | None:
+        """ψ0 the combinations take beyond their own EN 1990 Table A1.1 values: the job's
+        overrides, and any value of the national set that differs from the table."""
+        parameters = national.parameters
+        category = str(self.imposed_category).strip().upper()
+        in_set = {
+            "Q": parameters.psi_imposed.get(category),
+            "S": parameters.psi_snow.get(self.snow_site),
+            "W": parameters.psi_wind,
+        }
+        table = {
+            "Q": PSI0_IMPOSED.get(category),
+            "S": SNOW_SITES.get(self.snow_site),
+            "W": PSI0_WIND,
+        }
+        given = {
+            load_type: psi.psi0
+            for load_type, psi in in_set.items()
+            if psi is not None and psi.psi0 != table[load_type]
+        }
+        given.update(self.psi0 or {})
+        return given or None
 
     @property
     def effective_length_factor(self) -> float:

@@ -32,6 +32,7 @@ from calcsheet.units import Quantity
 if TYPE_CHECKING:
     from calcsheet.calcs.design import DesignBasis
     from calcsheet.engine import Check, Sheet
+    from calcsheet.standards.en1993 import PartialFactors
 
 GENERIC_CHECK_TITLE = "Von Mises stress, largest over the points"
 NOT_A_SPEC_CHECK = (
@@ -264,8 +265,41 @@ def _en_grade(basis: DesignBasis) -> str:
     return basis.grade if basis.grade.upper().startswith("S") else "S355"
 
 
-def _en_gamma(basis: DesignBasis) -> dict[str, float]:
-    return {"gamma_M0": basis.gamma_M0, "gamma_M1": basis.gamma_M1}
+def _en_gamma(basis: DesignBasis) -> PartialFactors:
+    """γM0, γM1, γM2 of the basis's national set, with the job's overrides."""
+    from calcsheet.standards.en1993 import PartialFactors
+
+    national = basis.national
+    parameters = national.parameters
+    reference = f"{parameters.gamma_reference} ({parameters.name})"
+    changed = [item.label for item in national.overridden if item.label.startswith("γM")]
+    if changed:
+        reference += f"; {', '.join(changed)} overridden for this job (see the design basis)"
+    return PartialFactors(
+        gamma_M0=national.gamma_M0,
+        gamma_M1=national.gamma_M1,
+        gamma_M2=national.gamma_M2,
+        reference=reference,
+    )
+
+
+def _write_national_basis(sheet: Sheet, basis: DesignBasis) -> None:
+    """The codes and the national choices in use, each value recommended or overridden."""
+    national = basis.national
+    parameters = national.parameters
+    sheet.add_basis(
+        "Codes and editions",
+        "EN 1993-1-1:2005 Eurocode 3: Design of steel structures, Part 1-1 (member checks); "
+        "EN 1990:2002+A1:2005 Eurocode: Basis of structural design (load combinations).",
+        f'National choices: the set "{parameters.name}", {parameters.source}'
+        + (
+            "; the values marked overridden are given for this job."
+            if national.overridden
+            else "; no value overridden."
+        ),
+    )
+    with_psi = basis.combination_standard == "EN 1990"
+    sheet.add_basis("Partial factors and national choices", *national.basis_lines(with_psi))
 
 
 def _en_evaluate(section, forces, basis, Fy, length) -> Evaluation:
@@ -295,6 +329,7 @@ def _en_write(context: CheckContext) -> list[Check]:
 
     sheet, basis, forces = context.sheet, context.basis, context.forces
     Fy, length = context.material
+    _write_national_basis(sheet, basis)
     grade = _en_grade(basis)
     if grade != basis.grade:
         sheet.text(
