@@ -363,7 +363,14 @@ def _bending_stiffness(designation: str) -> tuple[float, float, float]:
     from calcsheet.sections import catalog_section
     from calcsheet.sections.catalog import find_entry, tabulated_properties
 
-    if find_entry(designation).family.key in ("L", "WT", "MT", "ST", "C", "MC"):
+    family = find_entry(designation).family
+    if family.metric:  # EN sections: the family's table (every one doubly symmetric)
+        from calcsheet.standards.en1993.section_table import family_table
+
+        table = family_table(family.key)
+        at = table.index(find_entry(designation).designation)
+        return (float(table.I_x[at]), float(table.I_y[at]), 0.0)
+    if family.key in ("L", "WT", "MT", "ST", "C", "MC"):
         return _stiffness_of(catalog_section(designation))
     table = tabulated_properties(designation)
     return (float(table["Ix"].to("m**4").m), float(table["Iy"].to("m**4").m), 0.0)
@@ -425,6 +432,13 @@ class Candidate:
     def passes(self) -> bool:
         return self.utilization <= 1.0
 
+    @property
+    def weight_text(self) -> str:
+        """The weight as its table gives it: lb/ft (AISC) or kg/m (EN sections)."""
+        if self.weight.check("[mass] / [length]"):
+            return f"{self.weight.to('kg/m').m:g} kg/m"
+        return f"{self.weight.to('lbf/ft').m:g} lb/ft"
+
 
 def lightest_section(
     plan: CombinationPlan,
@@ -463,11 +477,15 @@ def lightest_section(
         return kept[i]
 
     def candidate(i: int) -> Candidate:
-        weight = find_entry(names[i]).values.get("weight", math.nan)
+        entry = find_entry(names[i])
+        if entry.family.metric:  # EN sections: mass per metre, as the product standards give
+            weight = Quantity(entry.values["mass_kg_per_m"], "kg/m")
+        else:
+            weight = Quantity(entry.values.get("weight", math.nan), "lbf/ft")
         bending = deflection(i)
         if bending > worst[i]:
-            return Candidate(names[i], Quantity(weight, "lbf/ft"), bending, "deflection")
-        return Candidate(names[i], Quantity(weight, "lbf/ft"), float(worst[i]), keys[int(which[i])])
+            return Candidate(names[i], weight, bending, "deflection")
+        return Candidate(names[i], weight, float(worst[i]), keys[int(which[i])])
 
     # Strength first (every section at once), then the deflection of each passing section
     # in order of weight until one passes both: the same checks as the sheet's.

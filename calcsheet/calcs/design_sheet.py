@@ -208,7 +208,7 @@ def write_exploration(
         rows = [
             [
                 candidate.name,
-                f"{candidate.weight.to('lbf/ft').m:g} lb/ft",
+                candidate.weight_text,
                 f"{candidate.utilization:.3f}" if np.isfinite(candidate.utilization) else "—",
                 titles.get(candidate.governing_check, candidate.governing_check),
                 "passes" if candidate.passes else "fails",

@@ -307,15 +307,44 @@ def _en_evaluate(section, forces, basis, Fy, length) -> Evaluation:
 
     per_check = en1993_checks_numeric(
         section,
-        # EN y-y is our x-x: N, M_y,Ed = M_x, M_z,Ed = M_y, V_z,Ed = V_y, V_y,Ed = V_x.
-        {"N_Ed": forces[:, 0], "M_y_Ed": forces[:, 4], "M_z_Ed": forces[:, 5],
-         "V_z_Ed": forces[:, 2], "V_y_Ed": forces[:, 1]},
+        _en_demands(forces),
         material=steel(_en_grade(basis), f_y=Fy),
         length=length,
         k_eff=basis.effective_length_factor,
         gamma=_en_gamma(basis),
     )  # fmt: skip
     return per_check, "governing EN 1993-1-1 check"
+
+
+def _en_demands(forces: np.ndarray) -> dict[str, np.ndarray]:
+    # EN y-y is our x-x: N, M_y,Ed = M_x, M_z,Ed = M_y, V_z,Ed = V_y, V_y,Ed = V_x.
+    return {"N_Ed": forces[:, 0], "M_y_Ed": forces[:, 4], "M_z_Ed": forces[:, 5],
+            "V_z_Ed": forces[:, 2], "V_y_Ed": forces[:, 1]}  # fmt: skip
+
+
+def _en_search(family, forces, basis, Fy, length) -> tuple[list[str], dict[str, np.ndarray]]:
+    """Every section of a metric family under every row of forces: the sheet's EN procedure
+    on arrays, the sections' values from the family's table (no section is built)."""
+    from calcsheet.standards.en1993 import steel
+    from calcsheet.standards.en1993.numeric import en1993_checks_prepared
+    from calcsheet.standards.en1993.section_table import EN_FAMILIES, family_inputs, family_table
+
+    if str(family).strip().upper() not in EN_FAMILIES:
+        raise InputError(
+            "explore lightest_in",
+            family,
+            f"an EN family to search with the EN 1993-1-1 check: {', '.join(EN_FAMILIES)}",
+        )
+    table = family_table(family)
+    member, given, refused = family_inputs(
+        table,
+        material=steel(_en_grade(basis), f_y=Fy),
+        length=length,
+        k_eff=basis.effective_length_factor,
+        gamma=_en_gamma(basis),
+    )
+    checks = en1993_checks_prepared(member, _en_demands(forces), given, refused)
+    return list(table.names), checks
 
 
 def _en_titles() -> Mapping[str, str]:
@@ -397,5 +426,6 @@ EN_1993_1_1 = register(
         check_titles=_en_titles,
         evaluate=_en_evaluate,
         write=_en_write,
+        search=_en_search,
     )
 )
