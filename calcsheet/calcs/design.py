@@ -419,6 +419,11 @@ def _deflection_utilization(
     return np.broadcast_to(np.asarray(result.utilization, dtype=float), radians.shape)
 
 
+# The governing check of a candidate the procedure cannot check (its utilization is
+# infinite: class 4, a web that needs a shear buckling verification, an uncovered shape).
+OUTSIDE_THE_CHECKS = "outside the checks' scope (e.g. class 4)"
+
+
 @dataclass(frozen=True)
 class Candidate:
     """A catalog section tried by the lightest-section search."""
@@ -482,6 +487,8 @@ def lightest_section(
             weight = Quantity(entry.values["mass_kg_per_m"], "kg/m")
         else:
             weight = Quantity(entry.values.get("weight", math.nan), "lbf/ft")
+        if not np.isfinite(worst[i]):
+            return Candidate(names[i], weight, math.inf, OUTSIDE_THE_CHECKS)
         bending = deflection(i)
         if bending > worst[i]:
             return Candidate(names[i], weight, bending, "deflection")
