@@ -299,6 +299,8 @@ def _write_national_basis(sheet: Sheet, basis: DesignBasis) -> None:
         ),
     )
     with_psi = basis.combination_standard == "EN 1990"
+    if with_psi:
+        sheet.add_reference("EN 1990:2002+A1:2005 Eurocode: Basis of structural design")
     sheet.add_basis("Partial factors and national choices", *national.basis_lines(with_psi))
 
 
