@@ -119,13 +119,13 @@ def national_set(name: str, field: str = "check national_annex") -> NationalPara
         return NATIONAL_SETS[by_fold[str(name).strip().casefold()]]
     close = difflib.get_close_matches(str(name), list(NATIONAL_SETS), n=1, cutoff=0.4)
     known = ", ".join(f'"{known}"' for known in NATIONAL_SETS)
-    hint = f'did you mean "{close[0]}"? ' if close else ""
+    hint = f'; did you mean "{close[0]}"?' if close else ""
     raise InputError(
         field,
         name,
         f"the name of a set of national choices: {known}; give single values "
         "(gamma_M0, gamma_M1, gamma_M2, psi0, en1990_expression) to override them",
-        f"{hint}no such set".strip(),
+        f"no such set{hint}",
     )
 
 
