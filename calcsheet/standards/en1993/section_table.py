@@ -34,11 +34,11 @@ import numpy as np
 import pint
 
 from calcsheet.errors import InputError
-from calcsheet.sections import catalog_section, list_designations
+from calcsheet.sections import Section, catalog_section, list_designations
 from calcsheet.sections.metric import METRIC_FAMILIES, corner_radii, metric_rows
 from calcsheet.standards.en1993 import buckling as buck
 from calcsheet.standards.en1993.factors import NOMINAL_THICKNESS_LIMIT_MM, PartialFactors, Steel
-from calcsheet.standards.en1993.member import member_data
+from calcsheet.standards.en1993.member import MemberData, member_data, si_inputs
 
 I_FAMILIES = ("IPE", "HEA", "HEB", "HEM")
 EN_FAMILIES = tuple(METRIC_FAMILIES)  # IPE, HEA, HEB, HEM, SHS, RHS, CHS
@@ -180,7 +180,8 @@ def family_table(family: str) -> FamilyTable:
 
 
 @lru_cache(maxsize=16)
-def _first_section(family: str):
+def _first_section(family: str) -> Section:
+    """The family's lightest section, built once: its member data shape the procedure."""
     return catalog_section(family_table(family).names[0])
 
 
@@ -191,7 +192,7 @@ def family_inputs(
     length: pint.Quantity,
     k_eff: float,
     gamma: PartialFactors,
-) -> tuple[Any, dict[str, Any], np.ndarray]:
+) -> tuple[MemberData, dict[str, Any], np.ndarray]:
     """What the EN procedure needs to run on every section of ``table`` at once.
 
     The member data of the family's first section (its kind, fabrication and options
@@ -199,8 +200,6 @@ def family_inputs(
     arrays, and the sections refused as member data would refuse them (a nominal
     f_y of Table 3.1 on an element thicker than 40 mm).
     """
-    from calcsheet.standards.en1993.member import si_inputs
-
     member = member_data(
         _first_section(table.family),
         material=material,
@@ -232,14 +231,6 @@ def family_inputs(
     return member, given, refused
 
 
-def section_family(designation: str) -> str | None:
-    """The metric family key of a catalog designation, or None for an AISC shape."""
-    from calcsheet.sections.catalog import find_entry
-
-    entry = find_entry(designation)
-    return entry.family.key if entry.family.metric else None
-
-
 __all__ = [
     "EN_FAMILIES",
     "FamilyTable",
@@ -248,5 +239,4 @@ __all__ = [
     "family_table",
     "hollow_rectangle_values",
     "i_section_values",
-    "section_family",
 ]
