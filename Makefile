@@ -4,7 +4,7 @@ VENV := .venv
 PY := $(VENV)/bin/python
 STAMP := $(VENV)/.installed-stamp
 
-.PHONY: demo test bench lint format clean
+.PHONY: demo demo-en test bench lint format clean
 
 $(STAMP): pyproject.toml
 	$(PYTHON) -m venv $(VENV)
@@ -15,6 +15,10 @@ $(STAMP): pyproject.toml
 ## demo: build the demo job (examples/outrigger.toml) into out/ as PDF, HTML and JSON
 demo: $(STAMP)
 	$(VENV)/bin/calcsheet build examples/outrigger.toml --out out
+
+## demo-en: build the EN demo job (examples/en-bracket.toml: EN 1993-1-1, EN 1990, A4) into out/
+demo-en: $(STAMP)
+	$(VENV)/bin/calcsheet build examples/en-bracket.toml --out out
 
 ## test: lint, then the whole test suite
 test: $(STAMP)

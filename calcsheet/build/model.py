@@ -207,7 +207,7 @@ def member_model(job: Job, *, source: str = "job") -> MemberModel:
     if section is not None and len(loads) == len(job.loads) + len(job.moments):
         notes = _check_offsets(job, section, length, loads, problems)
     Fy, Fy_source = _yield_stress(job, problems)
-    design = problems.attempt("check", lambda: design_basis(job))
+    design = problems.attempt("check", lambda: design_basis(job), _BASIS_KEYS)
     if isinstance(design, DesignBasis):
         _check_load_types(job, design, problems)
     if problems.found:
@@ -381,6 +381,13 @@ def _yield_stress(job: Job, problems: _Problems) -> tuple[pint.Quantity | None, 
     return grade.Fy, f"{grade.name}, minimum (calcsheet grade table)"
 
 
+# The design basis's fields an InputError names -> the key under [check] it reports.
+_BASIS_KEYS = {
+    f"check {key}": key
+    for key in ("national_annex", "gamma_M0", "gamma_M1", "gamma_M2", "en1990_expression")
+}
+
+
 def design_basis(job: Job) -> DesignBasis:
     """The member sheet's design basis from the job's [check] and [explore] tables."""
     check, explore = job.check, job.explore
@@ -394,8 +401,10 @@ def design_basis(job: Job) -> DesignBasis:
         K=check.K,
         Lb=parse_quantity(check.Lb, field="check.Lb", dimension="length") if check.Lb else None,
         Cb=check.Cb,
+        national_annex=check.national_annex,
         gamma_M0=check.gamma_M0,
         gamma_M1=check.gamma_M1,
+        gamma_M2=check.gamma_M2,
         S_DS=check.S_DS,
         reverse_lateral=check.reverse_lateral,
         en1990_expression=check.en1990_expression,

@@ -29,7 +29,15 @@ from calcsheet.mechanics import internal_forces
 from calcsheet.mechanics.loads import AppliedMoment, PointLoad, point_load
 from calcsheet.mechanics.statics import loads_beyond
 from calcsheet.sections import Section
-from calcsheet.standards.combinations import Combination, combinations, factor_matrix
+from calcsheet.standards.combinations import (
+    PSI0_IMPOSED,
+    PSI0_WIND,
+    SNOW_SITES,
+    Combination,
+    combinations,
+    factor_matrix,
+)
+from calcsheet.standards.national import RECOMMENDED, NationalChoices, national_choices
 from calcsheet.units import Quantity
 
 KINDS = registered()
@@ -46,14 +54,18 @@ class DesignBasis:
     K: float | None = None  # effective length factor; AISC 2.1, EN 2.0 when None
     Lb: pint.Quantity | None = None
     Cb: float = 1.0
-    gamma_M0: float = 1.00
-    gamma_M1: float = 1.00
     S_DS: float | None = None
     reverse_lateral: bool = False  # wind and earthquake also reversed
-    en1990_expression: str = "6.10"  # or "6.10a/b"
     imposed_category: str = "A"  # EN 1990 Table A1.1
     snow_site: str = "H <= 1000 m"  # ψ0 of snow, EN 1990 Table A1.1
-    psi0: Mapping[str, float] | None = None  # ψ0 given directly (EN 1990)
+    # National choices (EN 1990, EN 1993-1-1): a named set, and single values of it
+    # overridden for the job (None: the set's value); see calcsheet.standards.national.
+    national_annex: str = RECOMMENDED
+    gamma_M0: float | None = None
+    gamma_M1: float | None = None
+    gamma_M2: float | None = None
+    en1990_expression: str | None = None  # "6.10" or "6.10a/b"
+    psi0: Mapping[str, float] | None = None  # ψ0 of Q, S or W given directly (EN 1990)
     grade: str = ""
     deflection_ratio: float | None = None  # L/n; None: no deflection check
     sweep_load: str | None = None
@@ -64,6 +76,7 @@ class DesignBasis:
         standard = design_standard(self.kind)
         if standard.methods and self.method not in standard.methods:
             raise InputError("check method", self.method, " or ".join(standard.methods))
+        self.national  # noqa: B018 (refuses an unknown set or a partial factor out of range)
         if self.K is not None and not (math.isfinite(self.K) and self.K > 0):
             raise InputError("check K", self.K, "a positive effective length factor")
         if self.lightest_in and standard.search is None:
@@ -86,17 +99,55 @@ class DesignBasis:
             return None if self.combinations.lower() == "none" else self.combinations
         return self.standard.combination_standard(self.method)
 
+    @property
+    def national(self) -> NationalChoices:
+        """The national choices in use: the named set with this job's overrides."""
+        return national_choices(
+            self.national_annex,
+            gamma_M0=self.gamma_M0,
+            gamma_M1=self.gamma_M1,
+            gamma_M2=self.gamma_M2,
+            en1990_expression=self.en1990_expression,
+            psi0=self.psi0,
+            imposed_category=self.imposed_category,
+            snow_site=self.snow_site,
+        )
+
     def combination_options(self, load_names: Mapping[str, Sequence[str]] | None = None) -> dict:
         """The keyword options of :func:`combinations` this basis sets."""
+        national = self.national
         return {
             "S_DS": self.S_DS,
             "reverse_lateral": self.reverse_lateral,
-            "en1990_expression": self.en1990_expression,
+            "en1990_expression": national.en1990_expression,
             "imposed_category": self.imposed_category,
             "snow_site": self.snow_site,
-            "psi0": self.psi0,
+            "psi0": self._psi0_for_combinations(national),
             "load_names": load_names,
         }
+
+    def _psi0_for_combinations(self, national: NationalChoices) -> dict[str, float] | None:
+        """ψ0 the combinations take beyond their own EN 1990 Table A1.1 values: the job's
+        overrides, and any value of the national set that differs from the table."""
+        parameters = national.parameters
+        category = str(self.imposed_category).strip().upper()
+        in_set = {
+            "Q": parameters.psi_imposed.get(category),
+            "S": parameters.psi_snow.get(self.snow_site),
+            "W": parameters.psi_wind,
+        }
+        table = {
+            "Q": PSI0_IMPOSED.get(category),
+            "S": SNOW_SITES.get(self.snow_site),
+            "W": PSI0_WIND,
+        }
+        given = {
+            load_type: psi.psi0
+            for load_type, psi in in_set.items()
+            if psi is not None and psi.psi0 != table[load_type]
+        }
+        given.update(self.psi0 or {})
+        return given or None
 
     @property
     def effective_length_factor(self) -> float:
@@ -312,7 +363,14 @@ def _bending_stiffness(designation: str) -> tuple[float, float, float]:
     from calcsheet.sections import catalog_section
     from calcsheet.sections.catalog import find_entry, tabulated_properties
 
-    if find_entry(designation).family.key in ("L", "WT", "MT", "ST", "C", "MC"):
+    family = find_entry(designation).family
+    if family.metric:  # EN sections: the family's table (every one doubly symmetric)
+        from calcsheet.standards.en1993.section_table import family_table
+
+        table = family_table(family.key)
+        at = table.index(find_entry(designation).designation)
+        return (float(table.I_x[at]), float(table.I_y[at]), 0.0)
+    if family.key in ("L", "WT", "MT", "ST", "C", "MC"):
         return _stiffness_of(catalog_section(designation))
     table = tabulated_properties(designation)
     return (float(table["Ix"].to("m**4").m), float(table["Iy"].to("m**4").m), 0.0)
@@ -361,6 +419,11 @@ def _deflection_utilization(
     return np.broadcast_to(np.asarray(result.utilization, dtype=float), radians.shape)
 
 
+# The governing check of a candidate the procedure cannot check (its utilization is
+# infinite: class 4, a web that needs a shear buckling verification, an uncovered shape).
+OUTSIDE_THE_CHECKS = "outside the checks' scope (e.g. class 4)"
+
+
 @dataclass(frozen=True)
 class Candidate:
     """A catalog section tried by the lightest-section search."""
@@ -373,6 +436,13 @@ class Candidate:
     @property
     def passes(self) -> bool:
         return self.utilization <= 1.0
+
+    @property
+    def weight_text(self) -> str:
+        """The weight as its table gives it: lb/ft (AISC) or kg/m (EN sections)."""
+        if self.weight.check("[mass] / [length]"):
+            return f"{self.weight.to('kg/m').m:g} kg/m"
+        return f"{self.weight.to('lbf/ft').m:g} lb/ft"
 
 
 def lightest_section(
@@ -412,11 +482,17 @@ def lightest_section(
         return kept[i]
 
     def candidate(i: int) -> Candidate:
-        weight = find_entry(names[i]).values.get("weight", math.nan)
+        entry = find_entry(names[i])
+        if entry.family.metric:  # EN sections: mass per metre, as the product standards give
+            weight = Quantity(entry.values["mass_kg_per_m"], "kg/m")
+        else:
+            weight = Quantity(entry.values.get("weight", math.nan), "lbf/ft")
+        if not np.isfinite(worst[i]):
+            return Candidate(names[i], weight, math.inf, OUTSIDE_THE_CHECKS)
         bending = deflection(i)
         if bending > worst[i]:
-            return Candidate(names[i], Quantity(weight, "lbf/ft"), bending, "deflection")
-        return Candidate(names[i], Quantity(weight, "lbf/ft"), float(worst[i]), keys[int(which[i])])
+            return Candidate(names[i], weight, bending, "deflection")
+        return Candidate(names[i], weight, float(worst[i]), keys[int(which[i])])
 
     # Strength first (every section at once), then the deflection of each passing section
     # in order of weight until one passes both: the same checks as the sheet's.

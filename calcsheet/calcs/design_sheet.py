@@ -75,8 +75,11 @@ def write_combinations(
     )
     force_unit, moment_unit = preset["force"], preset["moment"]
     rows = []
+    # Rounding noise of the statics (cos 90° is 6e-17, not 0) prints as 0.
+    noise = 1e-12 * float(np.abs(plan.forces).max(initial=0.0))
+    shown_forces = np.where(np.abs(plan.forces) <= noise, 0.0, plan.forces)
     for index, combo in enumerate(plan.combos):
-        forces = plan.forces[index]
+        forces = shown_forces[index]
         cells = [
             _shown(forces[k], force_unit if kind == "force" else moment_unit,
                    "N" if kind == "force" else "N*m")
@@ -208,7 +211,7 @@ def write_exploration(
         rows = [
             [
                 candidate.name,
-                f"{candidate.weight.to('lbf/ft').m:g} lb/ft",
+                candidate.weight_text,
                 f"{candidate.utilization:.3f}" if np.isfinite(candidate.utilization) else "—",
                 titles.get(candidate.governing_check, candidate.governing_check),
                 "passes" if candidate.passes else "fails",

@@ -32,6 +32,7 @@ from calcsheet.units import Quantity
 if TYPE_CHECKING:
     from calcsheet.calcs.design import DesignBasis
     from calcsheet.engine import Check, Sheet
+    from calcsheet.standards.en1993 import PartialFactors
 
 GENERIC_CHECK_TITLE = "Von Mises stress, largest over the points"
 NOT_A_SPEC_CHECK = (
@@ -264,8 +265,43 @@ def _en_grade(basis: DesignBasis) -> str:
     return basis.grade if basis.grade.upper().startswith("S") else "S355"
 
 
-def _en_gamma(basis: DesignBasis) -> dict[str, float]:
-    return {"gamma_M0": basis.gamma_M0, "gamma_M1": basis.gamma_M1}
+def _en_gamma(basis: DesignBasis) -> PartialFactors:
+    """γM0, γM1, γM2 of the basis's national set, with the job's overrides."""
+    from calcsheet.standards.en1993 import PartialFactors
+
+    national = basis.national
+    parameters = national.parameters
+    reference = f"{parameters.gamma_reference} ({parameters.name})"
+    changed = [item.label for item in national.overridden if item.label.startswith("γM")]
+    if changed:
+        reference += f"; {', '.join(changed)} overridden for this job (see the design basis)"
+    return PartialFactors(
+        gamma_M0=national.gamma_M0,
+        gamma_M1=national.gamma_M1,
+        gamma_M2=national.gamma_M2,
+        reference=reference,
+    )
+
+
+def _write_national_basis(sheet: Sheet, basis: DesignBasis) -> None:
+    """The codes and the national choices in use, each value recommended or overridden."""
+    national = basis.national
+    parameters = national.parameters
+    sheet.add_basis(
+        "Codes and editions",
+        "EN 1993-1-1:2005 Eurocode 3: Design of steel structures, Part 1-1 (member checks); "
+        "EN 1990:2002+A1:2005 Eurocode: Basis of structural design (load combinations).",
+        f'National choices: the set "{parameters.name}", {parameters.source}'
+        + (
+            "; the values marked overridden are given for this job."
+            if national.overridden
+            else "; no value overridden."
+        ),
+    )
+    with_psi = basis.combination_standard == "EN 1990"
+    if with_psi:
+        sheet.add_reference("EN 1990:2002+A1:2005 Eurocode: Basis of structural design")
+    sheet.add_basis("Partial factors and national choices", *national.basis_lines(with_psi))
 
 
 def _en_evaluate(section, forces, basis, Fy, length) -> Evaluation:
@@ -273,15 +309,44 @@ def _en_evaluate(section, forces, basis, Fy, length) -> Evaluation:
 
     per_check = en1993_checks_numeric(
         section,
-        # EN y-y is our x-x: N, M_y,Ed = M_x, M_z,Ed = M_y, V_z,Ed = V_y, V_y,Ed = V_x.
-        {"N_Ed": forces[:, 0], "M_y_Ed": forces[:, 4], "M_z_Ed": forces[:, 5],
-         "V_z_Ed": forces[:, 2], "V_y_Ed": forces[:, 1]},
+        _en_demands(forces),
         material=steel(_en_grade(basis), f_y=Fy),
         length=length,
         k_eff=basis.effective_length_factor,
         gamma=_en_gamma(basis),
     )  # fmt: skip
     return per_check, "governing EN 1993-1-1 check"
+
+
+def _en_demands(forces: np.ndarray) -> dict[str, np.ndarray]:
+    # EN y-y is our x-x: N, M_y,Ed = M_x, M_z,Ed = M_y, V_z,Ed = V_y, V_y,Ed = V_x.
+    return {"N_Ed": forces[:, 0], "M_y_Ed": forces[:, 4], "M_z_Ed": forces[:, 5],
+            "V_z_Ed": forces[:, 2], "V_y_Ed": forces[:, 1]}  # fmt: skip
+
+
+def _en_search(family, forces, basis, Fy, length) -> tuple[list[str], dict[str, np.ndarray]]:
+    """Every section of a metric family under every row of forces: the sheet's EN procedure
+    on arrays, the sections' values from the family's table (no section is built)."""
+    from calcsheet.standards.en1993 import steel
+    from calcsheet.standards.en1993.numeric import en1993_checks_prepared
+    from calcsheet.standards.en1993.section_table import EN_FAMILIES, family_inputs, family_table
+
+    if str(family).strip().upper() not in EN_FAMILIES:
+        raise InputError(
+            "explore lightest_in",
+            family,
+            f"an EN family to search with the EN 1993-1-1 check: {', '.join(EN_FAMILIES)}",
+        )
+    table = family_table(family)
+    member, given, refused = family_inputs(
+        table,
+        material=steel(_en_grade(basis), f_y=Fy),
+        length=length,
+        k_eff=basis.effective_length_factor,
+        gamma=_en_gamma(basis),
+    )
+    checks = en1993_checks_prepared(member, _en_demands(forces), given, refused)
+    return list(table.names), checks
 
 
 def _en_titles() -> Mapping[str, str]:
@@ -295,6 +360,7 @@ def _en_write(context: CheckContext) -> list[Check]:
 
     sheet, basis, forces = context.sheet, context.basis, context.forces
     Fy, length = context.material
+    _write_national_basis(sheet, basis)
     grade = _en_grade(basis)
     if grade != basis.grade:
         sheet.text(
@@ -362,5 +428,6 @@ EN_1993_1_1 = register(
         check_titles=_en_titles,
         evaluate=_en_evaluate,
         write=_en_write,
+        search=_en_search,
     )
 )

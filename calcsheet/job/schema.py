@@ -244,7 +244,10 @@ class CheckSpec(_Table):
     ``reverse_lateral``: wind and earthquake loads act also reversed. EN 1990 only:
     ``en1990_expression`` ("6.10", or "6.10a/b" for Eq. 6.10a and 6.10b),
     ``imposed_category`` (A-H, Table A1.1: ψ0 of Q), ``snow_site`` (ψ0 of S) and
-    ``psi0`` (ψ0 of Q, S or W given directly, e.g. ``{ S = 0.7 }``).
+    ``psi0`` (ψ0 of Q, S or W given directly, e.g. ``{ S = 0.7 }``). EN 1993-1-1:
+    ``national_annex`` names the set of national choices (γM0, γM1, γM2, ψ, the
+    expression), "EN recommended values" by default; ``gamma_M0``, ``gamma_M1``,
+    ``gamma_M2`` and ``en1990_expression`` override single values of it.
     """
 
     kind: Literal["allowable stress", "AISC 360-22", "EN 1993-1-1"] = "allowable stress"
@@ -264,11 +267,15 @@ class CheckSpec(_Table):
     K: float | None = Field(default=None, gt=0, le=10)
     Lb: Length | None = None
     Cb: float = Field(default=1.0, ge=1.0, le=3.0)
-    gamma_M0: float = Field(default=1.0, ge=1.0, le=2.0)
-    gamma_M1: float = Field(default=1.0, ge=1.0, le=2.0)
+    # National choices (EN): a named set (the set's names are checked with the design
+    # basis) and single values overridden; None takes the set's value.
+    national_annex: str = Field(default="EN recommended values", min_length=1, max_length=80)
+    gamma_M0: float | None = Field(default=None, ge=0.8, le=2.0)
+    gamma_M1: float | None = Field(default=None, ge=0.8, le=2.0)
+    gamma_M2: float | None = Field(default=None, ge=0.8, le=2.0)
     S_DS: float | None = Field(default=None, ge=0, le=5)
     reverse_lateral: bool = False
-    en1990_expression: Literal["6.10", "6.10a/b"] = "6.10"
+    en1990_expression: Literal["6.10", "6.10a/b"] | None = None
     imposed_category: Literal["A", "B", "C", "D", "E", "F", "G", "H"] = "A"
     snow_site: Literal["H <= 1000 m", "H > 1000 m", "Nordic"] = "H <= 1000 m"
     psi0: dict[Literal["Q", "S", "W"], Annotated[float, Field(ge=0, le=1)]] | None = None

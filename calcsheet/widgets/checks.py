@@ -172,8 +172,9 @@ class EurocodePanel(SpecificationPanel):
 
     def fill(self, spec: CheckSpec) -> None:
         super().fill(spec)
-        self.gamma_M0.set(spec.gamma_M0)
-        self.gamma_M1.set(spec.gamma_M1)
+        # None: the national set's value (the form shows the recommended 1.0).
+        self.gamma_M0.set(1.0 if spec.gamma_M0 is None else spec.gamma_M0)
+        self.gamma_M1.set(1.0 if spec.gamma_M1 is None else spec.gamma_M1)
 
     def data(self) -> dict[str, Any]:
         return {**super().data(), "gamma_M0": self.gamma_M0.value, "gamma_M1": self.gamma_M1.value}

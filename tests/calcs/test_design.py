@@ -102,9 +102,18 @@ def test_the_lightest_section_passes_in_its_own_sheet_and_the_lighter_ones_fail(
     )
 
 
-def test_the_lightest_search_is_only_offered_with_aisc() -> None:
+def test_the_lightest_search_is_only_offered_with_a_specification() -> None:
     with pytest.raises(InputError, match="lightest_in"):
-        DesignBasis("EN 1993-1-1", lightest_in="W")
+        DesignBasis("allowable stress", lightest_in="W")
+
+
+def test_the_en_search_refuses_an_aisc_family_naming_the_en_ones() -> None:
+    basis = DesignBasis("EN 1993-1-1", grade="S355", lightest_in="W")
+    plan = plan_combinations(
+        catalog_section("W10X33"), LOADS, ["G", "W"], LENGTH, STATION, basis, FY
+    )
+    with pytest.raises(InputError, match="explore lightest_in.*IPE, HEA, HEB, HEM, SHS, RHS, CHS"):
+        lightest_section(plan, basis, FY, LENGTH)
 
 
 def test_each_check_names_its_governing_combination() -> None:

@@ -75,6 +75,21 @@ def en1993_checks_numeric(
         "interaction": interaction,
     }
     member, given, refused = _prepared(section, options)
+    return en1993_checks_prepared(member, arrays, given, refused)
+
+
+def en1993_checks_prepared(
+    member: MemberData,
+    demands: Mapping[str, np.ndarray],
+    given: Mapping[str, Any],
+    refused: np.ndarray,
+) -> dict[str, np.ndarray]:
+    """:func:`en1993_checks_numeric` on inputs already prepared: ``member`` shapes the
+    procedure, ``given`` holds its inputs by name in SI base units (section values as
+    ``(n, 1)`` arrays for ``n`` sections), ``refused`` marks the sections out of scope.
+    ``demands`` are arrays ``(m,)`` in N and N·m under the procedure's names.
+    """
+    arrays = dict(demands)
     w = run_on_arrays(member, arrays, **given)
     outside = refused
     for mask, _ in scope_problems(w):
