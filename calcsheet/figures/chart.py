@@ -6,10 +6,12 @@ sheet marked and the worst angle named, all in the figures' own style.
 
 from __future__ import annotations
 
+import itertools
 from collections.abc import Sequence
 
+from calcsheet.figures.labels import Obstacles, place_label, text_box
 from calcsheet.figures.style import AXIS, DIMENSION, INK, NOTE, SMALL_FONT_SIZE, TENSION
-from calcsheet.figures.svg import Svg
+from calcsheet.figures.svg import Svg, text_width
 
 WIDTH = 520.0
 HEIGHT = 220.0
@@ -35,27 +37,55 @@ def sweep_chart(
         span = (angles[-1] - angles[0]) or 1.0
         return ((angle - angles[0]) / span * WIDTH, HEIGHT - value / top * HEIGHT)
 
-    svg.line((0, HEIGHT), (WIDTH, HEIGHT), stroke=INK, width=1.0)
-    svg.line((0, 0), (0, HEIGHT), stroke=INK, width=1.0)
+    # The two marks' labels keep clear of the axes, the tick labels, the curve and
+    # each other (a worst angle next to the drawn one put one label on the other).
+    obstacles = Obstacles()
+
+    def text(position: tuple[float, float], words: str, **options: object) -> None:
+        svg.text(position, words, size=SMALL_FONT_SIZE, **options)  # type: ignore[arg-type]
+        anchor = options.get("anchor", "middle")
+        shift = {"start": 0.5, "middle": 0.0, "end": -0.5}[str(anchor)]
+        width = text_width(words, SMALL_FONT_SIZE)
+        obstacles.add_box(
+            text_box((position[0] + shift * width, position[1]), words, SMALL_FONT_SIZE)
+        )
+
+    def line(start: tuple[float, float], end: tuple[float, float], **options: object) -> None:
+        svg.line(start, end, **options)  # type: ignore[arg-type]
+        obstacles.add_line(start, end)
+
+    line((0, HEIGHT), (WIDTH, HEIGHT), stroke=INK, width=1.0)
+    line((0, 0), (0, HEIGHT), stroke=INK, width=1.0)
     step = 45.0
     tick = angles[0]
     while tick <= angles[-1] + 1e-9:
         x, _ = at(tick, 0)
         svg.line((x, 0), (x, HEIGHT), stroke=AXIS, width=0.4, dash="2 3")
-        svg.text((x, HEIGHT + 12), f"{tick:g}°", size=SMALL_FONT_SIZE, fill=NOTE)
+        text((x, HEIGHT + 12), f"{tick:g}°", fill=NOTE)
         tick += step
     for level in _levels(top):
         _, y = at(angles[0], level)
         svg.line((0, y), (WIDTH, y), stroke=AXIS, width=0.4, dash="2 3")
-        svg.text((-6, y), f"{level:g}", size=SMALL_FONT_SIZE, anchor="end", fill=NOTE)
+        text((-6, y), f"{level:g}", anchor="end", fill=NOTE)
     _, limit_y = at(angles[0], 1.0)
-    svg.line((0, limit_y), (WIDTH, limit_y), stroke=TENSION_HEX, width=1.2, dash="6 3")
-    svg.text((WIDTH - 2, limit_y - 8), "limit 1.0", size=SMALL_FONT_SIZE, anchor="end")
-    svg.polyline([at(a, v) for a, v in zip(angles, values, strict=True)], stroke=INK, width=1.6)
+    line((0, limit_y), (WIDTH, limit_y), stroke=TENSION_HEX, width=1.2, dash="6 3")
+    text((WIDTH - 2, limit_y - 8), "limit 1.0", anchor="end")
+    curve = [at(a, v) for a, v in zip(angles, values, strict=True)]
+    svg.polyline(curve, stroke=INK, width=1.6)
+    for start, end in itertools.pairwise(curve):
+        obstacles.add_line(start, end)
     worst = max(range(len(values)), key=values.__getitem__)
-    _mark(svg, at(angles[worst], values[worst]), f"worst {angles[worst]:g}°: {values[worst]:.3f}")
     drawn_deg, drawn_value = drawn
-    _mark(svg, at(drawn_deg, drawn_value), f"drawn {drawn_deg:g}°: {drawn_value:.3f}", below=True)
+    marks = (
+        (at(angles[worst], values[worst]), f"worst {angles[worst]:g}°: {values[worst]:.3f}", -1),
+        (at(drawn_deg, drawn_value), f"drawn {drawn_deg:g}°: {drawn_value:.3f}", 1),
+    )
+    for point, _, _ in marks:
+        svg.circle(point, 3.2, fill=INK)
+        obstacles.add_box(text_box(point, "o", 7.0))
+    for point, label, upward in marks:
+        centre, _ = place_label(obstacles, point, (0.0, 12.0 * upward), label, size=SMALL_FONT_SIZE)
+        svg.text(centre, label, size=SMALL_FONT_SIZE, fill=DIMENSION, bold=True)
     svg.text((WIDTH / 2, HEIGHT + 28), "load angle θ", size=SMALL_FONT_SIZE, fill=NOTE)
     svg.text((-34, HEIGHT / 2), "utilization", size=SMALL_FONT_SIZE, fill=NOTE, vertical=True)
     return svg.render()
@@ -71,9 +101,3 @@ def _levels(top: float) -> list[float]:
         levels.append(round(value, 6))
         value += step
     return levels
-
-
-def _mark(svg: Svg, point: tuple[float, float], label: str, *, below: bool = False) -> None:
-    svg.circle(point, 3.2, fill=INK)
-    offset = 14 if below else -12
-    svg.text((point[0], point[1] + offset), label, size=SMALL_FONT_SIZE, fill=DIMENSION, bold=True)
