@@ -145,7 +145,9 @@ def build_sheets(job: Job, *, source: str = "job") -> BuildResult:
         sheet.trace = trace
         stem = f"{base}-rev{revision}"
         label = ""
-        if len(model.stations) > 1:
+        if model.auto_station:
+            label = _found_station(sheet)
+        elif len(model.stations) > 1:
             stem += "-z" + safe_stem(f"{station.magnitude:g}{station.units:~}")
             label = f"z = {station.magnitude:g} {station.units:~}"
         sheets.append(BuiltSheet(sheet, stem, station=label))
@@ -158,7 +160,6 @@ def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str
             model.section,
             model.loads,
             length=model.length,
-            station=station,
             Fy=model.Fy,
             Fy_reference=model.Fy_source,
             title=job.sheet.title,
@@ -167,6 +168,7 @@ def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str
             design=model.design,
             load_types=model.load_types,
             detail=job.sheet.detail,
+            **model.sheet_arguments(station),  # the station and the frame options
         )
     except (ArithmeticError, ValueError) as error:
         if isinstance(error, InputError):
@@ -185,6 +187,15 @@ def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str
     if model.notes:  # unusual but possible inputs (a long bracket), for the checker
         sheet.add_basis("Notes on the inputs", *model.notes)
     return sheet
+
+
+def _found_station(sheet: Sheet) -> str:
+    """``auto, z = 0 in``: the station the sheet found itself (its input ``z_s``)."""
+    try:
+        found = sheet.value("z_s")
+    except KeyError:
+        return "auto"
+    return f"auto, z = {found.magnitude:g} {found.units:~}"
 
 
 def _placed(source: str, index: int, error: InputError) -> JobError:
