@@ -459,7 +459,7 @@ def _refuse_frame_inputs(job: Job, problems: _Problems) -> None:
     member = job.member
     if job.supports:
         problems.found.append(("supports", f"supports of your own {later}"))
-    elif member.supports.strip().lower() != DEFAULT_SUPPORTS:
+    elif member.supports.strip().lower() in set(SUPPORT_CASES) - {DEFAULT_SUPPORTS}:
         problems.found.append(("member.supports", f"got {member.supports!r}, which {later}"))
     elif member.support_positions is not None:
         problems.found.append(("member.support_positions", f"moving the support {later}"))
