@@ -452,21 +452,23 @@ def _distributed(
 def _refuse_frame_inputs(job: Job, problems: _Problems) -> None:
     """Until the member sheet takes frame options: name each key that needs them."""
     later = (
-        "needs the frame analysis of the member, which this version of calcsheet does not "
-        "have yet; check a cantilever fixed at z = 0 under point loads and couples, or "
-        "update calcsheet"
+        "the frame analysis of the member, which this version of calcsheet does not have "
+        "yet; check a cantilever fixed at z = 0 under point loads and couples, or update "
+        "calcsheet"
     )
     member = job.member
     if job.supports:
-        problems.found.append(("supports", f"supports of your own {later}"))
+        problems.found.append(("supports", f"supports of your own need {later}"))
     elif member.supports.strip().lower() in set(SUPPORT_CASES) - {DEFAULT_SUPPORTS}:
-        problems.found.append(("member.supports", f"got {member.supports!r}, which {later}"))
+        problems.found.append(
+            ("member.supports", f"got {member.supports!r}: this support case needs {later}")
+        )
     elif member.support_positions is not None:
-        problems.found.append(("member.support_positions", f"moving the support {later}"))
+        problems.found.append(("member.support_positions", f"moving the support needs {later}"))
     if job.distributed:
-        problems.found.append(("distributed", f"a distributed load {later}"))
+        problems.found.append(("distributed", f"a distributed load needs {later}"))
     if member.braces:
-        problems.found.append(("member.braces", f"brace points {later}"))
+        problems.found.append(("member.braces", f"brace points need {later}"))
 
 
 def _load_keys(kind: str, name: str) -> dict[str, str]:

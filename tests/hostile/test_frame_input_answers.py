@@ -11,16 +11,22 @@ from pathlib import Path
 
 import pytest
 
+from .support import OUTRIGGER
 from .test_input_answers import answer, refused_at
-
-MEMBER = ('length = "48 in"', 'length = "48 in"')
-STATIONS = ('stations = ["0 in"]\n', "")
-LOADS_END = ('[output]\nfolder = "out"', '[output]\nfolder = "out"')
 
 
 def with_member(*lines: str) -> tuple[str, str]:
-    """An edit adding ``lines`` to the demo job's [member] table."""
-    return ('length = "48 in"', 'length = "48 in"\n' + "\n".join(lines))
+    """An edit setting ``lines`` (``key = value``) in the demo job's [member] table."""
+    block = OUTRIGGER[OUTRIGGER.index('length = "48 in"') : OUTRIGGER.index("\n\n[material]")]
+    kept = block.splitlines()
+    for line in lines:
+        key = line.split("=")[0].strip()
+        kept = [old for old in kept if old.split("=")[0].strip() != key] + [line]
+    return (block, "\n".join(kept))
+
+
+# The demo job names its support case; supports of the job's own replace it.
+NO_NAMED_CASE = ('supports = "fixed-free"', "# no named case")
 
 
 def with_tables(text: str) -> tuple[str, str]:
@@ -69,20 +75,26 @@ def test_an_overhang_without_its_positions_asks_for_them(tmp_path: Path, capsys)
 
 def test_a_support_of_your_own_outside_the_member_is_named(tmp_path: Path, capsys) -> None:
     tables = '[[supports]]\nname = "base"\nz = "-6 in"\nrestrains = ["ux", "uy", "uz", "rz"]\n'
-    line = refused_at(*answer(tmp_path, capsys, with_tables(tables)), "supports[0].z")
+    line = refused_at(
+        *answer(tmp_path, capsys, NO_NAMED_CASE, with_tables(tables)), "supports[0].z"
+    )
     assert "got '-6 in' (outside the member)" in line
 
 
 def test_a_support_that_restrains_nothing_is_refused(tmp_path: Path, capsys) -> None:
     tables = '[[supports]]\nname = "base"\nz = "0 in"\nrestrains = []\n'
-    line = refused_at(*answer(tmp_path, capsys, with_tables(tables)), "supports[0].restrains")
+    line = refused_at(
+        *answer(tmp_path, capsys, NO_NAMED_CASE, with_tables(tables)), "supports[0].restrains"
+    )
     assert "a support restrains at least one motion" in line
     assert '["ux", "uy", "uz", "rz"]' in line
 
 
 def test_an_unknown_motion_lists_the_six(tmp_path: Path, capsys) -> None:
     tables = '[[supports]]\nname = "base"\nz = "0 in"\nrestrains = ["ux", "uw"]\n'
-    line = refused_at(*answer(tmp_path, capsys, with_tables(tables)), "supports[0].restrains[1]")
+    line = refused_at(
+        *answer(tmp_path, capsys, NO_NAMED_CASE, with_tables(tables)), "supports[0].restrains[1]"
+    )
     assert "'ux', 'uy', 'uz', 'rx', 'ry' or 'rz'" in line and "'uw'" in line
 
 
@@ -163,4 +175,4 @@ def test_supports_of_the_frame_analysis_are_refused_by_key_until_it_is_there(
     edits = (with_member('supports = "pinned-pinned"', 'braces = ["24 in"]'), with_tables(WIND))
     status, message = answer(tmp_path, capsys, *edits)
     for key in ("member.supports", "member.braces", "distributed"):
-        assert "needs the frame analysis of the member" in refused_at(status, message, key)
+        assert "the frame analysis of the member" in refused_at(status, message, key)

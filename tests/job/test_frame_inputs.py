@@ -8,13 +8,16 @@ points and the automatic station, read by :func:`calcsheet.build.model.member_mo
 from __future__ import annotations
 
 import inspect
+import tomllib
+from pathlib import Path
 
 import pytest
 
 import calcsheet.build.model as model_module
 from calcsheet.build.model import member_model
 from calcsheet.calcs.member import member_sheet
-from calcsheet.job import JobError, parse_job
+from calcsheet.job import JobError, job_from_data, parse_job, read_job
+from calcsheet.job.starter import STARTER
 from calcsheet.mechanics.distributed import DistributedLoad
 from calcsheet.mechanics.supports import FIXED, PINNED, Support
 from calcsheet.units import Quantity
@@ -174,3 +177,45 @@ def test_until_the_frame_analysis_is_there_auto_is_the_support(monkeypatch) -> N
     model = member_model(parse_job(job_text()))
     assert model.self_weight is True  # recorded; given to the sheet once it takes it
     assert model.sheet_arguments("auto") == {"station": Quantity(0, "ft")}
+
+
+EXAMPLES = Path(__file__).resolve().parents[2] / "examples"
+
+
+def test_the_column_bracket_demo_reads_and_asks_for_its_frame(frame_on) -> None:
+    job = read_job(EXAMPLES / "column-bracket.toml")
+    model = member_model(job)
+    options = model.frame_options
+    assert options["supports"] == "pinned-pinned" and options["gravity"] == "-z"
+    assert options["self_weight"] is True and options["braces"] == [Quantity(9, "ft")]
+    assert [load.name for load in options["distributed"]] == ["wind on column"]
+    assert model.auto_station and model.load_types == ("D", "L")
+
+
+def test_the_column_bracket_demo_is_refused_by_key_until_the_frame_is_there(
+    monkeypatch,
+) -> None:
+    monkeypatch.setattr(model_module, "FRAME_OPTIONS_ON", False)
+    with pytest.raises(JobError) as raised:
+        member_model(read_job(EXAMPLES / "column-bracket.toml"))
+    keys = [path for path, _ in raised.value.problems]
+    assert keys == ["member.supports", "distributed", "member.braces"]
+
+
+def _commented_table(text: str, header: str) -> dict:
+    """The starter's commented-out ``header`` table, uncommented and read as TOML."""
+    lines = text.split(f"# {header}\n", 1)[1].split("\n\n", 1)[0].splitlines()
+    body = "\n".join(line.removeprefix("# ").split("  #")[0] for line in lines)
+    return tomllib.loads(body)
+
+
+@pytest.mark.parametrize(
+    ("header", "key"), [("[[supports]]", "supports"), ("[[distributed]]", "distributed")]
+)
+def test_the_starters_commented_tables_are_valid_when_uncommented(header: str, key: str) -> None:
+    data = tomllib.loads(STARTER)
+    data[key] = [_commented_table(STARTER, header)]
+    if key == "supports":
+        del data["member"]["supports"]
+    job = job_from_data(data)
+    assert len(getattr(job, key)) == 1
