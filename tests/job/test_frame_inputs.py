@@ -219,3 +219,34 @@ def test_the_starters_commented_tables_are_valid_when_uncommented(header: str, k
         del data["member"]["supports"]
     job = job_from_data(data)
     assert len(getattr(job, key)) == 1
+
+
+def test_a_batch_table_sets_the_support_case_self_weight_and_stations() -> None:
+    """The batch CSV columns are job key paths: the frame keys are columns like any other."""
+    from calcsheet.build.batch import column_problem, members_from_csv
+
+    base = tomllib.loads(job_text())
+    table = (
+        "member.name,member.supports,member.self_weight,member.stations,member.braces[0]\n"
+        "C-1,pinned-pinned,false,auto,10 ft\n"
+        "C-2,fixed-free,true,auto,5 ft\n"
+    )
+    for column in table.splitlines()[0].split(","):
+        assert column_problem(column) is None, column
+    first, second = (
+        job_from_data(member.data) for member in members_from_csv(table, base, source="b.csv")
+    )
+    assert first.member.supports == "pinned-pinned" and first.member.self_weight is False
+    assert first.member.auto_station and first.member.braces == ["10 ft"]
+    assert second.member.self_weight is True and second.member.supports == "fixed-free"
+
+
+def test_a_batch_cell_that_is_not_yes_or_no_names_the_key() -> None:
+    from calcsheet.build.batch import members_from_csv
+
+    base = tomllib.loads(job_text())
+    (member,) = members_from_csv("member.self_weight\nmaybe\n", base, source="b.csv")
+    with pytest.raises(JobError) as raised:
+        job_from_data(member.data)
+    ((path, message),) = raised.value.problems
+    assert path == "member.self_weight" and "valid boolean" in message and "'maybe'" in message
