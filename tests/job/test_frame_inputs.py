@@ -250,3 +250,15 @@ def test_a_batch_cell_that_is_not_yes_or_no_names_the_key() -> None:
         job_from_data(member.data)
     ((path, message),) = raised.value.problems
     assert path == "member.self_weight" and "valid boolean" in message and "'maybe'" in message
+
+
+def test_the_inputs_hash_reads_the_frame_quantities_in_any_unit() -> None:
+    """Quantities hash in SI base units: 20 ft and 240 in are one input (1 ft = 12 in)."""
+    from calcsheet.build import inputs_hash
+
+    feet = parse_job(job_text('braces = ["10 ft"]', WIND))
+    inches = parse_job(
+        job_text('braces = ["120 in"]', WIND.replace('z_end = "20 ft"', 'z_end = "240 in"'))
+    )
+    assert inputs_hash(feet) == inputs_hash(inches)
+    assert inputs_hash(feet) != inputs_hash(parse_job(job_text('braces = ["11 ft"]', WIND)))
