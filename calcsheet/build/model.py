@@ -280,8 +280,9 @@ def member_model(job: Job, *, source: str = "job") -> MemberModel:
             )
     frame = _frame_inputs(job, length, problems)
     notes: list[str] = []
-    if section is not None and len(loads) == len(job.loads) + len(job.moments):
-        notes = _check_offsets(job, section, length, loads, problems)
+    all_built = len(frame.distributed) == len(job.distributed)
+    if section is not None and len(loads) == len(job.loads) + len(job.moments) and all_built:
+        notes = _check_offsets(job, section, length, loads, problems, frame.distributed)
     Fy, Fy_source = _yield_stress(job, problems)
     design = problems.attempt("check", lambda: design_basis(job))
     if isinstance(design, DesignBasis):
@@ -489,6 +490,7 @@ def _check_offsets(
     length: pint.Quantity,
     loads: list[PointLoad | AppliedMoment],
     problems: _Problems,
+    distributed: tuple[DistributedLoad, ...] = (),
 ) -> list[str]:
     """Refuse an offset no bracket has; return notes for the sheet on long brackets.
 
@@ -506,16 +508,23 @@ def _check_offsets(
     largest = max(size for _, size in sizes.values())
     limit = max(float(length.to(unit).m), REFUSED_OFFSET * largest)
     notes = []
-    for index, (spec, load) in enumerate(zip(job.loads, loads, strict=False)):
-        if not isinstance(load, PointLoad):
-            continue
+    placed = [
+        ("loads", "Load", index, spec, load)
+        for index, (spec, load) in enumerate(zip(job.loads, loads, strict=False))
+        if isinstance(load, PointLoad)
+    ]
+    placed += [
+        ("distributed", "Distributed load", index, spec, load)
+        for index, (spec, load) in enumerate(zip(job.distributed, distributed, strict=False))
+    ]
+    for table, kind, index, spec, load in placed:
         for key, (what, size) in sizes.items():
             offset = float(getattr(load, key).to(unit).m)
             typed = getattr(spec, key)
             if abs(offset) > limit:
                 problems.found.append(
                     (
-                        f"loads[{index}].{key}",
+                        f"{table}[{index}].{key}",
                         f"got {typed!r}; expected an offset of at most {_shown(limit, unit)} "
                         f"(the larger of the member length and {REFUSED_OFFSET:g} times the "
                         f"section's larger outside dimension, {_shown(largest, unit)}). Check the "
@@ -526,7 +535,7 @@ def _check_offsets(
                 )
             elif abs(offset) > NOTED_OFFSET * size:
                 notes.append(
-                    f"Load {spec.name!r} is applied {_shown(abs(offset), unit)} from the "
+                    f"{kind} {spec.name!r} is applied {_shown(abs(offset), unit)} from the "
                     f"centroid ({key} = {typed}), {abs(offset) / size:.3g} times the "
                     f"section {what} ({_shown(size, unit)}): the bracket or lug that carries "
                     "it, and its connection to the member, are not checked on this sheet."

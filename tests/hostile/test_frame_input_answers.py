@@ -176,3 +176,11 @@ def test_supports_of_the_frame_analysis_are_refused_by_key_until_it_is_there(
     status, message = answer(tmp_path, capsys, *edits)
     for key in ("member.supports", "member.braces", "distributed"):
         assert "the frame analysis of the member" in refused_at(status, message, key)
+
+
+def test_a_distributed_load_far_off_the_member_is_refused_as_a_point_load_is(
+    tmp_path: Path, capsys
+) -> None:
+    wind = WIND.replace('q_start = ["0.02', 'ey = "1e6 in"\nq_start = ["0.02')
+    line = refused_at(*answer(tmp_path, capsys, with_tables(wind)), "distributed[0].ey")
+    assert "got '1e6 in'; expected an offset of at most 60 in" in line
