@@ -172,7 +172,7 @@ def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str
         )
     except (ArithmeticError, ValueError) as error:
         if isinstance(error, InputError):
-            raise _placed(source, index, error) from None
+            raise _placed(source, None if model.auto_station else index, error) from None
         # Numbers beyond what floating point holds (a section of 1e-320 in, a load of
         # 1e308 kip): said plainly, with the job's name, instead of a traceback.
         raise JobError(
@@ -198,15 +198,16 @@ def _found_station(sheet: Sheet) -> str:
     return f"auto, z = {found.magnitude:g} {found.units:~}"
 
 
-def _placed(source: str, index: int, error: InputError) -> JobError:
+def _placed(source: str, index: int | None, error: InputError) -> JobError:
     """The job error for a calc input error, at the key path it most likely comes from.
 
     A station with nothing beyond it is the station's problem; anything else (a
     section the chosen standard does not cover, a sweep of an unknown load) is
-    reported against the table it comes from.
+    reported against the table it comes from. ``index`` is None for the station
+    "auto" found.
     """
     if error.field.startswith("station"):
-        path = f"member.stations[{index}]"
+        path = "member.stations" if index is None else f"member.stations[{index}]"
     elif error.field.startswith("explore"):
         path = "explore"
     else:
