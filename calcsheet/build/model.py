@@ -13,7 +13,7 @@ from __future__ import annotations
 import difflib
 import inspect
 from collections.abc import Callable
-from dataclasses import dataclass, field
+from dataclasses import dataclass
 from functools import lru_cache
 
 import pint
@@ -109,7 +109,7 @@ class MemberModel:
     distributed_types: tuple[str, ...] = ()
     self_weight: bool = False
     gravity: str = "-y"
-    braces: tuple[pint.Quantity, ...] = field(default_factory=tuple)
+    braces: tuple[pint.Quantity, ...] = ()
 
     @property
     def auto_station(self) -> bool:
@@ -147,7 +147,7 @@ class MemberModel:
         needing them was refused when the model was built).
         """
         if not FRAME_OPTIONS_ON:
-            if station == AUTO_STATION:
+            if isinstance(station, str):  # "auto"
                 station = 0 * self.length
             return {"station": station}
         return {"station": station, **self.frame_options}
@@ -273,7 +273,7 @@ def member_model(job: Job, *, source: str = "job") -> MemberModel:
         _check_positions(job, length, loads, problems)
     if len(loads) == len(job.loads) + len(job.moments) and not problems.found:
         for index, station in enumerate(stations):
-            if station == AUTO_STATION:
+            if isinstance(station, str):  # "auto": found by the sheet
                 continue
             problems.attempt(
                 f"member.stations[{index}]", lambda s=station: validate_loads(length, loads, s)
