@@ -162,6 +162,8 @@ def _set_path(data: dict[str, Any], path: str, value: str) -> None:
 
 def _list_item(annotation: Any) -> Any | None:
     """The item type of a list annotation (``list[LoadSpec] | None`` -> LoadSpec)."""
+    if typing.get_origin(annotation) is typing.Annotated:  # a list with its bounds
+        return _list_item(typing.get_args(annotation)[0])
     if typing.get_origin(annotation) is list:
         return typing.get_args(annotation)[0]
     if typing.get_origin(annotation) in (typing.Union, types.UnionType):

@@ -1,5 +1,8 @@
 """From a validated job to the model a calc takes: section, material, loads, stations.
 
+The supports, distributed loads, self-weight, brace points and the automatic
+station become the member sheet's frame options (:attr:`MemberModel.frame_options`).
+
 Every problem found while building the model (an unknown shape, a load beyond
 the member, a flange thicker than half the depth) is reported with its job-file
 key path, all at once, as a :class:`~calcsheet.job.JobError`.
@@ -7,6 +10,7 @@ key path, all at once, as a :class:`~calcsheet.job.JobError`.
 
 from __future__ import annotations
 
+import difflib
 import inspect
 from collections.abc import Callable
 from dataclasses import dataclass
@@ -18,11 +22,17 @@ from calcsheet.calcs.design import DesignBasis
 from calcsheet.engine import Revision, TitleBlock
 from calcsheet.errors import InputError
 from calcsheet.job import Job, JobError
-from calcsheet.job.schema import SectionSpec
+from calcsheet.job.schema import AUTO_STATION, SectionSpec
 from calcsheet.materials import find_grade
 from calcsheet.mechanics import applied_moment, point_load
-from calcsheet.mechanics.loads import AppliedMoment, PointLoad
+from calcsheet.mechanics.distributed import (
+    DistributedLoad,
+    check_distributed_on_member,
+    distributed_load,
+)
+from calcsheet.mechanics.loads import AppliedMoment, PointLoad, check_on_member
 from calcsheet.mechanics.statics import validate_loads
+from calcsheet.mechanics.supports import SUPPORT_CASES, Support, support, support_case
 from calcsheet.sections import (
     Section,
     angle,
@@ -53,6 +63,19 @@ FY_RANGE = (Quantity(20, "ksi"), Quantity(150, "ksi"))
 NOTED_OFFSET = 5.0
 REFUSED_OFFSET = 10.0
 
+# Whether the member sheet is given the frame options (supports, distributed loads,
+# self-weight with its gravity axis, brace points, the automatic station). The member
+# sheet takes them from the frame-solver branch (`supports`) on; until it is merged,
+# jobs that need them are refused by name, self-weight is left out and "auto" checks
+# the cantilever at its support (z = 0, the station before "auto"). MERGE: set True
+# once ``member_sheet`` takes these keyword arguments (tests/job/test_frame_inputs.py
+# fails until the two agree).
+FRAME_OPTIONS_ON = False
+
+# A cantilever fixed at z = 0 with point loads only: the sheet's behaviour without
+# frame options.
+DEFAULT_SUPPORTS = "fixed-free"
+
 _BUILDERS: dict[str, Callable[..., Section]] = {
     "plate": plate,
     "round bar": round_bar,
@@ -80,6 +103,54 @@ class MemberModel:
     design: DesignBasis
     load_types: tuple[str, ...] = ()
     notes: tuple[str, ...] = ()
+    supports: str | tuple[Support, ...] = DEFAULT_SUPPORTS
+    support_positions: tuple[pint.Quantity, ...] | None = None
+    distributed: tuple[DistributedLoad, ...] = ()
+    distributed_types: tuple[str, ...] = ()
+    self_weight: bool = False
+    gravity: str = "-y"
+    braces: tuple[pint.Quantity, ...] = ()
+
+    @property
+    def auto_station(self) -> bool:
+        """Whether the sheet finds the critical station (``stations = "auto"``)."""
+        return self.stations == (AUTO_STATION,)
+
+    @property
+    def frame_options(self) -> dict[str, object]:
+        """The member sheet's keyword arguments that differ from a cantilever under point loads.
+
+        Supports other than fixed-free at z = 0 (``supports``, ``support_positions``),
+        distributed loads with their types, self-weight with its gravity axis and
+        brace points; empty for a job of point loads on a cantilever without self-weight.
+        """
+        options: dict[str, object] = {}
+        if self.supports != DEFAULT_SUPPORTS or self.support_positions is not None:
+            options["supports"] = self.supports
+            if self.support_positions is not None:
+                options["support_positions"] = list(self.support_positions)
+        if self.distributed:
+            options["distributed"] = list(self.distributed)
+            options["distributed_types"] = list(self.distributed_types)
+        if self.self_weight:
+            options["self_weight"] = True
+            options["gravity"] = self.gravity
+        if self.braces:
+            options["braces"] = list(self.braces)
+        return options
+
+    def sheet_arguments(self, station: pint.Quantity | str) -> dict[str, object]:
+        """The member sheet's station and frame options, for one of :attr:`stations`.
+
+        Until the member sheet takes frame options (:data:`FRAME_OPTIONS_ON`), "auto"
+        is the cantilever's support, z = 0, and the options are left out (a job
+        needing them was refused when the model was built).
+        """
+        if not FRAME_OPTIONS_ON:
+            if isinstance(station, str):  # "auto"
+                station = 0 * self.length
+            return {"station": station}
+        return {"station": station, **self.frame_options}
 
 
 class _Problems:
@@ -192,20 +263,26 @@ def member_model(job: Job, *, source: str = "job") -> MemberModel:
         if couple is not None:
             loads.append(couple)
     length = parse_quantity(job.member.length, field="member.length", dimension="length")
-    stations = tuple(
-        parse_quantity(text, field="member.stations", dimension="length")
-        for text in job.member.stations
-    )
+    stations: tuple[pint.Quantity | str, ...] = (AUTO_STATION,)
+    if not job.member.auto_station:
+        stations = tuple(
+            parse_quantity(text, field="member.stations", dimension="length")
+            for text in job.member.stations
+        )
     if len(loads) == len(job.loads) + len(job.moments):
         _check_positions(job, length, loads, problems)
     if len(loads) == len(job.loads) + len(job.moments) and not problems.found:
         for index, station in enumerate(stations):
+            if isinstance(station, str):  # "auto": found by the sheet
+                continue
             problems.attempt(
                 f"member.stations[{index}]", lambda s=station: validate_loads(length, loads, s)
             )
+    frame = _frame_inputs(job, length, problems)
     notes: list[str] = []
-    if section is not None and len(loads) == len(job.loads) + len(job.moments):
-        notes = _check_offsets(job, section, length, loads, problems)
+    all_built = len(frame.distributed) == len(job.distributed)
+    if section is not None and len(loads) == len(job.loads) + len(job.moments) and all_built:
+        notes = _check_offsets(job, section, length, loads, problems, frame.distributed)
     Fy, Fy_source = _yield_stress(job, problems)
     design = problems.attempt("check", lambda: design_basis(job), _BASIS_KEYS)
     if isinstance(design, DesignBasis):
@@ -234,7 +311,165 @@ def member_model(job: Job, *, source: str = "job") -> MemberModel:
         design=design,
         load_types=tuple([spec.type for spec in job.loads] + [spec.type for spec in job.moments]),
         notes=tuple(notes),
+        supports=frame.supports,
+        support_positions=frame.support_positions,
+        distributed=frame.distributed,
+        distributed_types=tuple(spec.type for spec in job.distributed),
+        self_weight=job.member.self_weight,
+        gravity=job.member.gravity,
+        braces=frame.braces,
     )
+
+
+@dataclass(frozen=True)
+class _FrameInputs:
+    """The supports, distributed loads and brace points read from a job."""
+
+    supports: str | tuple[Support, ...] = DEFAULT_SUPPORTS
+    support_positions: tuple[pint.Quantity, ...] | None = None
+    distributed: tuple[DistributedLoad, ...] = ()
+    braces: tuple[pint.Quantity, ...] = ()
+
+
+def _frame_inputs(job: Job, length: pint.Quantity, problems: _Problems) -> _FrameInputs:
+    """Supports, distributed loads and brace points, each problem at its key path.
+
+    Positions are checked against the member only once its length is good (a bad
+    length is reported at ``member.length`` on its own).
+    """
+    length_good = length.m > 0 and not any(path == "member.length" for path, _ in problems.found)
+    supports, positions = _supports(job, length if length_good else None, problems)
+    distributed = _distributed(job, length if length_good else None, problems)
+    braces = []
+    for index, text in enumerate(job.member.braces):
+        where = parse_quantity(text, field="member.braces", dimension="length")
+        if length_good:
+            problems.attempt(
+                f"member.braces[{index}]",
+                lambda where=where, text=text: check_on_member(
+                    where, length, field="brace", shown=text
+                ),
+                {"brace": ""},
+            )
+        braces.append(where)
+    if not FRAME_OPTIONS_ON:
+        _refuse_frame_inputs(job, problems)
+    return _FrameInputs(supports, positions, distributed, tuple(braces))
+
+
+def _supports(
+    job: Job, length: pint.Quantity | None, problems: _Problems
+) -> tuple[str | tuple[Support, ...], tuple[pint.Quantity, ...] | None]:
+    """The job's own [[supports]] tables, or the named case of member.supports."""
+    if job.supports:
+        built: list[Support] = []
+        for index, spec in enumerate(job.supports):
+            prefix = f"support {spec.name}"
+            made = problems.attempt(
+                f"supports[{index}]",
+                lambda spec=spec: support(spec.name, z=spec.z, restrains=spec.restrains),
+                {f"{prefix} z": "z", f"{prefix} restrains": "restrains"},
+            )
+            if isinstance(made, Support) and length is not None:
+                problems.attempt(
+                    f"supports[{index}].z",
+                    lambda made=made, spec=spec: check_on_member(
+                        made.z, length, field="z", shown=spec.z
+                    ),
+                    {"z": ""},
+                )
+            if isinstance(made, Support):
+                built.append(made)
+        return tuple(built), None
+    typed = job.member.supports
+    case = typed.strip().lower()
+    if case not in SUPPORT_CASES:
+        close = difflib.get_close_matches(case, SUPPORT_CASES, n=2, cutoff=0.5)
+        hint = " or ".join(f'"{name}"' for name in close)
+        problems.found.append(
+            (
+                "member.supports",
+                f"got {typed!r}; expected one of {', '.join(SUPPORT_CASES)}"
+                + (f": did you mean {hint}?" if hint else "")
+                + " (or your own [[supports]] tables, each with name, z and restrains)",
+            )
+        )
+        return DEFAULT_SUPPORTS, None
+    texts = job.member.support_positions
+    positions = (
+        None
+        if texts is None
+        else tuple(
+            parse_quantity(text, field="member.support_positions", dimension="length")
+            for text in texts
+        )
+    )
+    if length is not None:
+        try:
+            support_case(case, length, positions=texts)
+        except InputError as error:
+            where = error.field.replace("support positions", "member.support_positions")
+            problems.found.append((where, str(error).removeprefix(f"{error.field}: ")))
+    return case, positions
+
+
+def _distributed(
+    job: Job, length: pint.Quantity | None, problems: _Problems
+) -> tuple[DistributedLoad, ...]:
+    """The [[distributed]] loads, each checked to lie on the member with a length of its own."""
+    made_loads = []
+    for index, spec in enumerate(job.distributed):
+        prefix = f"distributed load {spec.name}"
+        keys = {
+            f"{prefix} {key}": key for key in ("z_start", "z_end", "ex", "ey", "q_start", "q_end")
+        }
+        for which in ("q_start", "q_end"):
+            keys |= {f"{prefix} {which} q{axis}": f"{which}[{i}]" for i, axis in enumerate("xyz")}
+        made = problems.attempt(
+            f"distributed[{index}]",
+            lambda spec=spec: distributed_load(
+                spec.name,
+                z_start=spec.z_start,
+                z_end=spec.z_end,
+                q_start=tuple(spec.q_start),
+                q_end=tuple(spec.q_end) if spec.q_end is not None else None,
+                ex=spec.ex,
+                ey=spec.ey,
+            ),
+            keys,
+        )
+        if not isinstance(made, DistributedLoad):
+            continue
+        if length is not None:
+            problems.attempt(
+                f"distributed[{index}]",
+                lambda made=made: check_distributed_on_member(made, length),
+                keys,
+            )
+        made_loads.append(made)
+    return tuple(made_loads)
+
+
+def _refuse_frame_inputs(job: Job, problems: _Problems) -> None:
+    """Until the member sheet takes frame options: name each key that needs them."""
+    later = (
+        "the frame analysis of the member, which this version of calcsheet does not have "
+        "yet; check a cantilever fixed at z = 0 under point loads and couples, or update "
+        "calcsheet"
+    )
+    member = job.member
+    if job.supports:
+        problems.found.append(("supports", f"supports of your own need {later}"))
+    elif member.supports.strip().lower() in set(SUPPORT_CASES) - {DEFAULT_SUPPORTS}:
+        problems.found.append(
+            ("member.supports", f"got {member.supports!r}: this support case needs {later}")
+        )
+    elif member.support_positions is not None:
+        problems.found.append(("member.support_positions", f"moving the support needs {later}"))
+    if job.distributed:
+        problems.found.append(("distributed", f"a distributed load needs {later}"))
+    if member.braces:
+        problems.found.append(("member.braces", f"brace points need {later}"))
 
 
 def _load_keys(kind: str, name: str) -> dict[str, str]:
@@ -255,6 +490,7 @@ def _check_offsets(
     length: pint.Quantity,
     loads: list[PointLoad | AppliedMoment],
     problems: _Problems,
+    distributed: tuple[DistributedLoad, ...] = (),
 ) -> list[str]:
     """Refuse an offset no bracket has; return notes for the sheet on long brackets.
 
@@ -272,16 +508,23 @@ def _check_offsets(
     largest = max(size for _, size in sizes.values())
     limit = max(float(length.to(unit).m), REFUSED_OFFSET * largest)
     notes = []
-    for index, (spec, load) in enumerate(zip(job.loads, loads, strict=False)):
-        if not isinstance(load, PointLoad):
-            continue
+    placed = [
+        ("loads", "Load", index, spec, load)
+        for index, (spec, load) in enumerate(zip(job.loads, loads, strict=False))
+        if isinstance(load, PointLoad)
+    ]
+    placed += [
+        ("distributed", "Distributed load", index, spec, load)
+        for index, (spec, load) in enumerate(zip(job.distributed, distributed, strict=False))
+    ]
+    for table, kind, index, spec, load in placed:
         for key, (what, size) in sizes.items():
             offset = float(getattr(load, key).to(unit).m)
             typed = getattr(spec, key)
             if abs(offset) > limit:
                 problems.found.append(
                     (
-                        f"loads[{index}].{key}",
+                        f"{table}[{index}].{key}",
                         f"got {typed!r}; expected an offset of at most {_shown(limit, unit)} "
                         f"(the larger of the member length and {REFUSED_OFFSET:g} times the "
                         f"section's larger outside dimension, {_shown(largest, unit)}). Check the "
@@ -292,7 +535,7 @@ def _check_offsets(
                 )
             elif abs(offset) > NOTED_OFFSET * size:
                 notes.append(
-                    f"Load {spec.name!r} is applied {_shown(abs(offset), unit)} from the "
+                    f"{kind} {spec.name!r} is applied {_shown(abs(offset), unit)} from the "
                     f"centroid ({key} = {typed}), {abs(offset) / size:.3g} times the "
                     f"section {what} ({_shown(size, unit)}): the bracket or lug that carries "
                     "it, and its connection to the member, are not checked on this sheet."
@@ -316,13 +559,15 @@ def _check_load_types(job: Job, design: DesignBasis, problems: _Problems) -> Non
         if allowed is ASCE_TYPES
         else "with EN 1990, G is the permanent load and Q the variable load"
     )
-    for table, specs in (("loads", job.loads), ("moments", job.moments)):
+    tables = (("loads", job.loads), ("moments", job.moments), ("distributed", job.distributed))
+    for table, specs in tables:
+        what = "distributed load" if table == "distributed" else table[:-1]
         for index, spec in enumerate(specs):
             if spec.type not in allowed:
                 problems.found.append(
                     (
                         f"{table}[{index}].type",
-                        f"{table[:-1]} {spec.name!r} has type {spec.type!r}, which the "
+                        f"{what} {spec.name!r} has type {spec.type!r}, which the "
                         f"{standard} combinations do not use; expected one of "
                         f"{', '.join(allowed)} ({meaning})",
                     )

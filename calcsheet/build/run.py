@@ -145,7 +145,9 @@ def build_sheets(job: Job, *, source: str = "job") -> BuildResult:
         sheet.trace = trace
         stem = f"{base}-rev{revision}"
         label = ""
-        if len(model.stations) > 1:
+        if model.auto_station:
+            label = _found_station(sheet)
+        elif len(model.stations) > 1:
             stem += "-z" + safe_stem(f"{station.magnitude:g}{station.units:~}")
             label = f"z = {station.magnitude:g} {station.units:~}"
         sheets.append(BuiltSheet(sheet, stem, station=label))
@@ -158,7 +160,6 @@ def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str
             model.section,
             model.loads,
             length=model.length,
-            station=station,
             Fy=model.Fy,
             Fy_reference=model.Fy_source,
             title=job.sheet.title,
@@ -167,10 +168,11 @@ def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str
             design=model.design,
             load_types=model.load_types,
             detail=job.sheet.detail,
+            **model.sheet_arguments(station),  # the station and the frame options
         )
     except (ArithmeticError, ValueError) as error:
         if isinstance(error, InputError):
-            raise _placed(source, index, error) from None
+            raise _placed(source, None if model.auto_station else index, error) from None
         # Numbers beyond what floating point holds (a section of 1e-320 in, a load of
         # 1e308 kip): said plainly, with the job's name, instead of a traceback.
         raise JobError(
@@ -187,15 +189,25 @@ def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str
     return sheet
 
 
-def _placed(source: str, index: int, error: InputError) -> JobError:
+def _found_station(sheet: Sheet) -> str:
+    """``auto, z = 0 in``: the station the sheet found itself (its input ``z_s``)."""
+    try:
+        found = sheet.value("z_s")
+    except KeyError:
+        return "auto"
+    return f"auto, z = {found.magnitude:g} {found.units:~}"
+
+
+def _placed(source: str, index: int | None, error: InputError) -> JobError:
     """The job error for a calc input error, at the key path it most likely comes from.
 
     A station with nothing beyond it is the station's problem; anything else (a
     section the chosen standard does not cover, a sweep of an unknown load) is
-    reported against the table it comes from.
+    reported against the table it comes from. ``index`` is None for the station
+    "auto" found.
     """
     if error.field.startswith("station"):
-        path = f"member.stations[{index}]"
+        path = "member.stations" if index is None else f"member.stations[{index}]"
     elif error.field.startswith("explore"):
         path = "explore"
     else:

@@ -26,6 +26,7 @@ QUANTITY_KEYS = frozenset(
     {
         "length", "stations", "z", "magnitude", "angle", "components", "ex", "ey",
         "Mx", "My", "Mz", "Fy", "Fu", "Lb", "sweep_step",
+        "support_positions", "braces", "z_start", "z_end", "q_start", "q_end",
         "b", "d", "D", "OD", "t", "H", "B", "bf", "tf", "tw", "bf_bottom", "tf_bottom",
     }
 )  # fmt: skip

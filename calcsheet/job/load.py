@@ -70,6 +70,11 @@ def _message(error: dict[str, Any]) -> str:
     return message
 
 
+def _is_branch(location: tuple[str | int, ...], kind: str) -> bool:
+    """Whether a union's branch of ``kind`` (pydantic names it ``literal['auto']``) reported."""
+    return any(isinstance(part, str) and part.startswith(kind) for part in location)
+
+
 def _problems(error: ValidationError) -> list[tuple[str, str]]:
     seen: dict[tuple[str, str], None] = {}
     for item in error.errors():
@@ -81,10 +86,14 @@ def _problems(error: ValidationError) -> list[tuple[str, str]]:
         section_branch = "SectionSpec" in branches and item["type"] == "model_type"
         if section_branch and isinstance(item.get("input"), str):
             continue
+        # "auto" or a list (member.stations): a list reports only its own branch.
+        if _is_branch(item["loc"], "literal[") and not isinstance(item.get("input"), str):
+            continue
         location = tuple(
             part
             for part in item["loc"]
             if part not in ("str", "constrained-str", "SectionSpec", "function-after")
+            and not (isinstance(part, str) and part.startswith("list["))
         )
         seen.setdefault((key_path(location), _message(item)), None)
     return list(seen)

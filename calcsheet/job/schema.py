@@ -41,6 +41,10 @@ MAX_MOMENT = Quantity(1_000_000, "kip*ft")
 # The longest member: a cantilever of 1,000 ft (305 m) is beyond any this tool checks;
 # 1e30 in overflowed in the statics with a message naming no key.
 MAX_MEMBER_LENGTH = Quantity(1_000, "ft")
+# The largest distributed load: 10,000 kip/ft (146 MN/m) is far beyond what a member
+# checked here carries along its length, so a larger value is a slip of unit or digit
+# (common practice, no source).
+MAX_LINE_LOAD = Quantity(10_000, "kip/ft")
 
 # The unit a bare number most likely lacks, for the message that asks for it.
 _UNIT_EXAMPLES = {
@@ -49,6 +53,7 @@ _UNIT_EXAMPLES = {
     "moment": ("kip*ft", "kN*m"),
     "stress": ("ksi", "MPa"),
     "angle": ("deg",),
+    "force per length": ("kip/ft", "kN/m"),
 }
 
 
@@ -84,9 +89,12 @@ def _quantity(dimension: str, largest: Quantity | None = None) -> AfterValidator
 
 
 def _too_large(dimension: str, largest: Quantity) -> str:
-    us, si = {"force": ("kip", "kN"), "moment": ("kip*ft", "kN*m"), "length": ("ft", "m")}[
-        dimension
-    ]
+    us, si = {
+        "force": ("kip", "kN"),
+        "moment": ("kip*ft", "kN*m"),
+        "length": ("ft", "m"),
+        "force per length": ("kip/ft", "kN/m"),
+    }[dimension]
     return (
         f"a {dimension} of at most {largest.to(us).m:,.0f} {us} "
         f"({largest.to(si).m:,.0f} {si}) in size; check the number and its unit"
@@ -101,6 +109,7 @@ Angle = Annotated[str, _quoted("angle"), _quantity("angle")]
 LoadForce = Annotated[str, _quoted("force"), _quantity("force", MAX_FORCE)]
 LoadMoment = Annotated[str, _quoted("moment"), _quantity("moment", MAX_MOMENT)]
 MemberLength = Annotated[str, _quoted("length"), _quantity("length", MAX_MEMBER_LENGTH)]
+LineLoad = Annotated[str, _quoted("force per length"), _quantity("force per length", MAX_LINE_LOAD)]
 
 _ISO_DATE = re.compile(r"\d{4}-\d{2}-\d{2}")
 
@@ -194,30 +203,118 @@ class SectionSpec(_Table):
     tf_bottom: Length | None = None
 
 
+# The station the member sheet finds by itself: the one of the largest utilization along
+# the member (``stations = "auto"``, the default).
+AUTO_STATION = "auto"
+
+# The motions a support restrains: translations along and rotations about x, y, z.
+Motion = Literal["ux", "uy", "uz", "rx", "ry", "rz"]
+# The direction gravity acts in, for the self-weight: -y for a beam with its web
+# vertical, -z for a column standing on its base at z = 0.
+GravityAxis = Literal["+x", "-x", "+y", "-y", "+z", "-z"]
+
+
+def _stations(value: Any) -> Any:
+    """``"auto"`` (any case) or a list of stations; other text says what to write."""
+    if isinstance(value, str) and value.strip().lower() == AUTO_STATION:
+        return AUTO_STATION
+    if not isinstance(value, list):
+        raise ValueError(
+            f'write "{AUTO_STATION}" (the critical station is found along the member) or a '
+            'list of stations from the support, such as ["0 in", "24 in"]'
+        )
+    return value
+
+
 class MemberSpec(_Table):
-    """The cantilever: name, section (a catalog designation or dimensions), length, stations."""
+    """The member: name, section (a catalog designation or dimensions), length, stations.
+
+    ``stations``: "auto" (the default: the sheet finds the critical station) or a list.
+    ``supports``: a named case (fixed-free, pinned-pinned, fixed-pinned, fixed-fixed,
+    overhang, two-span; checked when the model is built), with ``support_positions``
+    to move its supports; or the job's ``[[supports]]`` tables, not both.
+    ``self_weight`` (on by default, load type D of the member's own weight) acts along
+    ``gravity``; ``braces`` are the stations where the member is braced.
+    """
 
     name: str = Field(min_length=1, max_length=80)
     section: str | SectionSpec
     length: MemberLength
-    stations: list[Length] = Field(default_factory=lambda: ["0 in"], min_length=1, max_length=20)
+    stations: Annotated[list[Length], Field(min_length=1, max_length=20)] | Literal["auto"] = Field(
+        default=AUTO_STATION, union_mode="left_to_right"
+    )
+    supports: str = Field(default="fixed-free", min_length=1, max_length=40)
+    support_positions: list[Length] | None = Field(default=None, min_length=1, max_length=10)
+    self_weight: bool = True
+    gravity: GravityAxis = "-y"
+    braces: list[Length] = Field(default_factory=list, max_length=50)
+
+    @field_validator("stations", mode="before")
+    @classmethod
+    def _auto_or_list(cls, value: Any) -> Any:
+        return _stations(value)
 
     @field_validator("stations")
     @classmethod
-    def _each_station_once(cls, stations: list[str]) -> list[str]:
-        # Compared in one unit to 9 significant figures, so "12 in" repeats "1 ft".
-        seen: dict[str, int] = {}
-        for index, text in enumerate(stations):
-            inches = parse_quantity(text, field="station", dimension="length").to("in").m
-            key = f"{inches:.9g}"
-            if key in seen:
-                first = seen[key]
-                raise ValueError(
-                    f"stations[{index}] = {text!r} repeats stations[{first}] = "
-                    f"{stations[first]!r}; each station is checked once: remove the repeat"
-                )
-            seen[key] = index
-        return stations
+    def _each_station_once(cls, stations: list[str] | str) -> list[str] | str:
+        if isinstance(stations, str):
+            return stations
+        return _each_once(stations, "stations", "station")
+
+    @field_validator("braces")
+    @classmethod
+    def _each_brace_once(cls, braces: list[str]) -> list[str]:
+        return _each_once(braces, "braces", "brace point")
+
+    @property
+    def auto_station(self) -> bool:
+        """Whether the sheet finds the critical station itself."""
+        return self.stations == AUTO_STATION
+
+
+def _each_once(texts: list[str], key: str, what: str) -> list[str]:
+    """Refuse a station given twice, compared in one unit to 9 significant figures.
+
+    So "12 in" repeats "1 ft".
+    """
+    seen: dict[str, int] = {}
+    for index, text in enumerate(texts):
+        inches = parse_quantity(text, field=what, dimension="length").to("in").m
+        found = f"{inches:.9g}"
+        if found in seen:
+            first = seen[found]
+            raise ValueError(
+                f"{key}[{index}] = {text!r} repeats {key}[{first}] = {texts[first]!r}; "
+                f"each {what} is given once: remove the repeat"
+            )
+        seen[found] = index
+    return texts
+
+
+class SupportSpec(_Table):
+    """A support of the member's own making: where it is and which motions it restrains."""
+
+    name: str = Field(min_length=1, max_length=80)
+    z: Length
+    restrains: list[Motion] = Field(min_length=1, max_length=6)
+
+    @field_validator("restrains", mode="before")
+    @classmethod
+    def _holds_something(cls, value: Any) -> Any:
+        if isinstance(value, list) and not value:
+            raise ValueError(
+                'a support restrains at least one motion: list them, such as ["ux", "uy", '
+                '"uz", "rz"] for a pin (ux, uy, uz translations; rx, ry, rz rotations)'
+            )
+        return value
+
+    @field_validator("restrains")
+    @classmethod
+    def _each_motion_once(cls, motions: list[str]) -> list[str]:
+        twice = sorted({motion for motion in motions if motions.count(motion) > 1})
+        if twice:
+            raise ValueError(f"each motion is listed once; listed twice: {', '.join(twice)}")
+        return motions
 
 
 class MaterialSpec(_Table):
@@ -325,6 +422,23 @@ class MomentSpec(_Table):
     Mz: LoadMoment = "0 kip*ft"
 
 
+class DistributedSpec(_Table):
+    """A distributed load from z_start to z_end: force per length (qx, qy, qz) at each end.
+
+    ``q_end`` defaults to ``q_start`` (a uniform load); ``ex``, ``ey`` offset its line
+    of action from the centroid, as for a point load.
+    """
+
+    name: str = Field(min_length=1, max_length=80)
+    type: LoadType = "D"
+    z_start: Length
+    z_end: Length
+    q_start: list[LineLoad] = Field(min_length=3, max_length=3)
+    q_end: list[LineLoad] | None = Field(default=None, min_length=3, max_length=3)
+    ex: Length = "0 in"
+    ey: Length = "0 in"
+
+
 class OutputSpec(_Table):
     """Where the sheet goes; not part of the inputs hash."""
 
@@ -349,16 +463,38 @@ class Job(_Table):
     explore: ExploreSpec = ExploreSpec()
     loads: list[LoadSpec] = Field(default_factory=list, max_length=200)
     moments: list[MomentSpec] = Field(default_factory=list, max_length=200)
+    distributed: list[DistributedSpec] = Field(default_factory=list, max_length=200)
+    supports: list[SupportSpec] = Field(default_factory=list, max_length=20)
     output: OutputSpec = OutputSpec()
 
     @model_validator(mode="after")
     def _needs_a_load(self) -> Job:
-        if not self.loads and not self.moments:
-            raise ValueError("give at least one [[loads]] or [[moments]] entry")
-        names = [entry.name for entry in (*self.loads, *self.moments)]
+        if not self.loads and not self.moments and not self.distributed:
+            raise ValueError("give at least one [[loads]], [[moments]] or [[distributed]] entry")
+        names = [entry.name for entry in (*self.loads, *self.moments, *self.distributed)]
         twice = sorted({name for name in names if names.count(name) > 1})
         if twice:
             raise ValueError(f"load names must differ; used twice: {', '.join(twice)}")
+        return self
+
+    @model_validator(mode="after")
+    def _supports_one_way(self) -> Job:
+        named = "supports" in self.member.model_fields_set
+        if self.supports and named:
+            raise ValueError(
+                f"the supports are given twice: member.supports = {self.member.supports!r} "
+                "and [[supports]] tables; give a named case in member.supports or your own "
+                "[[supports]] tables, not both"
+            )
+        if self.supports and self.member.support_positions is not None:
+            raise ValueError(
+                "member.support_positions moves the supports of a named case "
+                "(member.supports); [[supports]] tables give each support's own z"
+            )
+        names = [entry.name for entry in self.supports]
+        twice = sorted({name for name in names if names.count(name) > 1})
+        if twice:
+            raise ValueError(f"support names must differ; used twice: {', '.join(twice)}")
         return self
 
 
@@ -377,6 +513,8 @@ def known_keys() -> set[str]:
         ExploreSpec,
         LoadSpec,
         MomentSpec,
+        DistributedSpec,
+        SupportSpec,
         OutputSpec,
     ):
         keys.update(model.model_fields)

@@ -3,8 +3,8 @@
 STARTER = """\
 # calcsheet job file: one member checked for combined stresses.
 # Quantities are text with their unit: "6.5 kip", "1.2 m", "35 deg", "50 ksi".
-# Axes: the member runs along z from the fixed support (z = 0) to the free end;
-# x to the right and y up in the cross-section, origin at the centroid.
+# Axes: the member runs along z from z = 0 (the fixed support of a cantilever) to
+# its length; x to the right and y up in the cross-section, origin at the centroid.
 version = 1
 
 [sheet]
@@ -36,7 +36,21 @@ section = "W8X31"            # a catalog designation, or a table of dimensions:
 # kinds: plate (b, d), round bar (D), round HSS (OD, t), rectangular HSS (H, B, t),
 #        I (d, bf, tw, tf), channel (d, bf, tw, tf), angle (d, b, t), tee (d, bf, tw, tf)
 length = "60 in"             # support to free end
-stations = ["0 in"]          # where the section is checked, from the support
+stations = ["0 in"]          # where the section is checked, from z = 0; or "auto" (the
+                             # default): the critical station, found along the member
+supports = "fixed-free"      # fixed at z = 0, free at the end; or "pinned-pinned",
+                             # "fixed-pinned", "fixed-fixed", "overhang", "two-span"
+# support_positions = ["0 in", "60 in"]  # moves the case's supports (an overhang needs them)
+self_weight = true           # the member's own weight, a load of type D (the default)
+gravity = "-y"               # the way gravity acts: "-y" for a beam, "-z" for a column
+# braces = ["30 in"]         # brace points along the member, from z = 0
+
+# Supports of your own, instead of member.supports: where, and which motions each
+# restrains (ux, uy, uz: translations; rx, ry, rz: rotations about x, y, z).
+# [[supports]]
+# name = "base"
+# z = "0 in"
+# restrains = ["ux", "uy", "uz", "rx", "ry", "rz"]
 
 [material]
 grade = "ASTM A992"          # prefills Fy; or give Fy = "50 ksi" (wins over the grade)
@@ -62,6 +76,18 @@ ey = "-4 in"
 # name = "side"
 # z = "30 in"
 # components = ["0.3 kip", "0 kip", "0 kip"]
+
+# Distributed loads: force per length (qx, qy, qz) from z_start to z_end, varying
+# linearly from q_start to q_end (q_end left out: uniform), at offsets ex, ey:
+# [[distributed]]
+# name = "wind on arm"
+# type = "W"
+# z_start = "0 in"
+# z_end = "60 in"
+# q_start = ["0.02 kip/ft", "0 kip/ft", "0 kip/ft"]
+# q_end = ["0.04 kip/ft", "0 kip/ft", "0 kip/ft"]
+# ex = "0 in"
+# ey = "0 in"
 
 # Concentrated couples (right-hand rule about x, y, z):
 # [[moments]]

@@ -230,6 +230,8 @@ class ListQuantityField(QuantityField):
     def check(self) -> str | None:
         parts = self.value
         if not parts:
+            if self.optional:  # an empty list: none (brace points, support positions)
+                return None
             return f"give at least one {self.dimension}, such as '0 in'"
         for number, text in enumerate(parts, start=1):
             try:
@@ -338,6 +340,16 @@ class ToggleField(Field):
             value=value,
             description=label,
             style={"description_width": label_width, "button_width": "auto"},
+        )
+        super().__init__(label, box)
+
+
+class CheckField(Field):
+    """Yes or no, as a tick box (self-weight included)."""
+
+    def __init__(self, label: str, value: bool, *, width: str = "30em") -> None:
+        box = widgets.Checkbox(
+            value=value, description=label, indent=False, layout=widgets.Layout(width=width)
         )
         super().__init__(label, box)
 

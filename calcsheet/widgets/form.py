@@ -1,11 +1,12 @@
 """The member form: every entry of a job file, a live preview of the sheet, and the file buttons.
 
 The entries follow the order an engineer works in: the project and its title
-block, the member and its section, the material, the geometry, the loads, the
-check; then the files. Every change is checked at once box by box; once typing
-pauses the whole job is built exactly as ``calcsheet build`` builds it, and the
-preview shows the result. While an entry has a problem the preview keeps the last
-good result and says so.
+block, the member and its section, the material, the geometry (length, stations or
+"auto", supports, brace points), the loads (self-weight, point loads, couples,
+distributed loads), the check; then the files. Every change is checked at once
+box by box; once typing pauses the whole job is built exactly as ``calcsheet
+build`` builds it, and the preview shows the result. While an entry has a problem
+the preview keeps the last good result and says so.
 
 Save never replaces the user's work silently. Over a file the form did not write
 (the hand-written job it was opened from, say) Save first asks: it shows a
@@ -40,11 +41,19 @@ from calcsheet.build import BuildResult, build_sheets, output_folder, write_outp
 from calcsheet.engine import Sheet
 from calcsheet.errors import CalcsheetError
 from calcsheet.job import Job, JobError, job_from_data, parse_job, read_job
-from calcsheet.job.schema import LoadSpec, MomentSpec, RevisionSpec
+from calcsheet.job.schema import (
+    AUTO_STATION,
+    DistributedSpec,
+    LoadSpec,
+    MomentSpec,
+    RevisionSpec,
+)
 from calcsheet.job.starter import STARTER
+from calcsheet.mechanics.supports import SUPPORT_CASES
 from calcsheet.units import parse_quantity
 from calcsheet.widgets.checks import CheckChooser
 from calcsheet.widgets.fields import (
+    CheckField,
     ChoiceField,
     Field,
     ListQuantityField,
@@ -62,7 +71,14 @@ from calcsheet.widgets.jobfile import (
 )
 from calcsheet.widgets.material import MaterialPanel
 from calcsheet.widgets.preview import Preview, governing_sheet
-from calcsheet.widgets.rows import LoadRow, MomentRow, RevisionRow, RowList
+from calcsheet.widgets.rows import (
+    AXES,
+    DistributedRow,
+    LoadRow,
+    MomentRow,
+    RevisionRow,
+    RowList,
+)
 from calcsheet.widgets.schedule import Debouncer
 from calcsheet.widgets.section import SectionPicker
 
@@ -80,6 +96,9 @@ TITLE_BLOCK_LABELS = {
 HEADING_STYLE = (
     "font-weight:bold;font-size:1.05em;border-bottom:1px solid #8a8f98;margin:0.8em 0 0.3em 0;"
 )
+# The supports choice when the job gives [[supports]] tables of its own: the form keeps
+# them as they are (they are edited in the job file).
+OWN_SUPPORTS = "own supports ([[supports]] in the job file)"
 STATUS_OK = "color:#1f6f3f"
 STATUS_BAD = "color:#9b1c1c"
 
@@ -172,6 +191,26 @@ class MemberForm:
         self.stations = ListQuantityField(
             "stations z", "length", placeholder="from the support, e.g. 0 in, 24 in", width="26em"
         )
+        self.auto_station = CheckField("find the critical station along the member (auto)", True)
+        self.auto_station.observe(self._show_stations)
+        self.supports = ChoiceField(
+            "supports", [(case, case) for case in SUPPORT_CASES], "fixed-free", width="26em"
+        )
+        self._own_supports: list[dict[str, Any]] = []
+        self.support_positions = ListQuantityField(
+            "support at z",
+            "length",
+            optional=True,
+            placeholder="empty: the case's own (0 and L...)",
+            width="26em",
+        )
+        self.braces = ListQuantityField(
+            "braced at z", "length", optional=True, placeholder="none; e.g. 24 in", width="26em"
+        )
+        self.self_weight = CheckField("self-weight (the member's own weight, type D)", True)
+        self.gravity = ChoiceField(
+            "gravity along", [(axis, axis) for axis in AXES], "-y", width="17em"
+        )
         self.loads = RowList(
             "loads", "Point loads", LoadRow, self._new_load_spec, changed, add_label="Add a load"
         )
@@ -182,6 +221,14 @@ class MemberForm:
             self._new_moment_spec,
             changed,
             add_label="Add a couple",
+        )
+        self.distributed = RowList(
+            "distributed",
+            "Distributed loads",
+            DistributedRow,
+            self._new_distributed_spec,
+            changed,
+            add_label="Add a distributed load",
         )
         self.check = CheckChooser(changed)
         self.out_folder = TextField("output folder", width="26em")
@@ -196,6 +243,12 @@ class MemberForm:
             self.member_name,
             self.length,
             self.stations,
+            self.auto_station,
+            self.supports,
+            self.support_positions,
+            self.braces,
+            self.self_weight,
+            self.gravity,
             self.out_folder,
             self.out_stem,
             self.paper,
@@ -247,10 +300,16 @@ class MemberForm:
                 self.material.box,
                 _heading("4 · Geometry"),
                 self.length.box,
+                self.auto_station.box,
                 self.stations.box,
+                self.supports.box,
+                self.support_positions.box,
+                self.braces.box,
                 _heading("5 · Loads (member along z from the support; x right, y up)"),
+                widgets.HBox([self.self_weight.box, self.gravity.box]),
                 self.loads.box,
                 self.moments.box,
+                self.distributed.box,
                 _heading("6 · Check"),
                 self.check.box,
                 _heading("7 · Files"),
@@ -316,9 +375,21 @@ class MemberForm:
             self.section.fill(job.member.section)
             self.material.fill(job.material, job.sheet.units)
             self.length.set(job.member.length)
-            self.stations.set(list(job.member.stations))
+            auto = job.member.auto_station
+            self.auto_station.set(auto)
+            self.stations.set([] if auto else list(job.member.stations))
+            self._show_stations()
+            self._own_supports = [spec.model_dump() for spec in job.supports]
+            own = [(OWN_SUPPORTS, OWN_SUPPORTS)] if job.supports else []
+            self.supports.widget.options = [(case, case) for case in SUPPORT_CASES] + own
+            self.supports.set(OWN_SUPPORTS if job.supports else job.member.supports)
+            self.support_positions.set(list(job.member.support_positions or []))
+            self.braces.set(list(job.member.braces))
+            self.self_weight.set(job.member.self_weight)
+            self.gravity.set(job.member.gravity)
             self.loads.fill(list(job.loads))
             self.moments.fill(list(job.moments))
+            self.distributed.fill(list(job.distributed))
             self.check.fill(job.check)
             self.check.explore.fill(job.explore)
             self.out_folder.set(job.output.folder)
@@ -332,8 +403,10 @@ class MemberForm:
         """Every entry shown now, by job-file key path; ``""`` is the form's own message.
 
         A few keys are the form's own, not the job file's: ``member.section.source``
-        (catalog or custom dimensions), ``member.section.family`` and
-        ``loads[i].direction`` (magnitude + angle, or components).
+        (catalog or custom dimensions), ``member.section.family``,
+        ``loads[i].direction`` (magnitude + angle, or components),
+        ``member.auto_station`` (stations = "auto") and ``distributed[i].varies``
+        (uniform, or q at both ends).
         """
         found: dict[str, Field] = {"": self.general, "sheet.units": self.units}
         found["sheet.title"] = self.title
@@ -344,9 +417,17 @@ class MemberForm:
         found |= self.section.fields()
         found["member.length"] = self.length
         found["member.stations"] = self.stations
+        found["member.auto_station"] = self.auto_station
+        found["member.supports"] = self.supports
+        found["supports"] = self.supports  # the job's own [[supports]]: kept as they are
+        found["member.support_positions"] = self.support_positions
+        found["member.braces"] = self.braces
+        found["member.self_weight"] = self.self_weight
+        found["member.gravity"] = self.gravity
         found |= self.material.fields()
         found |= self.loads.fields()
         found |= self.moments.fields()
+        found |= self.distributed.fields()
         found |= self.check.fields()
         found |= {
             "output.folder": self.out_folder,
@@ -360,9 +441,12 @@ class MemberForm:
         return [
             self.length,
             self.stations,
+            self.support_positions,
+            self.braces,
             *self.section.quantity_fields(),
             *self.loads.quantity_fields(),
             *self.moments.quantity_fields(),
+            *self.distributed.quantity_fields(),
             *self.check.quantity_fields(),
         ]
 
@@ -383,14 +467,25 @@ class MemberForm:
             "name": self.member_name.value,
             "section": self.section.data(),
             "length": self.length.value,
-            "stations": self.stations.value,
+            "stations": AUTO_STATION if self.auto_station.value else self.stations.value,
         }
+        if self.supports.value != OWN_SUPPORTS:
+            data["member"]["supports"] = self.supports.value
+            if self.support_positions.value:
+                data["member"]["support_positions"] = self.support_positions.value
+        if self.braces.value:
+            data["member"]["braces"] = self.braces.value
+        data["member"] |= {"self_weight": self.self_weight.value, "gravity": self.gravity.value}
         data["material"] = self.material.data()
         data["check"] = self.check.data()
         data["explore"] = self.check.explore.data()
         data["loads"] = self.loads.data()
         if self.moments.rows:
             data["moments"] = self.moments.data()
+        if self.distributed.rows:
+            data["distributed"] = self.distributed.data()
+        if self.supports.value == OWN_SUPPORTS:
+            data["supports"] = [dict(entry) for entry in self._own_supports]
         data["output"] = {
             "folder": self.out_folder.value,
             "stem": self.out_stem.value,
@@ -485,6 +580,31 @@ class MemberForm:
         return MomentSpec(
             name=f"couple {number}", z=zero, Mx=f"0 {unit}", My=f"0 {unit}", Mz=f"0 {unit}"
         )
+
+    def _new_distributed_spec(self, index: int) -> DistributedSpec:
+        """A new distributed load: over the whole member, 0.1 kip/ft (or 1 kN/m) along -y."""
+        names = {row.name.value for row in self.distributed.rows}
+        number = index + 1
+        while f"line load {number}" in names:
+            number += 1
+        si = self.units.value == "SI"
+        zero = "0 mm" if si else "0 in"
+        try:
+            parse_quantity(self.length.value, field="length", dimension="length")
+            end = self.length.value
+        except CalcsheetError:
+            end = zero
+        unit = "kN/m" if si else "kip/ft"
+        q = [f"0 {unit}", f"{'-1' if si else '-0.1'} {unit}", f"0 {unit}"]
+        return DistributedSpec(
+            name=f"line load {number}", z_start=zero, z_end=end, q_start=q, ex=zero, ey=zero
+        )
+
+    def _show_stations(self, _change: Any = None) -> None:
+        """The stations box only while the stations are given (not "auto")."""
+        auto = bool(self.auto_station.value)
+        self.stations.optional = auto  # not checked while hidden
+        self.stations.box.layout.display = "none" if auto else None
 
     def _new_revision_spec(self, _index: int) -> RevisionSpec:
         marks = [row.mark.value for row in self.revisions.rows]

@@ -56,7 +56,10 @@ def key_results_html(result: BuildResult, *, stale: bool = False) -> str:
         # Read from the sheet itself: the JSON results (every value in SI) are not
         # needed for the preview and cost a pint conversion per value.
         governing = built.sheet.governing_check()
-        where = "z = " + html.escape(stations[index]) if index < len(stations) else ""
+        if result.job.member.auto_station:  # "auto, z = 12 ft": the station the sheet found
+            where = html.escape(built.station)
+        else:
+            where = "z = " + html.escape(stations[index]) if index < len(stations) else ""
         if governing is None:
             rows.append("<tr>" + _cells("td", where, "", "no checks", "") + "</tr>")
             continue

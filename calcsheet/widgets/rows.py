@@ -1,4 +1,4 @@
-"""Tables of rows with add and remove buttons: loads, couples and revisions.
+"""Tables of rows with add and remove buttons: loads, couples, distributed loads, revisions.
 
 A row's fields are named by their job-file key inside the row ("magnitude", "z");
 the list prefixes them with the row's place ("loads[0].magnitude"), so a problem
@@ -12,7 +12,7 @@ from typing import Any, Protocol
 
 import ipywidgets as widgets
 
-from calcsheet.job.schema import LoadSpec, MomentSpec, RevisionSpec
+from calcsheet.job.schema import DistributedSpec, LoadSpec, MomentSpec, RevisionSpec
 from calcsheet.standards.combinations import LOAD_TYPES
 from calcsheet.widgets.fields import (
     ChoiceField,
@@ -26,6 +26,8 @@ from calcsheet.widgets.fields import (
 
 POLAR = "magnitude + angle"
 COMPONENTS = "components"
+UNIFORM = "uniform"
+LINEAR = "start to end"
 AXES = ["+x", "-x", "+y", "-y", "+z", "-z"]
 ROW_LABEL = "5.5em"
 ROW_BOX = "15em"
@@ -226,6 +228,103 @@ class MomentRow:
 
     def data(self) -> dict[str, Any]:
         return {key: field.value for key, field in self.fields().items()}
+
+
+def _line_load(label: str, value: str) -> QuantityField:
+    return QuantityField(label, "force per length", value, width=ROW_BOX, label_width=ROW_LABEL)
+
+
+class DistributedRow:
+    """A distributed load: name and type, from z_start to z_end, (qx, qy, qz) at each end.
+
+    "uniform" gives q at the start only (the job file's q_end left out); "start to
+    end" shows q at the end too, the load varying linearly between.
+    """
+
+    def __init__(self, spec: DistributedSpec) -> None:
+        self.name = TextField("name", spec.name, width="20em", label_width=ROW_LABEL)
+        self.type = ComboField("type", list(LOAD_TYPES), spec.type, width="10em", label_width="3em")
+        self.type.widget.tooltip = "; ".join(f"{key}: {text}" for key, text in LOAD_TYPES.items())
+        self.z_start = _length("z start", spec.z_start)
+        self.z_end = _length("z end", spec.z_end)
+        self.varies = ToggleField(
+            "q is",
+            [UNIFORM, LINEAR],
+            UNIFORM if spec.q_end is None else LINEAR,
+            label_width=ROW_LABEL,
+        )
+        self.q_start = [
+            _line_load(f"q{axis}", text) for axis, text in zip("xyz", spec.q_start, strict=True)
+        ]
+        ends = spec.q_end if spec.q_end is not None else spec.q_start
+        self.q_end = [
+            _line_load(f"q{axis} end", text) for axis, text in zip("xyz", ends, strict=True)
+        ]
+        self.ex = _length("ex", spec.ex)
+        self.ey = _length("ey", spec.ey)
+        self.remove = _remove_button("distributed load")
+        self.slot = MessageSlot("this distributed load")
+        self._end_box = _wrap(*(field.box for field in self.q_end))
+        self._shown_end = widgets.VBox()
+        self.box = widgets.VBox(
+            [
+                _wrap(self.name.box, self.type.box, self.remove),
+                _wrap(self.z_start.box, self.z_end.box),
+                self.varies.box,
+                _wrap(*(field.box for field in self.q_start)),
+                self._shown_end,
+                _wrap(self.ex.box, self.ey.box),
+                self.slot.box,
+            ],
+            layout=ROW_STYLE,
+        )
+        self.varies.observe(self._show_end)
+        self._show_end()
+
+    def _show_end(self, _change: Any = None) -> None:
+        self._shown_end.children = [self._end_box] if self.varies.value == LINEAR else []
+
+    def fields(self) -> dict[str, Field]:
+        fields: dict[str, Field] = {
+            "name": self.name,
+            "type": self.type,
+            "z_start": self.z_start,
+            "z_end": self.z_end,
+            "varies": self.varies,
+        }
+        fields |= {f"q_start[{i}]": field for i, field in enumerate(self.q_start)}
+        if self.varies.value == LINEAR:
+            fields |= {f"q_end[{i}]": field for i, field in enumerate(self.q_end)}
+        return fields | {"ex": self.ex, "ey": self.ey}
+
+    def every_field(self) -> list[Field]:
+        """Every entry, shown or not (the hidden end values keep theirs)."""
+        return [
+            self.name,
+            self.type,
+            self.z_start,
+            self.z_end,
+            self.varies,
+            *self.q_start,
+            *self.q_end,
+            self.ex,
+            self.ey,
+        ]
+
+    def quantity_fields(self) -> list[QuantityField]:
+        return [self.z_start, self.z_end, *self.q_start, *self.q_end, self.ex, self.ey]
+
+    def data(self) -> dict[str, Any]:
+        data: dict[str, Any] = {
+            "name": self.name.value,
+            "type": self.type.value,
+            "z_start": self.z_start.value,
+            "z_end": self.z_end.value,
+            "q_start": [field.value for field in self.q_start],
+        }
+        if self.varies.value == LINEAR:
+            data["q_end"] = [field.value for field in self.q_end]
+        return data | {"ex": self.ex.value, "ey": self.ey.value}
 
 
 class RevisionRow:
