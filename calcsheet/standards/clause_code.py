@@ -44,11 +44,6 @@ def _086ab2f9163d829e242f(E, F_y):
     return 5.7*numpy.sqrt(E/F_y)
 
 
-def _092d55d30ca725cb932a(F_cr):
-    # AISC 360-22 Eq. H3-9: Nominal stress, buckling
-    return F_cr
-
-
 def _095dc1363414c6727ceb(lam_r, lam, F_y):
     # AISC 360-22 Eq. E7-5, Table E7.1 case (a): Elastic local buckling stress, stiffened elements except walls of square and rectangular HSS (c2 = 1.31)
     return 1.7161*F_y*lam_r**2/lam**2
@@ -192,6 +187,11 @@ def _3a3fe7cc1dbd0f233257(E, F_y):
 def _3dd3202a8c28b52cb272(E, F_y):
     # AISC 360-22 Table B4.1b Case 17: Limit λp, flange of a rectangular HSS, flexure
     return 1.12*numpy.sqrt(E/F_y)
+
+
+def _3e6240a336d5a5b6112e(f_a, F_ca, f_b, F_cb):
+    # AISC 360-22 Section H3.3(c), Eq. H3-9: Buckling under the compressive normal stress
+    return f_b/F_cb + f_a/F_ca
 
 
 def _3fb4ae6c2547534b9412(E, F_y):
@@ -726,7 +726,6 @@ FUNCTIONS = {
     "0429c11d2458d362675c": _0429c11d2458d362675c,
     "0839fff909ccaabe4193": _0839fff909ccaabe4193,
     "086ab2f9163d829e242f": _086ab2f9163d829e242f,
-    "092d55d30ca725cb932a": _092d55d30ca725cb932a,
     "095dc1363414c6727ceb": _095dc1363414c6727ceb,
     "0ef822dbee9a4e6e5af3": _0ef822dbee9a4e6e5af3,
     "11c913d3ba6c08a6f16f": _11c913d3ba6c08a6f16f,
@@ -756,6 +755,7 @@ FUNCTIONS = {
     "360a3ce6dc79299771c7": _360a3ce6dc79299771c7,
     "3a3fe7cc1dbd0f233257": _3a3fe7cc1dbd0f233257,
     "3dd3202a8c28b52cb272": _3dd3202a8c28b52cb272,
+    "3e6240a336d5a5b6112e": _3e6240a336d5a5b6112e,
     "3fb4ae6c2547534b9412": _3fb4ae6c2547534b9412,
     "43e583211c0b74309c01": _43e583211c0b74309c01,
     "44437356c4f5d32105c7": _44437356c4f5d32105c7,

@@ -213,9 +213,9 @@ def _torsion_scope(kind: str, demands: Demands) -> str:
         if demands.T_r is None:
             return "Torsion (H3) is not checked here."
         return "Torsion: H3.1 and H3.2 with the torque T_r."
-    if demands.stresses is None:
+    if demands.stresses is None or demands.T_r is None:
         return "Torsion (H3) is not checked here."
-    return "Torsion: H3.3 with the point stresses of the section."
+    return "Torsion: H3.3 with the point stresses of the section under the torque T_r."
 
 
 def _check_scope(kind: str, values: dict, inputs: MemberInputs, name: str) -> None:
@@ -356,8 +356,11 @@ def _write_torsion(
             sp.Integer(1),
             reference="AISC 360-22 Section H3.2, Eq. H3-6",
         )
-    elif kind not in HSS_KINDS and demands.stresses is not None:
-        rows = write_open_section_stresses(w, demands.stresses)
+    elif kind not in HSS_KINDS and demands.stresses is not None and demands.T_r is not None:
+        terms = InteractionTerms(
+            demands.P_r, P_c, demands.M_rx, demands.M_ry, demands.V_rx, demands.V_ry, eta_H1
+        )
+        rows = write_open_section_stresses(w, strengths, demands.stresses, demands.T_r, terms)
         w.heading("Torsion checks", 2)
         for key, (demand, capacity, reference) in rows.items():
             w.check(key, CHECK_TITLES[key], demand, capacity, reference=reference)

@@ -12,7 +12,9 @@ from __future__ import annotations
 from dataclasses import dataclass
 from typing import Any
 
-from calcsheet.engine.procedure import Value, Writer
+import sympy as sp
+
+from calcsheet.engine.procedure import Candidate, Value, Writer
 from calcsheet.standards.aisc360 import torsion
 from calcsheet.standards.aisc360.member_common import Strengths
 from calcsheet.standards.aisc360.writing import write_available
@@ -148,19 +150,44 @@ def write_hss_torsion(
     return T_abs, T_c
 
 
-def write_open_section_stresses(w: Writer, stresses: PointStressDemands) -> dict[str, tuple]:
-    """H3.3 for a non-HSS member: (demand, available stress) of each check by key."""
+def write_open_section_stresses(
+    w: Writer,
+    strengths: Strengths,
+    stresses: PointStressDemands,
+    T_r: Value,
+    terms: InteractionTerms,
+) -> dict[str, tuple]:
+    """H3.3 for a non-HSS member: (demand, capacity, reference) of each check by key.
+
+    The section applies to members subjected to torsion: with no torque (|Tr| at most
+    1e-9 of |Mrx| + |Mry|, the round-off of statics) every demand is zero.
+    """
     stress = w.unit("stress")
     F_y = w["F_y"]
     w.heading("Torsion and combined stress (AISC 360-22 Section H3.3)", 2)
     w.text(
-        "A non-HSS member: the required normal stress fn and shear stress fv are the largest "
-        "over the stress points of the section from the elastic analysis above (N, M_x, M_y, "
-        "shear V·Q/(I·b) and torsion). " + WARPING_NOTE + " Buckling (Eq. H3-9): the "
-        "compressive normal stress against Fcr taken as the member's critical stress of "
-        "Chapter E written above (flexural or torsional buckling, AISC 360-22 Sections E3 "
-        "and E4); shear buckling of the elements is the subject of Chapter G, checked above."
+        "A non-HSS member under torsion: the required normal stress fn and shear stress fv "
+        "are the largest over the stress points of the section from the elastic analysis "
+        "above (N, M_x, M_y, shear V·Q/(I·b) and torsion). " + WARPING_NOTE + " The section "
+        "applies to members subjected to torsion: without a torque (|T_r| ≤ 10⁻⁹·(|M_rx| + "
+        "|M_ry|), the round-off of statics) the demands below are zero and Chapters E to H1 "
+        "above govern alone."
     )
+    if w.prints:
+        w.text(
+            "Buckling (H3.3(c), Fn = Fcr, Eq. H3-9) leaves Fcr to analysis. Here the "
+            "compressive normal stress at the worst point is split into the stress of the "
+            "axial force fa, taken to the available compressive stress of Chapter E "
+            "(Fca = P_c/A_g, flexural or torsional buckling as written above), and the rest fb "
+            "(flexure and torsion), taken to the available flexural stress of Chapter F "
+            "(Fcb = M_c/S, the smaller of the two axes: lateral-torsional and local buckling); "
+            "their ratios are added as in Eq. H2-1. The lightest-section search, where asked "
+            "for, does not repeat these stress checks for each catalog section."
+        )
+    T_abs = w.absolute(T_r)
+    round_off = 1e-9 * (w.absolute(terms.M_rx) + w.absolute(terms.M_ry))
+    present, absent = T_abs > round_off, T_abs <= round_off
+    zero = 0 * stresses.sigma_max
     F_n_y = w.clause(torsion.normal_yielding_stress, "F_n_Ty", F_y, unit=stress)
     F_c_y = write_available(
         w, "F_c_Ty", F_n_y, torsion.TORSION_OPEN, "Available normal stress, yielding", unit=stress
@@ -169,34 +196,73 @@ def write_open_section_stresses(w: Writer, stresses: PointStressDemands) -> dict
     F_c_v = write_available(
         w, "F_c_Tv", F_n_v, torsion.TORSION_OPEN, "Available shear stress, yielding", unit=stress
     )
-    F_n_cr = w.clause(torsion.buckling_stress, "F_n_Tcr", w["F_cr"], unit=stress)
-    F_c_cr = write_available(
-        w, "F_c_Tcr", F_n_cr, torsion.TORSION_OPEN, "Available stress, buckling", unit=stress
-    )
     sigma_max, sigma_min = stresses.sigma_max, stresses.sigma_min
-    f_n = w.step(
+    reference = "AISC 360-22 Section H3.3"
+    f_n = w.branch(
         "f_n",
-        w.larger(w.absolute(sigma_max), w.absolute(sigma_min)),
-        "Required normal stress, the largest magnitude over the points",
+        [(w.larger(w.absolute(sigma_max), w.absolute(sigma_min)), present), (zero, True)],
+        "Required normal stress, the largest magnitude over the points (zero without torque)",
         unit=stress,
-        reference="AISC 360-22 Section H3.3",
+        reference=reference,
     )
-    f_c = w.step(
-        "f_nc",
-        w.larger(-sigma_min, 0 * sigma_min),
-        "Required compressive normal stress (zero when no point is in compression)",
-        unit=stress,
-        reference="AISC 360-22 Section H3.3",
-    )
-    f_v = w.step(
+    f_v = w.branch(
         "f_v",
-        stresses.tau_max,
-        "Required shear stress, the largest over the points",
+        [(stresses.tau_max, present), (zero, True)],
+        "Required shear stress, the largest over the points (zero without torque)",
         unit=stress,
-        reference="AISC 360-22 Section H3.3",
+        reference=reference,
     )
+    f_c = w.branch(
+        "f_nc",
+        [(w.larger(-sigma_min, zero), present), (zero, True)],
+        "Required compressive normal stress, the largest over the points (zero without "
+        "torque or compression)",
+        unit=stress,
+        reference=reference,
+    )
+    P_r = terms.P_r
+    f_a = w.branch(
+        "f_na",
+        [(zero, absent), (-P_r / w["A_g"], P_r < 0 * P_r), (zero, True)],
+        "Compressive stress of the axial force (zero in tension or without torque)",
+        unit=stress,
+        reference=reference,
+    )
+    f_b = w.step(
+        "f_nb",
+        w.larger(f_c - f_a, zero),
+        "The rest of the compressive normal stress (flexure and torsion)",
+        unit=stress,
+        reference=reference,
+    )
+    F_ca = w.step(
+        "F_c_Ta",
+        strengths.P_c_c / w["A_g"],
+        "Available compressive stress, buckling (Chapter E)",
+        unit=stress,
+        reference="AISC 360-22 Sections E1, H3.3(c)",
+    )
+    F_cb = w.smallest(
+        "F_c_Tb",
+        [
+            Candidate(
+                f"about {axis}",
+                lambda axis=axis: w.step(
+                    f"F_c_Tb_{axis}",
+                    getattr(strengths, f"M_c_{axis}") / w[f"S_{axis}"],
+                    f"Available flexural stress about {axis}, M_c/S (Chapter F)",
+                    unit=stress,
+                    reference="AISC 360-22 Sections F1, H3.3(c)",
+                ),
+            )
+            for axis in ("x", "y")
+        ],
+        "Available flexural stress, the smaller of the two axes",
+        stress,
+    )
+    eta = w.clause(torsion.buckling_stress_ratio, "eta_T", f_a, F_ca, f_b, F_cb)
     return {
         "torsion_normal_yielding": (f_n, F_c_y, "AISC 360-22 Section H3.3(a), Eq. H3-7"),
         "torsion_shear_yielding": (f_v, F_c_v, "AISC 360-22 Section H3.3(b), Eq. H3-8"),
-        "torsion_buckling": (f_c, F_c_cr, "AISC 360-22 Section H3.3(c), Eq. H3-9"),
+        "torsion_buckling": (eta, sp.Integer(1), "AISC 360-22 Section H3.3(c), Eq. H3-9"),
     }

@@ -7,7 +7,9 @@
   which applies when Tr > 0.2·Tc;
 * H3.3: non-HSS members (open sections), where the required normal and shear
   stresses of an elastic analysis are compared with Fy (Eq. H3-7), 0.6·Fy (Eq. H3-8)
-  and the buckling stress Fcr (Eq. H3-9).
+  and the buckling stress Fcr (Eq. H3-9), which the Specification leaves to analysis:
+  here Chapter E's for the axial part of the compressive stress and Chapter F's for the
+  rest, their ratios added as in Eq. H2-1 (:func:`buckling_stress_ratio`).
 
 φT = 0.90 (LRFD) and ΩT = 1.67 (ASD) for all of them (Sections H3.1 and H3.3).
 """
@@ -122,7 +124,14 @@ def shear_yielding_stress(F_y: sp.Basic) -> sp.Expr:
     return 0.6 * F_y
 
 
-@clause("AISC 360-22 Eq. H3-9", "Nominal stress, buckling")
-def buckling_stress(F_cr: sp.Basic) -> sp.Expr:
-    """Fn = Fcr (AISC 360-22 Eq. H3-9), the buckling stress of the section."""
-    return F_cr
+@clause("AISC 360-22 Section H3.3(c), Eq. H3-9", "Buckling under the compressive normal stress")
+def buckling_stress_ratio(f_a: sp.Basic, F_ca: sp.Basic, f_b: sp.Basic, F_cb: sp.Basic) -> sp.Expr:
+    """fa/Fca + fb/Fcb: Fn = Fcr (AISC 360-22 Eq. H3-9) with the buckling stress of the
+    section split by action, as the stress ratios of Eq. H2-1 add them.
+
+    ``f_a`` the compressive stress of the axial force, ``F_ca`` its available buckling
+    stress (Chapter E); ``f_b`` the rest of the compressive normal stress at the worst
+    point, ``F_cb`` its available stress in flexure (Chapter F, lateral-torsional and
+    local buckling). Must not exceed 1.0.
+    """
+    return f_a / F_ca + f_b / F_cb
