@@ -354,7 +354,7 @@ def _write_torsion(
             CHECK_TITLES["torsion_interaction"],
             w["eta_H3"],
             sp.Integer(1),
-            reference="AISC 360-22 Section H3.2, Eq. H3-6",
+            reference="AISC 360-22 Section H3.2, Eq. H3-6 (Chapter H1 when Tr <= 0.2Tc)",
         )
     elif kind not in HSS_KINDS and demands.stresses is not None and demands.T_r is not None:
         terms = InteractionTerms(

@@ -58,6 +58,8 @@ class LateralBracing:
     cantilever: bool = False
     load_height: str | None = None
     tip_restraint: str | None = None
+    # An I-shape: the load height matters (top flange loading is destabilising).
+    flanged: bool = False
 
     @property
     def uses_table(self) -> bool:
@@ -128,7 +130,7 @@ def lateral_bracing(
                 "the cantilever effective lengths by load height and tip restraint are for "
                 "I-shapes (flanges)",
             )
-    return LateralBracing(Lb_given, Cb_given, cantilever, height, tip)
+    return LateralBracing(Lb_given, Cb_given, cantilever, height, tip, kind in FLANGED_KINDS)
 
 
 def write_bracing_inputs(w: Writer, inputs: MemberInputs, bracing: LateralBracing) -> None:
@@ -154,7 +156,7 @@ def write_bracing_inputs(w: Writer, inputs: MemberInputs, bracing: LateralBracin
             w.sheet.add_reference(SSRC_GUIDE)
             w.text(
                 "Caution: Lb is the effective length of a cantilever built in at its support, "
-                f"for a load on the {bracing.height} and a tip {bracing.tip} "
+                f"for a load on the {bracing.height} with the tip {bracing.tip} "
                 f"(k = {bracing.factor:g}; the SSRC Guide, Chapter 5, after Nethercot), "
                 "used in Chapter F with Cb = 1.0. The factors assume full lateral, torsional "
                 "and warping restraint at the support; a support that lets the member twist or "
@@ -181,7 +183,7 @@ def _warn_length(w: Writer, inputs: MemberInputs, bracing: LateralBracing) -> No
             "unbraced length longer than the member is an effective length, which Chapter F "
             "does not define."
         )
-    if bracing.cantilever and not bracing.Lb_given:
+    if bracing.cantilever and bracing.flanged and not bracing.Lb_given:
         w.text(
             "Caution: on a cantilever, Lb = L is unconservative for a load applied on the top "
             "flange of an I-shape (the SSRC Guide, Chapter 5, gives effective lengths up to "
