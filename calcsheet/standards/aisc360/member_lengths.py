@@ -144,6 +144,10 @@ def write_bracing_inputs(w: Writer, inputs: MemberInputs, bracing: LateralBracin
             _factor_description(bracing),
             reference=SSRC_REFERENCE,
             dimension="dimensionless",
+            fixed=(
+                "read from the cantilever table by the load height and the tip restraint: "
+                "change those, or give L_b"
+            ),
         )
         w.step(
             "L_b",
