@@ -199,6 +199,11 @@ def _warn_length(w: Writer, inputs: MemberInputs, bracing: LateralBracing) -> No
 def _write_cb(w: Writer, inputs: MemberInputs, bracing: LateralBracing) -> Value:
     if bracing.Cb_given:
         description = "Lateral-torsional buckling modification factor: given"
+    elif bracing.cantilever and bracing.tip_restraint not in (None, "free"):
+        description = (
+            "Lateral-torsional buckling modification factor: defaulted (1.0, the least "
+            "Eq. F1-1 gives, with the cantilever's effective length)"
+        )
     elif bracing.cantilever:
         description = (
             "Lateral-torsional buckling modification factor: defaulted (1.0 for a cantilever "
