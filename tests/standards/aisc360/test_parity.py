@@ -49,6 +49,13 @@ def _members():
             "Lb": f"{length * float(rng.uniform(0.3, 1.0)):.3f} ft",
             "Cb": float(rng.choice([1.0, 1.14, 1.67])),
         }
+        if family == "W" and index % 3 == 0:
+            # Lb defaulted to the cantilever's effective length (load height, tip restraint).
+            del options["Lb"]
+            options["load_height"] = ("top flange", "shear centre", "bottom flange")[index % 9 // 3]
+            options["tip_restraint"] = ("free", "laterally braced", "torsionally restrained")[
+                index % 4 % 3
+            ]
         method = str(rng.choice(["LRFD", "ASD"]))
         scale = float(rng.uniform(0.2, 3.0))
         rows = []
