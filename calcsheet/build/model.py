@@ -646,6 +646,8 @@ def design_basis(job: Job) -> DesignBasis:
         K=check.K,
         Lb=parse_quantity(check.Lb, field="check.Lb", dimension="length") if check.Lb else None,
         Cb=check.Cb,
+        load_height=check.load_height,
+        tip_restraint=check.tip_restraint,
         national_annex=check.national_annex,
         gamma_M0=check.gamma_M0,
         gamma_M1=check.gamma_M1,

@@ -53,7 +53,12 @@ class DesignBasis:
     factor_of_safety: float = 1.67
     K: float | None = None  # effective length factor; AISC 2.1, EN 2.0 when None
     Lb: pint.Quantity | None = None
-    Cb: float = 1.0
+    Cb: float | None = None  # None: 1.0, labelled defaulted on the sheet
+    # Cantilever lateral-torsional buckling (AISC, I-shapes): where the load acts on the
+    # section ("top flange", "shear centre", "bottom flange") and the tip's restraint
+    # ("free", "laterally braced", "torsionally restrained"); None: not given.
+    load_height: str | None = None
+    tip_restraint: str | None = None
     S_DS: float | None = None
     reverse_lateral: bool = False  # wind and earthquake also reversed
     imposed_category: str = "A"  # EN 1990 Table A1.1
@@ -79,6 +84,14 @@ class DesignBasis:
         self.national  # noqa: B018 (refuses an unknown set or a partial factor out of range)
         if self.K is not None and not (math.isfinite(self.K) and self.K > 0):
             raise InputError("check K", self.K, "a positive effective length factor")
+        from calcsheet.standards.aisc360.member_lengths import (
+            load_height_choice,
+            tip_restraint_choice,
+        )
+
+        # The spellings the checks read ("shear center" becomes "shear centre").
+        object.__setattr__(self, "load_height", load_height_choice(self.load_height))
+        object.__setattr__(self, "tip_restraint", tip_restraint_choice(self.tip_restraint))
         if self.lightest_in and standard.search is None:
             searchable = [name for name in KINDS if design_standard(name).search is not None]
             raise InputError(

@@ -168,15 +168,35 @@ def _aisc_arguments(basis: DesignBasis, Fy: pint.Quantity, length: pint.Quantity
         "K": basis.effective_length_factor,
         "Lb": basis.Lb,
         "Cb": basis.Cb,
+        # The member sheet's model: fixed at z = 0, free at the tip.
+        "cantilever": True,
+        "load_height": basis.load_height,
+        "tip_restraint": basis.tip_restraint,
     }
 
 
-def _aisc_demands(forces: np.ndarray):
-    from calcsheet.standards.aisc360 import DemandArrays
+def _aisc_demands(forces: np.ndarray, section: Section | None = None):
+    """The demands of each row of forces; with ``section``, the point stresses for H3.3
+    (the member sheet's own stress model) unless it is an HSS (H3.1 reads the torque)."""
+    from calcsheet.standards.aisc360 import DemandArrays, PointStressDemands
+    from calcsheet.standards.aisc360.member_torsion import HSS_KINDS
+    from calcsheet.standards.aisc360.section_data import section_kind
 
+    stresses = None
+    if section is not None and section_kind(section.family) not in HSS_KINDS:
+        unit = section.length_unit
+        metres = float(Quantity(1.0, unit).to("m").m)
+        to_pa = float(Quantity(1.0, f"N/{unit}**2").to("Pa").m)
+        points = stress_model(section, unit).stresses(forces / [1, 1, 1, metres, metres, metres])
+        stresses = PointStressDemands(
+            points.sigma.max(axis=-1) * to_pa,
+            points.sigma.min(axis=-1) * to_pa,
+            points.tau.max(axis=-1) * to_pa,
+        )
     return DemandArrays(
-        P_r=forces[:, 0], M_rx=forces[:, 4], M_ry=forces[:, 5], V_rx=forces[:, 1], V_ry=forces[:, 2]
-    )
+        P_r=forces[:, 0], M_rx=forces[:, 4], M_ry=forces[:, 5], V_rx=forces[:, 1],
+        V_ry=forces[:, 2], T_r=forces[:, 3], stresses=stresses,
+    )  # fmt: skip
 
 
 # Sections are built once per design (and cached by the job builder), so their AISC
@@ -199,7 +219,9 @@ def _aisc_evaluate(section, forces, basis, Fy, length) -> Evaluation:
     from calcsheet.standards.aisc360 import aisc_checks_numeric
 
     checks = aisc_checks_numeric(
-        _section_table(section), _aisc_demands(forces), **_aisc_arguments(basis, Fy, length)
+        _section_table(section),
+        _aisc_demands(forces, section),
+        **_aisc_arguments(basis, Fy, length),
     )
     return {key: values[0] for key, values in checks.items()}, "governing AISC 360-22 check"
 
@@ -234,10 +256,12 @@ def _aisc_titles() -> Mapping[str, str]:
 
 
 def _aisc_write(context: CheckContext) -> list[Check]:
-    from calcsheet.standards.aisc360 import Demands, Steel, write_aisc_checks
+    from calcsheet.standards.aisc360 import Demands, PointStressDemands, Steel, write_aisc_checks
 
-    forces, basis = context.forces, context.basis
+    forces, basis, points = context.forces, context.basis, context.points
     Fy, length = context.material
+    arguments = _aisc_arguments(basis, Fy, length)
+    arguments["material"] = Steel(F_y=Fy, grade=basis.grade or "steel (F_y as given)")
     return write_aisc_checks(
         context.sheet,
         context.section,
@@ -247,13 +271,12 @@ def _aisc_write(context: CheckContext) -> list[Check]:
             M_ry=forces["M_y"],
             V_rx=forces["V_x"],
             V_ry=forces["V_y"],
+            T_r=forces["T"],
+            stresses=PointStressDemands(
+                points["sigma_max"], points["sigma_min"], points["tau_gov"]
+            ),
         ),
-        method=basis.method,
-        material=Steel(F_y=Fy, grade=basis.grade or "steel (F_y as given)"),
-        length=length,
-        K=basis.effective_length_factor,
-        Lb=basis.Lb,
-        Cb=basis.Cb,
+        **arguments,
     )
 
 

@@ -363,7 +363,12 @@ class CheckSpec(_Table):
     ) = None
     K: float | None = Field(default=None, gt=0, le=10)
     Lb: Length | None = None
-    Cb: float = Field(default=1.0, ge=1.0, le=3.0)
+    Cb: float | None = Field(default=None, ge=1.0, le=3.0)  # None: defaulted, and said so
+    # Cantilever lateral-torsional buckling of I-shapes (AISC): spellings checked with
+    # the design basis ("top flange", "shear centre", "bottom flange"; "free",
+    # "laterally braced", "torsionally restrained").
+    load_height: str | None = Field(default=None, min_length=1, max_length=40)
+    tip_restraint: str | None = Field(default=None, min_length=1, max_length=40)
     # National choices (EN): a named set (the set's names are checked with the design
     # basis) and single values overridden; None takes the set's value.
     national_annex: str = Field(default="EN recommended values", min_length=1, max_length=80)

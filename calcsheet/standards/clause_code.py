@@ -24,6 +24,11 @@ def _02edf9672d435a483665(E, F_y):
     return 1.0*numpy.sqrt(E/F_y)
 
 
+def _02f1d2811f39b7ec8635(F_y):
+    # AISC 360-22 Eq. H3-7: Nominal stress, yielding under normal stress
+    return F_y
+
+
 def _0429c11d2458d362675c(N_c, A, M, W_el, h, c):
     # EN 1993-1-1 Table 5.2 (sheet 1): End stress ratio ψ of an internal part
     return numpy.select([numpy.greater(N_c/A, -c*abs(M)/(W_el*h)),True], [(-c*abs(M)/(W_el*h) + N_c/A)/(c*abs(M)/(W_el*h) + N_c/A),-1], default=numpy.nan)
@@ -57,6 +62,11 @@ def _11c913d3ba6c08a6f16f(C_b, E, L_b, r_ts, J, c, S_x, h_o):
 def _1226452d5ae3a903cf87(M_y):
     # AISC 360-22 Eq. F10-1: Nominal flexural strength, yielding
     return 1.5*M_y
+
+
+def _13aaf77b4ecc4782305d(E, L, D, D_t):
+    # AISC 360-22 Eq. H3-2a: Torsional buckling stress of a round HSS, length-dependent
+    return 1.23*E/(D_t**(5/4)*numpy.sqrt(L/D))
 
 
 def _13ef280319349a572351(eps):
@@ -114,9 +124,19 @@ def _27522fc680246d1a9232(b, t):
     return b/t
 
 
+def _2910791acf975b049344(F_cr, C):
+    # AISC 360-22 Eq. H3-1: Nominal torsional strength of an HSS
+    return C*F_cr
+
+
 def _2b82d3179344a75017b7(A_g, h, h_e, b, b_e, t):
     # AISC 360-22 Section E7.1: Effective area: Ag less the ineffective widths
     return A_g - t*(2*b - 2*b_e) - t*(2*h - 2*h_e)
+
+
+def _2cacbdee24ad514d39f1(D, t):
+    # AISC 360-22 Section H3.1, User Note: Torsional constant of a round HSS
+    return (1/2)*numpy.pi*t*(D - t)**2
 
 
 def _2d02a653481b5f241f7d(A, b, t_f, t_w, r, h_w, eta):
@@ -144,6 +164,11 @@ def _34a384cad20da7fa7fc6(sigma_x, tau, f_y, gamma_M0):
     return gamma_M0**2*sigma_x**2/f_y**2 + 3*gamma_M0**2*tau**2/f_y**2
 
 
+def _3531dc15afa1c3c380c1(F_y):
+    # AISC 360-22 Eq. H3-8: Nominal stress, shear yielding
+    return 0.6*F_y
+
+
 def _35be6253a3612eaaede0(E, F_y, L_v, D, D_t):
     # AISC 360-22 Eq. G5-2a, G5-2b: Shear critical stress of a round HSS
     return functools.reduce(numpy.minimum, [0.6*F_y, functools.reduce(numpy.maximum, [0.78*E/D_t**(3/2), 1.6*E/(D_t**(5/4)*numpy.sqrt(L_v/D))])])
@@ -162,6 +187,11 @@ def _3a3fe7cc1dbd0f233257(E, F_y):
 def _3dd3202a8c28b52cb272(E, F_y):
     # AISC 360-22 Table B4.1b Case 17: Limit λp, flange of a rectangular HSS, flexure
     return 1.12*numpy.sqrt(E/F_y)
+
+
+def _3e6240a336d5a5b6112e(f_a, F_ca, f_b, F_cb):
+    # AISC 360-22 Section H3.3(c), Eq. H3-9: Buckling under the compressive normal stress
+    return f_b/F_cb + f_a/F_ca
 
 
 def _3fb4ae6c2547534b9412(E, F_y):
@@ -394,6 +424,11 @@ def _9b9bd93673a09d933586(eps, alpha):
     return numpy.select([numpy.greater(alpha, 0.5),True], [396*eps/(13*alpha - 1),36*eps/alpha], default=numpy.nan)
 
 
+def _a0259eb1464452636c95(E, D_t):
+    # AISC 360-22 Eq. H3-2b: Torsional buckling stress of a round HSS
+    return 0.6*E/D_t**(3/2)
+
+
 def _a1d811c244c23a656593(M_p, F_y, S, lam, lam_rf, E, S_e):
     # AISC 360-22 Eq. F7-2, F7-3: Nominal flexural strength, flange local buckling
     return numpy.select([numpy.less_equal(lam, lam_rf),True], [functools.reduce(numpy.minimum, [M_p, M_p - (-F_y*S + M_p)*(3.57*lam*numpy.sqrt(F_y/E) - 4.0)]),F_y*S_e], default=numpy.nan)
@@ -484,6 +519,11 @@ def _b3c7f45661e0b04d42c4(chi, A, f_y, gamma_M1):
     return A*chi*f_y/gamma_M1
 
 
+def _b461767123fab5da53ca(P_r, P_c, M_rx, M_cx, M_ry, M_cy, v_ratio, T_r, T_c, eta_H1):
+    # AISC 360-22 Eq. H3-6: Interaction of torsion, shear, flexure and axial force
+    return numpy.select([numpy.greater(T_r, 0.2*T_c),True], [(v_ratio + T_r/T_c)**2 + P_r/P_c + M_ry/M_cy + M_rx/M_cx,eta_H1], default=numpy.nan)
+
+
 def _b4b3cb4f99d908167488(E, F_y):
     # AISC 360-22 Table B4.1b Case 12: Limit λr, leg of a single angle, flexure
     return 0.91*numpy.sqrt(E/F_y)
@@ -502,6 +542,11 @@ def _ba60d3ef0bfee0b95f40(E, F_y):
 def _bc9b2e2c73729b9b06e8(F_y, A_g):
     # AISC 360-22 Eq. D2-1: Nominal tensile strength, yielding in the gross section
     return A_g*F_y
+
+
+def _c380faef19ad693e0db2(B, H, t):
+    # AISC 360-22 Section H3.1, User Note: Torsional constant of a rectangular HSS
+    return -t**3*(18.0 - 4.5*numpy.pi) + t*(2*B - 2*t)*(H - t)
 
 
 def _c5ec42bcf88fd4a4c228(L_c, r):
@@ -629,6 +674,11 @@ def _f1d9b4d6c4bd5d11cf6a(M_p, F_y, S_y, lam, lam_pf, lam_rf, E):
     return numpy.select([numpy.less_equal(lam, lam_rf),True], [M_p - (lam - lam_pf)*(-0.7*F_y*S_y + M_p)/(-lam_pf + lam_rf),0.69*E*S_y/lam**2], default=numpy.nan)
 
 
+def _f3111dfcf6a86f9afbc0(F_cr_a, F_cr_b, F_y):
+    # AISC 360-22 Section H3.1(a): Critical stress of a round HSS in torsion
+    return functools.reduce(numpy.minimum, [0.6*F_y, functools.reduce(numpy.maximum, [F_cr_a, F_cr_b])])
+
+
 def _f35fef2057fcbcbefd78(L_cr, i, lambda_1):
     # EN 1993-1-1 Eq. (6.50): Non-dimensional slenderness
     return L_cr/(i*lambda_1)
@@ -664,9 +714,15 @@ def _fc88bd377ce3419b759b(E, b, t, C_b, L_b):
     return 0.58*C_b*E*b**4*t*(numpy.sqrt(0.88*L_b**2*t**2/b**4 + 1) - 1)/L_b**2
 
 
+def _ffe97ef7f0d7bd6b5ecc(h_t, E, F_y):
+    # AISC 360-22 Eq. H3-3, H3-4, H3-5: Critical stress of a rectangular HSS in torsion
+    return numpy.select([numpy.less_equal(h_t, 2.45*numpy.sqrt(E/F_y)),numpy.less_equal(h_t, 3.07*numpy.sqrt(E/F_y)),True], [0.6*F_y,1.47*F_y*numpy.sqrt(E/F_y)/h_t,0.458*numpy.pi**2*E/h_t**2], default=numpy.nan)
+
+
 FUNCTIONS = {
     "00c8dea2b6d2c695a39b": _00c8dea2b6d2c695a39b,
     "02edf9672d435a483665": _02edf9672d435a483665,
+    "02f1d2811f39b7ec8635": _02f1d2811f39b7ec8635,
     "0429c11d2458d362675c": _0429c11d2458d362675c,
     "0839fff909ccaabe4193": _0839fff909ccaabe4193,
     "086ab2f9163d829e242f": _086ab2f9163d829e242f,
@@ -674,6 +730,7 @@ FUNCTIONS = {
     "0ef822dbee9a4e6e5af3": _0ef822dbee9a4e6e5af3,
     "11c913d3ba6c08a6f16f": _11c913d3ba6c08a6f16f,
     "1226452d5ae3a903cf87": _1226452d5ae3a903cf87,
+    "13aaf77b4ecc4782305d": _13aaf77b4ecc4782305d,
     "13ef280319349a572351": _13ef280319349a572351,
     "1439263560bd3f059103": _1439263560bd3f059103,
     "15f142db5f16997c16d9": _15f142db5f16997c16d9,
@@ -685,16 +742,20 @@ FUNCTIONS = {
     "23b3e31a231be6b34c0c": _23b3e31a231be6b34c0c,
     "2591b6c97a2e54900118": _2591b6c97a2e54900118,
     "27522fc680246d1a9232": _27522fc680246d1a9232,
+    "2910791acf975b049344": _2910791acf975b049344,
     "2b82d3179344a75017b7": _2b82d3179344a75017b7,
+    "2cacbdee24ad514d39f1": _2cacbdee24ad514d39f1,
     "2d02a653481b5f241f7d": _2d02a653481b5f241f7d,
     "31cdcda6dcc19c4a3227": _31cdcda6dcc19c4a3227,
     "336f85ec8d5a1f26a81e": _336f85ec8d5a1f26a81e,
     "347d64da819a5807c838": _347d64da819a5807c838,
     "34a384cad20da7fa7fc6": _34a384cad20da7fa7fc6,
+    "3531dc15afa1c3c380c1": _3531dc15afa1c3c380c1,
     "35be6253a3612eaaede0": _35be6253a3612eaaede0,
     "360a3ce6dc79299771c7": _360a3ce6dc79299771c7,
     "3a3fe7cc1dbd0f233257": _3a3fe7cc1dbd0f233257,
     "3dd3202a8c28b52cb272": _3dd3202a8c28b52cb272,
+    "3e6240a336d5a5b6112e": _3e6240a336d5a5b6112e,
     "3fb4ae6c2547534b9412": _3fb4ae6c2547534b9412,
     "43e583211c0b74309c01": _43e583211c0b74309c01,
     "44437356c4f5d32105c7": _44437356c4f5d32105c7,
@@ -741,6 +802,7 @@ FUNCTIONS = {
     "987ae3cf58517372f266": _987ae3cf58517372f266,
     "997ab3fe735748908034": _997ab3fe735748908034,
     "9b9bd93673a09d933586": _9b9bd93673a09d933586,
+    "a0259eb1464452636c95": _a0259eb1464452636c95,
     "a1d811c244c23a656593": _a1d811c244c23a656593,
     "a23b40a872992b706624": _a23b40a872992b706624,
     "a46a8809267c7f4b3a3b": _a46a8809267c7f4b3a3b,
@@ -759,10 +821,12 @@ FUNCTIONS = {
     "b1dde4caf1a28f0f0d9e": _b1dde4caf1a28f0f0d9e,
     "b26d990aa331a1150fd8": _b26d990aa331a1150fd8,
     "b3c7f45661e0b04d42c4": _b3c7f45661e0b04d42c4,
+    "b461767123fab5da53ca": _b461767123fab5da53ca,
     "b4b3cb4f99d908167488": _b4b3cb4f99d908167488,
     "b83ebeb6559328560261": _b83ebeb6559328560261,
     "ba60d3ef0bfee0b95f40": _ba60d3ef0bfee0b95f40,
     "bc9b2e2c73729b9b06e8": _bc9b2e2c73729b9b06e8,
+    "c380faef19ad693e0db2": _c380faef19ad693e0db2,
     "c5ec42bcf88fd4a4c228": _c5ec42bcf88fd4a4c228,
     "c6b9a3c1bc233218634d": _c6b9a3c1bc233218634d,
     "c9321b59dafead64b748": _c9321b59dafead64b748,
@@ -788,6 +852,7 @@ FUNCTIONS = {
     "ef572fd1566076ebea8f": _ef572fd1566076ebea8f,
     "ef6a6b665d0c53b41b48": _ef6a6b665d0c53b41b48,
     "f1d9b4d6c4bd5d11cf6a": _f1d9b4d6c4bd5d11cf6a,
+    "f3111dfcf6a86f9afbc0": _f3111dfcf6a86f9afbc0,
     "f35fef2057fcbcbefd78": _f35fef2057fcbcbefd78,
     "f621d9b9d204fd5e70de": _f621d9b9d204fd5e70de,
     "f7e7ed600e478b2ac869": _f7e7ed600e478b2ac869,
@@ -795,4 +860,5 @@ FUNCTIONS = {
     "fb0573ff322c9c6113c8": _fb0573ff322c9c6113c8,
     "fc0b86f61b049afe7451": _fc0b86f61b049afe7451,
     "fc88bd377ce3419b759b": _fc88bd377ce3419b759b,
+    "ffe97ef7f0d7bd6b5ecc": _ffe97ef7f0d7bd6b5ecc,
 }

@@ -2,7 +2,8 @@
 
 Modules: :mod:`.factors` (φ, Ω), :mod:`.classification` (Table B4.1), :mod:`.tension`
 (D2), :mod:`.compression` (E3, E4-2, E7), :mod:`.flexure` (F2, F3, F6, F7, F8, F10),
-:mod:`.shear` (G2, G3, G4, G5, G6), :mod:`.combined` (H1, H2), :mod:`.second_order`
+:mod:`.shear` (G2, G3, G4, G5, G6), :mod:`.combined` (H1, H2), :mod:`.torsion` (H3),
+:mod:`.second_order`
 (Appendix 8, B1). :func:`write_aisc_checks` writes a member's checks on a sheet;
 :func:`aisc_checks_numeric` runs the same procedure on arrays of sections and loads.
 """
@@ -20,6 +21,7 @@ from calcsheet.standards.aisc360.member import (
     aisc_member_procedure,
     write_aisc_checks,
 )
+from calcsheet.standards.aisc360.member_torsion import PointStressDemands
 from calcsheet.standards.aisc360.numeric import (
     DemandArrays,
     aisc_checks_numeric,
@@ -38,6 +40,7 @@ __all__ = [
     "DemandArrays",
     "Demands",
     "LimitStateFactors",
+    "PointStressDemands",
     "SectionTable",
     "Steel",
     "aisc_checks_numeric",

@@ -44,6 +44,19 @@ from calcsheet.standards.aisc360.member_angle import write_single_angle
 from calcsheet.standards.aisc360.member_common import Strengths
 from calcsheet.standards.aisc360.member_hss import write_rectangular_hss, write_round_hss
 from calcsheet.standards.aisc360.member_i import write_i_shape
+from calcsheet.standards.aisc360.member_lengths import (
+    LateralBracing,
+    lateral_bracing,
+    write_bracing_inputs,
+)
+from calcsheet.standards.aisc360.member_torsion import (
+    HSS_KINDS,
+    TORSION_TITLES,
+    InteractionTerms,
+    PointStressDemands,
+    write_hss_torsion,
+    write_open_section_stresses,
+)
 from calcsheet.standards.aisc360.numeric import scope_problem
 from calcsheet.standards.aisc360.section_data import SUPPORTED, section_kind, section_values
 from calcsheet.standards.aisc360.writing import (
@@ -69,7 +82,10 @@ class Demands:
 
     * ``P_r`` axial force, tension positive;
     * ``M_rx``, ``M_ry`` moments about x and y (either sign: magnitudes are checked);
-    * ``V_rx``, ``V_ry`` shears along x and y (either sign).
+    * ``V_rx``, ``V_ry`` shears along x and y (either sign);
+    * ``T_r`` the torque (either sign), None: torsion not checked;
+    * ``stresses`` the largest normal and shear stresses over the section's points
+      (for the H3.3 checks of I-shapes and angles), None: not checked.
     """
 
     P_r: sp.Basic
@@ -77,6 +93,8 @@ class Demands:
     M_ry: sp.Basic
     V_rx: sp.Basic
     V_ry: sp.Basic
+    T_r: sp.Basic | None = None
+    stresses: PointStressDemands | None = None
 
 
 def write_aisc_checks(
@@ -89,17 +107,24 @@ def write_aisc_checks(
     length: pint.Quantity | str,
     K: float | str = appendix8.K_FIXED_FREE,
     Lb: pint.Quantity | str | None = None,
-    Cb: float | str = 1.0,
+    Cb: float | str | None = None,
     Cm: float | str = 1.0,
     second_order: bool = True,
+    cantilever: bool = True,
+    load_height: str | None = None,
+    tip_restraint: str | None = None,
 ) -> list[Check]:
     """Write the AISC 360-22 strength checks of ``section`` on ``sheet``; return the checks.
 
     ``method`` is "LRFD" or "ASD". ``length`` is the member length L, ``K`` the
     effective length factor about both axes (default 2.1, fixed-free), ``Lb`` the
-    laterally unbraced length (default L), ``Cb`` the LTB modification factor
-    (1.0 for a cantilever), ``Cm`` the Appendix 8 factor for B1. With
-    ``second_order=False`` the moments are taken as already second-order (no B1).
+    laterally unbraced length, ``Cb`` the LTB modification factor (default 1.0),
+    ``Cm`` the Appendix 8 factor for B1. With ``second_order=False`` the moments are
+    taken as already second-order (no B1). ``cantilever``: the member is fixed at one
+    end and free at the other; for a cantilever I-shape, ``load_height`` ("top
+    flange", "shear centre", "bottom flange") and ``tip_restraint`` ("free",
+    "laterally braced", "torsionally restrained") default Lb to the cantilever's
+    effective length (see :mod:`.member_lengths`); otherwise Lb defaults to L.
 
     Bad input raises :class:`InputError` naming the field; a section family or a
     section outside what is covered raises it before anything is written.
@@ -107,10 +132,20 @@ def write_aisc_checks(
     chosen = design_method(method)
     kind = section_kind(section.family)
     values = section_values(section)
-    inputs = parse_member_inputs(material, length, K, Lb, Cb, Cm)
+    inputs = parse_member_inputs(material, length, K, Lb, 1.0 if Cb is None else Cb, Cm)
+    bracing = lateral_bracing(
+        kind,
+        Lb_given=Lb is not None,
+        Cb_given=Cb is not None,
+        cantilever=cantilever,
+        load_height=load_height,
+        tip_restraint=tip_restraint,
+    )
     _check_scope(kind, values, inputs, section.name)
     for item in fields(Demands):
-        if not isinstance(getattr(demands, item.name), sp.Basic):
+        given = getattr(demands, item.name)
+        optional = item.name in ("T_r", "stresses") and given is None
+        if not (optional or isinstance(given, sp.Basic | PointStressDemands)):
             raise DefinitionError(
                 f"AISC 360-22 checks: demand {item.name} must be a symbol of the sheet"
             )
@@ -123,9 +158,11 @@ def write_aisc_checks(
         sheet.text(
             "Required strengths: P_r axial (tension positive), M_rx and M_ry about x and y, "
             f"V_rx and V_ry along x and y, already {'factored' if chosen == 'LRFD' else 'combined'}"
-            f" for {chosen}. Torsion (H3) and connections are not checked here."
+            f" for {chosen}. {_torsion_scope(kind, demands)} Connections are not checked here."
         )
-        aisc_member_procedure(w, kind, values, inputs, demands, second_order, name=section.name)
+        aisc_member_procedure(
+            w, kind, values, inputs, demands, second_order, name=section.name, bracing=bracing
+        )
     return list(w.checks.values())
 
 
@@ -138,18 +175,21 @@ def aisc_member_procedure(
     second_order: bool,
     *,
     name: str = "",
+    bracing: LateralBracing | None = None,
 ) -> None:
     """The AISC 360-22 member checks, written once for both writers.
 
     ``values``: the section values (:class:`SectionValue` for a sheet, arrays for an
     array writer); ``demands``: the required strengths (symbols or arrays). The
     checks end up in ``w.checks`` under the keys of :data:`CHECK_TITLES`.
+    ``bracing``: whether Lb and Cb were given, and the cantilever's inputs (None:
+    both given, not a cantilever).
     """
-    _write_member_inputs(w, inputs, kind, second_order)
+    _write_member_inputs(w, inputs, kind, second_order, bracing or LateralBracing())
     w.heading(f"Section {name}".strip(), 2)
     write_section_values(w, values)
     strengths = _WRITERS[kind](w)
-    _write_demand_side(w, strengths, demands, second_order)
+    _write_demand_side(w, kind, strengths, demands, second_order)
 
 
 # The checks of the procedure by key, as titled on the sheet.
@@ -163,7 +203,19 @@ CHECK_TITLES = {
     "shear_x": "Shear along x",
     "shear_y": "Shear along y",
     "combined": "Combined axial force and flexure",
+    **TORSION_TITLES,
 }
+
+
+def _torsion_scope(kind: str, demands: Demands) -> str:
+    """What the sheet says of torsion (AISC 360-22 Section H3) for this member."""
+    if kind in HSS_KINDS:
+        if demands.T_r is None:
+            return "Torsion (H3) is not checked here."
+        return "Torsion: H3.1 and H3.2 with the torque T_r."
+    if demands.stresses is None or demands.T_r is None:
+        return "Torsion (H3) is not checked here."
+    return "Torsion: H3.3 with the point stresses of the section under the torque T_r."
 
 
 def _check_scope(kind: str, values: dict, inputs: MemberInputs, name: str) -> None:
@@ -175,7 +227,9 @@ def _check_scope(kind: str, values: dict, inputs: MemberInputs, name: str) -> No
         raise InputError("section", name, f"{SUPPORTED}, within the scope of the checks", reason)
 
 
-def _write_member_inputs(w: Writer, inputs: MemberInputs, kind: str, second_order: bool) -> None:
+def _write_member_inputs(
+    w: Writer, inputs: MemberInputs, kind: str, second_order: bool, bracing: LateralBracing
+) -> None:
     w.heading("Material and member", 2)
     w.input(
         "E",
@@ -208,14 +262,7 @@ def _write_member_inputs(w: Writer, inputs: MemberInputs, kind: str, second_orde
         reference="AISC 360-22 Commentary Table C-A-7.1",
         dimension="dimensionless",
     )
-    w.input("L_b", inputs.L_b, "Laterally unbraced length", dimension="length")
-    w.input(
-        "C_b",
-        inputs.C_b,
-        "Lateral-torsional buckling modification factor (1.0 for a cantilever)",
-        reference="AISC 360-22 Section F1",
-        dimension="dimensionless",
-    )
+    write_bracing_inputs(w, inputs, bracing)
     if second_order:
         w.input(
             "C_m",
@@ -227,7 +274,7 @@ def _write_member_inputs(w: Writer, inputs: MemberInputs, kind: str, second_orde
 
 
 def _write_demand_side(
-    w: Writer, strengths: Strengths, demands: Demands, second_order: bool
+    w: Writer, kind: str, strengths: Strengths, demands: Demands, second_order: bool
 ) -> None:
     force = w.unit("force")
     w.heading("Axial strength for the sign of the force", 2)
@@ -288,6 +335,35 @@ def _write_demand_side(
                 reference=refs[key],
             )
     w.check("combined", CHECK_TITLES["combined"], eta, sp.Integer(1), reference=combined_reference)
+    _write_torsion(w, kind, strengths, demands, P_c, (M_rx, M_ry), eta)
+
+
+def _write_torsion(
+    w: Writer, kind: str, strengths: Strengths, demands: Demands, P_c, moments: tuple, eta_H1
+) -> None:
+    """Section H3: H3.1/H3.2 for an HSS with a torque, H3.3 for other members with stresses."""
+    if kind in HSS_KINDS and demands.T_r is not None:
+        terms = InteractionTerms(
+            demands.P_r, P_c, moments[0], moments[1], demands.V_rx, demands.V_ry, eta_H1
+        )
+        T_r, T_c = write_hss_torsion(w, kind, strengths, demands.T_r, terms)
+        w.heading("Torsion checks", 2)
+        w.check("torsion", CHECK_TITLES["torsion"], T_r, T_c, reference="AISC 360-22 Eq. H3-1")
+        w.check(
+            "torsion_interaction",
+            CHECK_TITLES["torsion_interaction"],
+            w["eta_H3"],
+            sp.Integer(1),
+            reference="AISC 360-22 Section H3.2, Eq. H3-6 (Chapter H1 when Tr <= 0.2Tc)",
+        )
+    elif kind not in HSS_KINDS and demands.stresses is not None and demands.T_r is not None:
+        terms = InteractionTerms(
+            demands.P_r, P_c, demands.M_rx, demands.M_ry, demands.V_rx, demands.V_ry, eta_H1
+        )
+        rows = write_open_section_stresses(w, strengths, demands.stresses, demands.T_r, terms)
+        w.heading("Torsion checks", 2)
+        for key, (demand, capacity, reference) in rows.items():
+            w.check(key, CHECK_TITLES[key], demand, capacity, reference=reference)
 
 
 def _write_b1(w: Writer, strengths: Strengths, demands: Demands) -> tuple:

@@ -24,6 +24,8 @@ from calcsheet.errors import InputError
 from calcsheet.standards.aisc360 import classification as b4
 from calcsheet.standards.aisc360.factors import design_method
 from calcsheet.standards.aisc360.inputs import A992, Steel, parse_member_inputs
+from calcsheet.standards.aisc360.member_lengths import lateral_bracing
+from calcsheet.standards.aisc360.member_torsion import PointStressDemands
 from calcsheet.standards.aisc360.second_order import K_FIXED_FREE
 from calcsheet.standards.aisc360.section_data import SectionTable
 
@@ -36,7 +38,9 @@ class DemandArrays:
 
     Same meaning and signs as :class:`~calcsheet.standards.aisc360.member.Demands`:
     P_r axial (tension positive), M_rx and M_ry moments about x and y, V_rx and V_ry
-    shears along x and y.
+    shears along x and y; optional: T_r the torque (N·m) and ``stresses`` the largest
+    and smallest normal stress and the largest shear stress over the section's points
+    (Pa), each ``(m,)``.
     """
 
     P_r: np.ndarray
@@ -44,6 +48,8 @@ class DemandArrays:
     M_ry: np.ndarray
     V_rx: np.ndarray
     V_ry: np.ndarray
+    T_r: np.ndarray | None = None
+    stresses: PointStressDemands | None = None
 
     @classmethod
     def from_quantities(
@@ -53,23 +59,37 @@ class DemandArrays:
         M_ry: pint.Quantity,
         V_rx: pint.Quantity,
         V_ry: pint.Quantity,
+        T_r: pint.Quantity | None = None,
+        stresses: tuple[pint.Quantity, pint.Quantity, pint.Quantity] | None = None,
     ) -> DemandArrays:
-        """From pint quantities (scalars or arrays) in any force and moment units."""
-        converted = []
-        for name, value, unit in (
+        """From pint quantities (scalars or arrays) in any force, moment and stress units.
+
+        ``stresses``: (largest normal, smallest normal, largest shear) stress.
+        """
+        rows = [
             ("P_r", P_r, "N"),
             ("M_rx", M_rx, "N*m"),
             ("M_ry", M_ry, "N*m"),
             ("V_rx", V_rx, "N"),
             ("V_ry", V_ry, "N"),
-        ):
+        ]
+        if T_r is not None:
+            rows.append(("T_r", T_r, "N*m"))
+        if stresses is not None:
+            names = ("sigma_max", "sigma_min", "tau_max")
+            rows += [(name, value, "Pa") for name, value in zip(names, stresses, strict=True)]
+        converted = []
+        for name, value, unit in rows:
             try:
                 converted.append(np.atleast_1d(np.asarray(value.to(unit).m, dtype=float)))
             except (AttributeError, pint.DimensionalityError):
                 raise InputError(
                     f"demand {name}", value, f"a quantity convertible to {unit}"
                 ) from None
-        return cls(*np.broadcast_arrays(*converted))
+        arrays = np.broadcast_arrays(*converted)
+        torque = arrays[5] if T_r is not None else None
+        points = PointStressDemands(*arrays[-3:]) if stresses is not None else None
+        return cls(*arrays[:5], T_r=torque, stresses=points)
 
 
 def scope_problem(kind: str, values: Arrays, E: float, F_y: float) -> tuple[np.ndarray, str]:
@@ -108,9 +128,12 @@ def aisc_checks_numeric(
     length: pint.Quantity | str,
     K: float | str = K_FIXED_FREE,
     Lb: pint.Quantity | str | None = None,
-    Cb: float | str = 1.0,
+    Cb: float | str | None = None,
     Cm: float | str = 1.0,
     second_order: bool = True,
+    cantilever: bool = True,
+    load_height: str | None = None,
+    tip_restraint: str | None = None,
 ) -> dict[str, np.ndarray]:
     """The utilization of each check of :func:`write_aisc_checks`, as ``(n, m)`` arrays.
 
@@ -122,10 +145,20 @@ def aisc_checks_numeric(
     from calcsheet.standards.aisc360.member import aisc_member_procedure
 
     chosen = design_method(method)
-    p = parse_member_inputs(material, length, K, Lb, Cb, Cm)
+    p = parse_member_inputs(material, length, K, Lb, 1.0 if Cb is None else Cb, Cm)
+    bracing = lateral_bracing(
+        table.kind,
+        Lb_given=Lb is not None,
+        Cb_given=Cb is not None,
+        cantilever=cantilever,
+        load_height=load_height,
+        tip_restraint=tip_restraint,
+    )
     w = ArrayWriter(method=chosen)
     with np.errstate(divide="ignore", invalid="ignore", over="ignore"):
-        aisc_member_procedure(w, table.kind, dict(table.values), p, demands, second_order)
+        aisc_member_procedure(
+            w, table.kind, dict(table.values), p, demands, second_order, bracing=bracing
+        )
     E, F_y = float(p.E.to("Pa").m), float(p.F_y.to("Pa").m)
     outside, _ = scope_problem(table.kind, table.values, E, F_y)
     shape = np.broadcast_shapes(np.shape(table.values["A_g"]), np.shape(demands.P_r))
@@ -148,7 +181,7 @@ def aisc_utilization_numeric(
     length: pint.Quantity | str,
     K: float | str = K_FIXED_FREE,
     Lb: pint.Quantity | str | None = None,
-    Cb: float | str = 1.0,
+    Cb: float | str | None = None,
     Cm: float | str = 1.0,
     second_order: bool = True,
 ) -> np.ndarray:
