@@ -1,4 +1,11 @@
-"""The cantilever in elevation (y-z plane) with its loads, and an end view (x-y plane).
+"""The member in elevation (y-z plane) with its loads and supports, and an end view (x-y plane).
+
+A cantilever fixed at z = 0 is drawn with a hatched wall at its support; any other
+member with a symbol of our own at each support: a fixed end as a hatched wall
+(a hatched block inside the member's length), a pin as a triangle on a hatched
+base, a roller as a triangle on two wheels, any other set of restraints as a
+plain square. Distributed loads are drawn as a row of arrows between their ends
+over an outline of their intensity, named with their values.
 
 The elevation is to scale along z. When the member depth and the load offsets
 would be too thin to read at that scale, the vertical scale alone is enlarged by
@@ -42,7 +49,9 @@ from calcsheet.figures.style import (
     THIN,
 )
 from calcsheet.figures.svg import Point, Svg
+from calcsheet.mechanics.distributed import DistributedLoad
 from calcsheet.mechanics.loads import AppliedMoment, PointLoad
+from calcsheet.mechanics.supports import FIXED, PINNED, ROLLER, Support
 from calcsheet.sections import Section
 from calcsheet.units import Quantity, parse_quantity
 
@@ -68,6 +77,8 @@ def member_figure(
     section: Section | None = None,
     moments: Sequence[AppliedMoment] = (),
     unit: str = "in",
+    supports: Sequence[Support] = (),
+    distributed: Sequence[DistributedLoad] = (),
 ) -> str:
     """SVG of the cantilever: support at z = 0, free end at z = L, the cut at ``station``.
 
@@ -75,7 +86,9 @@ def member_figure(
     section's, and the end view shows its outline). Every point load is an arrow
     at its true angle at its z and e_y (on a lug when it acts outside the depth),
     with e_y dimensioned; ``moments`` are curved arrows (Mx) with their
-    components written beside them. Lengths are written in ``unit``.
+    components written beside them. Lengths are written in ``unit``. ``supports``
+    (none: a cantilever fixed at z = 0) are drawn with their symbols and
+    ``distributed`` loads as rows of arrows.
     """
     member_length = parse_quantity(length, field="member length", dimension="length").to(unit)
     cut = parse_quantity(station, field="station", dimension="length").to(unit)
@@ -92,7 +105,15 @@ def member_figure(
     frame, factor = _elevation_frame(L, d, placed)
     svg = Svg(title="Member elevation and end view")
     obstacles = Obstacles()
-    _draw_member(svg, obstacles, frame, L, d)
+    cantilever = not supports or (
+        len(supports) == 1 and supports[0].restrains == FIXED and supports[0].z.m == 0
+    )
+    _draw_member(svg, obstacles, frame, L, d, wall=cantilever)
+    if not cantilever:
+        for item in supports:
+            _draw_support(svg, obstacles, frame, item, L, d, unit)
+    for number, load in enumerate(distributed):
+        _draw_distributed(svg, obstacles, frame, load, d, number, unit)
     dimensioned: set[tuple[float, float]] = set()
     for number, load in enumerate(placed):
         # Loads sharing a point (a bracket and the wind on it) share one e_y dimension.
@@ -102,7 +123,11 @@ def member_figure(
     for moment in moments:
         _draw_moment(svg, obstacles, frame, moment, unit)
     _draw_station(svg, obstacles, frame, float(cut.m), d, unit)
-    _draw_z_dimensions(svg, obstacles, frame, L, d, float(cut.m), placed, unit)
+    extra_rows = [
+        (float(item.z.to(unit).m), f"{item.name}: z = {quantity_text(item.z.to(unit))}")
+        for item in ([] if cantilever else supports)
+    ]
+    _draw_z_dimensions(svg, obstacles, frame, L, d, float(cut.m), placed, unit, extra_rows)
     elevation_left, elevation_right = svg.x_min, svg.x_max
     _draw_triad(svg, obstacles, (elevation_left + 8, svg.y_max + 34))
 
@@ -163,12 +188,18 @@ def _elevation_frame(L: float, d: float, loads: Sequence[_PlacedLoad]) -> tuple[
     return Frame(scale, y_scale=scale * factor), factor
 
 
-def _draw_member(svg: Svg, obstacles: Obstacles, frame: Frame, L: float, d: float) -> None:
-    """The member as a band of its depth, the fixed support hatched, the member axis."""
+def _draw_member(
+    svg: Svg, obstacles: Obstacles, frame: Frame, L: float, d: float, *, wall: bool = True
+) -> None:
+    """The member as a band of its depth, the fixed support hatched (a cantilever), the axis."""
     band = np.array([(0.0, -d / 2), (L, -d / 2), (L, d / 2), (0.0, d / 2)])
     paper = frame.ring(band)
     svg.rings([paper.tolist()], fill=MATERIAL, width=OUTLINE_WIDTH, css_class="member")
     obstacles.add_region([paper])
+    if not wall:
+        end_x = frame.point(L, 0)[0]
+        centre_line(svg, None, (-6, 0), (end_x + 18, 0))
+        return
     top, bottom = frame.point(0, d / 2)[1], frame.point(0, -d / 2)[1]
     wall_top, wall_bottom = top - 14, bottom + 14
     svg.line((0, wall_top), (0, wall_bottom), width=2.2, css_class="support")
@@ -322,9 +353,10 @@ def _draw_z_dimensions(
     station: float,
     loads: Sequence[_PlacedLoad],
     unit: str,
+    extra: Sequence[tuple[float, str]] = (),
 ) -> None:
-    """Baseline dimensions from the support: the cut, each load position, the length."""
-    rows: list[tuple[float, str]] = []
+    """Baseline dimensions from z = 0: the cut, each load and support position, the length."""
+    rows: list[tuple[float, str]] = [(z, text) for z, text in extra if 0 < z < L]
     if station > 0:
         rows.append((station, f"z_s = {quantity_text(Quantity(station, unit))}"))
     positions: dict[float, list[str]] = {}
@@ -433,3 +465,102 @@ def _draw_end_view(
         svg.text(center, label, size=FONT_SIZE, bold=True)
     title_y = origin[1] - reach - 16 - FONT_SIZE
     svg.text((origin[0], title_y), "End view from the free end", size=SMALL_FONT_SIZE, fill=NOTE)
+
+
+SUPPORT_SIZE = 11.0  # px, the height of a support symbol below the member
+
+
+def _draw_support(
+    svg: Svg, obstacles: Obstacles, frame: Frame, item: Support, L: float, d: float, unit: str
+) -> None:
+    """A support's symbol at its station, below the member (a wall at a fixed end)."""
+    z = float(item.z.to(unit).m)
+    x, bottom = frame.point(z, -d / 2)
+    top = frame.point(z, d / 2)[1]
+    size = SUPPORT_SIZE
+    if item.restrains == FIXED:
+        if math.isclose(z, 0.0, abs_tol=1e-9 * L) or math.isclose(z, L, rel_tol=1e-9):
+            side = -1.0 if z < L / 2 else 1.0  # the wall on the outside of the end
+            svg.line((x, top - 14), (x, bottom + 14), width=2.2, css_class="support")
+            y = top - 14
+            while y < bottom + 14:
+                end = min(y + 7, bottom + 14)
+                svg.line((x, y), (x + side * (end - y), end), width=THIN)
+                y += 5
+            obstacles.add_box(
+                Box(min(x, x + side * 9), top - 14, max(x, x + side * 9), bottom + 14)
+            )
+        else:
+            block = [(x - 6, top - 8), (x + 6, top - 8), (x + 6, bottom + 8), (x - 6, bottom + 8)]
+            svg.rings([block], fill=PAPER, width=1.6, css_class="support")
+            for offset in (-6.0, 0.0, 6.0):
+                svg.line((x - 6, bottom + 2 + offset), (x + 6, bottom - 10 + offset), width=THIN)
+            obstacles.add_box(Box(x - 6, top - 8, x + 6, bottom + 8))
+    else:
+        apex = (x, bottom)
+        base_y = bottom + size
+        triangle = [apex, (x - size * 0.7, base_y), (x + size * 0.7, base_y)]
+        if item.restrains in (PINNED, ROLLER):
+            svg.polygon(triangle, fill=PAPER, stroke=INK, width=1.4)
+        else:
+            square = [(x - 5, bottom), (x + 5, bottom), (x + 5, bottom + 10), (x - 5, bottom + 10)]
+            svg.polygon(square, fill=PAPER, stroke=INK, width=1.4)
+            base_y = bottom + 10
+        ground = base_y
+        if item.restrains == ROLLER:
+            for dx in (-4.0, 4.0):
+                svg.circle((x + dx, base_y + 3), 2.6, fill=PAPER, stroke=INK, width=1.0)
+            ground = base_y + 6
+        svg.line((x - size, ground), (x + size, ground), width=1.4, css_class="support")
+        for hatch in np.linspace(x - size, x + size - 4, 5):
+            svg.line((hatch + 4, ground), (hatch, ground + 4), width=THIN)
+        obstacles.add_box(Box(x - size, bottom, x + size, ground + 4))
+    label_at = (x, bottom + size + 14)
+    svg.text(label_at, item.name, size=SMALL_FONT_SIZE, bold=True, css_class="support-label")
+
+
+def _draw_distributed(
+    svg: Svg,
+    obstacles: Obstacles,
+    frame: Frame,
+    load: DistributedLoad,
+    d: float,
+    number: int,
+    unit: str,
+) -> None:
+    """A row of arrows from the load's outline to the member, above it, named with q."""
+    a = float(load.z_start.to(unit).m)
+    b = float(load.z_end.to(unit).m)
+    start = [float(value.m) for value in load.q_start]
+    end = [float(value.to(load.q_start[0].units).m) for value in load.q_end]
+    biggest = max(max(abs(value) for value in start), max(abs(value) for value in end), 1e-300)
+    top = frame.point(0, d / 2)[1] - 4 - number * 30
+    height = 22.0
+
+    def size_at(t: float) -> float:
+        values = [first + t * (last - first) for first, last in zip(start, end, strict=True)]
+        return math.sqrt(values[1] ** 2 + values[2] ** 2 + values[0] ** 2) / biggest
+
+    left, right = frame.point(a, 0)[0], frame.point(b, 0)[0]
+    count = max(2, int((right - left) / 18) + 1)
+    outline = []
+    for t in np.linspace(0.0, 1.0, count):
+        x = left + t * (right - left)
+        tail = top - 6 - height * size_at(float(t))
+        outline.append((x, tail))
+        if tail < top - 3:
+            arrow(svg, (x, tail), (x, top), width=1.0, css_class="distributed-arrow")
+    svg.polyline(outline, width=1.2)
+    obstacles.add_box(Box(left, min(y for _, y in outline), right, top))
+    q = load.q_start if not any(end[i] != start[i] for i in range(3)) else None
+    named = [
+        f"q{axis} = {quantity_text(value)}"
+        for axis, value in zip("xyz", q or load.q_start, strict=True)
+        if value.m != 0
+    ]
+    text = f"{load.name}: " + (", ".join(named) if q else "from " + ", ".join(named) + " (varying)")
+    center, _ = place_label(
+        obstacles, ((left + right) / 2, min(y for _, y in outline)), (0.0, -1.0), text,
+        size=SMALL_FONT_SIZE,
+    )  # fmt: skip
+    svg.text(center, text, size=SMALL_FONT_SIZE, css_class="distributed-label")
