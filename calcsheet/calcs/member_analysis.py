@@ -295,10 +295,40 @@ def scan_stations(
     length: pint.Quantity,
     stations: NDArray[np.float64] | None = None,
 ) -> StationScan:
-    """Every check at every station (default: the candidates) × combination × side."""
-    result = analysis.result
+    """Every check at every station (default: the candidates) × combination × side.
+
+    The candidates hold each force's own peaks; a check that adds forces (an
+    interaction sum of two moments) can peak between them, so around each check's
+    worst candidate the stations are refined once (a grid between its neighbours).
+    """
+    candidates = stations is None
     if stations is None:
-        stations = result.candidate_stations(analysis.factors)
+        stations = analysis.result.candidate_stations(analysis.factors)
+    scan = _scan(analysis, section, basis, Fy, length, np.asarray(stations, dtype=float))
+    if not candidates or len(scan.stations) < 3:
+        return scan
+    finer = [scan.stations]
+    for key in scan.per_check:
+        at = scan.worst(key)[3]
+        low = scan.stations[max(at - 1, 0)]
+        high = scan.stations[min(at + 1, len(scan.stations) - 1)]
+        finer.append(np.linspace(low, high, _REFINE))
+    return _scan(analysis, section, basis, Fy, length, np.unique(np.concatenate(finer)))
+
+
+# Stations between a check's worst candidate and its neighbours, when refining.
+_REFINE = 41
+
+
+def _scan(
+    analysis: MemberAnalysis,
+    section: Section,
+    basis: DesignBasis,
+    Fy: pint.Quantity,
+    length: pint.Quantity,
+    stations: NDArray[np.float64],
+) -> StationScan:
+    result = analysis.result
     forces = np.stack(
         [result.internal_forces(stations, analysis.factors, side=side) for side in SIDES]
     )  # (sides, combos, stations, 6)
@@ -309,7 +339,7 @@ def scan_stations(
         raise InputError("check kind", basis.kind, "a standard whose checks can be evaluated")
     shape = forces.shape[:3]
     per_check = {key: np.asarray(values).reshape(shape) for key, values in per_check_flat.items()}
-    return StationScan(np.asarray(stations, dtype=float), forces, per_check, measure)
+    return StationScan(stations, forces, per_check, measure)
 
 
 def forces_at(analysis: MemberAnalysis, station: float, side: str) -> NDArray[np.float64]:

@@ -531,8 +531,9 @@ def _draw_distributed(
     """A row of arrows from the load's outline to the member, above it, named with q."""
     a = float(load.z_start.to(unit).m)
     b = float(load.z_end.to(unit).m)
-    start = [float(value.m) for value in load.q_start]
-    end = [float(value.to(load.q_start[0].units).m) for value in load.q_end]
+    unit_q = load.q_start[0].units
+    start = [float(value.to(unit_q).m) for value in load.q_start]
+    end = [float(value.to(unit_q).m) for value in load.q_end]
     biggest = max(max(abs(value) for value in start), max(abs(value) for value in end), 1e-300)
     top = frame.point(0, d / 2)[1] - 4 - number * 30
     height = 22.0
