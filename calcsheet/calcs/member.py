@@ -823,7 +823,7 @@ def _write_distributed(
         z_b = symbols["L"]
     else:
         shape = "uniform" if uniform else "varying linearly from the start to the end"
-        sheet.text(f"Force per length {shape}, acting at the offsets e_x, e_y from the centroid.")
+        sheet.text(f"Force per length {shape}.")
         z_a = sheet.input(
             f"z_wa{number}", load.z_start, "Start of the load", unit=length_unit, fixed=LAYOUT
         )
@@ -844,11 +844,15 @@ def _write_distributed(
                 q_b[axis] = sheet.input(
                     f"q_{axis}b{number}", load.q_end[AXES.index(axis)], f"q along {axis} at the end"
                 )
+    # An offset that is zero adds no terms to the statics, so it is left out (a change of
+    # it rebuilds the sheet, which brings its terms in).
     e_x = e_y = None
-    if load.ex.m != 0 or weight is None:
+    if load.ex.m != 0:
         e_x = sheet.input(f"e_x{tag}", load.ex, "Offset of the load in x", unit=length_unit)
-    if load.ey.m != 0 or weight is None:
+    if load.ey.m != 0:
         e_y = sheet.input(f"e_y{tag}", load.ey, "Offset of the load in y", unit=length_unit)
+    if e_x is None and e_y is None and weight is None:
+        sheet.text("The load acts on the member axis (no offset).")
     l_w = sheet.step(f"l_{tag}", z_b - z_a, "Loaded length", unit=length_unit)
 
     def part(force: dict[str, sp.Symbol], z: sp.Symbol | None, a: sp.Symbol | None) -> WrittenLoad:
@@ -1004,18 +1008,34 @@ def _write_reactions(
                 )  # fmt: skip
         beyond = cut.carries(item.z, reaction=True)
         z = symbols[f"z_{item.name}"]
-        a = None
-        if beyond and force:
-            a = sheet.step(
-                f"a_{item.name}", z - symbols["z_s"],
-                f"Lever arm of {item.name} beyond the station", unit=preset["length"],
-            )  # fmt: skip
         written.append(
             WrittenLoad(
-                index + 1, item.name, "", beyond, z, force=force, couple=couple, a=a,
+                index + 1, item.name, "", beyond, z, force=force, couple=couple,
                 label=f"reaction at {item.name}",
             )
         )  # fmt: skip
+    free = "—"
+    sheet.table(
+        ["Support", "R_x", "R_y", "R_z", "M_x", "M_y", "M_z"],
+        [
+            [
+                record.name,
+                *(record.force.get(axis, free) for axis in AXES),
+                *(record.couple.get(axis, free) for axis in AXES),
+            ]
+            for record in written
+        ],
+        caption=(
+            f"Reactions under {combo} ({SOLVER_REFERENCE}); — where the support leaves the "
+            "motion free"
+        ),
+    )
+    for record in written:
+        if record.beyond and record.force:
+            record.a = sheet.step(
+                f"a_{record.name}", record.z - symbols["z_s"],
+                f"Lever arm of {record.name} beyond the station", unit=preset["length"],
+            )  # fmt: skip
     return written
 
 
