@@ -260,3 +260,39 @@ def test_bad_input_names_the_field(kwargs, field) -> None:
     with pytest.raises(InputError) as caught:
         member_sheet(W14, [load], length="20 ft", **kwargs)
     assert caught.value.field == field
+
+
+def test_fixed_fixed_uniform_load_matches_the_closed_form() -> None:
+    sheet = member_sheet(W14, [], length="20 ft", supports="fixed-fixed", distributed=[UNIFORM])
+    # AISC Manual (16th ed.) Table 3-23 Case 15, beam fixed at both ends, uniformly
+    # distributed load: M at the supports wL²/12 = 66.7 kip·ft, at the centre wL²/24.
+    # Hogging at the ends: the internal M_x there is positive (top in tension), so the
+    # couple the support applies to the member at z = 0 is its negative (statics).
+    assert _value(sheet, "M_xS1", "kip*ft") == pytest.approx(-2 * 400 / 12, rel=1e-3)
+    assert _value(sheet, "M_x", "kip*ft") == pytest.approx(2 * 400 / 12, rel=1e-3)
+    assert _value(sheet, "z_s", "ft") in (pytest.approx(0.0, abs=1e-9), pytest.approx(20.0))
+    sheet = member_sheet(
+        W14, [], length="20 ft", supports="fixed-fixed", distributed=[UNIFORM], station="10 ft"
+    )
+    assert _value(sheet, "M_x", "kip*ft") == pytest.approx(-2 * 400 / 24, rel=1e-3)
+
+
+def test_a_cantilever_fixed_at_its_far_end_carries_the_reaction_beyond_the_cut() -> None:
+    load = point_load("P", components=("0 kip", "-3 kip", "0 kip"), z="0 ft")
+    sheet = member_sheet(
+        W14, [load], length="8 ft", supports="fixed-free", support_positions=["8 ft"],
+        station="4 ft",
+    )  # fmt: skip
+    # Statics of the part beyond the cut (the fixed end's reactions): M = −P·a = 3·4 kip·ft
+    # at mid-length of a cantilever loaded at its tip (AISC Manual Table 3-23 Case 22).
+    assert _value(sheet, "R_yS1", "kip") == pytest.approx(3.0)
+    assert _value(sheet, "M_x", "kip*ft") == pytest.approx(12.0, rel=1e-9)
+
+
+def test_auto_station_on_a_cantilever_with_point_loads_finds_the_support() -> None:
+    load = point_load("P", components=("0 kip", "-3 kip", "0 kip"), z="60 in")
+    sheet = member_sheet(W14, [load], length="60 in", station="auto")
+    # Statics of a tip-loaded cantilever (AISC Manual Table 3-23 Case 22): M_max = P·L at
+    # the support.
+    assert _value(sheet, "z_s", "in") == pytest.approx(0.0, abs=1e-9)
+    assert _value(sheet, "M_x", "kip*in") == pytest.approx(180.0)
