@@ -112,8 +112,14 @@ def member_figure(
     if not cantilever:
         for item in supports:
             _draw_support(svg, obstacles, frame, item, L, d, unit)
-    for number, load in enumerate(distributed):
+    # Every row of arrows first, then their names, so no name lands on a later row.
+    named = [
         _draw_distributed(svg, obstacles, frame, load, d, number, unit)
+        for number, load in enumerate(distributed)
+    ]
+    for at, text in named:
+        center, _ = place_label(obstacles, at, (1.0, 0.0), text, size=SMALL_FONT_SIZE, gap=4)
+        svg.text(center, text, size=SMALL_FONT_SIZE, css_class="distributed-label")
     dimensioned: set[tuple[float, float]] = set()
     for number, load in enumerate(placed):
         # Loads sharing a point (a bracket and the wind on it) share one e_y dimension.
@@ -527,20 +533,21 @@ def _draw_distributed(
     d: float,
     number: int,
     unit: str,
-) -> None:
-    """A row of arrows from the load's outline to the member, above it, named with q."""
+) -> tuple[Point, str]:
+    """A row of arrows from the load's outline down to the member's top, one row above
+    the other; returns where its name goes (beside the row's end) and the name."""
     a = float(load.z_start.to(unit).m)
     b = float(load.z_end.to(unit).m)
     unit_q = load.q_start[0].units
     start = [float(value.to(unit_q).m) for value in load.q_start]
     end = [float(value.to(unit_q).m) for value in load.q_end]
     biggest = max(max(abs(value) for value in start), max(abs(value) for value in end), 1e-300)
-    top = frame.point(0, d / 2)[1] - 4 - number * 30
+    top = frame.point(0, d / 2)[1] - 4 - number * 34
     height = 22.0
 
     def size_at(t: float) -> float:
         values = [first + t * (last - first) for first, last in zip(start, end, strict=True)]
-        return math.sqrt(values[1] ** 2 + values[2] ** 2 + values[0] ** 2) / biggest
+        return math.sqrt(sum(value * value for value in values)) / biggest
 
     left, right = frame.point(a, 0)[0], frame.point(b, 0)[0]
     count = max(2, int((right - left) / 18) + 1)
@@ -553,15 +560,12 @@ def _draw_distributed(
             arrow(svg, (x, tail), (x, top), width=1.0, css_class="distributed-arrow")
     svg.polyline(outline, width=1.2)
     obstacles.add_box(Box(left, min(y for _, y in outline), right, top))
-    q = load.q_start if not any(end[i] != start[i] for i in range(3)) else None
-    named = [
-        f"q{axis} = {quantity_text(value)}"
-        for axis, value in zip("xyz", q or load.q_start, strict=True)
-        if value.m != 0
-    ]
-    text = f"{load.name}: " + (", ".join(named) if q else "from " + ", ".join(named) + " (varying)")
-    center, _ = place_label(
-        obstacles, ((left + right) / 2, min(y for _, y in outline)), (0.0, -1.0), text,
-        size=SMALL_FONT_SIZE,
-    )  # fmt: skip
-    svg.text(center, text, size=SMALL_FONT_SIZE, css_class="distributed-label")
+    parts = []
+    for axis, first, last in zip("xyz", load.q_start, load.q_end, strict=True):
+        if first.m == 0 and last.to(unit_q).m == 0:
+            continue
+        if math.isclose(float(first.to(unit_q).m), float(last.to(unit_q).m)):
+            parts.append(f"q{axis} = {quantity_text(first)}")
+        else:
+            parts.append(f"q{axis} = {quantity_text(first)} to {quantity_text(last.to(unit_q))}")
+    return (right, (top + min(y for _, y in outline)) / 2), f"{load.name}: {', '.join(parts)}"
