@@ -1,12 +1,17 @@
-"""The member combined-stress calc: a cantilever under inclined, offset loads, checked at a station.
+"""The member combined-stress calc: a member under inclined, offset loads, checked at a station.
 
 :func:`member_sheet` writes, with the engine's public API only: the axis system
 and sign convention in words, the inputs, the resolution of each load, the
-internal forces at the station from statics of the free part, the section
+distributed loads and self-weight as resultants, for a member on supports the
+reactions (direct stiffness method) and the equilibrium of the member, the
+internal forces at the station from statics of the part beyond the cut, the section
 properties with their sources, the stresses at every stress point of the section
 (each term with its sign, then the sum), a per-point summary, the governing
 point for each measure and a generic allowable-stress check of the von Mises
-stress (not a specification check).
+stress (not a specification check) or a specification's checks. A cantilever fixed
+at z = 0 with point loads is written as before (statics of the free part, the
+closed-form tip deflection); any other member is solved by
+:mod:`calcsheet.calcs.member_analysis`, which also finds the critical station.
 """
 
 from __future__ import annotations
@@ -216,6 +221,7 @@ def member_sheet(
             f"one type for each of the {len(spread)} distributed loads",
         )
     brace_points = validate_braces(braces, length_q)
+    parse_signed_axis(gravity, field="gravity")
     weight: SectionWeight | None = None
     if self_weight:
         own, weight = member_self_weight(section, length_q, gravity)
@@ -1016,7 +1022,8 @@ def _write_reactions(
         )  # fmt: skip
     free = "—"
     sheet.table(
-        ["Support", "R_x", "R_y", "R_z", "M_x", "M_y", "M_z"],
+        # Plain text headers as engineers write them (a header is not math).
+        ["Support", "Rx", "Ry", "Rz", "Mx", "My", "Mz"],
         [
             [
                 record.name,

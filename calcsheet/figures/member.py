@@ -551,14 +551,44 @@ def _draw_distributed(
 
     left, right = frame.point(a, 0)[0], frame.point(b, 0)[0]
     count = max(2, int((right - left) / 18) + 1)
+    # The arrows' direction in the elevation (z right, y up on paper): a load along the
+    # member axis (a column's self-weight) is a row of arrows along z; one along x only
+    # a row of ⊗ (+x) or ⊙ (−x).
+    reference = start if any(start) else end
+    across = math.hypot(reference[2], reference[1])
+    direction = (reference[2] / across, -reference[1] / across) if across > 0 else None
     outline = []
     for t in np.linspace(0.0, 1.0, count):
         x = left + t * (right - left)
-        tail = top - 6 - height * size_at(float(t))
+        reach = 6 + height * size_at(float(t))
+        tail = top - reach
         outline.append((x, tail))
-        if tail < top - 3:
-            arrow(svg, (x, tail), (x, top), width=1.0, css_class="distributed-arrow")
-    svg.polyline(outline, width=1.2)
+        if reach < 9:
+            continue
+        if direction is None:
+            centre = (x, top - 8)
+            svg.circle(centre, 3.5, fill=PAPER, stroke=INK, width=1.0)
+            if reference[0] < 0:
+                svg.circle(centre, 1.0, fill=INK)
+            else:
+                svg.line((x - 2.4, top - 10.4), (x + 2.4, top - 5.6), width=0.8)
+                svg.line((x - 2.4, top - 5.6), (x + 2.4, top - 10.4), width=0.8)
+            continue
+        ux, uy = direction
+        if uy >= 0.3:  # toward the member: the tip on its top face
+            arrow(svg, (x - ux * reach, top - uy * reach), (x, top), width=1.0,
+                  css_class="distributed-arrow")  # fmt: skip
+        elif uy <= -0.3:  # away from the member: the tail on its top face
+            arrow(svg, (x, top), (x + ux * reach, top + uy * reach), width=1.0,
+                  css_class="distributed-arrow")  # fmt: skip
+        else:  # along the member: short arrows above it
+            half = 6.0 * ux
+            arrow(svg, (x - half, top - 8), (x + half, top - 8 + 6.0 * uy), width=1.0,
+                  css_class="distributed-arrow")  # fmt: skip
+    if direction is not None and abs(direction[1]) >= 0.3:  # the intensity across the member
+        svg.polyline(outline, width=1.2)
+    else:
+        outline = [(left, top - 14), (right, top - 14)]
     obstacles.add_box(Box(left, min(y for _, y in outline), right, top))
     parts = []
     for axis, first, last in zip("xyz", load.q_start, load.q_end, strict=True):
