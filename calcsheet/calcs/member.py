@@ -48,6 +48,7 @@ from calcsheet.calcs.member_analysis import (
     forces_at,
     is_cantilever,
     member_self_weight,
+    recommended_K,
     resolve_supports,
     scan_stations,
     shear_modulus,
@@ -227,6 +228,11 @@ def member_sheet(
         own, weight = member_self_weight(section, length_q, gravity)
         spread, spread_types = [*spread, own], [*spread_types, "D"]
     cantilever = is_cantilever(held)
+    if design is not None and design.K is None and not cantilever:
+        # The standard's default K is a fixed-free member's; a named case has its own.
+        case_K = recommended_K(case, design.kind)
+        if case_K is not None:
+            basis = dataclasses.replace(basis, K=case_K)
     if station is None:
         station = "0 in" if cantilever else "auto"
     auto = isinstance(station, str) and station.strip().lower() == "auto"

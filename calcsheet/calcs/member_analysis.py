@@ -113,6 +113,20 @@ def resolve_supports(
     return "", items
 
 
+# AISC 360-22 Commentary Table C-A-7.1, recommended design values of K for the ideal end
+# conditions (from memory of the Commentary): fixed-fixed 0.65, fixed-pinned 0.80,
+# pinned-pinned 1.0, fixed-free 2.1 (the standard's own default).
+_AISC_K = {"pinned-pinned": 1.0, "fixed-pinned": 0.80, "fixed-fixed": 0.65}
+
+
+def recommended_K(case: str, kind: str) -> float | None:
+    """K for a named support case where the standard's table gives it; None otherwise
+    (the standard's default, K of a fixed-free member, then applies)."""
+    if kind == "AISC 360-22":
+        return _AISC_K.get(case)
+    return None
+
+
 def is_cantilever(supports: Sequence[Support]) -> bool:
     """One fixed support at z = 0: the member sheet's cantilever."""
     return len(supports) == 1 and supports[0].restrains == FIXED and supports[0].z.m == 0

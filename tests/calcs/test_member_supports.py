@@ -315,3 +315,14 @@ def test_cantilever_under_its_self_weight_deflects_as_the_closed_form() -> None:
     assert _value(sheet, "delta_max", "in") == pytest.approx(w * L**4 / (8 * E * I), rel=1e-3)
     assert _value(sheet, "M_x", "kip*in") == pytest.approx(w * L**2 / 2, rel=1e-9)
     assert "R_yS1" not in {part.name for part in sheet.inputs}
+
+
+def test_a_named_support_case_takes_its_own_effective_length_factor() -> None:
+    load = point_load("P", components=("0 kip", "0 kip", "-50 kip"), z="14 ft")
+    for case, K in (("pinned-pinned", 1.0), ("fixed-fixed", 0.65), ("fixed-free", 2.1)):
+        sheet = member_sheet(
+            catalog_section("W10X49"), [load], length="14 ft", supports=case, station="0 ft",
+            design=DesignBasis(kind="AISC 360-22"),
+        )  # fmt: skip
+        # AISC 360-22 Commentary Table C-A-7.1, recommended design values (from memory).
+        assert float(sheet.value("K").m) == pytest.approx(K)
