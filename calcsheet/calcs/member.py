@@ -48,6 +48,7 @@ from calcsheet.calcs.member_analysis import (
     forces_at,
     is_cantilever,
     member_self_weight,
+    permanent_type,
     recommended_K,
     resolve_supports,
     scan_stations,
@@ -163,8 +164,9 @@ def member_sheet(
     a case of :data:`~calcsheet.mechanics.SUPPORT_CASES` (placed at
     ``support_positions`` when given) or :func:`~calcsheet.mechanics.support`
     objects; ``distributed`` are :func:`~calcsheet.mechanics.distributed_load`
-    results of ``distributed_types`` (all D when not given); ``self_weight`` adds
-    the member's weight (type D) along ``gravity``; ``braces`` are brace points
+    results of ``distributed_types`` (all dead load when not given: D, or G with
+    EN 1990); ``self_weight`` adds the member's weight (dead load) along
+    ``gravity``; ``braces`` are brace points
     along the member (checked and kept for the unbraced lengths).
 
     ``station`` "auto" checks the member at the critical station: every candidate
@@ -183,6 +185,13 @@ def member_sheet(
     """
     if detail not in DETAILS:
         raise InputError("sheet detail", detail, " or ".join(f'"{d}"' for d in DETAILS))
+    _require_list(supports, "supports", "a support case name or a list of supports", text=True)
+    _require_list(distributed, "distributed", "a list of distributed loads")
+    _require_list(braces, "braces", "a list of brace stations, such as ['6 ft', '12 ft']")
+    if support_positions is not None:
+        _require_list(support_positions, "support positions", "a list of stations")
+    if distributed_types is not None:
+        _require_list(distributed_types, "distributed types", "a list of load types")
     arguments = {
         "section": section,
         "loads": list(loads),
@@ -214,7 +223,10 @@ def member_sheet(
     length_q = member_length(length)
     case, held = resolve_supports(supports, support_positions, length_q)
     spread = validate_distributed(distributed, length_q)
-    spread_types = list(distributed_types) if distributed_types is not None else ["D"] * len(spread)
+    dead = permanent_type(basis)
+    spread_types = (
+        list(distributed_types) if distributed_types is not None else [dead] * len(spread)
+    )
     if len(spread_types) != len(spread):
         raise InputError(
             "distributed types",
@@ -226,7 +238,7 @@ def member_sheet(
     weight: SectionWeight | None = None
     if self_weight:
         own, weight = member_self_weight(section, length_q, gravity)
-        spread, spread_types = [*spread, own], [*spread_types, "D"]
+        spread, spread_types = [*spread, own], [*spread_types, dead]
     cantilever = is_cantilever(held)
     if design is not None and design.K is None and not cantilever:
         # The standard's default K is a fixed-free member's; a named case has its own.
@@ -379,6 +391,14 @@ def member_sheet(
             )
     rebuild_on_change(sheet, member_sheet, arguments)
     return sheet
+
+
+def _require_list(value: object, field: str, expected: str, *, text: bool = False) -> None:
+    """Raise :class:`InputError` unless ``value`` is a list or tuple (or text, if allowed)."""
+    if isinstance(value, str) and text:
+        return
+    if isinstance(value, (str, bytes)) or not isinstance(value, Sequence):
+        raise InputError(field, value, expected)
 
 
 @dataclass(frozen=True)

@@ -127,6 +127,13 @@ def recommended_K(case: str, kind: str) -> float | None:
     return None
 
 
+def permanent_type(basis: DesignBasis) -> str:
+    """The load type of permanent (dead) load in the basis's combinations: G in EN 1990,
+    D in ASCE 7 and when loads are taken as given. The self-weight has this type."""
+    standard = basis.combination_standard or ""
+    return "G" if standard.startswith("EN") else "D"
+
+
 def is_cantilever(supports: Sequence[Support]) -> bool:
     """One fixed support at z = 0: the member sheet's cantilever."""
     return len(supports) == 1 and supports[0].restrains == FIXED and supports[0].z.m == 0

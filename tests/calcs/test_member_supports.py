@@ -257,6 +257,9 @@ def _zero_length_load() -> DistributedLoad:
             q_start=("0 kip/ft", "-1 kip/ft", "0 kip/ft"))]}, "distributed load long z_end"),
         ({"supports": "pinned-pinned", "braces": ["5 ft", "21 ft"]}, "braces[1]"),
         ({"supports": "pinned-pinned", "gravity": "down"}, "gravity"),
+        ({"supports": 123}, "supports"),
+        ({"supports": "pinned-pinned", "braces": "5 ft"}, "braces"),
+        ({"supports": "pinned-pinned", "distributed": None}, "distributed"),
         ({"supports": "pinned-pinned", "distributed": [UNIFORM], "distributed_types": []},
          "distributed types"),
     ],
@@ -326,3 +329,19 @@ def test_a_named_support_case_takes_its_own_effective_length_factor() -> None:
         )  # fmt: skip
         # AISC 360-22 Commentary Table C-A-7.1, recommended design values (from memory).
         assert float(sheet.value("K").m) == pytest.approx(K)
+
+
+def test_en_1990_takes_the_self_weight_and_distributed_loads_as_permanent_g() -> None:
+    load = point_load("P", components=("0 kN", "-20 kN", "0 kN"), z="2 m")
+    floor = distributed_load(
+        "floor", z_start="0 m", z_end="6 m", q_start=("0 kN/m", "-4 kN/m", "0 kN/m")
+    )
+    sheet = member_sheet(
+        catalog_section("IPE 300"), [load], length="6 m", supports="two-span",
+        load_types=["Q"], distributed=[floor], self_weight=True, units="SI", Fy="355 MPa",
+        design=DesignBasis(kind="EN 1993-1-1"),
+    )  # fmt: skip
+    # EN 1990 names permanent actions G (Eq. 6.10): both loads enter with γ_G.
+    assert "gamma_G" in {part.name for part in sheet.inputs}
+    # EN 10365:2017 nominal mass of an IPE 300: 42.2 kg/m (the catalog's), times g_n.
+    assert _value(sheet, "w_sw", "N/m") == pytest.approx(42.2 * 9.80665, rel=1e-9)
