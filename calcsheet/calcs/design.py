@@ -132,7 +132,10 @@ class CombinationPlan:
     def search_forces(self) -> np.ndarray:
         """The rows of forces a catalog search must pass: every station scanned, or the
         station's combinations."""
-        return self.forces if self.scanned_forces is None else self.scanned_forces
+        if self.scanned_forces is None:
+            return self.forces
+        # A station's two sides repeat each other where nothing acts there: once is enough.
+        return np.unique(self.scanned_forces, axis=0)
 
 
 def forces_by_type(

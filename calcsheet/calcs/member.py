@@ -320,7 +320,14 @@ def member_sheet(
             for number, (load, kind) in enumerate(zip(spread, spread_types, strict=True), start=1)
         ]  # fmt: skip
         sheet.figure(
-            member_drawing(section, loads, length_unit, supports=held, distributed=spread),
+            member_drawing(
+                section,
+                loads,
+                length_unit,
+                supports=held,
+                distributed=spread,
+                braces=brace_points,
+            ),
             _figure_caption(cantilever, bool(spread)),
         )
         factors = write_combinations(sheet, plan, every_type, preset) if plan else {}
@@ -1153,10 +1160,11 @@ def _write_station_cases(
     sheet.heading("Critical station of every check")
     sheet.text(
         f"Candidate stations: {len(scan.stations)} along the member (supports, load points, "
-        "ends of distributed loads, points of zero shear and a regular grid of L/40), each "
-        "taken with the loads there beyond the cut and behind it, under every combination; "
-        "every check evaluated there by the procedure written out above (computed when the "
-        "sheet was built). The sheet is written at the station of the governing check."
+        "ends of distributed loads, points of zero shear, a regular grid of L/40 and a finer "
+        "grid around each check's worst station), each taken with the loads there beyond the "
+        "cut and behind it, under every combination; every check evaluated there by the "
+        "procedure written out above (computed when the sheet was built). The sheet is "
+        "written at the station of the governing check."
     )
     sheet.table(
         ["Check", "Worst utilization", "Combination", "Station"],

@@ -9,6 +9,8 @@ from __future__ import annotations
 
 from collections.abc import Callable, Sequence
 
+import pint
+
 from calcsheet.engine import Sheet
 from calcsheet.figures import member_figure, normal_stress_figure, section_figure
 from calcsheet.mechanics import applied_moment, point_load
@@ -63,6 +65,7 @@ def member_drawing(
     *,
     supports: Sequence[Support] = (),
     distributed: Sequence[DistributedLoad] = (),
+    braces: Sequence[pint.Quantity] = (),
 ) -> Callable[[Sheet], str]:
     """The elevation and end view of the member with its loads and supports, as they are now.
 
@@ -81,6 +84,7 @@ def member_drawing(
             unit=unit,
             supports=supports,
             distributed=distributed,
+            braces=braces,
         )
 
     return draw

@@ -48,7 +48,7 @@ from calcsheet.figures.style import (
     SMALL_FONT_SIZE,
     THIN,
 )
-from calcsheet.figures.svg import Point, Svg
+from calcsheet.figures.svg import Point, Svg, text_width
 from calcsheet.mechanics.distributed import DistributedLoad
 from calcsheet.mechanics.loads import AppliedMoment, PointLoad
 from calcsheet.mechanics.supports import FIXED, PINNED, ROLLER, Support
@@ -79,6 +79,7 @@ def member_figure(
     unit: str = "in",
     supports: Sequence[Support] = (),
     distributed: Sequence[DistributedLoad] = (),
+    braces: Sequence[pint.Quantity] = (),
 ) -> str:
     """SVG of the cantilever: support at z = 0, free end at z = L, the cut at ``station``.
 
@@ -88,7 +89,8 @@ def member_figure(
     with e_y dimensioned; ``moments`` are curved arrows (Mx) with their
     components written beside them. Lengths are written in ``unit``. ``supports``
     (none: a cantilever fixed at z = 0) are drawn with their symbols and
-    ``distributed`` loads as rows of arrows.
+    ``distributed`` loads as rows of arrows, ``braces`` (brace points) as crosses
+    below the member.
     """
     member_length = parse_quantity(length, field="member length", dimension="length").to(unit)
     cut = parse_quantity(station, field="station", dimension="length").to(unit)
@@ -112,6 +114,8 @@ def member_figure(
     if not cantilever:
         for item in supports:
             _draw_support(svg, obstacles, frame, item, L, d, unit)
+    for point in braces:
+        _draw_brace(svg, obstacles, frame, float(point.to(unit).m), d)
     # Every row of arrows first, then their names, so no name lands on a later row.
     named = [
         _draw_distributed(svg, obstacles, frame, load, d, number, unit)
@@ -140,6 +144,8 @@ def member_figure(
     notes = ["Elevation (y-z plane); forces at their true angle, arrow lengths not to scale"]
     if factor > 1:
         notes.append(f"vertical scale ×{factor}: depth and offsets enlarged, z to scale")
+    if braces:
+        notes.append("× brace point (lateral restraint)")
     if any(load.in_page == 0 for load in placed):
         notes.append("⊗ force along +x (into the page), ⊙ along −x")
     bottom = svg.y_max + 8
@@ -523,6 +529,10 @@ def _draw_support(
         obstacles.add_box(Box(x - size, bottom, x + size, ground + 4))
     label_at = (x, bottom + size + 14)
     svg.text(label_at, item.name, size=SMALL_FONT_SIZE, bold=True, css_class="support-label")
+    half = text_width(item.name, SMALL_FONT_SIZE) / 2 + 1
+    obstacles.add_box(
+        Box(x - half, label_at[1] - SMALL_FONT_SIZE, x + half, label_at[1] + SMALL_FONT_SIZE / 2)
+    )
 
 
 def _draw_distributed(
@@ -599,3 +609,13 @@ def _draw_distributed(
         else:
             parts.append(f"q{axis} = {quantity_text(first)} to {quantity_text(last.to(unit_q))}")
     return (right, (top + min(y for _, y in outline)) / 2), f"{load.name}: {', '.join(parts)}"
+
+
+def _draw_brace(svg: Svg, obstacles: Obstacles, frame: Frame, z: float, d: float) -> None:
+    """A brace point: a cross on a short stem below the member's bottom face."""
+    x, bottom = frame.point(z, -d / 2)
+    stem_end = bottom + 9
+    svg.line((x, bottom), (x, stem_end), width=1.0, css_class="brace")
+    for dx in (-3.5, 3.5):
+        svg.line((x - dx, stem_end - 3.5), (x + dx, stem_end + 3.5), width=1.4, css_class="brace")
+    obstacles.add_box(Box(x - 4, bottom, x + 4, stem_end + 4))

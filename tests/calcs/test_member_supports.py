@@ -345,3 +345,19 @@ def test_en_1990_takes_the_self_weight_and_distributed_loads_as_permanent_g() ->
     assert "gamma_G" in {part.name for part in sheet.inputs}
     # EN 10365:2017 nominal mass of an IPE 300: 42.2 kg/m (the catalog's), times g_n.
     assert _value(sheet, "w_sw", "N/m") == pytest.approx(42.2 * 9.80665, rel=1e-9)
+
+
+def test_the_member_drawing_shows_supports_distributed_loads_and_braces() -> None:
+    from calcsheet.figures import member_figure
+
+    held = support_case("overhang", "24 ft", positions=["0 ft", "18 ft"])
+    svg = member_figure(
+        "24 ft", "6 ft", OVERHANG_LOADS, section=W14, unit="ft", supports=held,
+        distributed=OVERHANG_SPREAD, braces=[Quantity(9, "ft")],
+    )  # fmt: skip
+    # Our own symbols (common practice, no source): a label per support, the load's name
+    # with its values at both ends, a cross per brace point with the note that says so.
+    assert svg.count('class="support-label"') == 2
+    assert "w: qy = −0.500 kip/ft to −1.500 kip/ft" in svg
+    assert svg.count('class="brace"') == 3
+    assert "brace point (lateral restraint)" in svg
