@@ -361,3 +361,51 @@ def test_the_member_drawing_shows_supports_distributed_loads_and_braces() -> Non
     assert "w: qy = −0.500 kip/ft to −1.500 kip/ft" in svg
     assert svg.count('class="brace"') == 3
     assert "brace point (lateral restraint)" in svg
+
+
+def test_a_couple_inside_the_span_is_checked_just_beyond_it() -> None:
+    from calcsheet.mechanics import applied_moment
+
+    couple = applied_moment("C", z="5 ft", Mx="40 kip*ft")
+    sheet = member_sheet(W14, [couple], length="20 ft", supports="pinned-pinned")
+    # Statics of a simple beam with a couple C at a = 5 ft: the reactions are ±C/L, the
+    # moment jumps by C at the couple, from C·a/L = 10 to C·(L − a)/L = 30 kip·ft (from
+    # memory, statics). The larger value is just beyond the couple: the cut there leaves
+    # the couple on the part behind it.
+    assert _value(sheet, "z_s", "ft") == pytest.approx(5.0)
+    assert abs(_value(sheet, "M_x", "kip*ft")) == pytest.approx(30.0, rel=1e-9)
+    assert "excluded" in sheet["z_1"].description  # the couple: behind the cut
+
+
+def test_the_sheets_forces_are_the_frame_solutions_at_the_station() -> None:
+    basis = DesignBasis(kind="AISC 360-22")
+    sheet = member_sheet(
+        W14, OVERHANG_LOADS, length="24 ft", supports="overhang",
+        support_positions=["0 ft", "18 ft"], distributed=OVERHANG_SPREAD,
+        load_types=["L", "D"], design=basis, self_weight=True,
+    )  # fmt: skip
+    from calcsheet.calcs.member_analysis import member_self_weight
+
+    length = Quantity(24, "ft")
+    held = support_case("overhang", length, positions=["0 ft", "18 ft"])
+    own, _ = member_self_weight(W14, length, "-y")
+    analysis = solve_member(
+        W14, length, held, "overhang", [*OVERHANG_LOADS, *OVERHANG_SPREAD, own],
+        ["L", "D", "D", "D"], basis,
+    )  # fmt: skip
+    station = float(sheet.value("z_s").to("m").m)
+    units = ("N", "N", "N", "N*m", "N*m", "N*m")
+    written = np.array(
+        [
+            float(sheet.value(name).to(unit).m)
+            for name, unit in zip(("N", "V_x", "V_y", "T", "M_x", "M_y"), units, strict=True)
+        ]
+    )
+    # The statics written on the sheet against the solver's own (the same member), for
+    # some combination and side: they agree to round-off.
+    rows = np.concatenate(
+        [analysis.result.internal_forces([station], analysis.factors, side=side)[:, 0, :]
+         for side in ("station", "right")]
+    )  # fmt: skip
+    scale = np.max(np.abs(rows), axis=0) + 1.0
+    assert np.min(np.max(np.abs(rows - written) / scale, axis=1)) < 1e-9
