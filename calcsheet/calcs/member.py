@@ -343,7 +343,9 @@ def member_sheet(
             *(part for record in spread_written for part in record.beyond),
             *(reaction for reaction in reactions if reaction.beyond),
         ]
-        forces = _write_internal_forces(sheet, carried, preset, factors, cantilever)
+        forces = _write_internal_forces(
+            sheet, carried, preset, factors, cantilever, just_beyond=side == "right"
+        )
         props = _write_section_properties(sheet, section, model)
         sheet.figure(
             stress_drawing(section, stress),
@@ -741,13 +743,25 @@ def _write_internal_forces(
     preset: dict[str, str],
     factors: dict[str, sp.Symbol],
     cantilever: bool = True,
+    *,
+    just_beyond: bool = False,
 ) -> dict[str, sp.Symbol]:
+    """The six internal forces at the station by statics of the part beyond the cut.
+
+    ``just_beyond``: the cut is just past the station, so loads and supports at the
+    station act on the part behind it (where a check governs on that side of a jump).
+    """
     if cantilever:
         sheet.heading("Internal forces at the station (statics of the free part)")
         reference = "statics of the free part"
     else:
         sheet.heading("Internal forces at the station (statics of the part beyond the cut)")
         reference = "statics of the part beyond the cut"
+    if just_beyond:
+        sheet.text(
+            "The cut is taken just beyond the station, where the check governs: the loads "
+            "and supports at z_s act on the part behind it."
+        )
     carried = [load for load in carried if load.beyond]
     terms = _statics_terms(carried, factors)
     included = ", ".join(dict.fromkeys(load.called for load in carried))
