@@ -703,15 +703,19 @@ _RESULTANT_TERMS: dict[str, tuple[tuple[int, str, str], ...]] = {
 }
 
 
+Terms = dict[str, list[tuple[str, sp.Expr]]]
+
+
 def _statics_terms(
     records: Sequence[WrittenLoad], factors: dict[str, sp.Symbol], lever: str = "a"
-) -> dict[str, list[sp.Expr]]:
-    """Each internal force's terms Σ sign·lever·component (and couples) of ``records``.
+) -> Terms:
+    """Each internal force's terms Σ sign·lever·component (and couples) of ``records``,
+    each with the name of the load or reaction it comes from.
 
     ``lever`` "a" takes each record's lever arm beyond the cut (the statics at the
     station); "z" its position from z = 0 (moments about z = 0, for equilibrium).
     """
-    terms: dict[str, list[sp.Expr]] = {name: [] for name in ("N", "V_x", "V_y", "T", "M_x", "M_y")}
+    terms: Terms = {name: [] for name in ("N", "V_x", "V_y", "T", "M_x", "M_y")}
     for load in records:
         # The load factor of the governing combination multiplies each of the load's
         # terms (1 when the loads are taken as given, and for reactions, which are the
@@ -720,7 +724,7 @@ def _statics_terms(
         if load.couple:
             for name, axis in (("M_x", "x"), ("M_y", "y"), ("T", "z")):
                 if axis in load.couple:
-                    terms[name].append(gamma * load.couple[axis])
+                    terms[name].append((load.called, gamma * load.couple[axis]))
         if not load.force:
             continue
         components = {
@@ -733,8 +737,44 @@ def _statics_terms(
                 if force is None or levers[arm] is None:
                     continue  # no component along this axis, or no offset
                 term = levers[arm] * force if arm else force
-                terms[name].append(term if sign > 0 else -term)
+                terms[name].append((load.called, term if sign > 0 else -term))
     return terms
+
+
+# Terms in one sum beyond which a long sum is written in parts (its substituted line
+# would not fit the width of a page).
+_TERMS_PER_LINE = 4
+
+
+def _sum_step(
+    sheet: Sheet,
+    name: str,
+    terms: list[tuple[str, sp.Expr]],
+    description: str,
+    *,
+    unit: str | None = None,
+    reference: str = "",
+    split: bool = True,
+) -> sp.Symbol:
+    """A step summing ``terms``; a long sum as partial sums of a few loads each, first."""
+    if not split or len(terms) <= _TERMS_PER_LINE:
+        return sheet.step(
+            name, sp.Add(*(term for _, term in terms)), description, unit=unit,
+            reference=reference,
+        )  # fmt: skip
+    size = _TERMS_PER_LINE - 1
+    parts = []
+    for number, first in enumerate(range(0, len(terms), size), start=1):
+        chunk = terms[first : first + size]
+        sources = ", ".join(dict.fromkeys(source for source, _ in chunk))
+        parts.append(
+            sheet.step(
+                f"{name}_p{number}", sp.Add(*(term for _, term in chunk)),
+                f"Part {number} of {description[0].lower()}{description[1:]}: {sources}",
+                unit=unit, reference=reference,
+            )
+        )  # fmt: skip
+    return sheet.step(name, sp.Add(*parts), description, unit=unit, reference=reference)
 
 
 def _write_internal_forces(
@@ -784,15 +824,19 @@ def _write_internal_forces(
     zero: dict[str, sp.Symbol] = {}
     for name, (description, kind) in descriptions.items():
         if terms[name]:
-            expr: sp.Expr = sp.Add(*terms[name])
-        else:  # no load of this kind beyond the cut: a zero with the right unit
-            if kind not in zero:
-                label = "F_0" if kind == "force" else "M_0"
-                zero[kind] = sheet.input(
-                    label, f"0 {preset[kind]}", "Zero: no load of this kind beyond the station"
-                )
-            expr = zero[kind]
-        forces[name] = sheet.step(name, expr, description, reference=reference)
+            # The cantilever with point loads keeps its one-line sums as written before.
+            forces[name] = _sum_step(
+                sheet, name, terms[name], description, reference=reference,
+                split=not (cantilever and all(not load.label for load in carried)),
+            )  # fmt: skip
+            continue
+        # No load of this kind beyond the cut: a zero with the right unit.
+        if kind not in zero:
+            label = "F_0" if kind == "force" else "M_0"
+            zero[kind] = sheet.input(
+                label, f"0 {preset[kind]}", "Zero: no load of this kind beyond the station"
+            )
+        forces[name] = sheet.step(name, zero[kind], description, reference=reference)
     return forces
 
 
@@ -1127,8 +1171,8 @@ def _write_equilibrium(
     for name, force, description, kind in _EQUILIBRIUM:
         if not terms[force]:
             continue
-        sheet.step(
-            name, sp.Add(*terms[force]), description + " (zero: equilibrium)",
+        _sum_step(
+            sheet, name, terms[force], description + " (zero: equilibrium)",
             unit=preset[kind], reference="equilibrium of the member",
         )  # fmt: skip
 
