@@ -389,6 +389,13 @@ def member_sheet(
                     "no sweep: the direction sweep covers a cantilever fixed at z = 0 with "
                     "point loads only",
                 )
+            if basis.lightest_in and plan is None:
+                raise InputError(
+                    "explore lightest_in",
+                    basis.lightest_in,
+                    "no search without load combinations on a member on supports or with "
+                    "distributed loads",
+                )
             # The lightest-section search's deflection is the cantilever's tip formula.
             explored = dataclasses.replace(basis, deflection_ratio=None)
             write_exploration(
