@@ -184,10 +184,22 @@ class CombinationPlan:
     # The utilization of every check under every combination (check key -> (n_combos,)),
     # from the procedure the sheet writes out for the governing combination.
     per_check: dict[str, np.ndarray] = field(default_factory=dict)
+    # The forces of every combination at every candidate station (n, 6) when the member
+    # was scanned along its length: the lightest-section search covers them all.
+    scanned_forces: np.ndarray | None = None
 
     @property
     def governing_combination(self) -> Combination:
         return self.combos[self.governing]
+
+    @property
+    def search_forces(self) -> np.ndarray:
+        """The rows of forces a catalog search must pass: every station scanned, or the
+        station's combinations."""
+        if self.scanned_forces is None:
+            return self.forces
+        # A station's two sides repeat each other where nothing acts there: once is enough.
+        return np.unique(self.scanned_forces, axis=0)
 
 
 def forces_by_type(
@@ -244,12 +256,21 @@ def plan_combinations(
     station: pint.Quantity,
     basis: DesignBasis,
     Fy: pint.Quantity,
+    by_type: np.ndarray | None = None,
 ) -> CombinationPlan | None:
-    """Evaluate every combination of the basis; None when loads are taken as given."""
+    """Evaluate every combination of the basis; None when loads are taken as given.
+
+    ``by_type`` (types present, 6) gives the internal forces at the station of each
+    load type (a member on supports, solved by the frame); by default they are the
+    statics of the cantilever's free part.
+    """
     standard = basis.combination_standard
     if standard is None:
         return None
-    present, by_type = forces_by_type(loads, types, length, station)
+    if by_type is None:
+        present, by_type = forces_by_type(loads, types, length, station)
+    else:
+        present = list(dict.fromkeys(types))
     names = {kind: [load.name for load, t in zip(loads, types, strict=True) if t == kind]
              for kind in present}  # fmt: skip
     combos = combinations(standard, present, **basis.combination_options(names))
@@ -476,7 +497,7 @@ def lightest_section(
     search = basis.standard.search
     if search is None:
         raise InputError("explore lightest_in", basis.lightest_in, "a standard with a search")
-    names, checks = search(basis.lightest_in or "", plan.forces, basis, Fy, length)
+    names, checks = search(basis.lightest_in or "", plan.search_forces, basis, Fy, length)
     keys = list(checks)
     table = np.stack([checks[name] for name in keys])  # (checks, sections, combos)
     per_check = table.max(axis=2)  # (checks, sections)

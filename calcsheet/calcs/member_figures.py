@@ -9,10 +9,14 @@ from __future__ import annotations
 
 from collections.abc import Callable, Sequence
 
+import pint
+
 from calcsheet.engine import Sheet
 from calcsheet.figures import member_figure, normal_stress_figure, section_figure
 from calcsheet.mechanics import applied_moment, point_load
+from calcsheet.mechanics.distributed import DistributedLoad
 from calcsheet.mechanics.loads import AppliedMoment, PointLoad
+from calcsheet.mechanics.supports import Support
 from calcsheet.sections import Section
 
 
@@ -55,9 +59,19 @@ def _current_loads(
 
 
 def member_drawing(
-    section: Section, loads: Sequence[PointLoad | AppliedMoment], unit: str
+    section: Section,
+    loads: Sequence[PointLoad | AppliedMoment],
+    unit: str,
+    *,
+    supports: Sequence[Support] = (),
+    distributed: Sequence[DistributedLoad] = (),
+    braces: Sequence[pint.Quantity] = (),
 ) -> Callable[[Sheet], str]:
-    """The elevation and end view of the member with its loads, as they are now."""
+    """The elevation and end view of the member with its loads and supports, as they are now.
+
+    ``supports`` and ``distributed`` are drawn as built (a change of them rebuilds the
+    sheet); the point loads follow the sheet's current values.
+    """
 
     def draw(sheet: Sheet) -> str:
         forces, couples = _current_loads(sheet, loads)
@@ -68,6 +82,9 @@ def member_drawing(
             section=section,
             moments=couples,
             unit=unit,
+            supports=supports,
+            distributed=distributed,
+            braces=braces,
         )
 
     return draw

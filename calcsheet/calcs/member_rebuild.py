@@ -26,6 +26,10 @@ from calcsheet.errors import InputError
 from calcsheet.mechanics.loads import AppliedMoment, PointLoad, applied_moment, point_load
 
 _LOAD_INPUT = re.compile(r"^(P|theta|z|e_x|e_y|F_x|F_y|F_z|C_x|C_y|C_z)_?(\d+)$")
+_SUPPORT_INPUT = re.compile(r"^z_(S\d+)$")
+# Inputs of distributed load w<n>: q along an axis at its start (a) or end (b), its ends
+# z_wa, z_wb and its offsets e_xw, e_yw.
+_DISTRIBUTED_INPUT = re.compile(r"^(q_[xyz][ab]|z_w[ab]|e_[xy]w)(\d+)$")
 # Inputs of the design basis the member calc passes to the checks, by input name.
 _BASIS_FIELDS = {
     "K": "K",
@@ -52,6 +56,10 @@ def rebuild_on_change(sheet: Sheet, build: Callable[..., Sheet], arguments: dict
         kwargs = dict(arguments)
         loads = list(kwargs["loads"])
         for name, value in changed.items():
+            if _apply_support(name, value, kwargs, values) or _apply_distributed(
+                name, value, kwargs, built
+            ):
+                continue
             if not _apply(name, value, kwargs, loads):
                 raise InputError(
                     f"input {name}",
@@ -104,6 +112,56 @@ def _apply(
         if changed is None:
             return False
         loads[index] = changed
+    return True
+
+
+def _apply_support(
+    name: str, value: pint.Quantity, kwargs: dict[str, Any], values: dict[str, pint.Quantity]
+) -> bool:
+    """A support's position: the case's positions, or the support given one by one."""
+    match = _SUPPORT_INPUT.match(name)
+    supports = kwargs.get("supports")
+    if match is None or supports is None:
+        return False
+    if isinstance(supports, str):
+        count = sum(1 for key in values if _SUPPORT_INPUT.match(key))
+        kwargs["support_positions"] = [values[f"z_S{number}"] for number in range(1, count + 1)]
+        return True
+    changed = [
+        dataclasses.replace(item, z=value) if item.name == match.group(1) else item
+        for item in supports
+    ]
+    if changed == list(supports):
+        return False
+    kwargs["supports"] = changed
+    return True
+
+
+def _apply_distributed(
+    name: str, value: pint.Quantity, kwargs: dict[str, Any], built: dict[str, pint.Quantity]
+) -> bool:
+    """An input of a distributed load (the self-weight's are the section's: refused)."""
+    match = _DISTRIBUTED_INPUT.match(name)
+    spread = list(kwargs.get("distributed") or ())
+    if match is None or not 1 <= int(match.group(2)) <= len(spread):
+        return False
+    key, index = match.group(1), int(match.group(2)) - 1
+    load = spread[index]
+    if key.startswith("q_"):
+        axis = "xyz".index(key[2])
+        at_start, at_end = list(load.q_start), list(load.q_end)
+        uniform = f"q_{key[2]}b{index + 1}" not in built
+        if key[3] == "a" or uniform:
+            at_start[axis] = value
+        if key[3] == "b" or uniform:
+            at_end[axis] = value
+        changed = dataclasses.replace(load, q_start=tuple(at_start), q_end=tuple(at_end))
+    elif key.startswith("z_w"):
+        changed = dataclasses.replace(load, **{"z_start" if key[3] == "a" else "z_end": value})
+    else:
+        changed = dataclasses.replace(load, **{"ex" if key[2] == "x" else "ey": value})
+    spread[index] = changed
+    kwargs["distributed"] = spread
     return True
 
 

@@ -1,4 +1,11 @@
-"""The cantilever in elevation (y-z plane) with its loads, and an end view (x-y plane).
+"""The member in elevation (y-z plane) with its loads and supports, and an end view (x-y plane).
+
+A cantilever fixed at z = 0 is drawn with a hatched wall at its support; any other
+member with a symbol of our own at each support: a fixed end as a hatched wall
+(a hatched block inside the member's length), a pin as a triangle on a hatched
+base, a roller as a triangle on two wheels, any other set of restraints as a
+plain square. Distributed loads are drawn as a row of arrows between their ends
+over an outline of their intensity, named with their values.
 
 The elevation is to scale along z. When the member depth and the load offsets
 would be too thin to read at that scale, the vertical scale alone is enlarged by
@@ -41,8 +48,10 @@ from calcsheet.figures.style import (
     SMALL_FONT_SIZE,
     THIN,
 )
-from calcsheet.figures.svg import Point, Svg
+from calcsheet.figures.svg import Point, Svg, text_width
+from calcsheet.mechanics.distributed import DistributedLoad
 from calcsheet.mechanics.loads import AppliedMoment, PointLoad
+from calcsheet.mechanics.supports import FIXED, PINNED, ROLLER, Support
 from calcsheet.sections import Section
 from calcsheet.units import Quantity, parse_quantity
 
@@ -68,6 +77,9 @@ def member_figure(
     section: Section | None = None,
     moments: Sequence[AppliedMoment] = (),
     unit: str = "in",
+    supports: Sequence[Support] = (),
+    distributed: Sequence[DistributedLoad] = (),
+    braces: Sequence[pint.Quantity] = (),
 ) -> str:
     """SVG of the cantilever: support at z = 0, free end at z = L, the cut at ``station``.
 
@@ -75,7 +87,10 @@ def member_figure(
     section's, and the end view shows its outline). Every point load is an arrow
     at its true angle at its z and e_y (on a lug when it acts outside the depth),
     with e_y dimensioned; ``moments`` are curved arrows (Mx) with their
-    components written beside them. Lengths are written in ``unit``.
+    components written beside them. Lengths are written in ``unit``. ``supports``
+    (none: a cantilever fixed at z = 0) are drawn with their symbols and
+    ``distributed`` loads as rows of arrows, ``braces`` (brace points) as crosses
+    below the member.
     """
     member_length = parse_quantity(length, field="member length", dimension="length").to(unit)
     cut = parse_quantity(station, field="station", dimension="length").to(unit)
@@ -92,7 +107,23 @@ def member_figure(
     frame, factor = _elevation_frame(L, d, placed)
     svg = Svg(title="Member elevation and end view")
     obstacles = Obstacles()
-    _draw_member(svg, obstacles, frame, L, d)
+    cantilever = not supports or (
+        len(supports) == 1 and supports[0].restrains == FIXED and supports[0].z.m == 0
+    )
+    _draw_member(svg, obstacles, frame, L, d, wall=cantilever)
+    if not cantilever:
+        for item in supports:
+            _draw_support(svg, obstacles, frame, item, L, d, unit)
+    for point in braces:
+        _draw_brace(svg, obstacles, frame, float(point.to(unit).m), d)
+    # Every row of arrows first, then their names, so no name lands on a later row.
+    named = [
+        _draw_distributed(svg, obstacles, frame, load, d, number, unit)
+        for number, load in enumerate(distributed)
+    ]
+    for at, text in named:
+        center, _ = place_label(obstacles, at, (1.0, 0.0), text, size=SMALL_FONT_SIZE, gap=4)
+        svg.text(center, text, size=SMALL_FONT_SIZE, css_class="distributed-label")
     dimensioned: set[tuple[float, float]] = set()
     for number, load in enumerate(placed):
         # Loads sharing a point (a bracket and the wind on it) share one e_y dimension.
@@ -102,13 +133,19 @@ def member_figure(
     for moment in moments:
         _draw_moment(svg, obstacles, frame, moment, unit)
     _draw_station(svg, obstacles, frame, float(cut.m), d, unit)
-    _draw_z_dimensions(svg, obstacles, frame, L, d, float(cut.m), placed, unit)
+    extra_rows = [
+        (float(item.z.to(unit).m), f"{item.name}: z = {quantity_text(item.z.to(unit))}")
+        for item in ([] if cantilever else supports)
+    ]
+    _draw_z_dimensions(svg, obstacles, frame, L, d, float(cut.m), placed, unit, extra_rows)
     elevation_left, elevation_right = svg.x_min, svg.x_max
     _draw_triad(svg, obstacles, (elevation_left + 8, svg.y_max + 34))
 
     notes = ["Elevation (y-z plane); forces at their true angle, arrow lengths not to scale"]
     if factor > 1:
         notes.append(f"vertical scale ×{factor}: depth and offsets enlarged, z to scale")
+    if braces:
+        notes.append("× brace point (lateral restraint)")
     if any(load.in_page == 0 for load in placed):
         notes.append("⊗ force along +x (into the page), ⊙ along −x")
     bottom = svg.y_max + 8
@@ -163,12 +200,18 @@ def _elevation_frame(L: float, d: float, loads: Sequence[_PlacedLoad]) -> tuple[
     return Frame(scale, y_scale=scale * factor), factor
 
 
-def _draw_member(svg: Svg, obstacles: Obstacles, frame: Frame, L: float, d: float) -> None:
-    """The member as a band of its depth, the fixed support hatched, the member axis."""
+def _draw_member(
+    svg: Svg, obstacles: Obstacles, frame: Frame, L: float, d: float, *, wall: bool = True
+) -> None:
+    """The member as a band of its depth, the fixed support hatched (a cantilever), the axis."""
     band = np.array([(0.0, -d / 2), (L, -d / 2), (L, d / 2), (0.0, d / 2)])
     paper = frame.ring(band)
     svg.rings([paper.tolist()], fill=MATERIAL, width=OUTLINE_WIDTH, css_class="member")
     obstacles.add_region([paper])
+    if not wall:
+        end_x = frame.point(L, 0)[0]
+        centre_line(svg, None, (-6, 0), (end_x + 18, 0))
+        return
     top, bottom = frame.point(0, d / 2)[1], frame.point(0, -d / 2)[1]
     wall_top, wall_bottom = top - 14, bottom + 14
     svg.line((0, wall_top), (0, wall_bottom), width=2.2, css_class="support")
@@ -322,9 +365,10 @@ def _draw_z_dimensions(
     station: float,
     loads: Sequence[_PlacedLoad],
     unit: str,
+    extra: Sequence[tuple[float, str]] = (),
 ) -> None:
-    """Baseline dimensions from the support: the cut, each load position, the length."""
-    rows: list[tuple[float, str]] = []
+    """Baseline dimensions from z = 0: the cut, each load and support position, the length."""
+    rows: list[tuple[float, str]] = [(z, text) for z, text in extra if 0 < z < L]
     if station > 0:
         rows.append((station, f"z_s = {quantity_text(Quantity(station, unit))}"))
     positions: dict[float, list[str]] = {}
@@ -433,3 +477,145 @@ def _draw_end_view(
         svg.text(center, label, size=FONT_SIZE, bold=True)
     title_y = origin[1] - reach - 16 - FONT_SIZE
     svg.text((origin[0], title_y), "End view from the free end", size=SMALL_FONT_SIZE, fill=NOTE)
+
+
+SUPPORT_SIZE = 11.0  # px, the height of a support symbol below the member
+
+
+def _draw_support(
+    svg: Svg, obstacles: Obstacles, frame: Frame, item: Support, L: float, d: float, unit: str
+) -> None:
+    """A support's symbol at its station, below the member (a wall at a fixed end)."""
+    z = float(item.z.to(unit).m)
+    x, bottom = frame.point(z, -d / 2)
+    top = frame.point(z, d / 2)[1]
+    size = SUPPORT_SIZE
+    if item.restrains == FIXED:
+        if math.isclose(z, 0.0, abs_tol=1e-9 * L) or math.isclose(z, L, rel_tol=1e-9):
+            side = -1.0 if z < L / 2 else 1.0  # the wall on the outside of the end
+            svg.line((x, top - 14), (x, bottom + 14), width=2.2, css_class="support")
+            y = top - 14
+            while y < bottom + 14:
+                end = min(y + 7, bottom + 14)
+                svg.line((x, y), (x + side * (end - y), end), width=THIN)
+                y += 5
+            obstacles.add_box(
+                Box(min(x, x + side * 9), top - 14, max(x, x + side * 9), bottom + 14)
+            )
+        else:
+            block = [(x - 6, top - 8), (x + 6, top - 8), (x + 6, bottom + 8), (x - 6, bottom + 8)]
+            svg.rings([block], fill=PAPER, width=1.6, css_class="support")
+            for offset in (-6.0, 0.0, 6.0):
+                svg.line((x - 6, bottom + 2 + offset), (x + 6, bottom - 10 + offset), width=THIN)
+            obstacles.add_box(Box(x - 6, top - 8, x + 6, bottom + 8))
+    else:
+        apex = (x, bottom)
+        base_y = bottom + size
+        triangle = [apex, (x - size * 0.7, base_y), (x + size * 0.7, base_y)]
+        if item.restrains in (PINNED, ROLLER):
+            svg.polygon(triangle, fill=PAPER, stroke=INK, width=1.4)
+        else:
+            square = [(x - 5, bottom), (x + 5, bottom), (x + 5, bottom + 10), (x - 5, bottom + 10)]
+            svg.polygon(square, fill=PAPER, stroke=INK, width=1.4)
+            base_y = bottom + 10
+        ground = base_y
+        if item.restrains == ROLLER:
+            for dx in (-4.0, 4.0):
+                svg.circle((x + dx, base_y + 3), 2.6, fill=PAPER, stroke=INK, width=1.0)
+            ground = base_y + 6
+        svg.line((x - size, ground), (x + size, ground), width=1.4, css_class="support")
+        for hatch in np.linspace(x - size, x + size - 4, 5):
+            svg.line((hatch + 4, ground), (hatch, ground + 4), width=THIN)
+        obstacles.add_box(Box(x - size, bottom, x + size, ground + 4))
+    label_at = (x, bottom + size + 14)
+    svg.text(label_at, item.name, size=SMALL_FONT_SIZE, bold=True, css_class="support-label")
+    half = text_width(item.name, SMALL_FONT_SIZE) / 2 + 1
+    obstacles.add_box(
+        Box(x - half, label_at[1] - SMALL_FONT_SIZE, x + half, label_at[1] + SMALL_FONT_SIZE / 2)
+    )
+
+
+def _draw_distributed(
+    svg: Svg,
+    obstacles: Obstacles,
+    frame: Frame,
+    load: DistributedLoad,
+    d: float,
+    number: int,
+    unit: str,
+) -> tuple[Point, str]:
+    """A row of arrows from the load's outline down to the member's top, one row above
+    the other; returns where its name goes (beside the row's end) and the name."""
+    a = float(load.z_start.to(unit).m)
+    b = float(load.z_end.to(unit).m)
+    unit_q = load.q_start[0].units
+    start = [float(value.to(unit_q).m) for value in load.q_start]
+    end = [float(value.to(unit_q).m) for value in load.q_end]
+    biggest = max(max(abs(value) for value in start), max(abs(value) for value in end), 1e-300)
+    top = frame.point(0, d / 2)[1] - 4 - number * 34
+    height = 22.0
+
+    def size_at(t: float) -> float:
+        values = [first + t * (last - first) for first, last in zip(start, end, strict=True)]
+        return math.sqrt(sum(value * value for value in values)) / biggest
+
+    left, right = frame.point(a, 0)[0], frame.point(b, 0)[0]
+    count = max(2, int((right - left) / 18) + 1)
+    # The arrows' direction in the elevation (z right, y up on paper): a load along the
+    # member axis (a column's self-weight) is a row of arrows along z; one along x only
+    # a row of ⊗ (+x) or ⊙ (−x).
+    reference = start if any(start) else end
+    across = math.hypot(reference[2], reference[1])
+    direction = (reference[2] / across, -reference[1] / across) if across > 0 else None
+    outline = []
+    for t in np.linspace(0.0, 1.0, count):
+        x = left + t * (right - left)
+        reach = 6 + height * size_at(float(t))
+        tail = top - reach
+        outline.append((x, tail))
+        if reach < 9:
+            continue
+        if direction is None:
+            centre = (x, top - 8)
+            svg.circle(centre, 3.5, fill=PAPER, stroke=INK, width=1.0)
+            if reference[0] < 0:
+                svg.circle(centre, 1.0, fill=INK)
+            else:
+                svg.line((x - 2.4, top - 10.4), (x + 2.4, top - 5.6), width=0.8)
+                svg.line((x - 2.4, top - 5.6), (x + 2.4, top - 10.4), width=0.8)
+            continue
+        ux, uy = direction
+        if uy >= 0.3:  # toward the member: the tip on its top face
+            arrow(svg, (x - ux * reach, top - uy * reach), (x, top), width=1.0,
+                  css_class="distributed-arrow")  # fmt: skip
+        elif uy <= -0.3:  # away from the member: the tail on its top face
+            arrow(svg, (x, top), (x + ux * reach, top + uy * reach), width=1.0,
+                  css_class="distributed-arrow")  # fmt: skip
+        else:  # along the member: short arrows above it
+            half = 6.0 * ux
+            arrow(svg, (x - half, top - 8), (x + half, top - 8 + 6.0 * uy), width=1.0,
+                  css_class="distributed-arrow")  # fmt: skip
+    if direction is not None and abs(direction[1]) >= 0.3:  # the intensity across the member
+        svg.polyline(outline, width=1.2)
+    else:
+        outline = [(left, top - 14), (right, top - 14)]
+    obstacles.add_box(Box(left, min(y for _, y in outline), right, top))
+    parts = []
+    for axis, first, last in zip("xyz", load.q_start, load.q_end, strict=True):
+        if first.m == 0 and last.to(unit_q).m == 0:
+            continue
+        if math.isclose(float(first.to(unit_q).m), float(last.to(unit_q).m)):
+            parts.append(f"q{axis} = {quantity_text(first)}")
+        else:
+            parts.append(f"q{axis} = {quantity_text(first)} to {quantity_text(last.to(unit_q))}")
+    return (right, (top + min(y for _, y in outline)) / 2), f"{load.name}: {', '.join(parts)}"
+
+
+def _draw_brace(svg: Svg, obstacles: Obstacles, frame: Frame, z: float, d: float) -> None:
+    """A brace point: a cross on a short stem below the member's bottom face."""
+    x, bottom = frame.point(z, -d / 2)
+    stem_end = bottom + 9
+    svg.line((x, bottom), (x, stem_end), width=1.0, css_class="brace")
+    for dx in (-3.5, 3.5):
+        svg.line((x - dx, stem_end - 3.5), (x + dx, stem_end + 3.5), width=1.4, css_class="brace")
+    obstacles.add_box(Box(x - 4, bottom, x + 4, stem_end + 4))

@@ -1,0 +1,476 @@
+"""The member on supports: its supports, distributed loads, self-weight, the frame solution,
+the scan for the critical station and the deflection along the member.
+
+The member sheet (:mod:`calcsheet.calcs.member`) writes a member held by any supports
+of :mod:`calcsheet.mechanics.supports`. This module does the numeric work before the
+sheet is written:
+
+* the supports from a case name or :class:`Support` objects, checked on the member;
+* the self-weight from the section's weight per length (the catalog's nominal weight,
+  or the area times the unit weight of steel);
+* the frame solution by the direct stiffness method, one load case per load type, so
+  the plan's load factors combine them without solving again;
+* every candidate station (load points, supports, zero shear, a grid) under every
+  combination, by the standard's numeric evaluator of the checks, to find each
+  check's worst combination and station;
+* the deflection along every span and overhang under the service loads.
+
+All numbers are SI (N, m) floats; quantities at the edges.
+"""
+
+from __future__ import annotations
+
+from collections.abc import Sequence
+from dataclasses import dataclass
+
+import numpy as np
+import pint
+from numpy.typing import NDArray
+
+from calcsheet.calcs.design import DesignBasis
+from calcsheet.errors import InputError
+from calcsheet.mechanics.distributed import DistributedLoad, check_distributed_on_member
+from calcsheet.mechanics.distributed import self_weight as self_weight_load
+from calcsheet.mechanics.frame import FrameResult, member_stiffness, solve_frame
+from calcsheet.mechanics.loads import (
+    AppliedMoment,
+    PointLoad,
+    QuantityInput,
+    check_on_member,
+    parse_signed_axis,
+)
+from calcsheet.mechanics.supports import FIXED, MOTIONS, SUPPORT_CASES, Support, support_case
+from calcsheet.sections import Section
+from calcsheet.standards.combinations import Combination, combinations, factor_matrix
+from calcsheet.units import Quantity, parse_quantity
+
+SOLVER_REFERENCE = "direct stiffness analysis (3-D frame elements)"
+DEFLECTION_METHOD = (
+    "direct stiffness analysis (3-D frame elements); exact for a prismatic Euler-Bernoulli member"
+)
+# EN 1991-1-1:2002 Annex A, Table A.4 gives steel 77.0 to 78.5 kN/m³; the upper value.
+STEEL_UNIT_WEIGHT = Quantity(78.5, "kN/m**3")
+STEEL_UNIT_WEIGHT_SOURCE = "EN 1991-1-1:2002 Annex A, Table A.4 (steel 77.0–78.5 kN/m³)"
+# Standard acceleration of gravity (3rd CGPM, 1901), for a catalog mass per length.
+STANDARD_GRAVITY = Quantity(9.80665, "m/s**2")
+# The shear modulus with the modulus each standard states (G enters the twist only).
+_SHEAR_MODULI = {
+    "29000 ksi": ("11200 ksi", "AISC 360-22 Symbols: G = 11,200 ksi"),
+    "210000 MPa": ("81000 MPa", "EN 1993-1-1 3.2.6(1): G ≈ 81,000 N/mm²"),
+}
+SIDES = ("station", "right")
+"""Both sides of a candidate station: loads there beyond the cut, then behind it."""
+# Stations closer than this fraction of the length are one (as the frame solver's).
+_SAME_STATION = 1e-9
+SELF_WEIGHT_NAME = "self-weight"
+
+
+def describe_motions(item: Support) -> str:
+    """The motions a support restrains, in words."""
+    held = sorted(item.restrains, key=MOTIONS.index)
+    if item.restrains == FIXED:
+        return "every translation and rotation (fixed)"
+    return ", ".join(held)
+
+
+def support_kind(item: Support) -> str:
+    """fixed, pin, roller or a plain 'support' for any other set of restraints."""
+    from calcsheet.mechanics.supports import PINNED, ROLLER
+
+    if item.restrains == FIXED:
+        return "fixed"
+    if item.restrains == PINNED:
+        return "pin"
+    if item.restrains == ROLLER:
+        return "roller"
+    return "support"
+
+
+def resolve_supports(
+    supports: str | Sequence[Support],
+    positions: Sequence[QuantityInput] | None,
+    length: pint.Quantity,
+) -> tuple[str, tuple[Support, ...]]:
+    """The case name ('' for supports given one by one) and the supports, on the member."""
+    if isinstance(supports, str):
+        key = supports.strip().lower()
+        if key not in SUPPORT_CASES:
+            raise InputError("supports", supports, f"one of {', '.join(SUPPORT_CASES)}")
+        return key, support_case(key, length, positions=positions)
+    items = tuple(supports)
+    if not items:
+        raise InputError("supports", [], "at least one support", "the member is not held")
+    if positions is not None:
+        raise InputError(
+            "support positions",
+            positions,
+            "no positions when the supports are given one by one (each has its z)",
+        )
+    for number, item in enumerate(items):
+        if not isinstance(item, Support):
+            raise InputError(f"supports[{number}]", item, "a support made by support(...)")
+        check_on_member(item.z, length, field=f"support {item.name} z", shown=f"{item.z:~P}")
+    return "", items
+
+
+# AISC 360-22 Commentary Table C-A-7.1, recommended design values of K for the ideal end
+# conditions (from memory of the Commentary): fixed-fixed 0.65, fixed-pinned 0.80,
+# pinned-pinned 1.0, fixed-free 2.1 (the standard's own default).
+_AISC_K = {"pinned-pinned": 1.0, "fixed-pinned": 0.80, "fixed-fixed": 0.65}
+
+
+def recommended_K(case: str, kind: str) -> float | None:
+    """K for a named support case where the standard's table gives it; None otherwise
+    (the standard's default, K of a fixed-free member, then applies)."""
+    if kind == "AISC 360-22":
+        return _AISC_K.get(case)
+    return None
+
+
+def permanent_type(basis: DesignBasis) -> str:
+    """The load type of permanent (dead) load in the basis's combinations: G in EN 1990,
+    D in ASCE 7 and when loads are taken as given. The self-weight has this type."""
+    standard = basis.combination_standard or ""
+    return "G" if standard.startswith("EN") else "D"
+
+
+def is_cantilever(supports: Sequence[Support]) -> bool:
+    """One fixed support at z = 0: the member sheet's cantilever."""
+    return len(supports) == 1 and supports[0].restrains == FIXED and supports[0].z.m == 0
+
+
+def validate_distributed(
+    distributed: Sequence[DistributedLoad], length: pint.Quantity
+) -> list[DistributedLoad]:
+    """Each distributed load on the member, with a length."""
+    checked = []
+    for number, load in enumerate(distributed):
+        if not isinstance(load, DistributedLoad):
+            raise InputError(
+                f"distributed[{number}]", load, "a distributed load made by distributed_load(...)"
+            )
+        check_distributed_on_member(load, length)
+        if load.z_end.to(length.units).m - load.z_start.to(length.units).m <= (
+            _SAME_STATION * length.m
+        ):
+            raise InputError(
+                f"distributed load {load.name} z_end",
+                f"{load.z_end:~P}",
+                f"a station beyond z_start = {load.z_start:~P}",
+                "a distributed load needs a length",
+            )
+        checked.append(load)
+    return checked
+
+
+def validate_braces(braces: Sequence[QuantityInput], length: pint.Quantity) -> list[pint.Quantity]:
+    """Brace points (lateral restraints) along the member, each from 0 to L."""
+    points = []
+    for number, value in enumerate(braces):
+        field = f"braces[{number}]"
+        point = parse_quantity(value, field=field, dimension="length")
+        check_on_member(point, length, field=field, shown=value)
+        points.append(point)
+    return sorted(points, key=lambda point: float(point.to(length.units).m))
+
+
+@dataclass(frozen=True)
+class SectionWeight:
+    """The weight per length of the member and how it is found.
+
+    ``kind``: "catalog" (the nominal weight), "mass" (the catalog's mass per length
+    times g) or "area" (area times the unit weight of steel).
+    """
+
+    weight: pint.Quantity
+    kind: str
+    source: str
+
+
+def section_weight(section: Section) -> SectionWeight:
+    """The section's weight per length: catalog nominal weight, else A × unit weight."""
+    table = section.tabulated
+    source = section.sources.get("A", "")
+    if "weight" in table:
+        return SectionWeight(table["weight"].to("lbf/ft"), "catalog", source)
+    if "mass" in table:
+        mass = Quantity(table["mass"]).to("kg/m")
+        return SectionWeight((mass * STANDARD_GRAVITY).to("N/m"), "mass", source)
+    area = section.properties["A"]
+    return SectionWeight((area * STEEL_UNIT_WEIGHT).to("N/m"), "area", STEEL_UNIT_WEIGHT_SOURCE)
+
+
+def member_self_weight(
+    section: Section, length: pint.Quantity, gravity: str
+) -> tuple[DistributedLoad, SectionWeight]:
+    """The self-weight as a uniform distributed load along ``gravity`` over the member."""
+    parse_signed_axis(gravity, field="gravity")
+    weight = section_weight(section)
+    load = self_weight_load(weight.weight, length, gravity_axis=gravity, name=SELF_WEIGHT_NAME)
+    return load, weight
+
+
+def shear_modulus(modulus: str) -> tuple[str, str]:
+    """G and its source for the modulus a standard states (E/2.6, ν = 0.3, otherwise)."""
+    if modulus in _SHEAR_MODULI:
+        return _SHEAR_MODULI[modulus]
+    value = parse_quantity(modulus, field="E", dimension="stress") / 2.6
+    return f"{value.to('MPa').m:.6g} MPa", "G = E/(2(1 + ν)), ν = 0.3"
+
+
+MemberLoad = PointLoad | AppliedMoment | DistributedLoad
+
+
+@dataclass
+class MemberAnalysis:
+    """The member solved for every load type, with the combinations' factors.
+
+    ``types`` name the load cases of ``result`` in order; ``factors`` (combinations,
+    types) combine them (one row of ones when the loads are taken as given).
+    """
+
+    supports: tuple[Support, ...]
+    case: str
+    result: FrameResult
+    types: list[str]
+    combos: list[Combination] | None
+    factors: NDArray[np.float64]
+
+    @property
+    def service_factors(self) -> NDArray[np.float64]:
+        """Every load type at factor 1: the service loads as given."""
+        return np.ones((1, len(self.types)))
+
+
+def combination_factors(
+    basis: DesignBasis, loads: Sequence[MemberLoad], types: Sequence[str]
+) -> tuple[list[str], list[Combination] | None, NDArray[np.float64]]:
+    """The load types present, the basis's combinations and their factor matrix."""
+    present = list(dict.fromkeys(types))
+    standard = basis.combination_standard
+    if standard is None:
+        return present, None, np.ones((1, len(present)))
+    names = {kind: [load.name for load, t in zip(loads, types, strict=True) if t == kind]
+             for kind in present}  # fmt: skip
+    combos = combinations(standard, present, **basis.combination_options(names))
+    return present, combos, factor_matrix(combos, present)
+
+
+def solve_member(
+    section: Section,
+    length: pint.Quantity,
+    supports: tuple[Support, ...],
+    case: str,
+    loads: Sequence[MemberLoad],
+    types: Sequence[str],
+    basis: DesignBasis,
+) -> MemberAnalysis:
+    """Solve the member by the direct stiffness method, one load case per load type."""
+    present, combos, factors = combination_factors(basis, loads, types)
+    cases = [[load for load, t in zip(loads, types, strict=True) if t == kind] for kind in present]
+    modulus = basis.standard.modulus
+    props = section.properties
+    stiffness = member_stiffness(
+        E=modulus,
+        G=shear_modulus(modulus)[0],
+        A=props["A"],
+        Ix=props["Ix"],
+        Iy=props["Iy"],
+        J=props["J"],
+        Ixy=props["Ixy"],
+    )
+    result = solve_frame(length, supports, stiffness, cases, force_unit="N", length_unit="m")
+    return MemberAnalysis(supports, case, result, present, combos, factors)
+
+
+@dataclass
+class StationScan:
+    """Every check under every combination at every candidate station, both sides.
+
+    ``per_check`` maps a check key to utilizations (sides, combinations, stations);
+    ``stations`` in m; ``forces`` (sides, combinations, stations, 6) in N, N·m.
+    """
+
+    stations: NDArray[np.float64]
+    forces: NDArray[np.float64]
+    per_check: dict[str, NDArray[np.float64]]
+    measure: str
+
+    def worst(self, key: str) -> tuple[float, int, int, int]:
+        """A check's worst utilization and its (side, combination, station) indices."""
+        values = self.per_check[key]
+        flat = int(np.argmax(np.where(np.isnan(values), -np.inf, values)))
+        side, combo, station = np.unravel_index(flat, values.shape)
+        return float(values.flat[flat]), int(side), int(combo), int(station)
+
+    def governing_check(self) -> str:
+        """The key of the check with the largest worst utilization."""
+        return max(self.per_check, key=lambda key: self.worst(key)[0])
+
+
+def scan_stations(
+    analysis: MemberAnalysis,
+    section: Section,
+    basis: DesignBasis,
+    Fy: pint.Quantity,
+    length: pint.Quantity,
+    stations: NDArray[np.float64] | None = None,
+) -> StationScan:
+    """Every check at every station (default: the candidates) × combination × side.
+
+    The candidates hold each force's own peaks; a check that adds forces (an
+    interaction sum of two moments) can peak between them, so around each check's
+    worst candidate the stations are refined once (a grid between its neighbours).
+    """
+    candidates = stations is None
+    if stations is None:
+        stations = analysis.result.candidate_stations(analysis.factors)
+    scan = _scan(analysis, section, basis, Fy, length, np.asarray(stations, dtype=float))
+    if not candidates or len(scan.stations) < 3:
+        return scan
+    finer = [scan.stations]
+    for key in scan.per_check:
+        at = scan.worst(key)[3]
+        low = scan.stations[max(at - 1, 0)]
+        high = scan.stations[min(at + 1, len(scan.stations) - 1)]
+        finer.append(np.linspace(low, high, _REFINE))
+    return _scan(analysis, section, basis, Fy, length, np.unique(np.concatenate(finer)))
+
+
+# Stations between a check's worst candidate and its neighbours, when refining.
+_REFINE = 41
+
+
+def _scan(
+    analysis: MemberAnalysis,
+    section: Section,
+    basis: DesignBasis,
+    Fy: pint.Quantity,
+    length: pint.Quantity,
+    stations: NDArray[np.float64],
+) -> StationScan:
+    result = analysis.result
+    forces = np.stack(
+        [result.internal_forces(stations, analysis.factors, side=side) for side in SIDES]
+    )  # (sides, combos, stations, 6)
+    per_check_flat, measure = basis.standard.evaluate(
+        section, forces.reshape(-1, 6), basis, Fy, length
+    )
+    if not per_check_flat:
+        raise InputError("check kind", basis.kind, "a standard whose checks can be evaluated")
+    shape = forces.shape[:3]
+    per_check = {key: np.asarray(values).reshape(shape) for key, values in per_check_flat.items()}
+    return StationScan(stations, forces, per_check, measure)
+
+
+def forces_at(analysis: MemberAnalysis, station: float, side: str) -> NDArray[np.float64]:
+    """Internal forces (types, 6) at one station (m) and side, by load type, in N, N·m."""
+    return analysis.result.internal_forces([station], side=side)[:, 0, :]  # type: ignore[arg-type]
+
+
+def counts_beyond(z: float, station: float, side: str, length: float, reaction: bool) -> bool:
+    """Whether a load or reaction at ``z`` is carried by the cut at ``station`` (m).
+
+    As the frame solver's sides: "station" counts a load at the station beyond the
+    cut, except the reactions at z = 0 when the cut is there; "right" counts it behind.
+    """
+    tolerance = _SAME_STATION * length
+    if abs(z - station) <= tolerance:
+        if side == "right":
+            return False
+        return not (reaction and abs(station) <= tolerance)
+    return z > station
+
+
+@dataclass(frozen=True)
+class DeflectionSegment:
+    """The largest transverse deflection in a span, an overhang or a cantilever."""
+
+    kind: str  # "span", "overhang" or "cantilever"
+    start: float  # m
+    end: float
+    between: str  # "S1–S2", "S1 to the end"...
+    deflection: float  # m, the largest √(u² + v²)
+    at: float  # m
+
+    @property
+    def length(self) -> float:
+        return self.end - self.start
+
+    def utilization(self, n: float) -> float:
+        return self.deflection / (self.length / n)
+
+
+def deflection_segments(analysis: MemberAnalysis, points: int = 401) -> list[DeflectionSegment]:
+    """Each span between supports and each overhang, its largest deflection under the
+    service loads (every load type at factor 1), from the frame solution."""
+    result = analysis.result
+    L = result.length
+    order = sorted(range(len(analysis.supports)), key=lambda i: float(result_z(analysis, i)))
+    zs = [result_z(analysis, i) for i in order]
+    names = [analysis.supports[i].name for i in order]
+    tolerance = 1e-6 * L
+    pieces: list[tuple[str, float, float, str]] = []
+    if zs[0] > tolerance:
+        kind = "cantilever" if len(zs) == 1 and zs[0] >= L - tolerance else "overhang"
+        pieces.append((kind, 0.0, zs[0], f"z = 0 to {names[0]}"))
+    for first, second, a, b in zip(names, names[1:], zs, zs[1:], strict=False):
+        if b - a > tolerance:
+            pieces.append(("span", a, b, f"{first}–{second}"))
+    if zs[-1] < L - tolerance:
+        kind = "cantilever" if len(zs) == 1 and zs[0] <= tolerance else "overhang"
+        pieces.append((kind, zs[-1], L, f"{names[-1]} to z = L"))
+    candidates = result.candidate_stations(analysis.service_factors)
+    segments = []
+    for kind, a, b, between in pieces:
+        stations = np.unique(
+            np.concatenate(
+                [np.linspace(a, b, points), candidates[(candidates >= a) & (candidates <= b)]]
+            )
+        )
+        moved = result.deflections(stations, analysis.service_factors)[0]
+        transverse = np.hypot(moved[:, 0], moved[:, 1])
+        worst = int(np.argmax(transverse))
+        segments.append(
+            DeflectionSegment(kind, a, b, between, float(transverse[worst]), float(stations[worst]))
+        )
+    return segments
+
+
+def result_z(analysis: MemberAnalysis, index: int) -> float:
+    """A support's station in m."""
+    return float(analysis.supports[index].z.to("m").m)
+
+
+@dataclass(frozen=True)
+class ForceDiagrams:
+    """Internal forces along the member, for the diagrams of N, V, T, M.
+
+    ``stations`` in m; ``governing`` (stations, 6) under the governing combination;
+    ``low`` and ``high`` (stations, 6) the envelope over every combination; forces in
+    N and N·m in the order N, Vx, Vy, T, Mx, My. Each station appears twice where a
+    force jumps (the limit from below, then from above).
+    """
+
+    stations: NDArray[np.float64]
+    governing: NDArray[np.float64]
+    low: NDArray[np.float64]
+    high: NDArray[np.float64]
+
+
+def force_diagrams(
+    analysis: MemberAnalysis, governing: int = 0, *, grid: int = 200
+) -> ForceDiagrams:
+    """The stations and the governing and envelope force arrays (SI) along the member."""
+    result = analysis.result
+    stations = np.unique(
+        np.concatenate(
+            [np.linspace(0.0, result.length, grid + 1), result.candidate_stations(analysis.factors)]
+        )
+    )
+    left = result.internal_forces(stations, analysis.factors, side="left")
+    right = result.internal_forces(stations, analysis.factors, side="right")
+    # Interleave both sides so a jump at a load or support is drawn as a vertical step.
+    both = np.stack([left, right], axis=2).reshape(left.shape[0], -1, 6)
+    at = np.repeat(stations, 2)
+    return ForceDiagrams(at, both[governing], both.min(axis=0), both.max(axis=0))
