@@ -63,15 +63,6 @@ FY_RANGE = (Quantity(20, "ksi"), Quantity(150, "ksi"))
 NOTED_OFFSET = 5.0
 REFUSED_OFFSET = 10.0
 
-# Whether the member sheet is given the frame options (supports, distributed loads,
-# self-weight with its gravity axis, brace points, the automatic station). The member
-# sheet takes them from the frame-solver branch (`supports`) on; until it is merged,
-# jobs that need them are refused by name, self-weight is left out and "auto" checks
-# the cantilever at its support (z = 0, the station before "auto"). MERGE: set True
-# once ``member_sheet`` takes these keyword arguments (tests/job/test_frame_inputs.py
-# fails until the two agree).
-FRAME_OPTIONS_ON = False
-
 # A cantilever fixed at z = 0 with point loads only: the sheet's behaviour without
 # frame options.
 DEFAULT_SUPPORTS = "fixed-free"
@@ -140,16 +131,7 @@ class MemberModel:
         return options
 
     def sheet_arguments(self, station: pint.Quantity | str) -> dict[str, object]:
-        """The member sheet's station and frame options, for one of :attr:`stations`.
-
-        Until the member sheet takes frame options (:data:`FRAME_OPTIONS_ON`), "auto"
-        is the cantilever's support, z = 0, and the options are left out (a job
-        needing them was refused when the model was built).
-        """
-        if not FRAME_OPTIONS_ON:
-            if isinstance(station, str):  # "auto"
-                station = 0 * self.length
-            return {"station": station}
+        """The member sheet's station and frame options, for one of :attr:`stations`."""
         return {"station": station, **self.frame_options}
 
 
@@ -352,8 +334,6 @@ def _frame_inputs(job: Job, length: pint.Quantity, problems: _Problems) -> _Fram
                 {"brace": ""},
             )
         braces.append(where)
-    if not FRAME_OPTIONS_ON:
-        _refuse_frame_inputs(job, problems)
     return _FrameInputs(supports, positions, distributed, tuple(braces))
 
 
@@ -448,28 +428,6 @@ def _distributed(
             )
         made_loads.append(made)
     return tuple(made_loads)
-
-
-def _refuse_frame_inputs(job: Job, problems: _Problems) -> None:
-    """Until the member sheet takes frame options: name each key that needs them."""
-    later = (
-        "the frame analysis of the member, which this version of calcsheet does not have "
-        "yet; check a cantilever fixed at z = 0 under point loads and couples, or update "
-        "calcsheet"
-    )
-    member = job.member
-    if job.supports:
-        problems.found.append(("supports", f"supports of your own need {later}"))
-    elif member.supports.strip().lower() in set(SUPPORT_CASES) - {DEFAULT_SUPPORTS}:
-        problems.found.append(
-            ("member.supports", f"got {member.supports!r}: this support case needs {later}")
-        )
-    elif member.support_positions is not None:
-        problems.found.append(("member.support_positions", f"moving the support needs {later}"))
-    if job.distributed:
-        problems.found.append(("distributed", f"a distributed load needs {later}"))
-    if member.braces:
-        problems.found.append(("member.braces", f"brace points need {later}"))
 
 
 def _load_keys(kind: str, name: str) -> dict[str, str]:

@@ -59,6 +59,11 @@ class DesignBasis:
     # ("free", "laterally braced", "torsionally restrained"); None: not given.
     load_height: str | None = None
     tip_restraint: str | None = None
+    # Set by the member sheet: a cantilever fixed at z = 0 or not, and how a
+    # defaulted Lb and Cb were found on a member on supports ("" when not).
+    cantilever: bool = True
+    Lb_source: str = ""
+    Cb_source: str = ""
     S_DS: float | None = None
     reverse_lateral: bool = False  # wind and earthquake also reversed
     imposed_category: str = "A"  # EN 1990 Table A1.1
@@ -316,6 +321,20 @@ class Sweep:
         return float(self.angles_deg[int(np.argmax(self.utilization))])
 
 
+@dataclass(frozen=True)
+class FixedShare:
+    """What loads the sweep does not model (distributed loads, self-weight) add.
+
+    ``forces`` (types, 6) at the station in N, N·m by load type ``types``; ``tip``
+    the (u, v) tip deflection under them as given, in m. The sweep adds both to
+    every angle (the response is linear in the loads).
+    """
+
+    types: list[str]
+    forces: np.ndarray
+    tip: tuple[float, float] = (0.0, 0.0)
+
+
 def angle_sweep(
     section: Section,
     loads: Sequence[PointLoad | AppliedMoment],
@@ -324,8 +343,13 @@ def angle_sweep(
     station: pint.Quantity,
     basis: DesignBasis,
     Fy: pint.Quantity,
+    fixed: FixedShare | None = None,
 ) -> Sweep:
-    """Turn one load (given by magnitude and angle) through 0–360° in its plane."""
+    """Turn one load (given by magnitude and angle) through 0–360° in its plane.
+
+    ``fixed``: the share of the loads that are not point loads or couples (on a
+    cantilever: distributed loads and self-weight), added at every angle.
+    """
     names = [load.name for load in loads]
     if basis.sweep_load not in names:
         raise InputError(
@@ -343,7 +367,7 @@ def angle_sweep(
     angles = np.arange(0.0, 360.0 + step / 2, step)
     # Statics is linear in the load: the swept load at angle θ gives
     # cos θ·(its forces at 0°) + sin θ·(its forces at 90°); the other loads do not move.
-    present = list(dict.fromkeys(types))
+    present = list(dict.fromkeys([*types, *(fixed.types if fixed else ())]))
     _, base = forces_by_type(
         [load for i, load in enumerate(loads) if i != index],
         [kind for i, kind in enumerate(types) if i != index],
@@ -351,6 +375,9 @@ def angle_sweep(
         station,
         present,
     )
+    if fixed is not None:
+        for row, kind in enumerate(fixed.types):
+            base[present.index(kind)] += fixed.forces[row]
     unit_forces = []
     quarters = []
     for quarter in (0.0, 90.0):
@@ -384,8 +411,10 @@ def angle_sweep(
     values = values.max(axis=1)
     if basis.deflection_ratio:
         turning = (index, quarters, radians)
+        tip = fixed.tip if fixed is not None else (0.0, 0.0)
         values = np.maximum(
-            values, _deflection_utilization(_stiffness_of(section), loads, turning, basis, length)
+            values,
+            _deflection_utilization(_stiffness_of(section), loads, turning, basis, length, tip),
         )
     drawn = float(swept.direction.angle.to("deg").m) % 360.0
     return Sweep(swept.name, angles, values, drawn)
@@ -421,10 +450,12 @@ def _deflection_utilization(
     turning: tuple[int, list[PointLoad], np.ndarray] | None,
     basis: DesignBasis,
     length: pint.Quantity,
+    fixed_tip: tuple[float, float] = (0.0, 0.0),
 ) -> np.ndarray:
     """The tip deflection check (service loads as given) of a section of ``stiffness``
     (I_x, I_y, I_xy in m⁴), optionally with one load turned through angles: the sheet's
-    deflection procedure on arrays, one value per angle."""
+    deflection procedure on arrays, one value per angle. ``fixed_tip`` (u, v) in m is
+    added to the point loads' tip deflection (the share of distributed loads)."""
     from calcsheet.mechanics.deflection import si_load_terms, tip_deflection_arrays
 
     terms = [si_load_terms(load) for load in loads]
@@ -450,6 +481,10 @@ def _deflection_utilization(
         Ixy=Ixy,
         n=basis.deflection_ratio,
     )
+    if fixed_tip != (0.0, 0.0):
+        total = np.hypot(result.u + fixed_tip[0], result.v + fixed_tip[1])
+        limit = float(length.to("m").m) / float(basis.deflection_ratio)
+        return np.broadcast_to(np.asarray(total / limit, dtype=float), radians.shape)
     return np.broadcast_to(np.asarray(result.utilization, dtype=float), radians.shape)
 
 

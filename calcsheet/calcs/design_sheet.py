@@ -17,6 +17,7 @@ import sympy as sp
 from calcsheet.calcs.design import (
     CombinationPlan,
     DesignBasis,
+    FixedShare,
     angle_sweep,
     check_titles,
     lightest_section,
@@ -176,12 +177,17 @@ def write_exploration(
     basis: DesignBasis,
     Fy: pint.Quantity,
     plan: CombinationPlan | None,
+    fixed: FixedShare | None = None,
 ) -> None:
-    """The load-direction sweep and the lightest-section search, when the basis asks."""
+    """The load-direction sweep and the lightest-section search, when the basis asks.
+
+    ``fixed``: on a cantilever, the share of the distributed loads and self-weight,
+    which the sweep adds at every angle.
+    """
     loads, types = loading
     length, station = geometry
     if basis.sweep_load:
-        sweep = angle_sweep(section, loads, types, length, station, basis, Fy)
+        sweep = angle_sweep(section, loads, types, length, station, basis, Fy, fixed)
         sheet.heading(f"Design exploration: direction of {sweep.load}")
         drawn = sweep.drawn_utilization
         sheet.text(

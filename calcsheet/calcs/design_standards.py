@@ -168,10 +168,11 @@ def _aisc_arguments(basis: DesignBasis, Fy: pint.Quantity, length: pint.Quantity
         "K": basis.effective_length_factor,
         "Lb": basis.Lb,
         "Cb": basis.Cb,
-        # The member sheet's model: fixed at z = 0, free at the tip.
-        "cantilever": True,
+        # The member sheet's model: a cantilever fixed at z = 0, or a member on supports.
+        "cantilever": basis.cantilever,
         "load_height": basis.load_height,
         "tip_restraint": basis.tip_restraint,
+        "bracing_sources": (basis.Lb_source, basis.Cb_source),
     }
 
 

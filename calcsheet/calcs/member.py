@@ -24,7 +24,13 @@ import numpy as np
 import pint
 import sympy as sp
 
-from calcsheet.calcs.design import DesignBasis, check_titles, plan_combinations
+from calcsheet.calcs.design import (
+    CombinationPlan,
+    DesignBasis,
+    FixedShare,
+    check_titles,
+    plan_combinations,
+)
 from calcsheet.calcs.design_sheet import (
     write_check_cases,
     write_combinations,
@@ -40,8 +46,10 @@ from calcsheet.calcs.member_analysis import (
     STEEL_UNIT_WEIGHT,
     STEEL_UNIT_WEIGHT_SOURCE,
     MemberAnalysis,
+    MemberLoad,
     SectionWeight,
     StationScan,
+    bracing_defaults,
     counts_beyond,
     deflection_segments,
     describe_motions,
@@ -58,6 +66,9 @@ from calcsheet.calcs.member_analysis import (
     validate_braces,
     validate_distributed,
 )
+from calcsheet.calcs.member_analysis import (
+    force_diagrams as member_force_diagrams,
+)
 from calcsheet.calcs.member_figures import member_drawing, section_drawing, stress_drawing
 from calcsheet.calcs.member_rebuild import rebuild_on_change
 from calcsheet.calcs.points import section_terms, write_point_inputs
@@ -66,6 +77,7 @@ from calcsheet.engine import Check, Sheet, TitleBlock
 from calcsheet.engine.functions import cos, sin
 from calcsheet.engine.procedure import SheetWriter
 from calcsheet.errors import InputError
+from calcsheet.figures.diagrams import force_diagrams, support_marks
 from calcsheet.mechanics.deflection import LIMIT_SOURCE, LoadTerms, write_tip_deflection_of
 from calcsheet.mechanics.distributed import DistributedLoad
 from calcsheet.mechanics.formulas import product_determinant
@@ -266,8 +278,21 @@ def member_sheet(
     analysis: MemberAnalysis | None = None
     scan: StationScan | None = None
     side = "station"
+    basis = dataclasses.replace(basis, cantilever=cantilever)
     if not cantilever or spread or auto:
         analysis = solve_member(section, length_q, held, case, every_load, every_type, basis)
+    if (
+        analysis is not None
+        and not cantilever
+        and basis.kind == "AISC 360-22"
+        and basis.Lb is None
+        and basis.Cb is None
+    ):
+        # Chapter F's Lb and Cb follow the supports, the brace points and the moments.
+        found = bracing_defaults(analysis, length_q, brace_points)
+        basis = dataclasses.replace(
+            basis, Lb=found.Lb, Cb=found.Cb, Lb_source=found.Lb_source, Cb_source=found.Cb_source
+        )
     if auto and analysis is not None:
         scan = scan_stations(analysis, section, basis, fy_q, length_q)
         _, side_index, _, at = scan.worst(scan.governing_check())
@@ -346,6 +371,10 @@ def member_sheet(
         forces = _write_internal_forces(
             sheet, carried, preset, factors, cantilever, just_beyond=side == "right"
         )
+        diagram_analysis = analysis or solve_member(
+            section, length_q, held, case, every_load, every_type, basis
+        )
+        _draw_force_diagrams(sheet, diagram_analysis, plan, every_load, preset)
         props = _write_section_properties(sheet, section, model)
         sheet.figure(
             stress_drawing(section, stress),
@@ -382,13 +411,33 @@ def member_sheet(
             else:
                 _write_deflection_along(sheet, analysis, basis, length_unit)
         if analysis is not None and (spread or not cantilever):
-            if basis.sweep_load:
+            if basis.sweep_load and not cantilever:
                 raise InputError(
                     "explore sweep_load",
                     basis.sweep_load,
-                    "no sweep: the direction sweep covers a cantilever fixed at z = 0 with "
-                    "point loads only",
+                    "no sweep: the direction sweep covers a cantilever fixed at z = 0",
                 )
+            if basis.sweep_load:
+                # The distributed loads and self-weight stay as they are at every angle.
+                share = solve_member(section, length_q, held, case, spread, spread_types, basis)
+                fixed = FixedShare(
+                    share.types,
+                    forces_at(share, cut.station, side),
+                    tuple(  # type: ignore[arg-type]
+                        share.result.deflections([cut.length], share.service_factors)[0, 0, :2]
+                    ),
+                )
+                write_exploration(
+                    sheet,
+                    section,
+                    (loads, types),
+                    (length_q, station_q),
+                    dataclasses.replace(basis, lightest_in=None),
+                    fy_q,
+                    plan,
+                    fixed,
+                )
+                basis = dataclasses.replace(basis, sweep_load=None)
             if basis.lightest_in and plan is None:
                 raise InputError(
                     "explore lightest_in",
@@ -407,6 +456,38 @@ def member_sheet(
             )
     rebuild_on_change(sheet, member_sheet, arguments)
     return sheet
+
+
+def _draw_force_diagrams(
+    sheet: Sheet,
+    analysis: MemberAnalysis,
+    plan: CombinationPlan | None,
+    loads: Sequence[MemberLoad],
+    preset: dict[str, str],
+) -> None:
+    """N, V, T and M along the member: the governing combination over the envelope."""
+    governing = plan.governing if plan is not None else 0
+    along = member_force_diagrams(analysis, governing)
+    named = plan.governing_combination.text() if plan is not None else "the loads as given"
+    marks = [(float(load.z.to("m").m), load.name) for load in loads if isinstance(load, PointLoad)]
+    sheet.figure(
+        force_diagrams(
+            along.stations,
+            along.governing,
+            along.low,
+            along.high,
+            supports_m=support_marks(analysis.supports),
+            length_unit=preset["length"],
+            force_unit=preset["force"],
+            moment_unit=preset["moment"],
+            loads_m=marks,
+            governing_name=named,
+        ),
+        f"Internal forces along the member under {named} (line and fill) and the envelope "
+        "of every combination (band), from the member's statics with the support "
+        "reactions of the direct stiffness analysis; the sign convention is written under "
+        "the diagrams.",
+    )
 
 
 def _require_list(value: object, field: str, expected: str, *, text: bool = False) -> None:

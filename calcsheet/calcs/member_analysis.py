@@ -20,6 +20,7 @@ All numbers are SI (N, m) floats; quantities at the edges.
 
 from __future__ import annotations
 
+import math
 from collections.abc import Sequence
 from dataclasses import dataclass
 
@@ -116,15 +117,65 @@ def resolve_supports(
 # AISC 360-22 Commentary Table C-A-7.1, recommended design values of K for the ideal end
 # conditions (from memory of the Commentary): fixed-fixed 0.65, fixed-pinned 0.80,
 # pinned-pinned 1.0, fixed-free 2.1 (the standard's own default).
-_AISC_K = {"pinned-pinned": 1.0, "fixed-pinned": 0.80, "fixed-fixed": 0.65}
-
-
 def recommended_K(case: str, kind: str) -> float | None:
     """K for a named support case where the standard's table gives it; None otherwise
     (the standard's default, K of a fixed-free member, then applies)."""
-    if kind == "AISC 360-22":
-        return _AISC_K.get(case)
+    from calcsheet.standards.aisc360.design_parameters import effective_length_default
+
+    if kind == "AISC 360-22" and case in SUPPORT_CASES and case != "fixed-free":
+        return effective_length_default(case).value
     return None
+
+
+@dataclass(frozen=True)
+class BracingDefaults:
+    """Lb and Cb of a member on supports, found from its brace points and moments.
+
+    ``Lb`` is the longest laterally unbraced segment and ``Cb`` the smallest Eq. F1-1
+    value over every segment and every combination: together never less severe than
+    the worst segment. The texts say so on the sheet.
+    """
+
+    Lb: pint.Quantity
+    Cb: float
+    Lb_source: str
+    Cb_source: str
+
+
+def bracing_defaults(
+    analysis: MemberAnalysis, length: pint.Quantity, braces: Sequence[pint.Quantity]
+) -> BracingDefaults:
+    """Lb and Cb from the supports, the brace points and every combination's M_x diagram."""
+    from calcsheet.standards.aisc360.design_parameters import cb_of_segment, unbraced_segments
+
+    unit = length.units
+    supports = [held.z.to(unit) for held in analysis.supports if "rz" in held.restrains]
+    segments = unbraced_segments(length, supports, list(braces))
+    result = analysis.result
+    stations = np.unique(
+        np.concatenate(
+            [np.linspace(0.0, result.length, 401), result.candidate_stations(analysis.factors)]
+        )
+    )
+    moments = result.internal_forces(stations, analysis.factors)[..., 4]  # (combos, stations)
+    metres = float(Quantity(1.0, unit).to("m").m)
+    longest = max(segments, key=lambda seg: float((seg.z_end - seg.z_start).m))
+    smallest = (math.inf, "")
+    for segment in segments:
+        start, end = float(segment.z_start.m) * metres, float(segment.z_end.m) * metres
+        for row in moments:
+            found = cb_of_segment(stations, row, start, end, free_end=segment.free_end)
+            if found.value < smallest[0]:
+                smallest = (found.value, found.basis)
+    Lb = (longest.z_end - longest.z_start).to(unit)
+    where = f"z = {longest.z_start:~P} to {longest.z_end:~P}"
+    return BracingDefaults(
+        Lb,
+        float(smallest[0]),
+        f"the longest laterally unbraced segment between supports and brace points, {where}",
+        "the smallest Eq. F1-1 value over the unbraced segments and every combination's "
+        "M_x diagram, AISC 360-22 Section F1",
+    )
 
 
 def permanent_type(basis: DesignBasis) -> str:

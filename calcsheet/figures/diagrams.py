@@ -282,9 +282,12 @@ class _Panel:
         at = (left - 12, self.axis_y)
         svg.text(at, title, size=SMALL_FONT_SIZE, anchor="end", bold=True, css_class="panel-title")
         obstacles.add_box(_box(at, title, "end"))
+        # Round-off of an exact zero (1e-13 beside 3.85) is written as 0.
+        noise = 1e-9 * max(float(np.abs(self.high).max()), float(np.abs(self.low).max()))
+        high, low = float(self.high.max()), float(self.low.min())
         lines = (
-            f"envelope max {value_text(float(self.high.max()))}",
-            f"envelope min {value_text(float(self.low.min()))}",
+            f"envelope max {value_text(high if abs(high) > noise else 0.0)}",
+            f"envelope min {value_text(low if abs(low) > noise else 0.0)}",
         )
         for number_of_line, line in enumerate(lines):
             at = (right + 14, self.top + PANEL_HEIGHT / 2 + (number_of_line - 0.5) * 14)

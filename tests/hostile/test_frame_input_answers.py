@@ -165,19 +165,6 @@ def test_a_gravity_axis_not_among_the_six_is_refused(tmp_path: Path, capsys) -> 
     assert "'+x', '-x', '+y', '-y', '+z' or '-z'" in line
 
 
-def test_supports_of_the_frame_analysis_are_refused_by_key_until_it_is_there(
-    tmp_path: Path, capsys, monkeypatch
-) -> None:
-    """While the member sheet lacks the frame options, a job needing them says so by key."""
-    import calcsheet.build.model as model
-
-    monkeypatch.setattr(model, "FRAME_OPTIONS_ON", False)
-    edits = (with_member('supports = "pinned-pinned"', 'braces = ["24 in"]'), with_tables(WIND))
-    status, message = answer(tmp_path, capsys, *edits)
-    for key in ("member.supports", "member.braces", "distributed"):
-        assert "the frame analysis of the member" in refused_at(status, message, key)
-
-
 def test_a_distributed_load_far_off_the_member_is_refused_as_a_point_load_is(
     tmp_path: Path, capsys
 ) -> None:

@@ -13,7 +13,6 @@ from pathlib import Path
 
 import pytest
 
-import calcsheet.build.model as model_module
 from calcsheet.build.model import member_model
 from calcsheet.calcs.member import member_sheet
 from calcsheet.job import JobError, job_from_data, parse_job, read_job
@@ -63,15 +62,14 @@ def job_text(member: str = "", tables: str = "") -> str:
 
 
 @pytest.fixture
-def frame_on(monkeypatch: pytest.MonkeyPatch) -> None:
-    """The model as it is once the member sheet takes the frame options."""
-    monkeypatch.setattr(model_module, "FRAME_OPTIONS_ON", True)
+def frame_on() -> None:
+    """(The model always gives the member sheet its frame options.)"""
 
 
-def test_the_switch_follows_the_member_sheet() -> None:
-    """MERGE: FRAME_OPTIONS_ON in calcsheet/build/model.py is on once member_sheet takes them."""
-    takes_them = "supports" in inspect.signature(member_sheet).parameters
-    assert model_module.FRAME_OPTIONS_ON is takes_them
+def test_the_member_sheet_takes_every_frame_option() -> None:
+    parameters = inspect.signature(member_sheet).parameters
+    for name in ("supports", "support_positions", "distributed", "self_weight", "braces"):
+        assert name in parameters
 
 
 def test_the_defaults_are_auto_station_self_weight_on_and_gravity_minus_y() -> None:
@@ -172,13 +170,6 @@ def test_positions_of_a_named_case_do_not_go_with_supports_of_your_own() -> None
     assert "member.support_positions moves the supports of a named case" in str(raised.value)
 
 
-def test_until_the_frame_analysis_is_there_auto_is_the_support(monkeypatch) -> None:
-    monkeypatch.setattr(model_module, "FRAME_OPTIONS_ON", False)
-    model = member_model(parse_job(job_text()))
-    assert model.self_weight is True  # recorded; given to the sheet once it takes it
-    assert model.sheet_arguments("auto") == {"station": Quantity(0, "ft")}
-
-
 EXAMPLES = Path(__file__).resolve().parents[2] / "examples"
 
 
@@ -190,16 +181,6 @@ def test_the_column_bracket_demo_reads_and_asks_for_its_frame(frame_on) -> None:
     assert options["self_weight"] is True and options["braces"] == [Quantity(9, "ft")]
     assert [load.name for load in options["distributed"]] == ["wind on column"]
     assert model.auto_station and model.load_types == ("D", "L")
-
-
-def test_the_column_bracket_demo_is_refused_by_key_until_the_frame_is_there(
-    monkeypatch,
-) -> None:
-    monkeypatch.setattr(model_module, "FRAME_OPTIONS_ON", False)
-    with pytest.raises(JobError) as raised:
-        member_model(read_job(EXAMPLES / "column-bracket.toml"))
-    keys = [path for path, _ in raised.value.problems]
-    assert keys == ["member.supports", "distributed", "member.braces"]
 
 
 def _commented_table(text: str, header: str) -> dict:

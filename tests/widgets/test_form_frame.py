@@ -14,7 +14,6 @@ from pathlib import Path
 
 import pytest
 
-import calcsheet.build.model as model_module
 from calcsheet.build.model import member_model
 from calcsheet.job import read_job
 from calcsheet.widgets import MemberForm
@@ -27,9 +26,8 @@ DEMO = ROOT / "examples" / "outrigger.toml"
 
 
 @pytest.fixture
-def frame_on(monkeypatch: pytest.MonkeyPatch) -> None:
-    """The model as it is once the member sheet takes the frame options."""
-    monkeypatch.setattr(model_module, "FRAME_OPTIONS_ON", True)
+def frame_on() -> None:
+    """(The model always gives the member sheet its frame options.)"""
 
 
 @pytest.fixture

@@ -113,6 +113,7 @@ def write_aisc_checks(
     cantilever: bool = True,
     load_height: str | None = None,
     tip_restraint: str | None = None,
+    bracing_sources: tuple[str, str] = ("", ""),
 ) -> list[Check]:
     """Write the AISC 360-22 strength checks of ``section`` on ``sheet``; return the checks.
 
@@ -140,6 +141,7 @@ def write_aisc_checks(
         cantilever=cantilever,
         load_height=load_height,
         tip_restraint=tip_restraint,
+        sources=bracing_sources,
     )
     _check_scope(kind, values, inputs, section.name)
     for item in fields(Demands):
@@ -258,7 +260,8 @@ def _write_member_inputs(
     w.input(
         "K",
         inputs.K,
-        "Effective length factor, both axes (2.1 recommended for fixed-free)",
+        "Effective length factor, both axes"
+        + (" (2.1 recommended for fixed-free)" if bracing.cantilever else ""),
         reference="AISC 360-22 Commentary Table C-A-7.1",
         dimension="dimensionless",
     )

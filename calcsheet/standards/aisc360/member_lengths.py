@@ -60,6 +60,10 @@ class LateralBracing:
     tip_restraint: str | None = None
     # An I-shape: the load height matters (top flange loading is destabilising).
     flanged: bool = False
+    # How a defaulted Lb or Cb was found, when the caller found it (from the brace
+    # points and the moment diagram of a member on supports); "" when not.
+    Lb_source: str = ""
+    Cb_source: str = ""
 
     @property
     def uses_table(self) -> bool:
@@ -115,6 +119,7 @@ def lateral_bracing(
     cantilever: bool,
     load_height: str | None,
     tip_restraint: str | None,
+    sources: tuple[str, str] = ("", ""),
 ) -> LateralBracing:
     """Checked bracing inputs; a load height or tip restraint on a section without
     flanges is an InputError naming the key."""
@@ -130,7 +135,9 @@ def lateral_bracing(
                 "the cantilever effective lengths by load height and tip restraint are for "
                 "I-shapes (flanges)",
             )
-    return LateralBracing(Lb_given, Cb_given, cantilever, height, tip, kind in FLANGED_KINDS)
+    return LateralBracing(
+        Lb_given, Cb_given, cantilever, height, tip, kind in FLANGED_KINDS, *sources
+    )
 
 
 def write_bracing_inputs(w: Writer, inputs: MemberInputs, bracing: LateralBracing) -> None:
@@ -167,7 +174,13 @@ def write_bracing_inputs(w: Writer, inputs: MemberInputs, bracing: LateralBracin
                 "move sideways needs a much longer effective length. Give L_b to override."
             )
     else:
-        source = "given" if bracing.Lb_given else "defaulted (from the member length L)"
+        source = (
+            f"defaulted ({bracing.Lb_source})"
+            if bracing.Lb_source
+            else "given"
+            if bracing.Lb_given
+            else "defaulted (from the member length L)"
+        )
         w.input("L_b", inputs.L_b, f"Laterally unbraced length: {source}", dimension="length")
         if w.prints:
             _warn_length(w, inputs, bracing)
@@ -181,7 +194,7 @@ def _factor_description(bracing: LateralBracing) -> str:
 
 
 def _warn_length(w: Writer, inputs: MemberInputs, bracing: LateralBracing) -> None:
-    if bracing.Lb_given and inputs.L_b > inputs.length:
+    if bracing.Lb_given and not bracing.Lb_source and inputs.L_b > inputs.length:
         w.text(
             "WARNING: the given Lb is longer than the member length L. Check the input: an "
             "unbraced length longer than the member is an effective length, which Chapter F "
@@ -197,7 +210,11 @@ def _warn_length(w: Writer, inputs: MemberInputs, bracing: LateralBracing) -> No
 
 
 def _write_cb(w: Writer, inputs: MemberInputs, bracing: LateralBracing) -> Value:
-    if bracing.Cb_given:
+    if bracing.Cb_source:
+        description = (
+            f"Lateral-torsional buckling modification factor: defaulted ({bracing.Cb_source})"
+        )
+    elif bracing.Cb_given:
         description = "Lateral-torsional buckling modification factor: given"
     elif bracing.cantilever and bracing.tip_restraint not in (None, "free"):
         description = (

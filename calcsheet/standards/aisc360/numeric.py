@@ -134,6 +134,7 @@ def aisc_checks_numeric(
     cantilever: bool = True,
     load_height: str | None = None,
     tip_restraint: str | None = None,
+    bracing_sources: tuple[str, str] = ("", ""),
 ) -> dict[str, np.ndarray]:
     """The utilization of each check of :func:`write_aisc_checks`, as ``(n, m)`` arrays.
 
@@ -153,6 +154,7 @@ def aisc_checks_numeric(
         cantilever=cantilever,
         load_height=load_height,
         tip_restraint=tip_restraint,
+        sources=bracing_sources,
     )
     w = ArrayWriter(method=chosen)
     with np.errstate(divide="ignore", invalid="ignore", over="ignore"):
