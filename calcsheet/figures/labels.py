@@ -21,7 +21,7 @@ from calcsheet.figures.svg import Point, text_width
 from calcsheet.mechanics.stresses import point_in_material
 
 _TURNS_DEGREES = (0, 25, -25, 50, -50, 75, -75, 105, -105, 135, -135, 180)
-_DISTANCES = (3.0, 8.0, 15.0, 24.0, 36.0)
+_DISTANCES = (3.0, 8.0, 15.0, 24.0, 36.0, 52.0, 72.0, 96.0)
 _CENTRED = math.sin(math.radians(22.5))  # closer than this to an axis: centre the label on it
 
 

@@ -37,7 +37,7 @@ from calcsheet.figures.annotate import (
     quantity_text,
     unit_vector,
 )
-from calcsheet.figures.labels import Box, Obstacles, place_label
+from calcsheet.figures.labels import Box, Obstacles, place_label, text_box
 from calcsheet.figures.style import (
     FONT_SIZE,
     INK,
@@ -134,7 +134,7 @@ def member_figure(
         _draw_moment(svg, obstacles, frame, moment, unit)
     _draw_station(svg, obstacles, frame, float(cut.m), d, unit)
     extra_rows = [
-        (float(item.z.to(unit).m), f"{item.name}: z = {quantity_text(item.z.to(unit))}")
+        (float(item.z.to(unit).m), f"{drawn_name(item.name)}: z = {quantity_text(item.z.to(unit))}")
         for item in ([] if cantilever else supports)
     ]
     _draw_z_dimensions(svg, obstacles, frame, L, d, float(cut.m), placed, unit, extra_rows)
@@ -157,18 +157,31 @@ def member_figure(
     return svg.render()
 
 
+# A load's name in the drawing is cut to this many characters (the sheet's load
+# headings give it whole): a long name would reach across the other view.
+LABEL_CHARACTERS = 28
+
+
+def drawn_name(name: str) -> str:
+    """A load's name as the drawing labels it: whole, or cut with an ellipsis."""
+    name = " ".join(name.split())
+    if len(name) <= LABEL_CHARACTERS:
+        return name
+    return name[: LABEL_CHARACTERS - 1].rstrip(" ,;:") + "…"
+
+
 class _PlacedLoad:
     """A point load's numbers in the figure's length unit, and its in-plane directions."""
 
     def __init__(self, load: PointLoad, unit: str) -> None:
-        self.name = load.name
+        self.name = drawn_name(load.name)
         self.z = float(load.z.to(unit).m)
         self.ex = float(load.ex.to(unit).m)
         self.ey = float(load.ey.to(unit).m)
         force_unit = load.magnitude.units
         fx, fy, fz = (float(load.component(axis).to(force_unit).m) for axis in "xyz")
         size = float(load.magnitude.m)
-        self.label = f"{load.name} = {quantity_text(load.magnitude)}"
+        self.label = f"{self.name} = {quantity_text(load.magnitude)}"
         in_plane = math.hypot(fy, fz)
         # Paper directions (y down): elevation (z, y) and end view (x, y).
         self.elevation = (fz / in_plane, -fy / in_plane) if in_plane > 1e-9 * size else None
@@ -335,7 +348,7 @@ def _draw_moment(
         for name, value in (("Mx", moment.Mx), ("My", moment.My), ("Mz", moment.Mz))
         if value.m != 0
     ]
-    text = f"{moment.name}: {', '.join(parts) or '0'}"
+    text = f"{drawn_name(moment.name)}: {', '.join(parts) or '0'}"
     at, _ = place_label(obstacles, center, (0.0, -1.0), text, size=SMALL_FONT_SIZE, gap=radius)
     svg.text(at, text, size=SMALL_FONT_SIZE, css_class="moment-label")
 
@@ -374,7 +387,7 @@ def _draw_z_dimensions(
     positions: dict[float, list[str]] = {}
     for load in loads:
         if 0 < load.z < L and not math.isclose(load.z, station):
-            positions.setdefault(load.z, []).append(load.name)
+            positions.setdefault(load.z, []).append(drawn_name(load.name))
     for z in sorted(positions):
         names = ", ".join(positions[z])
         rows.append((z, f"{names}: z = {quantity_text(Quantity(z, unit))}"))
@@ -457,7 +470,7 @@ def _draw_end_view(
     # One set of dimensions and one label per point of application, however many loads act there.
     names_at: dict[tuple[float, float], list[str]] = {}
     for load in loads:
-        names_at.setdefault((load.ex, load.ey), []).append(load.name)
+        names_at.setdefault((load.ex, load.ey), []).append(drawn_name(load.name))
     for ex, ey in names_at:
         at = frame.point(ex, ey)
         if ex != 0:
@@ -468,6 +481,10 @@ def _draw_end_view(
             foot = frame.point(ex, 0.0)
             text = f"e_y = {quantity_text(Quantity(ey, unit))}"
             linear_dimension(svg, obstacles, (foot, at), (foot, at), text, text_toward=(1.0, 0.0))
+    title_y = origin[1] - reach - 16 - FONT_SIZE
+    title = "End view from the free end"
+    svg.text((origin[0], title_y), title, size=SMALL_FONT_SIZE, fill=NOTE)
+    obstacles.add_box(text_box((origin[0], title_y), title, SMALL_FONT_SIZE))
     centroid = frame.point(0, 0)
     for (ex, ey), names in names_at.items():
         at = frame.point(ex, ey)
@@ -475,8 +492,6 @@ def _draw_end_view(
         label = ", ".join(names)
         center, _ = place_label(obstacles, at, away if away != (0.0, 0.0) else (-0.7, 0.7), label)
         svg.text(center, label, size=FONT_SIZE, bold=True)
-    title_y = origin[1] - reach - 16 - FONT_SIZE
-    svg.text((origin[0], title_y), "End view from the free end", size=SMALL_FONT_SIZE, fill=NOTE)
 
 
 SUPPORT_SIZE = 11.0  # px, the height of a support symbol below the member
@@ -608,7 +623,10 @@ def _draw_distributed(
             parts.append(f"q{axis} = {quantity_text(first)}")
         else:
             parts.append(f"q{axis} = {quantity_text(first)} to {quantity_text(last.to(unit_q))}")
-    return (right, (top + min(y for _, y in outline)) / 2), f"{load.name}: {', '.join(parts)}"
+    return (
+        right,
+        (top + min(y for _, y in outline)) / 2,
+    ), f"{drawn_name(load.name)}: {', '.join(parts)}"
 
 
 def _draw_brace(svg: Svg, obstacles: Obstacles, frame: Frame, z: float, d: float) -> None:
