@@ -467,7 +467,7 @@ def _draw_force_diagrams(
 ) -> None:
     """N, V, T and M along the member: the governing combination over the envelope."""
     governing = plan.governing if plan is not None else 0
-    along = member_force_diagrams(analysis, governing)
+    along = member_force_diagrams(analysis, governing, grid=48)
     named = plan.governing_combination.text() if plan is not None else "the loads as given"
     marks = [(float(load.z.to("m").m), load.name) for load in loads if isinstance(load, PointLoad)]
     sheet.figure(

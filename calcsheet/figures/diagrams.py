@@ -19,6 +19,7 @@ are drawn above the axis. The sign convention is that of the frame solver
 from __future__ import annotations
 
 import itertools
+import math
 from collections.abc import Sequence
 
 import numpy as np
@@ -261,9 +262,9 @@ class _Panel:
     def draw(self, svg: Svg, obstacles: Obstacles, z: NDArray, x_of, supports) -> None:
         """Band, area, lines, axis, supports and the panel's name and envelope range."""
         xs = [x_of(float(value)) for value in z]
-        high = [(x, self.y_of(v)) for x, v in zip(xs, self.high, strict=True)]
-        low = [(x, self.y_of(v)) for x, v in zip(xs, self.low, strict=True)]
-        curve = [(x, self.y_of(v)) for x, v in zip(xs, self.governing, strict=True)]
+        high = _thinned([(x, self.y_of(v)) for x, v in zip(xs, self.high, strict=True)])
+        low = _thinned([(x, self.y_of(v)) for x, v in zip(xs, self.low, strict=True)])
+        curve = _thinned([(x, self.y_of(v)) for x, v in zip(xs, self.governing, strict=True)])
         left, right = xs[0], xs[-1]
         band = [*high, *reversed(low)]
         svg.rings([band], fill=ENVELOPE_FILL, stroke=None, css_class="envelope-band")
@@ -312,6 +313,32 @@ class _Panel:
                 point = (x_of(float(z[index])), self.y_of(value))
                 found.append((point, value, float(z[index]), self.unit, above))
         return found
+
+
+# A point closer than this (px) to the line through its neighbours adds nothing drawn.
+THINNING_TOLERANCE = 0.05
+
+
+def _thinned(points: Sequence[Point]) -> list[Point]:
+    """The points without repeats and without points on a straight run between their
+    neighbours (both sides of a station where nothing jumps, a linear shear diagram):
+    the drawing is the same, the file a fraction of the size."""
+    kept: list[Point] = []
+    for point in points:
+        if kept and math.isclose(point[0], kept[-1][0]) and math.isclose(point[1], kept[-1][1]):
+            continue
+        if len(kept) >= 2:
+            (x0, y0), (x1, y1) = kept[-2], kept[-1]
+            run = math.hypot(point[0] - x0, point[1] - y0)
+            off = abs((point[0] - x0) * (y1 - y0) - (point[1] - y0) * (x1 - x0)) / run if run else 0
+            between = min(x0, point[0]) <= x1 <= max(x0, point[0]) and min(
+                y0, point[1]
+            ) <= y1 <= max(y0, point[1])
+            if off <= THINNING_TOLERANCE and between:
+                kept[-1] = point
+                continue
+        kept.append(point)
+    return kept
 
 
 def _polyline(
