@@ -155,10 +155,56 @@ def main() -> None:
         3,
     )
     report("document: cold command, start to PDF and HTML on disk", cold, 2500)
+    bench_cold_ratio(cold)
+    column = Path(tempfile.mkdtemp(prefix="calcsheet-bench-"))
+    cold_column = timed(
+        lambda: subprocess.run(
+            [
+                sys.executable,
+                "-m",
+                "calcsheet.cli",
+                "build",
+                "examples/column-bracket.toml",
+                "--out",
+                str(column),
+            ],
+            check=True,
+            capture_output=True,
+        ),
+        3,
+    )
+    report("document: cold command, column on supports (frame, scan, diagrams)", cold_column, 2500)
     bench_frame_forces()
     bench_torsion_stresses()
     bench_form()
     bench_batch()
+
+
+def bench_cold_ratio(cold_ms: float) -> None:
+    """The cold command against a bare Typst compile of the same markup, each in a
+    fresh process, side by side (issue 17: at most 4 times)."""
+    from calcsheet.build.run import build_sheets
+    from calcsheet.job import read_job
+    from calcsheet.render.typst import render_typst
+
+    job = read_job("examples/outrigger.toml")
+    markup = render_typst(build_sheets(job).sheets[0].sheet, paper="letter")
+    folder = Path(tempfile.mkdtemp(prefix="calcsheet-bench-typst-"))
+    (folder / "demo.typ").write_text(markup, encoding="utf-8")
+    script = "import typst; typst.compile('demo.typ', output='demo.pdf', pdf_standards=['a-2b'])"
+    bare = timed(
+        lambda: subprocess.run(
+            [sys.executable, "-c", script], cwd=folder, check=True, capture_output=True
+        ),
+        3,
+    )
+    report("document: bare Typst compile of the demo's markup, fresh process", bare)
+    ratio = cold_ms / bare
+    verdict = "meets" if ratio <= 4 else "MISSES"
+    print(
+        f"{'document: cold command / bare Typst compile':<58} {ratio:9.2f} x   "
+        f"target 4 x  {verdict}"
+    )
 
 
 def bench_torsion_stresses() -> None:
