@@ -29,6 +29,11 @@ def _0429c11d2458d362675c(N_c, A, M, W_el, h, c):
     return numpy.select([numpy.greater(N_c/A, -c*abs(M)/(W_el*h)),True], [(-c*abs(M)/(W_el*h) + N_c/A)/(c*abs(M)/(W_el*h) + N_c/A),-1], default=numpy.nan)
 
 
+def _069e4d3cd77d05aed615(n_y, k_yz, M_z_Ed, M_z_Rk, gamma_M1):
+    # EN 1993-1-1 Eq. (6.61): Bending about z-z and axial compression, buckling about y-y
+    return n_y + gamma_M1*k_yz*abs(M_z_Ed)/M_z_Rk
+
+
 def _0839fff909ccaabe4193(d, t_f):
     # AISC 360-22 Section F2.2: Distance between flange centroids, ho = d − tf
     return d - t_f
@@ -44,6 +49,16 @@ def _095dc1363414c6727ceb(lam_r, lam, F_y):
     return 1.7161*F_y*lam_r**2/lam**2
 
 
+def _0d139d9445353a67bbb9(k_zz, section_class):
+    # EN 1993-1-1 Annex B, Table B.1: Interaction factor k_yz
+    return numpy.select([numpy.less_equal(section_class, 2),True], [0.6*k_zz,k_zz], default=numpy.nan)
+
+
+def _0d48632a2ae683840ed3(E, nu):
+    # EN 1993-1-1 3.2.6(1): Shear modulus
+    return E/(2*nu + 2)
+
+
 def _0ef822dbee9a4e6e5af3(W_pl, W_el, f_y, gamma_M0, section_class):
     # EN 1993-1-1 Eq. (6.13), (6.14): Bending resistance for the section class
     return numpy.select([numpy.less_equal(section_class, 2),numpy.less_equal(section_class, 3)], [W_pl*f_y/gamma_M0,W_el*f_y/gamma_M0], default=numpy.nan)
@@ -57,6 +72,11 @@ def _11c913d3ba6c08a6f16f(C_b, E, L_b, r_ts, J, c, S_x, h_o):
 def _1226452d5ae3a903cf87(M_y):
     # AISC 360-22 Eq. F10-1: Nominal flexural strength, yielding
     return 1.5*M_y
+
+
+def _123963307ea8562b93d3(Phi_LT, lambda_LT):
+    # EN 1993-1-1 Eq. (6.56): Reduction factor for lateral-torsional buckling, general
+    return functools.reduce(numpy.minimum, [1, (Phi_LT + numpy.sqrt(Phi_LT**2 - lambda_LT**2))**(-1.0)])
 
 
 def _13ef280319349a572351(eps):
@@ -119,6 +139,11 @@ def _2b82d3179344a75017b7(A_g, h, h_e, b, b_e, t):
     return A_g - t*(2*b - 2*b_e) - t*(2*h - 2*h_e)
 
 
+def _2b99b3f4bea66a8ae504(Phi_LT, lambda_LT, beta):
+    # EN 1993-1-1 Eq. (6.57): Reduction factor for lateral-torsional buckling, rolled
+    return functools.reduce(numpy.minimum, [1, lambda_LT**(-2.0), (Phi_LT + numpy.sqrt(Phi_LT**2 - beta*lambda_LT**2))**(-1.0)])
+
+
 def _2d02a653481b5f241f7d(A, b, t_f, t_w, r, h_w, eta):
     # EN 1993-1-1 6.2.6(3)a: Shear area of a rolled I-section, load parallel to the web
     return functools.reduce(numpy.maximum, [eta*h_w*t_w, A - 2*b*t_f + t_f*(2*r + t_w)])
@@ -132,6 +157,11 @@ def _31cdcda6dcc19c4a3227(h_tw, k_v, E, F_y):
 def _336f85ec8d5a1f26a81e(eps):
     # EN 1993-1-1 Table 5.2 (sheet 3): Class 1 limit of a tube, d/t ≤ 50ε²
     return 50*eps**2
+
+
+def _343b7ece5a462d0489a1(k_c, lambda_LT):
+    # EN 1993-1-1 6.3.2.3(2): Modification factor f for the moment distribution
+    return functools.reduce(numpy.minimum, [1, -1/2*(1 - k_c)*(1 - 2*(lambda_LT - 0.8)**2) + 1])
 
 
 def _347d64da819a5807c838(M_pl_y_Rd, n, a):
@@ -152,6 +182,11 @@ def _35be6253a3612eaaede0(E, F_y, L_v, D, D_t):
 def _360a3ce6dc79299771c7(E, L_c, r):
     # AISC 360-22 Eq. E3-4: Elastic buckling stress
     return numpy.pi**2*E*r**2/L_c**2
+
+
+def _362d849919d4749b52ca(W_pl, W_el, f_y, section_class):
+    # EN 1993-1-1 Table 6.7: Characteristic moment resistance
+    return numpy.select([numpy.less_equal(section_class, 2),numpy.less_equal(section_class, 3)], [W_pl*f_y,W_el*f_y], default=numpy.nan)
 
 
 def _3a3fe7cc1dbd0f233257(E, F_y):
@@ -197,6 +232,11 @@ def _468d5b94783a5c147e02(A_g, h, h_e, t_w, b, b_e, t_f):
 def _4784815596a3f7bac197(eps, psi):
     # EN 1993-1-1 Table 5.2 (sheet 1): Class 3 limit of an internal part
     return numpy.select([numpy.greater(psi, -1),True], [42*eps/(0.33*psi + 0.67),62*eps*numpy.sqrt(-psi)*(1 - psi)], default=numpy.nan)
+
+
+def _49f3f66d56fc53a12c4e(alpha_LT, lambda_LT):
+    # EN 1993-1-1 6.3.2.2(1): Value to determine χ_LT, general case
+    return (1/2)*alpha_LT*(lambda_LT - 0.2) + (1/2)*lambda_LT**2 + 1/2
 
 
 def _4b93d3f7880dc7f94e01(E, F_y, D_t, Z, S):
@@ -247,6 +287,11 @@ def _57bb8f8297635007d9b2(E, r_y, J, A_g, M_p):
 def _58f8cd2ce20ebb53188d(E, F_y):
     # AISC 360-22 Table B4.1a Case 3: Limit λr, leg of a single angle, axial compression
     return 0.45*numpy.sqrt(E/F_y)
+
+
+def _5dbf5128df6ef63fee29(W_y, f_y, M_cr):
+    # EN 1993-1-1 6.3.2.2(1): Non-dimensional slenderness for lateral-torsional buckling
+    return numpy.sqrt(W_y*f_y/M_cr)
 
 
 def _5e91245b7b98f766f926(F_y, A_w, C_v2):
@@ -309,6 +354,11 @@ def _6b6def47ce058e80922e(E, F_y):
     return 0.07*E/F_y
 
 
+def _6ceeac84a61bf70ffb70(n_z, k_zz, M_z_Ed, M_z_Rk, gamma_M1):
+    # EN 1993-1-1 Eq. (6.62): Bending about z-z and axial compression, buckling about z-z
+    return n_z + gamma_M1*k_zz*abs(M_z_Ed)/M_z_Rk
+
+
 def _6f4216d75cf039ef8c09(M_y, M_cr):
     # AISC 360-22 Eq. F10-2, F10-3: Nominal flexural strength, lateral-torsional buckling
     return numpy.select([numpy.less_equal(M_y/M_cr, 1),True], [functools.reduce(numpy.minimum, [1.5*M_y, M_y*(1.92 - 1.17*numpy.sqrt(M_y/M_cr))]),M_cr*(-0.17*M_cr/M_y + 0.92)], default=numpy.nan)
@@ -354,6 +404,11 @@ def _7f0ad753675816955567(b, lam, lam_r, F_y, F_cr, F_el):
     return numpy.select([numpy.less_equal(lam, lam_r*numpy.sqrt(F_y/F_cr)),True], [b,b*numpy.sqrt(F_el/F_cr)*(1 - 0.18*numpy.sqrt(F_el/F_cr))], default=numpy.nan)
 
 
+def _83735bc998e3f9032378(n_z, k_zy, M_y_Ed, chi_LT, M_y_Rk, gamma_M1):
+    # EN 1993-1-1 Eq. (6.62): Bending about y-y and axial compression, buckling about z-z
+    return n_z + gamma_M1*k_zy*abs(M_y_Ed)/(M_y_Rk*chi_LT)
+
+
 def _8941ba3018d7c4da8efa(eps):
     # EN 1993-1-1 Table 5.2 (sheet 1): Class 1 limit of an internal part in compression
     return 33*eps
@@ -362,6 +417,11 @@ def _8941ba3018d7c4da8efa(eps):
 def _8cc19139d286c3e0d3c2(eps):
     # EN 1993-1-1 Table 5.2 (sheet 3): Class 3 limit of a tube, d/t ≤ 90ε²
     return 90*eps**2
+
+
+def _8e668b6cdfc43e3298c0(C_my, lambda_y, n_y, section_class):
+    # EN 1993-1-1 Annex B, Table B.1: Interaction factor k_yy
+    return numpy.select([numpy.less_equal(section_class, 2),True], [C_my*functools.reduce(numpy.minimum, [0.8*n_y + 1, n_y*(lambda_y - 0.2) + 1]),C_my*functools.reduce(numpy.minimum, [0.6*n_y + 1, 0.6*lambda_y*n_y + 1])], default=numpy.nan)
 
 
 def _8ff5794b5c1fb26fd139(E, F_y):
@@ -414,6 +474,11 @@ def _a4dd29e038d0bb5848b9(F_cr, A_e):
     return A_e*F_cr
 
 
+def _a52c8a43208c508b2c9d(C_1, C_2, z_g, E, I_z, I_w, G, I_t, L_LT):
+    # NCCI SN003a-EN-EU (Access Steel), Elastic critical moment for lateral torsional buckling, Eq. (1) with k = k_w: Elastic critical moment for lateral-torsional buckling
+    return numpy.pi**2*C_1*E*I_z*(-C_2*z_g + numpy.sqrt(C_2**2*z_g**2 + I_w/I_z + G*I_t*L_LT**2/(numpy.pi**2*E*I_z)))/L_LT**2
+
+
 def _a661bc4a59d8174df986(E, C_w, L_cz, G, J, I_x, I_y):
     # AISC 360-22 Eq. E4-2: Elastic torsional buckling stress, doubly symmetric member
     return (numpy.pi**2*C_w*E/L_cz**2 + G*J)/(I_x + I_y)
@@ -464,9 +529,19 @@ def _ae71aaa64bbb7c595492(eps):
     return 70*eps**2
 
 
+def _aed897c6603e1a9b5064(C_mLT, lambda_z, n_z, section_class):
+    # EN 1993-1-1 Annex B, Table B.2: Interaction factor k_zy, torsional deformation
+    return numpy.select([numpy.greater(section_class, 2),numpy.less(lambda_z, 0.4),True], [functools.reduce(numpy.maximum, [-0.05*n_z/(C_mLT - 0.25) + 1, -0.05*lambda_z*n_z/(C_mLT - 0.25) + 1]),functools.reduce(numpy.minimum, [lambda_z + 0.6, -0.1*lambda_z*n_z/(C_mLT - 0.25) + 1]),functools.reduce(numpy.maximum, [-0.1*n_z/(C_mLT - 0.25) + 1, -0.1*lambda_z*n_z/(C_mLT - 0.25) + 1])], default=numpy.nan)
+
+
 def _af8934e238e12ca5aace(F_y, Z):
     # AISC 360-22 Eq. F2-1: Plastic moment
     return F_y*Z
+
+
+def _b18a461b65e9665f3856(C_mz, lambda_z, n_z, section_class):
+    # EN 1993-1-1 Annex B, Table B.1: Interaction factor k_zz, hollow section
+    return numpy.select([numpy.less_equal(section_class, 2),True], [C_mz*functools.reduce(numpy.minimum, [0.8*n_z + 1, n_z*(lambda_z - 0.2) + 1]),C_mz*functools.reduce(numpy.minimum, [0.6*n_z + 1, 0.6*lambda_z*n_z + 1])], default=numpy.nan)
 
 
 def _b1dde4caf1a28f0f0d9e(A_g, b_1, b_e1, b_2, b_e2, t):
@@ -499,9 +574,24 @@ def _ba60d3ef0bfee0b95f40(E, F_y):
     return 0.31*E/F_y
 
 
+def _bc0c5d3b767b25173efd(k_yy, section_class):
+    # EN 1993-1-1 Annex B, Table B.1: Interaction factor k_zy, no torsional deformation
+    return numpy.select([numpy.less_equal(section_class, 2),True], [0.6*k_yy,0.8*k_yy], default=numpy.nan)
+
+
 def _bc9b2e2c73729b9b06e8(F_y, A_g):
     # AISC 360-22 Eq. D2-1: Nominal tensile strength, yielding in the gross section
     return A_g*F_y
+
+
+def _bcf1509c586b11be2a3f(chi_LT, f, lambda_LT):
+    # EN 1993-1-1 Eq. (6.58): Modified reduction factor for lateral-torsional buckling
+    return functools.reduce(numpy.minimum, [1, lambda_LT**(-2.0), chi_LT/f])
+
+
+def _c0d46e2aec8bb27ba4f4(alpha_LT, lambda_LT, lambda_LT_0, beta):
+    # EN 1993-1-1 6.3.2.3(1): Value to determine χ_LT, rolled or equivalent welded
+    return (1/2)*alpha_LT*(lambda_LT - lambda_LT_0) + (1/2)*beta*lambda_LT**2 + 1/2
 
 
 def _c5ec42bcf88fd4a4c228(L_c, r):
@@ -519,9 +609,24 @@ def _c9321b59dafead64b748(A_v, f_y, gamma_M0):
     return (1/3)*numpy.sqrt(3)*A_v*f_y/gamma_M0
 
 
+def _cafc46190d87a4080415(W_pl_y, W_el_y, section_class):
+    # EN 1993-1-1 6.3.2.2(1): Section modulus for lateral-torsional buckling
+    return numpy.select([numpy.less_equal(section_class, 2),numpy.less_equal(section_class, 3)], [W_pl_y,W_el_y], default=numpy.nan)
+
+
 def _ccbce2fc341bab48375d(h_tw, k_v, E, F_y):
     # AISC 360-22 Eq. G2-2, G2-3, G2-4: Web shear strength coefficient
     return numpy.select([numpy.less_equal(h_tw, 1.1*numpy.sqrt(E*k_v/F_y)),True], [1,1.1*numpy.sqrt(E*k_v/F_y)/h_tw], default=numpy.nan)
+
+
+def _ccc1468ea91a9d7409b9(N_Ed, chi, A, f_y, gamma_M1):
+    # EN 1993-1-1 Annex B, Table B.1: Axial force ratio for buckling, n = N_Ed/N_b,Rd
+    return N_Ed*gamma_M1/(A*chi*f_y)
+
+
+def _ce2c5756bd228041db56(chi_LT, W_y, f_y, gamma_M1):
+    # EN 1993-1-1 Eq. (6.55): Design buckling resistance moment
+    return W_y*chi_LT*f_y/gamma_M1
 
 
 def _cf31d720b242fe13da62(V_rx, V_ry):
@@ -532,6 +637,11 @@ def _cf31d720b242fe13da62(V_rx, V_ry):
 def _d0583cdfdac436eea4ce(A, f_y, gamma_M0):
     # EN 1993-1-1 Eq. (6.6), (6.10): Plastic resistance of the gross section
     return A*f_y/gamma_M0
+
+
+def _d06027cd009b3c69ea06(n_z, k_zy, M_y_Ed, chi_LT, M_y_Rk, k_zz, M_z_Ed, M_z_Rk, gamma_M1):
+    # EN 1993-1-1 Eq. (6.62): Bending and axial compression, buckling about z-z
+    return n_z + gamma_M1*k_zz*abs(M_z_Ed)/M_z_Rk + gamma_M1*k_zy*abs(M_y_Ed)/(M_y_Rk*chi_LT)
 
 
 def _d063fe98f6a4773bcaea(r_ts, E, F_y, J, c, S_x, h_o):
@@ -557,6 +667,11 @@ def _d5fc9885df801ff972ed(E, I, L_cr):
 def _d72bab8662fac64cd090(F_y, b, t, C_v2):
     # AISC 360-22 Eq. G3-1: Nominal shear strength of a single-angle leg
     return 0.6*C_v2*F_y*b*t
+
+
+def _d8d17ac992d61e68d61c(n_y, k_yy, M_y_Ed, chi_LT, M_y_Rk, k_yz, M_z_Ed, M_z_Rk, gamma_M1):
+    # EN 1993-1-1 Eq. (6.61): Bending and axial compression, buckling about y-y
+    return n_y + gamma_M1*k_yz*abs(M_z_Ed)/M_z_Rk + gamma_M1*k_yy*abs(M_y_Ed)/(M_y_Rk*chi_LT)
 
 
 def _db064a284159df3d50f8(E, F_y):
@@ -587,6 +702,11 @@ def _e2586545e62ce0c7f5b0(F_y, S):
 def _e33f93f62e06bad49456(h_w, t_w, eta):
     # EN 1993-1-1 6.2.6(3)d: Shear area of a welded I-section, load parallel to the web
     return eta*h_w*t_w
+
+
+def _e673c70fd97a3c8b8d3a(n_y, k_yy, M_y_Ed, chi_LT, M_y_Rk, gamma_M1):
+    # EN 1993-1-1 Eq. (6.61): Bending about y-y and axial compression, buckling about y-y
+    return n_y + gamma_M1*k_yy*abs(M_y_Ed)/(M_y_Rk*chi_LT)
 
 
 def _e687105f48613fb1dcf1(N_Ed, N_pl_Rd):
@@ -654,6 +774,11 @@ def _fb0573ff322c9c6113c8(c_t, limit_1, limit_2, limit_3):
     return numpy.select([numpy.less_equal(c_t, limit_1),numpy.less_equal(c_t, limit_2),numpy.less_equal(c_t, limit_3),True], [1,2,3,4], default=numpy.nan)
 
 
+def _fb39b8bb1c1a0ae7453f(C_mz, lambda_z, n_z, section_class):
+    # EN 1993-1-1 Annex B, Table B.1: Interaction factor k_zz, I-section
+    return numpy.select([numpy.less_equal(section_class, 2),True], [C_mz*functools.reduce(numpy.minimum, [1.4*n_z + 1, n_z*(2*lambda_z - 0.6) + 1]),C_mz*functools.reduce(numpy.minimum, [0.6*n_z + 1, 0.6*lambda_z*n_z + 1])], default=numpy.nan)
+
+
 def _fc0b86f61b049afe7451(A, h_w, t_w):
     # EN 1993-1-1 6.2.6(3)e: Shear area of an I-section, load parallel to the flanges
     return A - h_w*t_w
@@ -668,12 +793,16 @@ FUNCTIONS = {
     "00c8dea2b6d2c695a39b": _00c8dea2b6d2c695a39b,
     "02edf9672d435a483665": _02edf9672d435a483665,
     "0429c11d2458d362675c": _0429c11d2458d362675c,
+    "069e4d3cd77d05aed615": _069e4d3cd77d05aed615,
     "0839fff909ccaabe4193": _0839fff909ccaabe4193,
     "086ab2f9163d829e242f": _086ab2f9163d829e242f,
     "095dc1363414c6727ceb": _095dc1363414c6727ceb,
+    "0d139d9445353a67bbb9": _0d139d9445353a67bbb9,
+    "0d48632a2ae683840ed3": _0d48632a2ae683840ed3,
     "0ef822dbee9a4e6e5af3": _0ef822dbee9a4e6e5af3,
     "11c913d3ba6c08a6f16f": _11c913d3ba6c08a6f16f,
     "1226452d5ae3a903cf87": _1226452d5ae3a903cf87,
+    "123963307ea8562b93d3": _123963307ea8562b93d3,
     "13ef280319349a572351": _13ef280319349a572351,
     "1439263560bd3f059103": _1439263560bd3f059103,
     "15f142db5f16997c16d9": _15f142db5f16997c16d9,
@@ -686,13 +815,16 @@ FUNCTIONS = {
     "2591b6c97a2e54900118": _2591b6c97a2e54900118,
     "27522fc680246d1a9232": _27522fc680246d1a9232,
     "2b82d3179344a75017b7": _2b82d3179344a75017b7,
+    "2b99b3f4bea66a8ae504": _2b99b3f4bea66a8ae504,
     "2d02a653481b5f241f7d": _2d02a653481b5f241f7d,
     "31cdcda6dcc19c4a3227": _31cdcda6dcc19c4a3227,
     "336f85ec8d5a1f26a81e": _336f85ec8d5a1f26a81e,
+    "343b7ece5a462d0489a1": _343b7ece5a462d0489a1,
     "347d64da819a5807c838": _347d64da819a5807c838,
     "34a384cad20da7fa7fc6": _34a384cad20da7fa7fc6,
     "35be6253a3612eaaede0": _35be6253a3612eaaede0,
     "360a3ce6dc79299771c7": _360a3ce6dc79299771c7,
+    "362d849919d4749b52ca": _362d849919d4749b52ca,
     "3a3fe7cc1dbd0f233257": _3a3fe7cc1dbd0f233257,
     "3dd3202a8c28b52cb272": _3dd3202a8c28b52cb272,
     "3fb4ae6c2547534b9412": _3fb4ae6c2547534b9412,
@@ -702,6 +834,7 @@ FUNCTIONS = {
     "466e1ff29c4bad9f8e26": _466e1ff29c4bad9f8e26,
     "468d5b94783a5c147e02": _468d5b94783a5c147e02,
     "4784815596a3f7bac197": _4784815596a3f7bac197,
+    "49f3f66d56fc53a12c4e": _49f3f66d56fc53a12c4e,
     "4b93d3f7880dc7f94e01": _4b93d3f7880dc7f94e01,
     "4d5e37c65134456daf08": _4d5e37c65134456daf08,
     "4e6d474011dcfd1f3428": _4e6d474011dcfd1f3428,
@@ -712,6 +845,7 @@ FUNCTIONS = {
     "555999658d56a35ed6cb": _555999658d56a35ed6cb,
     "57bb8f8297635007d9b2": _57bb8f8297635007d9b2,
     "58f8cd2ce20ebb53188d": _58f8cd2ce20ebb53188d,
+    "5dbf5128df6ef63fee29": _5dbf5128df6ef63fee29,
     "5e91245b7b98f766f926": _5e91245b7b98f766f926,
     "60076b235db70a7c438f": _60076b235db70a7c438f,
     "61033bf8d0814c6623c0": _61033bf8d0814c6623c0,
@@ -724,6 +858,7 @@ FUNCTIONS = {
     "6af3b4022b88243288ee": _6af3b4022b88243288ee,
     "6b2ee64c2b878b38fb61": _6b2ee64c2b878b38fb61,
     "6b6def47ce058e80922e": _6b6def47ce058e80922e,
+    "6ceeac84a61bf70ffb70": _6ceeac84a61bf70ffb70,
     "6f4216d75cf039ef8c09": _6f4216d75cf039ef8c09,
     "709b39a9e897d31a3654": _709b39a9e897d31a3654,
     "7444a196e0c28f2aab0e": _7444a196e0c28f2aab0e,
@@ -733,8 +868,10 @@ FUNCTIONS = {
     "77f20c75cb8dd5a3f922": _77f20c75cb8dd5a3f922,
     "7beaf44b036bf7c0a6b6": _7beaf44b036bf7c0a6b6,
     "7f0ad753675816955567": _7f0ad753675816955567,
+    "83735bc998e3f9032378": _83735bc998e3f9032378,
     "8941ba3018d7c4da8efa": _8941ba3018d7c4da8efa,
     "8cc19139d286c3e0d3c2": _8cc19139d286c3e0d3c2,
+    "8e668b6cdfc43e3298c0": _8e668b6cdfc43e3298c0,
     "8ff5794b5c1fb26fd139": _8ff5794b5c1fb26fd139,
     "906cc9b7326bd407e2a2": _906cc9b7326bd407e2a2,
     "92199254275541027b3b": _92199254275541027b3b,
@@ -745,6 +882,7 @@ FUNCTIONS = {
     "a23b40a872992b706624": _a23b40a872992b706624,
     "a46a8809267c7f4b3a3b": _a46a8809267c7f4b3a3b,
     "a4dd29e038d0bb5848b9": _a4dd29e038d0bb5848b9,
+    "a52c8a43208c508b2c9d": _a52c8a43208c508b2c9d,
     "a661bc4a59d8174df986": _a661bc4a59d8174df986,
     "a6fd63aa0f785d4a2fe7": _a6fd63aa0f785d4a2fe7,
     "a7577ca2a7988b0f4528": _a7577ca2a7988b0f4528,
@@ -755,31 +893,42 @@ FUNCTIONS = {
     "acd522560216e9a8e5a2": _acd522560216e9a8e5a2,
     "ada8a6e7d995f3b785a2": _ada8a6e7d995f3b785a2,
     "ae71aaa64bbb7c595492": _ae71aaa64bbb7c595492,
+    "aed897c6603e1a9b5064": _aed897c6603e1a9b5064,
     "af8934e238e12ca5aace": _af8934e238e12ca5aace,
+    "b18a461b65e9665f3856": _b18a461b65e9665f3856,
     "b1dde4caf1a28f0f0d9e": _b1dde4caf1a28f0f0d9e,
     "b26d990aa331a1150fd8": _b26d990aa331a1150fd8,
     "b3c7f45661e0b04d42c4": _b3c7f45661e0b04d42c4,
     "b4b3cb4f99d908167488": _b4b3cb4f99d908167488,
     "b83ebeb6559328560261": _b83ebeb6559328560261,
     "ba60d3ef0bfee0b95f40": _ba60d3ef0bfee0b95f40,
+    "bc0c5d3b767b25173efd": _bc0c5d3b767b25173efd,
     "bc9b2e2c73729b9b06e8": _bc9b2e2c73729b9b06e8,
+    "bcf1509c586b11be2a3f": _bcf1509c586b11be2a3f,
+    "c0d46e2aec8bb27ba4f4": _c0d46e2aec8bb27ba4f4,
     "c5ec42bcf88fd4a4c228": _c5ec42bcf88fd4a4c228,
     "c6b9a3c1bc233218634d": _c6b9a3c1bc233218634d,
     "c9321b59dafead64b748": _c9321b59dafead64b748,
+    "cafc46190d87a4080415": _cafc46190d87a4080415,
     "ccbce2fc341bab48375d": _ccbce2fc341bab48375d,
+    "ccc1468ea91a9d7409b9": _ccc1468ea91a9d7409b9,
+    "ce2c5756bd228041db56": _ce2c5756bd228041db56,
     "cf31d720b242fe13da62": _cf31d720b242fe13da62,
     "d0583cdfdac436eea4ce": _d0583cdfdac436eea4ce,
+    "d06027cd009b3c69ea06": _d06027cd009b3c69ea06,
     "d063fe98f6a4773bcaea": _d063fe98f6a4773bcaea,
     "d0f17538c605a55fa899": _d0f17538c605a55fa899,
     "d58cd29c07ed204bea32": _d58cd29c07ed204bea32,
     "d5fc9885df801ff972ed": _d5fc9885df801ff972ed,
     "d72bab8662fac64cd090": _d72bab8662fac64cd090,
+    "d8d17ac992d61e68d61c": _d8d17ac992d61e68d61c,
     "db064a284159df3d50f8": _db064a284159df3d50f8,
     "dc5afa061c21b87c533b": _dc5afa061c21b87c533b,
     "dc696f9983c3fc880f29": _dc696f9983c3fc880f29,
     "deedddcb16058df1ab71": _deedddcb16058df1ab71,
     "e2586545e62ce0c7f5b0": _e2586545e62ce0c7f5b0,
     "e33f93f62e06bad49456": _e33f93f62e06bad49456,
+    "e673c70fd97a3c8b8d3a": _e673c70fd97a3c8b8d3a,
     "e687105f48613fb1dcf1": _e687105f48613fb1dcf1,
     "e85f65b31e65d8a74047": _e85f65b31e65d8a74047,
     "e92e10dae0ec7bcf9015": _e92e10dae0ec7bcf9015,
@@ -793,6 +942,7 @@ FUNCTIONS = {
     "f7e7ed600e478b2ac869": _f7e7ed600e478b2ac869,
     "f858ae49c52b6e519313": _f858ae49c52b6e519313,
     "fb0573ff322c9c6113c8": _fb0573ff322c9c6113c8,
+    "fb39b8bb1c1a0ae7453f": _fb39b8bb1c1a0ae7453f,
     "fc0b86f61b049afe7451": _fc0b86f61b049afe7451,
     "fc88bd377ce3419b759b": _fc88bd377ce3419b759b,
 }

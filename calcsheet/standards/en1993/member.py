@@ -45,6 +45,8 @@ from calcsheet.sections import Section
 from calcsheet.standards.clause import Clause
 from calcsheet.standards.en1993 import buckling as buck
 from calcsheet.standards.en1993 import classification as cls
+from calcsheet.standards.en1993 import interaction as inter
+from calcsheet.standards.en1993 import lateral as lat
 from calcsheet.standards.en1993 import resistance as res
 from calcsheet.standards.en1993.buckling import CurveChoice
 from calcsheet.standards.en1993.factors import (
@@ -79,6 +81,11 @@ DEMAND_DIMENSIONS: dict[str, str] = {
 }
 DEMAND_ALIASES = {"V_Ed": "V_z_Ed"}
 F_235 = Quantity(235.0, "MPa")  # the reference strength of ε (Table 5.2)
+POISSON_RATIO = 0.3  # EN 1993-1-1 3.2.6(1)
+# EN 1993-1-1 6.3.2.3(1): λ̄_LT,0 ≤ 0.4 and β ≥ 0.75 recommended (a National Annex may
+# give others; the sheet shows them as inputs).
+LAMBDA_LT_0 = 0.4
+BETA_LT = 0.75
 
 # The checks of the procedure by key, as titled on the sheet (in sheet order).
 EN_CHECK_TITLES: dict[str, str] = {
@@ -91,6 +98,9 @@ EN_CHECK_TITLES: dict[str, str] = {
     "combined": "Bending and axial force",
     "buckling_y": "Flexural buckling about y-y",
     "buckling_z": "Flexural buckling about z-z",
+    "ltb": "Lateral-torsional buckling",
+    "interaction_y": "Bending and compression, Eq. (6.61)",
+    "interaction_z": "Bending and compression, Eq. (6.62)",
 }
 
 AXES_TEXT = (
@@ -100,9 +110,13 @@ AXES_TEXT = (
     "shears are checked by magnitude."
 )
 NOT_COVERED_TEXT = (
-    "Not covered by these checks: lateral-torsional buckling (6.3.2), members in bending "
-    "and axial compression (6.3.3), torsion (6.2.7), class 4 cross-sections (EN 1993-1-5), "
-    "local load introduction and connections. They must be verified separately."
+    "Not covered by these checks: torsion (6.2.7), class 4 cross-sections (EN 1993-1-5), "
+    "intermediate lateral restraints, local load introduction and connections. They must be "
+    "verified separately."
+)
+LTB_FIXED = (
+    "follows from the section, the support case, the moment diagram and the load height "
+    "chosen; build the sheet again with them"
 )
 CURVE_FIXED = (
     "the buckling curve follows from the section, the steel grade and its forming; "
@@ -147,6 +161,22 @@ class MemberData:
     k: tuple[float, float]
     net_area: pint.Quantity | None
     interaction: str
+    ltb: LateralData | None = None  # None: not susceptible (CHS, SHS): no LTB check
+    factors_m: lat.DiagramFactors | None = None
+    support_case: str = "cantilever"
+    interaction_method: str = "B"
+
+
+@dataclass(frozen=True)
+class LateralData:
+    """How lateral-torsional buckling is verified (6.3.2), settled when the member is read."""
+
+    method: str  # "6.3.2.2" or "6.3.2.3"
+    curve: CurveChoice
+    z_g: pint.Quantity
+    z_g_source: str
+    k_LT: float
+    k_LT_source: str
 
 
 def write_en1993_checks(
@@ -161,6 +191,12 @@ def write_en1993_checks(
     fabrication: str | None = None,
     net_area: pint.Quantity | str | None = None,
     interaction: str = "plastic",
+    ltb_method: str | None = None,
+    load_height: str | pint.Quantity = "shear centre",
+    support_case: str = "cantilever",
+    moment_diagram: str = "uniform",
+    end_moment_ratio: float = 1.0,
+    interaction_method: str = "B",
 ) -> list[Check]:
     """Write the EN 1993-1-1 checks of ``section`` under ``demands`` on ``sheet``.
 
@@ -179,6 +215,15 @@ def write_en1993_checks(
     "plastic" (6.2.9.1 for class 1 and 2, the stress criterion of 6.2.9.2 for
     class 3) or "linear" (Eq. 6.2 throughout; always used for CHS).
 
+    Lateral-torsional buckling (6.3.2) of I-sections and RHS: ``ltb_method`` is
+    "6.3.2.3" (rolled or equivalent welded; the default for rolled sections) or
+    "6.3.2.2" (general case; the default for welded ones); ``load_height`` is
+    "shear centre" (default), "top flange", "bottom flange" or a length above the
+    shear centre; ``support_case`` "cantilever" (fixed-free, default) or "simply
+    supported"; ``moment_diagram`` the shape of M_y between the supports ("uniform",
+    "end moments" with ``end_moment_ratio`` ψ, "uniform load", "central point load").
+    Members in bending and compression (6.3.3) use ``interaction_method`` "B" (Annex B).
+
     A class 4 section, or a web that needs a shear buckling verification, is
     refused before anything is written. Returns the checks written, in sheet order.
     """
@@ -192,11 +237,17 @@ def write_en1993_checks(
         fabrication=fabrication,
         net_area=net_area,
         interaction=interaction,
+        ltb_method=ltb_method,
+        load_height=load_height,
+        support_case=support_case,
+        moment_diagram=moment_diagram,
+        end_moment_ratio=end_moment_ratio,
+        interaction_method=interaction_method,
     )
     # The scope depends on the demands (the class of a web under N and M): settle it
     # with the same procedure on the current values, before anything is written.
     current = {key: float(sheet.value(symbol).to_base_units().m) for key, symbol in symbols.items()}
-    problems = scope_problems(run_on_arrays(member, current))
+    problems = scope_problems(run_on_arrays(member, current), member.kind)
     for outside, reason in problems:
         if bool(np.any(outside)):
             raise InputError("section", section.name, SCOPE_TEXT, reason)
@@ -220,26 +271,44 @@ def run_on_arrays(member: MemberData, demands: Mapping[str, Any], **given: Any) 
     return w
 
 
-def scope_problems(w: ArrayWriter) -> list[tuple[np.ndarray, str]]:
-    """Where the procedure run on arrays left its scope: (mask, reason in words) pairs."""
+# The parts each class is the worst of (see _Procedure._classify), by section kind: the
+# part's name, its class symbol and its c/t symbol.
+_CLASS_PARTS: dict[str, dict[str, tuple[tuple[str, str, str], ...]]] = {
+    "I": {
+        "y": (("flange outstand", "class_f", "ct_f"), ("web", "class_w", "ct_w")),
+        "z": (("flange outstand", "class_f", "ct_f"),),
+        "N": (("flange outstand", "class_f", "ct_f"), ("web", "class_wN", "ct_w")),
+    },
+    "RHS": {
+        "y": (("flanges", "class_bN", "ct_b"), ("webs", "class_h", "ct_h")),
+        "z": (("webs", "class_hN", "ct_h"), ("flanges", "class_b", "ct_b")),
+        "N": (("flanges", "class_bN", "ct_b"), ("webs", "class_hN", "ct_h")),
+    },
+    "CHS": {key: (("wall", "class_t", "dt"),) for key in ("y", "z", "N")},
+}
+
+
+def scope_problems(w: ArrayWriter, kind: str = "") -> list[tuple[np.ndarray, str]]:
+    """Where the procedure run on arrays left its scope: (mask, reason in words) pairs.
+
+    With the section ``kind`` ("I", "RHS", "CHS") a class 4 reason names the part, its
+    c/t and the class 3 limit it exceeds.
+    """
     s = w.symbols
     problems = []
-    for key, what in (("y", "bending about y-y with N"), ("z", "bending about z-z with N")):
-        if f"class_{key}" in s:
-            problems.append(
-                (
-                    np.asarray(s[f"class_{key}"]) > 3,
-                    f"class 4 in {what}: effective properties (EN 1993-1-5) are not covered",
-                )
-            )
-    if "class_N" in s:
-        compressed = np.asarray(s["N_Ed"]) < 0
-        problems.append(
-            (
-                (np.asarray(s["class_N"]) > 3) & compressed,
-                "class 4 in compression: effective properties (EN 1993-1-5) are not covered",
-            )
-        )
+    compressed = np.asarray(s["N_Ed"]) < 0 if "N_Ed" in s else np.zeros((), dtype=bool)
+    for key, what in (
+        ("y", "bending about y-y with N"),
+        ("z", "bending about z-z with N"),
+        ("N", "compression"),
+    ):
+        if f"class_{key}" not in s:
+            continue
+        outside = np.asarray(s[f"class_{key}"]) > 3
+        if key == "N":
+            outside = outside & compressed
+        problems.append((outside, f"class 4 in {what}{_class_4_parts(s, kind, key, outside)}: "
+                         "effective properties (EN 1993-1-5 4.4) are not covered"))  # fmt: skip
     for axis in ("z", "y"):
         if f"hw_tw_{axis}" in s:
             ratio, limit = np.asarray(s[f"hw_tw_{axis}"]), np.asarray(s["hw_tw_max"])
@@ -252,6 +321,35 @@ def scope_problems(w: ArrayWriter) -> list[tuple[np.ndarray, str]]:
                 )
             )
     return problems
+
+
+def _class_4_parts(symbols: Mapping[str, Any], kind: str, key: str, outside: np.ndarray) -> str:
+    """ ", the web: c/t = 61.2 > 42ε = 34.2 (class 4, EN 1993-1-1 Table 5.2)" for the parts
+    of class 4 where ``outside`` holds (the largest c/t among them)."""
+    if not np.any(outside):
+        return ""
+    named = []
+    for part, class_name, ratio_name in _CLASS_PARTS.get(kind, {}).get(key, ()):
+        if class_name not in symbols or ratio_name not in symbols:
+            continue
+        part_class = np.asarray(symbols[class_name])
+        where = np.broadcast_to(
+            part_class > 3, np.broadcast_shapes(part_class.shape, outside.shape)
+        )
+        where = where & outside
+        if not np.any(where):
+            continue
+        shape = where.shape
+        ratio = np.broadcast_to(np.asarray(symbols[ratio_name], dtype=float), shape)[where]
+        limit_name = f"{class_name.replace('class_', 'ct_')}_3"
+        limit = np.broadcast_to(np.asarray(symbols[limit_name], dtype=float), shape)[where]
+        worst = int(np.argmax(ratio))
+        label = "d/t" if ratio_name == "dt" else "c/t"
+        named.append(
+            f"the {part} has {label} = {ratio[worst]:.3g} > {limit[worst]:.3g}, the class 3 "
+            "limit of EN 1993-1-1 Table 5.2 (class 4)"
+        )
+    return ": " + "; ".join(named) if named else ""
 
 
 def si_inputs(member: MemberData) -> dict[str, float]:
@@ -271,7 +369,23 @@ def si_inputs(member: MemberData) -> dict[str, float]:
     }
     if member.net_area is not None:
         quantities["A_net"] = member.net_area
+    if member.ltb is not None:
+        quantities["z_g"] = member.ltb.z_g
     result = {name: float(value.to_base_units().m) for name, value in quantities.items()}
+    if member.ltb is not None:
+        result.update(
+            nu=POISSON_RATIO,
+            k_LT=member.ltb.k_LT,
+            alpha_LT=member.ltb.curve.alpha,
+            lambda_LT_0=LAMBDA_LT_0,
+            beta_LT=BETA_LT,
+        )
+    diagram = member.factors_m
+    if diagram is not None:
+        result.update(
+            C_1=diagram.C_1, C_2=diagram.C_2, k_c=diagram.k_c, C_my=diagram.C_my,
+            C_mz=diagram.C_mz, C_mLT=diagram.C_mLT,
+        )  # fmt: skip
     result.update(
         gamma_M0=factors.gamma_M0,
         gamma_M1=factors.gamma_M1,
@@ -309,6 +423,12 @@ def member_data(
     fabrication: str | None = None,
     net_area: pint.Quantity | str | None = None,
     interaction: str = "plastic",
+    ltb_method: str | None = None,
+    load_height: str | pint.Quantity = "shear centre",
+    support_case: str = "cantilever",
+    moment_diagram: str = "uniform",
+    end_moment_ratio: float = 1.0,
+    interaction_method: str = "B",
 ) -> MemberData:
     """Read and check everything but the demands (arguments as :func:`write_en1993_checks`)."""
     geometry = _geometry(section, fabrication)
@@ -351,6 +471,25 @@ def member_data(
         reference = geometry.reference if name == "r" else "section dimensions"
         values[name] = (value, labels[name], reference)
     curves = {axis: _curve(geometry, chosen_steel, axis) for axis in ("y", "z")}
+    if interaction_method != "B":
+        raise InputError(
+            "interaction_method", interaction_method,
+            "'B' (EN 1993-1-1 Annex B; Annex A is not implemented yet)",
+        )  # fmt: skip
+    diagram = lat.moment_diagram_factors(support_case, moment_diagram, float(end_moment_ratio))
+    lateral = _lateral(geometry, ltb_method, load_height, support_case)
+    if lateral is not None:
+        for name, key, description in (
+            ("I_z", "Iy", "Second moment of area about z-z (calcsheet I_y)"),
+            ("I_t", "J", "Torsion constant"),
+            ("I_w", "Cw", "Warping constant"),
+        ):
+            if key not in props or not math.isfinite(float(props[key].m)):
+                raise InputError(
+                    "section", section.name, f"a section with its {description.lower()}",
+                    "needed for the elastic critical moment (EN 1993-1-1 6.3.2.2)",
+                )  # fmt: skip
+            values[name] = (props[key], description, sources.get(key, ""))
     return MemberData(
         section.name,
         geometry.kind,
@@ -363,7 +502,46 @@ def member_data(
         k,
         area,
         interaction,
+        lateral,
+        diagram,
+        support_case,
+        interaction_method,
     )
+
+
+def _lateral(
+    geometry: _Geometry,
+    method: str | None,
+    load_height: str | pint.Quantity,
+    support_case: str,
+) -> LateralData | None:
+    """How 6.3.2 applies to the member; None for a section not susceptible to it."""
+    dims = geometry.dims
+    if geometry.kind == "CHS" or (
+        geometry.kind == "RHS" and math.isclose(dims["h"].to("mm").m, dims["b"].to("mm").m)
+    ):
+        return None
+    depth = dims["h"]
+    z_g, source = lat.load_height(load_height, depth)
+    if geometry.kind == "I":
+        chosen = method or ("6.3.2.3" if geometry.fabrication == "rolled" else "6.3.2.2")
+        curve = lat.ltb_curve(chosen, geometry.fabrication, depth, dims["b"])
+    else:
+        if method not in (None, "6.3.2.2"):
+            raise InputError(
+                "ltb_method", method, "'6.3.2.2' for a hollow section (6.3.2.3 is for I-sections)"
+            )
+        chosen = "6.3.2.2"
+        alpha = lat.LTB_IMPERFECTION_FACTORS["d"]
+        curve = CurveChoice("d", alpha, "other cross-section: curve d (EN 1993-1-1 Table 6.4)")
+    if support_case == "cantilever":
+        destabilizing = float(z_g.to("mm").m) > 0
+        k_LT = lat.cantilever_length_factor(destabilizing)
+        loading = "destabilizing" if destabilizing else "normal"
+        k_source = f"{lat.CANTILEVER_SOURCE}: {loading} loading"
+    else:
+        k_LT, k_source = 1.0, f"{lat.SN003}: fork supports, k = k_w = 1"
+    return LateralData(chosen, curve, z_g, source, k_LT, k_source)
 
 
 def _curve(geometry: _Geometry, steel: Steel, axis: str) -> CurveChoice:
@@ -526,6 +704,10 @@ class _Procedure:
             self._combined()
         if self.has("N_Ed"):
             self._buckling()
+        if self.has("M_y_Ed"):
+            self._lateral()
+        if self.has("N_Ed") and (self.has("M_y_Ed") or self.has("M_z_Ed")):
+            self._member_interaction()
 
     def _inputs(self) -> None:
         w, steel, factors, member = self.w, self.member.steel, self.member.factors, self.member
@@ -546,7 +728,7 @@ class _Procedure:
             "gamma_M0", factors.gamma_M0, "Partial factor, resistance of cross-sections",
             dimension="dimensionless", reference=factors.reference,
         )  # fmt: skip
-        if self.has("N_Ed"):
+        if self.has("N_Ed") or (self.has("M_y_Ed") and self.member.ltb is not None):
             w.input(
                 "gamma_M1", factors.gamma_M1, "Partial factor, resistance of members to "
                 "instability", dimension="dimensionless", reference=factors.reference,
@@ -994,3 +1176,202 @@ class _Procedure:
             )
             key = f"buckling_{axis}"
             w.check(key, EN_CHECK_TITLES[key], N_c, N_b, reference="EN 1993-1-1 Eq. (6.46), (6.47)")
+
+    # lateral-torsional buckling (6.3.2)
+
+    def _lateral(self) -> None:
+        w, member = self.w, self.member
+        w.heading("Lateral-torsional buckling (EN 1993-1-1 6.3.2)", 2)
+        lateral, diagram = member.ltb, member.factors_m
+        if lateral is None or diagram is None:
+            shape = "circular" if member.kind == "CHS" else "square"
+            w.text(
+                f"A {shape} hollow section is not susceptible to lateral-torsional buckling "
+                "(EN 1993-1-1 6.3.2.1(2)): no verification; χ_LT = 1.0 in 6.3.3."
+            )
+            return
+        support = member.support_case
+        if w.prints:
+            w.text(
+                f"Member {support}"
+                + (" (fixed-free)" if support == "cantilever" else " (fork supports)")
+                + f"; M_y,Ed is the largest moment between the supports. Curve: "
+                f"{lateral.curve.reason}."
+            )
+        w.input(
+            "nu", POISSON_RATIO, "Poisson's ratio in the elastic range",
+            dimension="dimensionless", reference="EN 1993-1-1 3.2.6(1)",
+        )  # fmt: skip
+        G = w.clause(lat.shear_modulus, "G", w["E"], w["nu"], unit="MPa")
+        w.input(
+            "C_1", diagram.C_1, "Factor C1 of the moment diagram", dimension="dimensionless",
+            reference=diagram.C_source, fixed=LTB_FIXED,
+        )  # fmt: skip
+        w.input(
+            "C_2", diagram.C_2, "Factor C2 of the load height", dimension="dimensionless",
+            reference=diagram.C_source, fixed=LTB_FIXED,
+        )  # fmt: skip
+        height = {
+            "given": "Height of the load above the shear centre",
+            "shear centre": "Load at the shear centre",
+            "top flange": "Load on the top flange: h/2 above the shear centre",
+            "bottom flange": "Load on the bottom flange: h/2 below the shear centre",
+        }[lateral.z_g_source]
+        w.input("z_g", lateral.z_g, height, dimension="length", fixed=LTB_FIXED)
+        w.input(
+            "k_LT", lateral.k_LT, "Effective length factor for lateral-torsional buckling",
+            dimension="dimensionless", reference=lateral.k_LT_source, fixed=LTB_FIXED,
+        )  # fmt: skip
+        if support == "cantilever" and w.prints:
+            w.text(
+                "Cantilever: M_cr by the uniform-moment formula (C1 = 1, C2 = 0) over the "
+                f"effective length of {lat.CANTILEVER_SOURCE}; the load height chose the "
+                "length (destabilizing above the shear centre)."
+            )
+        L_LT = w.step("L_LT", w["k_LT"] * w["L"], "Length for lateral-torsional buckling")
+        M_cr = w.clause(
+            lat.critical_moment, "M_cr", w["C_1"], w["C_2"], w["z_g"], w["E"], w["I_z"],
+            w["I_w"], G, w["I_t"], L_LT,
+        )  # fmt: skip
+        W_y = w.clause(lat.ltb_modulus, "W_y", w["W_pl_y"], w["W_el_y"], w["class_y"])
+        lam = w.clause(lat.ltb_slenderness, "lambda_LT", W_y, w["f_y"], M_cr)
+        alpha = w.input(
+            "alpha_LT", lateral.curve.alpha, f"Imperfection factor, curve {lateral.curve.curve}",
+            dimension="dimensionless", reference="EN 1993-1-1 Table 6.3", fixed=LTB_FIXED,
+        )  # fmt: skip
+        if lateral.method == "6.3.2.2":
+            phi = w.clause(lat.ltb_phi_general, "Phi_LT", alpha, lam)
+            chi = w.clause(lat.ltb_reduction_general, "chi_LT", phi, lam)
+        else:
+            w.input(
+                "lambda_LT_0", LAMBDA_LT_0, "Plateau length λ̄_LT,0", dimension="dimensionless",
+                reference="EN 1993-1-1 6.3.2.3(1) (recommended value)",
+            )  # fmt: skip
+            w.input(
+                "beta_LT", BETA_LT, "Factor β", dimension="dimensionless",
+                reference="EN 1993-1-1 6.3.2.3(1) (recommended value)",
+            )  # fmt: skip
+            phi = w.clause(lat.ltb_phi_rolled, "Phi_LT", alpha, lam, w["lambda_LT_0"], w["beta_LT"])
+            plain = w.clause(lat.ltb_reduction_rolled, "chi_LT_0", phi, lam, w["beta_LT"])
+            w.input(
+                "k_c", diagram.k_c, "Correction factor for the moment distribution",
+                dimension="dimensionless", reference=diagram.k_c_source, fixed=LTB_FIXED,
+            )  # fmt: skip
+            f = w.clause(lat.ltb_modification_factor, "f_LT", w["k_c"], lam)
+            chi = w.clause(lat.ltb_reduction_modified, "chi_LT", plain, f, lam)
+        M_b = w.clause(lat.ltb_resistance, "M_b_Rd", chi, W_y, w["f_y"], w["gamma_M1"])
+        w.check(
+            "ltb", EN_CHECK_TITLES["ltb"], w.absolute(self.demands["M_y_Ed"]), M_b,
+            reference="EN 1993-1-1 Eq. (6.54), (6.55)",
+        )  # fmt: skip
+
+    # members in bending and axial compression (6.3.3, Annex B)
+
+    def _member_interaction(self) -> None:
+        w, member = self.w, self.member
+        w.heading("Bending and axial compression (EN 1993-1-1 6.3.3, Annex B)", 2)
+        diagram = member.factors_m
+        assert diagram is not None
+        N_Ed = self.demands["N_Ed"]
+        axes = [axis for axis in ("y", "z") if self.has(f"M_{axis}_Ed")]
+        if w.prints and float(w.value_of(N_Ed).to_base_units().m) > 0:
+            w.text(
+                "N_Ed is tension: 6.3.3 (members in bending and axial compression) does not "
+                "apply and Eq. (6.61), (6.62) are taken as 0; the cross-section under N and M "
+                "is verified by 6.2.9 (6.2.1(7)) above."
+            )
+        if len(axes) == 2:
+            section_class = w.largest(
+                "class_MN", [("y-y", w["class_y"]), ("z-z", w["class_z"])],
+                "Class under N with bending about both axes (the worse of the two)",
+            )  # fmt: skip
+        else:
+            section_class = w[f"class_{axes[0]}"]
+        n = {}
+        for axis in ("y", "z"):
+            n[axis] = w.clause(
+                inter.buckling_axial_ratio, f"n_{axis}", w["N_c_Ed"], w[f"chi_{axis}"], w["A"],
+                w["f_y"], w["gamma_M1"],
+            )  # fmt: skip
+        rk = {}
+        for axis in axes:
+            rk[axis] = w.clause(
+                inter.characteristic_moment, f"M_{axis}_Rk", w[f"W_pl_{axis}"],
+                w[f"W_el_{axis}"], w["f_y"], section_class,
+            )  # fmt: skip
+        k = self._interaction_factors(axes, n, section_class)
+        moments = {axis: self.demands[f"M_{axis}_Ed"] for axis in axes}
+        gamma = w["gamma_M1"]
+        # Eq. (6.61) with k_yy, k_yz and n_y; Eq. (6.62) with k_zy, k_zz and n_z.
+        for axis, key, major, minor in (
+            ("y", "interaction_y", "yy", "yz"),
+            ("z", "interaction_z", "zy", "zz"),
+        ):
+            if axes == ["y", "z"]:
+                clause = inter.interaction_661 if axis == "y" else inter.interaction_662
+                args = (
+                    n[axis], k[major], moments["y"], w["chi_LT"], rk["y"], k[minor],
+                    moments["z"], rk["z"], gamma,
+                )  # fmt: skip
+            elif axes == ["y"]:
+                clause = inter.interaction_661_uniaxial
+                if axis == "z":
+                    clause = inter.interaction_662_uniaxial
+                args = (n[axis], k[major], moments["y"], w["chi_LT"], rk["y"], gamma)
+            else:
+                clause = inter.interaction_661_minor if axis == "y" else inter.interaction_662_minor
+                args = (n[axis], k[minor], moments["z"], rk["z"], gamma)
+            # Compression (or no axial force) only: 6.3.3 does not apply in tension.
+            u = w.branch(
+                f"u_{key}",
+                [(_formula(w, clause, *args), N_Ed / w["N_pl_Rd"] <= 0), (0, True)],
+                f"{clause.description} (0 in tension)",
+                reference=clause.reference,
+            )
+            w.check(key, EN_CHECK_TITLES[key], u, sp.Integer(1), reference=clause.reference)
+
+    def _interaction_factors(
+        self, axes: list[str], n: dict[str, Value], section_class: Value
+    ) -> dict[str, Value]:
+        """k_yy, k_zy (with M_y) and k_zz, k_yz (with M_z) of Annex B."""
+        w, member = self.w, self.member
+        diagram = member.factors_m
+        assert diagram is not None
+        torsional = member.kind == "I"
+        k: dict[str, Value] = {}
+        if "y" in axes:
+            w.input(
+                "C_my", diagram.C_my, "Equivalent uniform moment factor, M_y",
+                dimension="dimensionless", reference=diagram.C_m_source, fixed=LTB_FIXED,
+            )  # fmt: skip
+            k["yy"] = w.clause(
+                inter.k_yy, "k_yy", w["C_my"], w["lambda_rel_y"], n["y"], section_class
+            )
+            if torsional:
+                w.input(
+                    "C_mLT", diagram.C_mLT, "Equivalent uniform moment factor, LTB",
+                    dimension="dimensionless", reference=diagram.C_m_source, fixed=LTB_FIXED,
+                )  # fmt: skip
+                k["zy"] = w.clause(
+                    inter.k_zy_torsional, "k_zy", w["C_mLT"], w["lambda_rel_z"], n["z"],
+                    section_class,
+                )  # fmt: skip
+            else:
+                k["zy"] = w.clause(inter.k_zy_rigid, "k_zy", k["yy"], section_class)
+            if member.ltb is None:
+                w.input(
+                    "chi_LT", 1.0, "Not susceptible to lateral-torsional buckling",
+                    dimension="dimensionless", reference="EN 1993-1-1 6.3.2.1(2)",
+                )  # fmt: skip
+        if "z" in axes:
+            w.input(
+                "C_mz", diagram.C_mz, "Equivalent uniform moment factor, M_z",
+                dimension="dimensionless", reference=diagram.C_m_source, fixed=LTB_FIXED,
+            )  # fmt: skip
+            k_zz = inter.k_zz_i if member.kind == "I" else inter.k_zz_hollow
+            k["zz"] = w.clause(k_zz, "k_zz", w["C_mz"], w["lambda_rel_z"], n["z"], section_class)
+            k["yz"] = w.clause(inter.k_yz, "k_yz", k["zz"], section_class)
+        if w.prints:
+            table = "B.2 (an open section: torsional deformation)" if torsional else "B.1"
+            w.text(f"Interaction factors of EN 1993-1-1 Annex B, Table {table}.")
+        return k
