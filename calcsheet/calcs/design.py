@@ -59,6 +59,13 @@ class DesignBasis:
     sweep_load: str | None = None
     sweep_step_deg: float = 5.0
     lightest_in: str | None = None
+    # EN 1993-1-1 6.3.2 and 6.3.3: "6.3.2.2" (general case) or "6.3.2.3" (rolled or
+    # equivalent welded); None: 6.3.2.3 for rolled, 6.3.2.2 for welded I-sections.
+    ltb_method: str | None = None
+    # Where the transverse load acts: "shear centre", "top flange", "bottom flange" or a
+    # length above the shear centre (positive: destabilizing).
+    load_height: str | pint.Quantity = "shear centre"
+    interaction_method: str = "B"  # EN 1993-1-1 Annex B (Annex A: not implemented)
 
     def __post_init__(self) -> None:
         standard = design_standard(self.kind)

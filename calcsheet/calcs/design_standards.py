@@ -268,6 +268,16 @@ def _en_gamma(basis: DesignBasis) -> dict[str, float]:
     return {"gamma_M0": basis.gamma_M0, "gamma_M1": basis.gamma_M1}
 
 
+def _en_stability(basis: DesignBasis) -> dict[str, Any]:
+    """The basis' options of lateral-torsional buckling (6.3.2) and 6.3.3; the member is
+    a cantilever (fixed-free), the procedure's default support case."""
+    return {
+        "ltb_method": basis.ltb_method,
+        "load_height": basis.load_height,
+        "interaction_method": basis.interaction_method,
+    }
+
+
 def _en_evaluate(section, forces, basis, Fy, length) -> Evaluation:
     from calcsheet.standards.en1993 import en1993_checks_numeric, steel
 
@@ -280,6 +290,7 @@ def _en_evaluate(section, forces, basis, Fy, length) -> Evaluation:
         length=length,
         k_eff=basis.effective_length_factor,
         gamma=_en_gamma(basis),
+        **_en_stability(basis),
     )  # fmt: skip
     return per_check, "governing EN 1993-1-1 check"
 
@@ -316,6 +327,7 @@ def _en_write(context: CheckContext) -> list[Check]:
         length=length,
         k_eff=basis.effective_length_factor,
         gamma=_en_gamma(basis),
+        **_en_stability(basis),
     )
 
 

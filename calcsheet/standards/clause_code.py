@@ -475,7 +475,7 @@ def _a4dd29e038d0bb5848b9(F_cr, A_e):
 
 
 def _a52c8a43208c508b2c9d(C_1, C_2, z_g, E, I_z, I_w, G, I_t, L_LT):
-    # NCCI SN003a-EN-EU (Access Steel), Elastic critical moment for lateral torsional buckling, Eq. (1) with k = k_w: Elastic critical moment for lateral-torsional buckling
+    # NCCI SN003a-EN-EU (Access Steel), Elastic critical moment for lateral torsional buckling: three-factor formula, k = k_w: Elastic critical moment for lateral-torsional buckling
     return numpy.pi**2*C_1*E*I_z*(-C_2*z_g + numpy.sqrt(C_2**2*z_g**2 + I_w/I_z + G*I_t*L_LT**2/(numpy.pi**2*E*I_z)))/L_LT**2
 
 

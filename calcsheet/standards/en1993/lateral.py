@@ -46,7 +46,7 @@ LOAD_HEIGHTS = ("shear centre", "top flange", "bottom flange")
 # Table 6.3: imperfection factors of the lateral-torsional buckling curves.
 LTB_IMPERFECTION_FACTORS: dict[str, float] = {"a": 0.21, "b": 0.34, "c": 0.49, "d": 0.76}
 
-# SN003 Table 3.1 (from memory): C1 for end moments M and ψM, k = k_w = 1, by ψ.
+# SN003's table of C1 for end moments M and ψM, k = k_w = 1, by ψ (from memory).
 _C1_END_MOMENTS = (
     (1.00, 1.00),
     (0.75, 1.14),
@@ -69,7 +69,10 @@ def shear_modulus(E, nu):
     return E / (2 * (1 + nu))
 
 
-@clause(f"{SN003}, Eq. (1) with k = k_w", "Elastic critical moment for lateral-torsional buckling")
+@clause(
+    f"{SN003}: three-factor formula, k = k_w",
+    "Elastic critical moment for lateral-torsional buckling",
+)
 def critical_moment(C_1, C_2, z_g, E, I_z, I_w, G, I_t, L_LT):
     """M_cr = C1·π²·E·I_z/L²·[√(I_w/I_z + L²·G·I_t/(π²·E·I_z) + (C2·z_g)²) − C2·z_g].
 
@@ -207,27 +210,27 @@ def moment_diagram_factors(support: str, diagram: str, psi: float = 1.0) -> Diag
     m_note = "EN 1993-1-1 Table B.3 (C_mz = 1.0: the M_z diagram is not given, uniform value)"
     if diagram == "uniform":
         return DiagramFactors(
-            1.0, 0.0, 1.0, 1.0, 1.0, 1.0, f"{SN003}, Table 3.1 (ψ = 1)",
+            1.0, 0.0, 1.0, 1.0, 1.0, 1.0, f"{SN003}: uniform moment (ψ = 1)",
             "EN 1993-1-1 Table 6.6 (ψ = 1)", m_note,
         )  # fmt: skip
     if diagram == "end moments":
         c_m = max(0.6 + 0.4 * psi, 0.4)
         return DiagramFactors(
             _c1_end_moments(psi), 0.0, 1 / (1.33 - 0.33 * psi), c_m, 1.0, c_m,
-            f"{SN003}, Table 3.1 (ψ = {psi:.3g}, linear between the tabulated ψ)",
+            f"{SN003}: end moments, ψ = {psi:.3g} (linear between the tabulated ψ)",
             f"EN 1993-1-1 Table 6.6 (ψ = {psi:.3g}): k_c = 1/(1.33 − 0.33ψ)",
             m_note,
         )  # fmt: skip
-    # SN003 Table 3.2 (from memory): uniform load C1 = 1.127, C2 = 0.454; central point
-    # load C1 = 1.348, C2 = 0.630 (k = 1). Table 6.6: k_c 0.94 and 0.90. Table B.3, no end
-    # moments (α_h = 0): C_m = 0.95 and 0.90.
+    # SN003's table for transverse loads (from memory): uniform load C1 = 1.127, C2 = 0.454;
+    # central point load C1 = 1.348, C2 = 0.630 (k = 1). Table 6.6: k_c 0.94 and 0.90.
+    # Table B.3, no end moments (α_h = 0): C_m = 0.95 and 0.90.
     if diagram == "uniform load":
         return DiagramFactors(
-            1.127, 0.454, 0.94, 0.95, 1.0, 0.95, f"{SN003}, Table 3.2 (uniform load)",
+            1.127, 0.454, 0.94, 0.95, 1.0, 0.95, f"{SN003}: uniform load",
             "EN 1993-1-1 Table 6.6 (uniform load)", m_note,
         )  # fmt: skip
     return DiagramFactors(
-        1.348, 0.630, 0.90, 0.90, 1.0, 0.90, f"{SN003}, Table 3.2 (central point load)",
+        1.348, 0.630, 0.90, 0.90, 1.0, 0.90, f"{SN003}: central point load",
         "EN 1993-1-1 Table 6.6 (central point load)", m_note,
     )  # fmt: skip
 

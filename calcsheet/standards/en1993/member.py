@@ -165,6 +165,7 @@ class MemberData:
     factors_m: lat.DiagramFactors | None = None
     support_case: str = "cantilever"
     interaction_method: str = "B"
+    diagram_text: str = "uniform"
 
 
 @dataclass(frozen=True)
@@ -506,7 +507,14 @@ def member_data(
         diagram,
         support_case,
         interaction_method,
+        _diagram_text(support_case, moment_diagram, float(end_moment_ratio)),
     )
+
+
+def _diagram_text(support_case: str, diagram: str, psi: float) -> str:
+    if support_case == "cantilever":
+        return "not used (effective length of the cantilever)"
+    return f"end moments, ψ = {psi:.3g}" if diagram == "end moments" else diagram
 
 
 def _lateral(
@@ -1195,7 +1203,8 @@ class _Procedure:
             w.text(
                 f"Member {support}"
                 + (" (fixed-free)" if support == "cantilever" else " (fork supports)")
-                + f"; M_y,Ed is the largest moment between the supports. Curve: "
+                + f", moment diagram: {member.diagram_text}; M_y,Ed is the largest moment "
+                "between the supports. Curve: "
                 f"{lateral.curve.reason}."
             )
         w.input(

@@ -85,7 +85,16 @@ def _random_member(rng: np.random.Generator, index: int) -> tuple[Section, dict]
         "k_eff": (float(rng.choice([0.7, 1.0, 2.0])), float(rng.choice([0.7, 1.0, 2.0]))),
         "fabrication": fabrication,
         "interaction": "linear" if rng.random() < 0.15 else "plastic",
+        # Issue 15: lateral-torsional buckling (6.3.2) and 6.3.3 under every option.
+        "support_case": str(rng.choice(["cantilever", "simply supported"])),
+        "moment_diagram": str(
+            rng.choice(["uniform", "end moments", "uniform load", "central point load"])
+        ),
+        "end_moment_ratio": float(rng.uniform(-1.0, 1.0)),
+        "load_height": str(rng.choice(["shear centre", "top flange", "bottom flange", "35 mm"])),
     }
+    if kind == 0 or (kind == 3 and section.family == "W"):
+        options["ltb_method"] = rng.choice([None, "6.3.2.2", "6.3.2.3"])
     if rng.random() < 0.2:
         area = section.properties["A"].to("mm**2").m * rng.uniform(0.7, 0.95)
         options["net_area"] = f"{area:.1f} mm**2"
@@ -120,6 +129,7 @@ def test_the_printed_and_numeric_paths_agree_on_random_members() -> None:
     for that row among three others (each decision is taken per row)."""
     rng = np.random.default_rng(20261202)
     compared = refused = checks_compared = 0
+    stability = dict.fromkeys(("ltb", "interaction_y", "interaction_z"), 0)
     for index in range(270):
         section, options = _random_member(rng, index)
         rows = _random_demands(rng, section, 4)
@@ -145,10 +155,14 @@ def test_the_printed_and_numeric_paths_agree_on_random_members() -> None:
                 key,
             )
             checks_compared += 1
+            if key in stability and utilization > 0:
+                stability[key] += 1
         compared += 1
     print(f"parity: {compared} members compared ({checks_compared} checks), {refused} refused")
     assert compared + refused == 270 and compared >= 200, (compared, refused)
     assert checks_compared >= 1200
+    print(f"stability checks compared (nonzero): {stability}")
+    assert min(stability.values()) >= 40, stability
 
 
 def test_many_sections_at_once_equal_one_at_a_time() -> None:
