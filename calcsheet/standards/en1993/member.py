@@ -479,6 +479,21 @@ def member_data(
         )  # fmt: skip
     diagram = lat.moment_diagram_factors(support_case, moment_diagram, float(end_moment_ratio))
     lateral = _lateral(geometry, ltb_method, load_height, support_case)
+    if (
+        lateral is not None
+        and support_case == "simply supported"
+        and moment_diagram in ("uniform", "end moments")
+        and lateral.z_g.m != 0
+    ):
+        # C2·z_g is the effect of transverse loads; end moments have none, so a load height
+        # would silently drop out (and a uniform moment is not the safe side of a load on
+        # the top flange: a uniform load there gives a lower M_cr).
+        raise InputError(
+            "load_height", load_height,
+            "'shear centre' with end moments only, or the moment diagram of the transverse "
+            "load ('uniform load' or 'central point load')",
+            f"moment_diagram is {moment_diagram!r}, which has no transverse load",
+        )  # fmt: skip
     if lateral is not None:
         for name, key, description in (
             ("I_z", "Iy", "Second moment of area about z-z (calcsheet I_y)"),
@@ -1203,8 +1218,9 @@ class _Procedure:
             w.text(
                 f"Member {support}"
                 + (" (fixed-free)" if support == "cantilever" else " (fork supports)")
-                + f", moment diagram: {member.diagram_text}; M_y,Ed is the largest moment "
-                "between the supports. Curve: "
+                + f", moment diagram: {member.diagram_text}. M_y,Ed of the section checked is "
+                "taken as the largest moment between the supports (check the section where M_y "
+                "is largest). Curve: "
                 f"{lateral.curve.reason}."
             )
         w.input(

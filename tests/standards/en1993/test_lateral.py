@@ -182,6 +182,23 @@ def test_critical_moment_with_c1_c2_and_the_load_height() -> None:
     assert results["top flange"] < results["35 mm"] < results["bottom flange"]
 
 
+def test_a_load_height_needs_a_transverse_load() -> None:
+    """C2·z_g is the effect of a transverse load (SN003a-EN-EU): with end moments only a
+    load height would drop out silently, and a uniform moment is not on the safe side of a
+    top-flange load (M_cr of a uniform load on the top flange is lower, see above)."""
+    sheet, d = demand_sheet(M_y_Ed=50e3)
+    with pytest.raises(InputError, match="load_height.*no transverse load"):
+        write_en1993_checks(
+            sheet, catalog_section("HEB200"), demands=d, length="6 m",
+            support_case="simply supported", load_height="top flange",
+        )  # fmt: skip
+    with pytest.raises(InputError, match="load_height"):
+        write_en1993_checks(
+            sheet, catalog_section("HEB200"), demands=d, length="6 m", load_height="on top"
+        )
+    assert not sheet.checks
+
+
 def test_cantilever_effective_lengths() -> None:
     """A fixed-free cantilever: L_LT = 0.8L under normal loading and 1.4L when the load is
     destabilizing (BS 5950-1:2000 Table 14, built-in at the support, free tip; from

@@ -93,6 +93,11 @@ def _random_member(rng: np.random.Generator, index: int) -> tuple[Section, dict]
         "end_moment_ratio": float(rng.uniform(-1.0, 1.0)),
         "load_height": str(rng.choice(["shear centre", "top flange", "bottom flange", "35 mm"])),
     }
+    if options["support_case"] == "simply supported" and options["moment_diagram"] in (
+        "uniform",
+        "end moments",
+    ):
+        options["load_height"] = "shear centre"  # no transverse load: no load height
     if kind == 0 or (kind == 3 and section.family == "W"):
         options["ltb_method"] = rng.choice([None, "6.3.2.2", "6.3.2.3"])
     if rng.random() < 0.2:
