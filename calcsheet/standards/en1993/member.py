@@ -3,7 +3,9 @@
 :func:`en1993_member_procedure` classifies the cross-section (Table 5.2), writes
 the cross-section resistances of 6.2 and the flexural buckling resistances of
 6.3.1, and adds one check per verification under the keys of
-:data:`EN_CHECK_TITLES`. It is written against a writer
+:data:`EN_CHECK_TITLES`: with bending about y-y, lateral-torsional buckling (6.3.2);
+with N and bending, the member interaction of 6.3.3 (Annex B, Eq. 6.61 and 6.62,
+taken as 0 while N is tension). It is written against a writer
 (:mod:`calcsheet.engine.procedure`): :func:`write_en1993_checks` prints it on
 a sheet, :func:`~calcsheet.standards.en1993.numeric.en1993_checks_numeric`
 evaluates it on arrays of load combinations (and sections). Every decision that
@@ -325,8 +327,8 @@ def scope_problems(w: ArrayWriter, kind: str = "") -> list[tuple[np.ndarray, str
 
 
 def _class_4_parts(symbols: Mapping[str, Any], kind: str, key: str, outside: np.ndarray) -> str:
-    """ ", the web: c/t = 61.2 > 42ε = 34.2 (class 4, EN 1993-1-1 Table 5.2)" for the parts
-    of class 4 where ``outside`` holds (the largest c/t among them)."""
+    """ ": the web has c/t = 61.2 > 34.2, the class 3 limit of ..." for the parts of class 4
+    where ``outside`` holds (the largest c/t among those elements)."""
     if not np.any(outside):
         return ""
     named = []
