@@ -449,3 +449,36 @@ def test_member_sheet_summary_lists_ltb_and_interaction() -> None:
     for key in ("ltb", "interaction_y", "interaction_z"):
         assert EN_CHECK_TITLES[key] in summary
     assert re.search(r"Eq\. \(6\.62\).*?NOT OK", summary, re.S)
+
+
+def test_every_combination_of_an_i_section_cantilever_on_the_sheet() -> None:
+    """A davit arm of HEB 200 (our own invention) under G, Q and W: the numeric plan of every
+    EN 1990 combination gives the LTB and 6.3.3 utilizations the sheet prints for the
+    governing one, and each check carries its worst combination."""
+    from calcsheet.calcs.design import plan_combinations
+
+    loads = [
+        point_load("self", components=("0 kN", "0 kN", "-20 kN"), z="2.5 m", ey="0.2 m"),
+        point_load("hoist", components=("0 kN", "-8 kN", "-150 kN"), z="2.5 m", ey="0.1 m"),
+        point_load("wind", components=("4 kN", "0 kN", "10 kN"), z="2.5 m"),
+    ]
+    types = ["G", "Q", "W"]
+    section = catalog_section("HEB200")
+    basis = DesignBasis("EN 1993-1-1", grade="S355", load_height="top flange")
+    length, fy = Quantity(2.5, "m"), Quantity(355, "MPa")
+    plan = plan_combinations(section, loads, types, length, Quantity(0, "m"), basis, fy)
+    assert plan is not None
+    assert {"ltb", "interaction_y", "interaction_z"} <= set(plan.per_check)
+    sheet = member_sheet(
+        section, loads, length=length, Fy=fy, design=basis, load_types=types, units="SI"
+    )
+    keys = {title: key for key, title in EN_CHECK_TITLES.items()}
+    for check in sheet.checks:
+        key = keys.get(check.description)
+        if key is None:
+            continue
+        assert check.utilization == pytest.approx(
+            plan.per_check[key][plan.governing], rel=1e-9, abs=1e-12
+        ), key
+        assert check.worst_utilization == pytest.approx(float(max(plan.per_check[key])))
+    assert sheet.governing_check().worst_utilization == pytest.approx(plan.utilization.max())
