@@ -65,7 +65,7 @@ class DesignBasis:
     # Where the transverse load acts: "shear centre", "top flange", "bottom flange" or a
     # length above the shear centre (positive: destabilizing).
     load_height: str | pint.Quantity = "shear centre"
-    interaction_method: str = "B"  # EN 1993-1-1 Annex B (Annex A: not implemented)
+    interaction_method: str = "B"  # EN 1993-1-1 6.3.3 factors: Annex "B" or Annex "A"
 
     def __post_init__(self) -> None:
         standard = design_standard(self.kind)

@@ -20,9 +20,10 @@ def characteristic_moment(W_pl, W_el, f_y, section_class):
     return Piecewise((W_pl * f_y, section_class <= 2), (W_el * f_y, section_class <= 3))
 
 
-@clause("EN 1993-1-1 Annex B, Table B.1", "Axial force ratio for buckling, n = N_Ed/N_b,Rd")
+@clause("EN 1993-1-1 Eq. (6.61), (6.62)", "Axial force ratio for buckling, n = N_Ed/N_b,Rd")
 def buckling_axial_ratio(N_Ed, chi, A, f_y, gamma_M1):
-    """n_y = N_Ed/(χ_y·N_Rk/γM1), n_z = N_Ed/(χ_z·N_Rk/γM1), N_Rk = A·f_y (class 1–3)."""
+    """n_y = N_Ed/(χ_y·N_Rk/γM1), n_z = N_Ed/(χ_z·N_Rk/γM1), N_Rk = A·f_y (class 1–3): the
+    first term of Eq. (6.61) and (6.62), and n_y, n_z of Annex B."""
     return N_Ed / (chi * A * f_y / gamma_M1)
 
 

@@ -4,8 +4,8 @@
 the cross-section resistances of 6.2 and the flexural buckling resistances of
 6.3.1, and adds one check per verification under the keys of
 :data:`EN_CHECK_TITLES`: with bending about y-y, lateral-torsional buckling (6.3.2);
-with N and bending, the member interaction of 6.3.3 (Annex B, Eq. 6.61 and 6.62,
-taken as 0 while N is tension). It is written against a writer
+with N and bending, the member interaction of 6.3.3 (Eq. 6.61 and 6.62 with the
+factors of Annex B or Annex A, taken as 0 while N is tension). It is written against a writer
 (:mod:`calcsheet.engine.procedure`): :func:`write_en1993_checks` prints it on
 a sheet, :func:`~calcsheet.standards.en1993.numeric.en1993_checks_numeric`
 evaluates it on arrays of load combinations (and sections). Every decision that
@@ -31,6 +31,7 @@ checks by magnitude, so their signs do not matter here.
 
 from __future__ import annotations
 
+import functools
 import math
 from collections.abc import Mapping, Sequence
 from dataclasses import dataclass
@@ -45,6 +46,7 @@ from calcsheet.engine.procedure import ArrayWriter, SheetWriter, Value, Writer
 from calcsheet.errors import InputError
 from calcsheet.sections import Section
 from calcsheet.standards.clause import Clause
+from calcsheet.standards.en1993 import annex_a
 from calcsheet.standards.en1993 import buckling as buck
 from calcsheet.standards.en1993 import classification as cls
 from calcsheet.standards.en1993 import interaction as inter
@@ -168,6 +170,8 @@ class MemberData:
     support_case: str = "cantilever"
     interaction_method: str = "B"
     diagram_text: str = "uniform"
+    moment_diagram: str = "uniform"
+    end_moment_ratio: float = 1.0
 
 
 @dataclass(frozen=True)
@@ -225,7 +229,8 @@ def write_en1993_checks(
     shear centre; ``support_case`` "cantilever" (fixed-free, default) or "simply
     supported"; ``moment_diagram`` the shape of M_y between the supports ("uniform",
     "end moments" with ``end_moment_ratio`` ψ, "uniform load", "central point load").
-    Members in bending and compression (6.3.3) use ``interaction_method`` "B" (Annex B).
+    Members in bending and compression (6.3.3) take their interaction factors from
+    ``interaction_method`` "B" (Annex B, the default) or "A" (Annex A, Method 1).
 
     A class 4 section, or a web that needs a shear buckling verification, is
     refused before anything is written. Returns the checks written, in sheet order.
@@ -474,10 +479,10 @@ def member_data(
         reference = geometry.reference if name == "r" else "section dimensions"
         values[name] = (value, labels[name], reference)
     curves = {axis: _curve(geometry, chosen_steel, axis) for axis in ("y", "z")}
-    if interaction_method != "B":
+    if interaction_method not in ("A", "B"):
         raise InputError(
             "interaction_method", interaction_method,
-            "'B' (EN 1993-1-1 Annex B; Annex A is not implemented yet)",
+            "'B' (EN 1993-1-1 Annex B, the default) or 'A' (Annex A, Method 1)",
         )  # fmt: skip
     diagram = lat.moment_diagram_factors(support_case, moment_diagram, float(end_moment_ratio))
     lateral = _lateral(geometry, ltb_method, load_height, support_case)
@@ -496,12 +501,15 @@ def member_data(
             "load ('uniform load' or 'central point load')",
             f"moment_diagram is {moment_diagram!r}, which has no transverse load",
         )  # fmt: skip
-    if lateral is not None:
-        for name, key, description in (
+    if lateral is not None or interaction_method == "A":
+        torsion = (
             ("I_z", "Iy", "Second moment of area about z-z (calcsheet I_y)"),
             ("I_t", "J", "Torsion constant"),
             ("I_w", "Cw", "Warping constant"),
-        ):
+        )
+        if interaction_method == "A":
+            torsion = (("I_y", "Ix", "Second moment of area about y-y (calcsheet I_x)"), *torsion)
+        for name, key, description in torsion:
             if key not in props or not math.isfinite(float(props[key].m)):
                 raise InputError(
                     "section", section.name, f"a section with its {description.lower()}",
@@ -525,6 +533,8 @@ def member_data(
         support_case,
         interaction_method,
         _diagram_text(support_case, moment_diagram, float(end_moment_ratio)),
+        moment_diagram,
+        float(end_moment_ratio),
     )
 
 
@@ -1296,7 +1306,8 @@ class _Procedure:
 
     def _member_interaction(self) -> None:
         w, member = self.w, self.member
-        w.heading("Bending and axial compression (EN 1993-1-1 6.3.3, Annex B)", 2)
+        annex = "Annex A" if member.interaction_method == "A" else "Annex B"
+        w.heading(f"Bending and axial compression (EN 1993-1-1 6.3.3, {annex})", 2)
         diagram = member.factors_m
         assert diagram is not None
         N_Ed = self.demands["N_Ed"]
@@ -1326,7 +1337,11 @@ class _Procedure:
                 inter.characteristic_moment, f"M_{axis}_Rk", w[f"W_pl_{axis}"],
                 w[f"W_el_{axis}"], w["f_y"], section_class,
             )  # fmt: skip
-        k = self._interaction_factors(axes, n, section_class)
+        annex_a_used = member.interaction_method == "A"
+        if annex_a_used:
+            k = self._annex_a_factors(axes, section_class)
+        else:
+            k = self._interaction_factors(axes, n, section_class)
         moments = {axis: self.demands[f"M_{axis}_Ed"] for axis in axes}
         gamma = w["gamma_M1"]
         # Eq. (6.61) with k_yy, k_yz and n_y; Eq. (6.62) with k_zy, k_zz and n_z.
@@ -1349,9 +1364,18 @@ class _Procedure:
                 clause = inter.interaction_661_minor if axis == "y" else inter.interaction_662_minor
                 args = (n[axis], k[minor], moments["z"], rk["z"], gamma)
             # Compression (or no axial force) only: 6.3.3 does not apply in tension.
+            cases = [(0, N_Ed / w["N_pl_Rd"] > 0)]
+            if annex_a_used:
+                # Beyond a critical force the factors of Annex A lose their meaning (the
+                # member has buckled): the utilization is then the largest N_Ed/N_cr, ≥ 1.
+                ratios = [w["r_y"], w["r_z"], w["r_T"]]
+                beyond = w.any_of(*(ratio >= 1 for ratio in ratios))
+                largest = functools.reduce(w.larger, [n[axis], *ratios])
+                cases.append((largest, beyond))
+            cases.append((_formula(w, clause, *args), True))
             u = w.branch(
                 f"u_{key}",
-                [(_formula(w, clause, *args), N_Ed / w["N_pl_Rd"] <= 0), (0, True)],
+                cases,
                 f"{clause.description} (0 in tension)",
                 reference=clause.reference,
             )
@@ -1402,3 +1426,163 @@ class _Procedure:
             table = "B.2 (an open section: torsional deformation)" if torsional else "B.1"
             w.text(f"Interaction factors of EN 1993-1-1 Annex B, Table {table}.")
         return k
+
+    def _annex_a_factors(self, axes: list[str], section_class: Value) -> dict[str, Value]:
+        """k_yy, k_zy (with M_y) and k_zz, k_yz (with M_z) of Annex A (Method 1)."""
+        w, member = self.w, self.member
+        diagram = member.factors_m
+        assert diagram is not None
+        zero = sp.Integer(0)
+        has_y, has_z = "y" in axes, "z" in axes
+        M_y = self.demands["M_y_Ed"] if has_y else zero
+        M_z = self.demands["M_z_Ed"] if has_z else zero
+        N_c = w["N_c_Ed"]
+        if "G" not in w.symbols:
+            w.input(
+                "nu", POISSON_RATIO, "Poisson's ratio in the elastic range",
+                dimension="dimensionless", reference="EN 1993-1-1 3.2.6(1)",
+            )  # fmt: skip
+            w.clause(lat.shear_modulus, "G", w["E"], w["nu"], unit="MPa")
+        E, G = w["E"], w["G"]
+        w.clause(buck.critical_force, "N_cr_y", E, w["I_y"], w["L_cr_y"])
+        w.clause(buck.critical_force, "N_cr_z", E, w["I_z"], w["L_cr_z"])
+        # The torsional buckling length is taken as the minor-axis one (common practice,
+        # no source): the end conditions for twist follow those for lateral bending.
+        w.text("Torsional buckling length taken as the buckling length about z-z, L_cr,z.")
+        w.clause(
+            annex_a.torsional_critical_force, "N_cr_T", G, w["I_t"], E, w["I_w"], w["L_cr_z"],
+            w["i_y"], w["i_z"],
+        )  # fmt: skip
+        r = {
+            key: w.clause(annex_a.critical_ratio, f"r_{key}", N_c, w[f"N_cr_{key}"])
+            for key in ("y", "z", "T")
+        }
+        mu = {axis: w.clause(annex_a.mu, f"mu_{axis}", r[axis], w[f"chi_{axis}"]) for axis in "yz"}
+        ratio = {
+            axis: w.clause(annex_a.plastic_ratio, f"w_{axis}", w[f"W_pl_{axis}"], w[f"W_el_{axis}"])
+            for axis in "yz"
+        }
+        n_pl = w.clause(annex_a.axial_plastic_ratio, "n_pl", N_c, w["A"], w["f_y"], w["gamma_M1"])
+        a_LT = w.clause(annex_a.torsion_ratio, "a_LT", w["I_t"], w["I_y"])
+        lam_max = w.largest(
+            "lambda_max", [("y-y", w["lambda_rel_y"]), ("z-z", w["lambda_rel_z"])],
+            "Larger flexural slenderness λ̄_max",
+        )  # fmt: skip
+        # C_mz,0: the diagram of M_z is not given, so ψ = 1 (uniform moment).
+        if w.prints:
+            w.text(
+                "C_mi,0 of Table A.2: M_z with ψ = 1 (its diagram is not given); M_y "
+                + (
+                    "with ψ = 1 (a cantilever: its diagram between restraints is not given)."
+                    if member.support_case == "cantilever"
+                    else f"from its diagram ({member.diagram_text})."
+                )
+            )
+        k: dict[str, Value] = {}
+        factors: dict[str, Value] = {}
+        if has_z:
+            w.input("psi_z", 1.0, "End moment ratio of M_z (not given: uniform)",
+                    dimension="dimensionless", fixed=LTB_FIXED)  # fmt: skip
+            factors["C_mz"] = w.clause(annex_a.moment_factor_0_linear, "C_mz", w["psi_z"], r["z"])
+        if has_y:
+            if member.ltb is None:
+                w.input(
+                    "chi_LT", 1.0, "Not susceptible to lateral-torsional buckling",
+                    dimension="dimensionless", reference="EN 1993-1-1 6.3.2.1(2)",
+                )  # fmt: skip
+            lam_0 = self._annex_a_lambda_0(a_LT)
+            if "k_c" not in w.symbols:
+                w.input(
+                    "k_c", diagram.k_c, "Correction factor for the moment distribution",
+                    dimension="dimensionless", reference=diagram.k_c_source, fixed=LTB_FIXED,
+                )  # fmt: skip
+            C_1 = w.clause(annex_a.c1_from_kc, "C_1_A", w["k_c"])
+            limit = w.clause(annex_a.lambda_0_limit, "lambda_0_lim", C_1, r["z"], r["T"])
+            C_my_0 = self._annex_a_c_my_0(r["y"])
+            C_my = w.clause(
+                annex_a.moment_factor_y, "C_my", C_my_0, lam_0, limit, M_y, N_c, w["A"],
+                w["W_el_y"], a_LT, r["y"],
+            )  # fmt: skip
+            C_mLT = w.clause(
+                annex_a.moment_factor_lt, "C_mLT", C_my, a_LT, lam_0, limit, r["z"], r["T"]
+            )
+            M_pl = {}
+            for axis in axes:
+                M_pl[axis] = w.step(
+                    f"M_pl_{axis}_Rd", w[f"W_pl_{axis}"] * w["f_y"] / w["gamma_M0"],
+                    f"Plastic moment resistance about {axis}-{axis}",
+                    reference="EN 1993-1-1 Eq. (6.13)",
+                )  # fmt: skip
+            chi_LT = w["chi_LT"]
+            lam_z = w["lambda_rel_z"]
+            if has_z:
+                b = w.clause(
+                    annex_a.b_lt, "b_LT", a_LT, lam_0, M_y, chi_LT, M_pl["y"], M_z, M_pl["z"]
+                )
+                c = w.clause(annex_a.c_lt, "c_LT", a_LT, lam_0, lam_z, M_y, C_my, chi_LT, M_pl["y"])
+                d = w.clause(
+                    annex_a.d_lt, "d_LT", a_LT, lam_0, lam_z, M_y, C_my, chi_LT, M_pl["y"], M_z,
+                    factors["C_mz"], M_pl["z"],
+                )  # fmt: skip
+                e = w.clause(annex_a.e_lt, "e_LT", a_LT, lam_0, lam_z, M_y, C_my, chi_LT, M_pl["y"])
+            else:
+                b = d = zero
+            C_yy = w.clause(
+                annex_a.c_yy, "C_yy", ratio["y"], C_my, lam_max, n_pl, b, w["W_el_y"], w["W_pl_y"]
+            )
+            C_zy = w.clause(
+                annex_a.c_zy, "C_zy", ratio["y"], ratio["z"], C_my, lam_max, n_pl, d, w["W_el_y"],
+                w["W_pl_y"],
+            )  # fmt: skip
+            k["yy"] = w.clause(
+                annex_a.k_yy, "k_yy", C_my, C_mLT, mu["y"], r["y"], C_yy, section_class
+            )
+            k["zy"] = w.clause(
+                annex_a.k_zy, "k_zy", C_my, C_mLT, mu["z"], r["y"], C_zy, ratio["y"], ratio["z"],
+                section_class,
+            )  # fmt: skip
+        if has_z:
+            if not has_y:
+                c = e = zero
+            C_yz = w.clause(
+                annex_a.c_yz, "C_yz", ratio["z"], ratio["y"], factors["C_mz"], lam_max, n_pl, c,
+                w["W_el_z"], w["W_pl_z"],
+            )  # fmt: skip
+            C_zz = w.clause(
+                annex_a.c_zz, "C_zz", ratio["z"], factors["C_mz"], lam_max, n_pl, e, w["W_el_z"],
+                w["W_pl_z"],
+            )  # fmt: skip
+            k["yz"] = w.clause(
+                annex_a.k_yz, "k_yz", factors["C_mz"], mu["y"], r["z"], C_yz, ratio["z"],
+                ratio["y"], section_class,
+            )  # fmt: skip
+            k["zz"] = w.clause(
+                annex_a.k_zz, "k_zz", factors["C_mz"], mu["z"], r["z"], C_zz, section_class
+            )
+        return k
+
+    def _annex_a_lambda_0(self, a_LT: Value) -> Value:
+        """λ̄_0, the slenderness for lateral-torsional buckling under a uniform moment."""
+        w, member = self.w, self.member
+        if member.ltb is None:
+            return w.input(
+                "lambda_0", 0.0, "Not susceptible to lateral-torsional buckling: λ̄_0 = 0",
+                dimension="dimensionless", reference="EN 1993-1-1 6.3.2.1(2)",
+            )  # fmt: skip
+        M_cr_0 = w.clause(
+            annex_a.critical_moment_uniform, "M_cr_0", w["E"], w["I_z"], w["I_w"], w["G"],
+            w["I_t"], w["L_LT"],
+        )  # fmt: skip
+        return w.clause(lat.ltb_slenderness, "lambda_0", w["W_y"], w["f_y"], M_cr_0)
+
+    def _annex_a_c_my_0(self, r_y: Value) -> Value:
+        """C_my,0 of Table A.2 from the moment diagram of M_y."""
+        w, member = self.w, self.member
+        diagram = "uniform" if member.support_case == "cantilever" else member.moment_diagram
+        if diagram == "uniform load":
+            return w.clause(annex_a.moment_factor_0_uniform_load, "C_my_0", r_y)
+        if diagram == "central point load":
+            return w.clause(annex_a.moment_factor_0_point_load, "C_my_0", r_y)
+        psi = member.end_moment_ratio if diagram == "end moments" else 1.0
+        w.input("psi_y", psi, "End moment ratio of M_y", dimension="dimensionless", fixed=LTB_FIXED)
+        return w.clause(annex_a.moment_factor_0_linear, "C_my_0", w["psi_y"], r_y)

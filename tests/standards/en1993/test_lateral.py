@@ -370,11 +370,11 @@ def test_welded_sections_default_to_the_general_case() -> None:
     assert sheet.value("beta_LT").m == 0.75 and sheet.value("lambda_LT_0").m == 0.4
 
 
-def test_annex_a_is_refused_with_the_field_named() -> None:
+def test_an_unknown_interaction_method_is_refused_with_the_field_named() -> None:
     sheet, d = demand_sheet(N_Ed=-1e3, M_y_Ed=1e3)
     with pytest.raises(InputError, match="interaction_method"):
         write_en1993_checks(
-            sheet, catalog_section("HEB200"), demands=d, length="3 m", interaction_method="A"
+            sheet, catalog_section("HEB200"), demands=d, length="3 m", interaction_method="C"
         )
     assert not sheet.checks
 
@@ -482,3 +482,108 @@ def test_every_combination_of_an_i_section_cantilever_on_the_sheet() -> None:
         ), key
         assert check.worst_utilization == pytest.approx(float(max(plan.per_check[key])))
     assert sheet.governing_check().worst_utilization == pytest.approx(plan.utilization.max())
+
+
+def test_annex_a_method_1_by_hand() -> None:
+    """EN 1993-1-1 Annex A (Method 1), Tables A.1 and A.2 (expressions from memory), for the
+    HEB 200 of the Annex B example with M_z = 5 kN·m added: every auxiliary term written
+    out by hand and Eq. (6.61), (6.62) compared on the sheet and on arrays."""
+    section = catalog_section("HEB200")
+    A, Wpl_y, Wel_y, Wpl_z, Wel_z, iy, iz, Iy, Iz, It, Iw = _section_values(
+        section, "A", "Zx", "Sx", "Zy", "Sy", "rx", "ry", "Ix", "Iy", "J", "Cw"
+    )
+    fy, L, N, My, Mz = 235e6, 4.0, 300e3, 40e3, 5e3
+    lam1 = math.pi * math.sqrt(E / fy)
+    lam_y, lam_z = L / (iy * lam1), L / (iz * lam1)
+
+    def chi(alpha: float, lam: float) -> float:
+        phi = 0.5 * (1 + alpha * (lam - 0.2) + lam**2)
+        return min(1 / (phi + math.sqrt(phi**2 - lam**2)), 1.0)
+
+    chi_y, chi_z = chi(0.34, lam_y), chi(0.49, lam_z)
+    M_cr = math.pi**2 * E * Iz / L**2 * math.sqrt(Iw / Iz + L**2 * G * It / (math.pi**2 * E * Iz))
+    lam_0 = math.sqrt(Wpl_y * fy / M_cr)  # uniform moment: λ̄_0 = λ̄_LT here
+    phi_lt = 0.5 * (1 + 0.34 * (lam_0 - 0.4) + 0.75 * lam_0**2)
+    chi_lt = min(1 / (phi_lt + math.sqrt(phi_lt**2 - 0.75 * lam_0**2)), 1.0, 1 / lam_0**2)
+    # Table A.1 auxiliary terms.
+    Ncr_y, Ncr_z = math.pi**2 * E * Iy / L**2, math.pi**2 * E * Iz / L**2
+    Ncr_T = (G * It + math.pi**2 * E * Iw / L**2) / (iy**2 + iz**2)
+    r_y, r_z, r_T = N / Ncr_y, N / Ncr_z, N / Ncr_T
+    mu_y, mu_z = (1 - r_y) / (1 - chi_y * r_y), (1 - r_z) / (1 - chi_z * r_z)
+    w_y, w_z = min(Wpl_y / Wel_y, 1.5), min(Wpl_z / Wel_z, 1.5)
+    n_pl = N / (A * fy)
+    a_LT = max(1 - It / Iy, 0.0)
+    # Table A.2: ψ = 1 for both diagrams; C1 = k_c⁻² = 1.
+    C_my0 = 0.79 + 0.21 + 0.36 * (1 - 0.33) * r_y
+    C_mz = 0.79 + 0.21 + 0.36 * (1 - 0.33) * r_z
+    limit = 0.2 * math.sqrt(1.0) * ((1 - r_z) * (1 - r_T)) ** 0.25
+    assert lam_0 > limit  # torsional deformation considered
+    eps_y = My / N * A / Wel_y
+    C_my = C_my0 + (1 - C_my0) * math.sqrt(eps_y) * a_LT / (1 + math.sqrt(eps_y) * a_LT)
+    C_mLT = max(C_my**2 * a_LT / math.sqrt((1 - r_z) * (1 - r_T)), 1.0)
+    Mpl_y, Mpl_z = Wpl_y * fy, Wpl_z * fy
+    lam_max = max(lam_y, lam_z)
+    b_LT = 0.5 * a_LT * lam_0**2 * My / (chi_lt * Mpl_y) * Mz / Mpl_z
+    c_LT = 10 * a_LT * lam_0**2 / (5 + lam_z**4) * My / (C_my * chi_lt * Mpl_y)
+    d_LT = 2 * a_LT * lam_0 / (0.1 + lam_z**4) * My / (C_my * chi_lt * Mpl_y) * Mz / (C_mz * Mpl_z)
+    e_LT = 1.7 * a_LT * lam_0 / (0.1 + lam_z**4) * My / (C_my * chi_lt * Mpl_y)
+    C_yy = max(
+        1 + (w_y - 1) * ((2 - 1.6 / w_y * C_my**2 * (lam_max + lam_max**2)) * n_pl - b_LT),
+        Wel_y / Wpl_y,
+    )
+    C_yz = max(
+        1 + (w_z - 1) * ((2 - 14 * C_mz**2 * lam_max**2 / w_z**5) * n_pl - c_LT),
+        0.6 * math.sqrt(w_z / w_y) * Wel_z / Wpl_z,
+    )
+    C_zy = max(
+        1 + (w_y - 1) * ((2 - 14 * C_my**2 * lam_max**2 / w_y**5) * n_pl - d_LT),
+        0.6 * math.sqrt(w_y / w_z) * Wel_y / Wpl_y,
+    )
+    C_zz = max(
+        1 + (w_z - 1) * ((2 - 1.6 / w_z * C_mz**2 * (lam_max + lam_max**2)) * n_pl - e_LT),
+        Wel_z / Wpl_z,
+    )
+    k_yy = C_my * C_mLT * mu_y / (1 - r_y) / C_yy
+    k_yz = C_mz * mu_y / (1 - r_z) / C_yz * 0.6 * math.sqrt(w_z / w_y)
+    k_zy = C_my * C_mLT * mu_z / (1 - r_y) / C_zy * 0.6 * math.sqrt(w_y / w_z)
+    k_zz = C_mz * mu_z / (1 - r_z) / C_zz
+    n_y, n_z = N / (chi_y * A * fy), N / (chi_z * A * fy)
+    u_61 = n_y + k_yy * My / (chi_lt * Mpl_y) + k_yz * Mz / Mpl_z
+    u_62 = n_z + k_zy * My / (chi_lt * Mpl_y) + k_zz * Mz / Mpl_z
+    options = {
+        "material": "S235", "length": "4 m", "k_eff": 1.0, "support_case": "simply supported",
+        "interaction_method": "A",
+    }  # fmt: skip
+    sheet, d = demand_sheet(N_Ed=-N, M_y_Ed=My, M_z_Ed=Mz)
+    write_en1993_checks(sheet, section, demands=d, **options)
+    assert sheet.value("class_MN").m == 1
+    for name, value in (
+        ("mu_y", mu_y), ("mu_z", mu_z), ("a_LT", a_LT), ("C_my", C_my), ("C_mLT", C_mLT),
+        ("C_mz", C_mz), ("C_yy", C_yy), ("C_zz", C_zz), ("k_yy", k_yy), ("k_zy", k_zy),
+        ("k_zz", k_zz), ("k_yz", k_yz),
+    ):  # fmt: skip
+        assert sheet.value(name).m == pytest.approx(value, rel=1e-9), name
+    printed = checks_of(sheet)
+    numeric = en1993_checks_numeric(
+        section, {"N_Ed": np.array([-N]), "M_y_Ed": np.array([My]), "M_z_Ed": np.array([Mz])},
+        **options,
+    )  # fmt: skip
+    for key, value in (("interaction_y", u_61), ("interaction_z", u_62)):
+        assert printed[key] == pytest.approx(value, rel=1e-9), key
+        assert numeric[key][0] == pytest.approx(value, rel=1e-9), key
+    assert "Annex A" in " ".join(getattr(part, "text", "") for part in sheet.parts)
+
+
+def test_annex_a_beyond_a_critical_force_gives_the_force_ratio() -> None:
+    """N_Ed above N_cr,z (a 4 m HEB 200 cantilever, L_cr = 8 m: N_cr,z = π²EI_z/L_cr² =
+    649 kN): the factors of Annex A lose their meaning, the utilization is N_Ed/N_cr ≥ 1."""
+    section = catalog_section("HEB200")
+    (Iz,) = _section_values(section, "Iy")
+    Ncr_z = math.pi**2 * E * Iz / 8.0**2
+    assert Ncr_z / 1e3 == pytest.approx(649, abs=1)
+    sheet, d = demand_sheet(N_Ed=-1000e3, M_y_Ed=20e3)
+    write_en1993_checks(
+        sheet, section, demands=d, material="S235", length="4 m", interaction_method="A"
+    )
+    printed = checks_of(sheet)
+    assert printed["interaction_y"] == pytest.approx(max(1000e3 / Ncr_z, 1.0), rel=1e-9)

@@ -92,6 +92,7 @@ def _random_member(rng: np.random.Generator, index: int) -> tuple[Section, dict]
         ),
         "end_moment_ratio": float(rng.uniform(-1.0, 1.0)),
         "load_height": str(rng.choice(["shear centre", "top flange", "bottom flange", "35 mm"])),
+        "interaction_method": str(rng.choice(["A", "B"])),
     }
     if options["support_case"] == "simply supported" and options["moment_diagram"] in (
         "uniform",
