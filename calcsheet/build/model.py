@@ -606,6 +606,8 @@ def design_basis(job: Job) -> DesignBasis:
         Cb=check.Cb,
         load_height=check.load_height,
         tip_restraint=check.tip_restraint,
+        ltb_method=check.ltb_method,
+        interaction_method=check.interaction_method,
         national_annex=check.national_annex,
         gamma_M0=check.gamma_M0,
         gamma_M1=check.gamma_M1,

@@ -54,10 +54,12 @@ class DesignBasis:
     K: float | None = None  # effective length factor; AISC 2.1, EN 2.0 when None
     Lb: pint.Quantity | None = None
     Cb: float | None = None  # None: 1.0, labelled defaulted on the sheet
-    # Cantilever lateral-torsional buckling (AISC, I-shapes): where the load acts on the
-    # section ("top flange", "shear centre", "bottom flange") and the tip's restraint
-    # ("free", "laterally braced", "torsionally restrained"); None: not given.
-    load_height: str | None = None
+    # Lateral-torsional buckling: where the load acts on the section ("top flange",
+    # "shear centre", "bottom flange"; with EN 1993-1-1 also a length above the shear
+    # centre, positive destabilizing) and, for an AISC cantilever, the tip's restraint
+    # ("free", "laterally braced", "torsionally restrained"). None: not given (AISC:
+    # Lb = L; EN: at the shear centre).
+    load_height: str | pint.Quantity | None = None
     tip_restraint: str | None = None
     # Set by the member sheet: a cantilever fixed at z = 0 or not, and how a
     # defaulted Lb and Cb were found on a member on supports ("" when not).
@@ -81,6 +83,10 @@ class DesignBasis:
     sweep_load: str | None = None
     sweep_step_deg: float = 5.0
     lightest_in: str | None = None
+    # EN 1993-1-1 6.3.2 and 6.3.3: "6.3.2.2" (general case) or "6.3.2.3" (rolled or
+    # equivalent welded); None: 6.3.2.3 for rolled, 6.3.2.2 for welded I-sections.
+    ltb_method: str | None = None
+    interaction_method: str = "B"  # EN 1993-1-1 6.3.3 factors: Annex "B" or Annex "A"
 
     def __post_init__(self) -> None:
         standard = design_standard(self.kind)
@@ -95,7 +101,15 @@ class DesignBasis:
         )
 
         # The spellings the checks read ("shear center" becomes "shear centre").
-        object.__setattr__(self, "load_height", load_height_choice(self.load_height))
+        height = self.load_height
+        if isinstance(height, str):
+            try:
+                height = load_height_choice(height)
+            except InputError:
+                if self.kind != "EN 1993-1-1":
+                    raise
+                # EN 1993-1-1 also takes a length ("50 mm"), read with the section's depth.
+        object.__setattr__(self, "load_height", height)
         object.__setattr__(self, "tip_restraint", tip_restraint_choice(self.tip_restraint))
         if self.lightest_in and standard.search is None:
             searchable = [name for name in KINDS if design_standard(name).search is not None]

@@ -328,6 +328,26 @@ def _write_national_basis(sheet: Sheet, basis: DesignBasis) -> None:
     sheet.add_basis("Partial factors and national choices", *national.basis_lines(with_psi))
 
 
+def _en_stability(basis: DesignBasis) -> dict[str, Any]:
+    """The basis' options of lateral-torsional buckling (6.3.2) and 6.3.3.
+
+    A cantilever fixed at z = 0 is the procedure's "cantilever"; a member on supports
+    is taken as "simply supported" over its length with C1 of a uniform moment (1.0,
+    the least of the SN003 table) for a load at the shear centre, or of a uniform load
+    (so that C2·z_g counts) for a load off it.
+    """
+    height = "shear centre" if basis.load_height is None else basis.load_height
+    options: dict[str, Any] = {
+        "ltb_method": basis.ltb_method,
+        "load_height": height,
+        "interaction_method": basis.interaction_method,
+    }
+    if not basis.cantilever:
+        options["support_case"] = "simply supported"
+        options["moment_diagram"] = "uniform" if height == "shear centre" else "uniform load"
+    return options
+
+
 def _en_evaluate(section, forces, basis, Fy, length) -> Evaluation:
     from calcsheet.standards.en1993 import en1993_checks_numeric, steel
 
@@ -338,6 +358,7 @@ def _en_evaluate(section, forces, basis, Fy, length) -> Evaluation:
         length=length,
         k_eff=basis.effective_length_factor,
         gamma=_en_gamma(basis),
+        **_en_stability(basis),
     )  # fmt: skip
     return per_check, "governing EN 1993-1-1 check"
 
@@ -406,6 +427,7 @@ def _en_write(context: CheckContext) -> list[Check]:
         length=length,
         k_eff=basis.effective_length_factor,
         gamma=_en_gamma(basis),
+        **_en_stability(basis),
     )
 
 

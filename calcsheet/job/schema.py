@@ -369,6 +369,9 @@ class CheckSpec(_Table):
     # "laterally braced", "torsionally restrained").
     load_height: str | None = Field(default=None, min_length=1, max_length=40)
     tip_restraint: str | None = Field(default=None, min_length=1, max_length=40)
+    # EN 1993-1-1: 6.3.2.2 (general case) or 6.3.2.3 (rolled); 6.3.3 by Annex B or A.
+    ltb_method: Literal["6.3.2.2", "6.3.2.3"] | None = None
+    interaction_method: Literal["A", "B"] = "B"
     # National choices (EN): a named set (the set's names are checked with the design
     # basis) and single values overridden; None takes the set's value.
     national_annex: str = Field(default="EN recommended values", min_length=1, max_length=80)

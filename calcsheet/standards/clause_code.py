@@ -34,6 +34,11 @@ def _0429c11d2458d362675c(N_c, A, M, W_el, h, c):
     return numpy.select([numpy.greater(N_c/A, -c*abs(M)/(W_el*h)),True], [(-c*abs(M)/(W_el*h) + N_c/A)/(c*abs(M)/(W_el*h) + N_c/A),-1], default=numpy.nan)
 
 
+def _069e4d3cd77d05aed615(n_y, k_yz, M_z_Ed, M_z_Rk, gamma_M1):
+    # EN 1993-1-1 Eq. (6.61): Bending about z-z and axial compression, buckling about y-y
+    return n_y + gamma_M1*k_yz*abs(M_z_Ed)/M_z_Rk
+
+
 def _0839fff909ccaabe4193(d, t_f):
     # AISC 360-22 Section F2.2: Distance between flange centroids, ho = d − tf
     return d - t_f
@@ -49,6 +54,16 @@ def _095dc1363414c6727ceb(lam_r, lam, F_y):
     return 1.7161*F_y*lam_r**2/lam**2
 
 
+def _0d139d9445353a67bbb9(k_zz, section_class):
+    # EN 1993-1-1 Annex B, Table B.1: Interaction factor k_yz
+    return numpy.select([numpy.less_equal(section_class, 2),True], [0.6*k_zz,k_zz], default=numpy.nan)
+
+
+def _0d48632a2ae683840ed3(E, nu):
+    # EN 1993-1-1 3.2.6(1): Shear modulus
+    return E/(2*nu + 2)
+
+
 def _0ef822dbee9a4e6e5af3(W_pl, W_el, f_y, gamma_M0, section_class):
     # EN 1993-1-1 Eq. (6.13), (6.14): Bending resistance for the section class
     return numpy.select([numpy.less_equal(section_class, 2),numpy.less_equal(section_class, 3)], [W_pl*f_y/gamma_M0,W_el*f_y/gamma_M0], default=numpy.nan)
@@ -62,6 +77,11 @@ def _11c913d3ba6c08a6f16f(C_b, E, L_b, r_ts, J, c, S_x, h_o):
 def _1226452d5ae3a903cf87(M_y):
     # AISC 360-22 Eq. F10-1: Nominal flexural strength, yielding
     return 1.5*M_y
+
+
+def _123963307ea8562b93d3(Phi_LT, lambda_LT):
+    # EN 1993-1-1 Eq. (6.56): Reduction factor for lateral-torsional buckling, general
+    return functools.reduce(numpy.minimum, [1, (Phi_LT + numpy.sqrt(Phi_LT**2 - lambda_LT**2))**(-1.0)])
 
 
 def _13aaf77b4ecc4782305d(E, L, D, D_t):
@@ -114,6 +134,11 @@ def _23b3e31a231be6b34c0c(A_net, f_u, gamma_M2):
     return 0.9*A_net*f_u/gamma_M2
 
 
+def _24f86a2a37775dd2b3ad(k_c):
+    # EN 1993-1-1 Annex A, Table A.2: Factor C1 = k_c⁻²
+    return k_c**(-2.0)
+
+
 def _2591b6c97a2e54900118(eps):
     # EN 1993-1-1 Table 5.2 (sheet 2): Class 1 limit of an outstand in compression
     return 9*eps
@@ -134,6 +159,11 @@ def _2b82d3179344a75017b7(A_g, h, h_e, b, b_e, t):
     return A_g - t*(2*b - 2*b_e) - t*(2*h - 2*h_e)
 
 
+def _2b99b3f4bea66a8ae504(Phi_LT, lambda_LT, beta):
+    # EN 1993-1-1 Eq. (6.57): Reduction factor for lateral-torsional buckling, rolled
+    return functools.reduce(numpy.minimum, [1, lambda_LT**(-2.0), (Phi_LT + numpy.sqrt(Phi_LT**2 - beta*lambda_LT**2))**(-1.0)])
+
+
 def _2cacbdee24ad514d39f1(D, t):
     # AISC 360-22 Section H3.1, User Note: Torsional constant of a round HSS
     return (1/2)*numpy.pi*t*(D - t)**2
@@ -152,6 +182,11 @@ def _31cdcda6dcc19c4a3227(h_tw, k_v, E, F_y):
 def _336f85ec8d5a1f26a81e(eps):
     # EN 1993-1-1 Table 5.2 (sheet 3): Class 1 limit of a tube, d/t ≤ 50ε²
     return 50*eps**2
+
+
+def _343b7ece5a462d0489a1(k_c, lambda_LT):
+    # EN 1993-1-1 6.3.2.3(2): Modification factor f for the moment distribution
+    return functools.reduce(numpy.minimum, [1, -1/2*(1 - k_c)*(1 - 2*(lambda_LT - 0.8)**2) + 1])
 
 
 def _347d64da819a5807c838(M_pl_y_Rd, n, a):
@@ -179,6 +214,16 @@ def _360a3ce6dc79299771c7(E, L_c, r):
     return numpy.pi**2*E*r**2/L_c**2
 
 
+def _362d849919d4749b52ca(W_pl, W_el, f_y, section_class):
+    # EN 1993-1-1 Table 6.7: Characteristic moment resistance
+    return numpy.select([numpy.less_equal(section_class, 2),numpy.less_equal(section_class, 3)], [W_pl*f_y,W_el*f_y], default=numpy.nan)
+
+
+def _3a12862e9a711196a587(psi, r):
+    # EN 1993-1-1 Annex A, Table A.2: C_mi,0 for end moments (ψ) or a uniform moment (ψ = 1)
+    return 0.21*psi + r*(0.36*psi - 0.1188) + 0.79
+
+
 def _3a3fe7cc1dbd0f233257(E, F_y):
     # AISC 360-22 Table B4.1b Case 19: Limit λp, web of a rectangular HSS, flexure
     return 2.42*numpy.sqrt(E/F_y)
@@ -204,6 +249,11 @@ def _43e583211c0b74309c01(E, F_y):
     return 0.38*numpy.sqrt(E/F_y)
 
 
+def _4406c4c7f0c37849579c(a_LT, lambda_0, lambda_z, M_y_Ed, C_my, chi_LT, M_pl_y_Rd, M_z_Ed, C_mz, M_pl_z_Rd):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term d_LT
+    return 2*a_LT*lambda_0*abs(M_y_Ed)*abs(M_z_Ed)/(C_my*C_mz*M_pl_y_Rd*M_pl_z_Rd*chi_LT*(lambda_z**4 + 0.1))
+
+
 def _44437356c4f5d32105c7(E, F_y):
     # AISC 360-22 Table B4.1b Case 12: Limit λp, leg of a single angle, flexure
     return 0.54*numpy.sqrt(E/F_y)
@@ -227,6 +277,16 @@ def _468d5b94783a5c147e02(A_g, h, h_e, t_w, b, b_e, t_f):
 def _4784815596a3f7bac197(eps, psi):
     # EN 1993-1-1 Table 5.2 (sheet 1): Class 3 limit of an internal part
     return numpy.select([numpy.greater(psi, -1),True], [42*eps/(0.33*psi + 0.67),62*eps*numpy.sqrt(-psi)*(1 - psi)], default=numpy.nan)
+
+
+def _4889372fd95577256d94(C_mz, mu_z, r_z, C_zz, section_class):
+    # EN 1993-1-1 Annex A, Table A.1: Interaction factor k_zz (Method 1)
+    return numpy.select([numpy.less_equal(section_class, 2),True], [C_mz*mu_z/(C_zz*(1 - r_z)),C_mz*mu_z/(1 - r_z)], default=numpy.nan)
+
+
+def _49f3f66d56fc53a12c4e(alpha_LT, lambda_LT):
+    # EN 1993-1-1 6.3.2.2(1): Value to determine χ_LT, general case
+    return (1/2)*alpha_LT*(lambda_LT - 0.2) + (1/2)*lambda_LT**2 + 1/2
 
 
 def _4b93d3f7880dc7f94e01(E, F_y, D_t, Z, S):
@@ -279,6 +339,11 @@ def _58f8cd2ce20ebb53188d(E, F_y):
     return 0.45*numpy.sqrt(E/F_y)
 
 
+def _5dbf5128df6ef63fee29(W_y, f_y, M_cr):
+    # EN 1993-1-1 6.3.2.2(1): Non-dimensional slenderness for lateral-torsional buckling
+    return numpy.sqrt(W_y*f_y/M_cr)
+
+
 def _5e91245b7b98f766f926(F_y, A_w, C_v2):
     # AISC 360-22 Eq. G4-1: Nominal shear strength of a rectangular HSS
     return 0.6*A_w*C_v2*F_y
@@ -319,6 +384,11 @@ def _693b6aa468da87845f2e(n, section_class):
     return numpy.select([numpy.greater(section_class, 2),numpy.less_equal(n, 0.8),True], [1,functools.reduce(numpy.minimum, [6, 1.66/(1 - 1.13*n**2)]),6], default=numpy.nan)
 
 
+def _6944a5828cc6dd0cc29a(C_my, a_LT, lambda_0, lambda_0_lim, r_z, r_T):
+    # EN 1993-1-1 Annex A, Table A.2: Equivalent uniform moment factor C_mLT
+    return numpy.select([numpy.less_equal(lambda_0, lambda_0_lim),numpy.greater((1 - r_T)*(1 - r_z), 0),True], [1,functools.reduce(numpy.maximum, [1, C_my**2*a_LT/numpy.sqrt((1 - r_T)*(1 - r_z))]),1], default=numpy.nan)
+
+
 def _6aa5c1f5250fea7df1a9(N_Ed, N_Rd, M_y_Ed, M_y_Rd, M_z_Ed, M_z_Rd):
     # EN 1993-1-1 Eq. (6.2): Linear interaction of axial force and bending
     return abs(N_Ed)/N_Rd + abs(M_z_Ed)/M_z_Rd + abs(M_y_Ed)/M_y_Rd
@@ -339,9 +409,19 @@ def _6b6def47ce058e80922e(E, F_y):
     return 0.07*E/F_y
 
 
+def _6ceeac84a61bf70ffb70(n_z, k_zz, M_z_Ed, M_z_Rk, gamma_M1):
+    # EN 1993-1-1 Eq. (6.62): Bending about z-z and axial compression, buckling about z-z
+    return n_z + gamma_M1*k_zz*abs(M_z_Ed)/M_z_Rk
+
+
 def _6f4216d75cf039ef8c09(M_y, M_cr):
     # AISC 360-22 Eq. F10-2, F10-3: Nominal flexural strength, lateral-torsional buckling
     return numpy.select([numpy.less_equal(M_y/M_cr, 1),True], [functools.reduce(numpy.minimum, [1.5*M_y, M_y*(1.92 - 1.17*numpy.sqrt(M_y/M_cr))]),M_cr*(-0.17*M_cr/M_y + 0.92)], default=numpy.nan)
+
+
+def _705d1c3ce35be1cfc4ca(C_mz, mu_y, r_z, C_yz, w_z, w_y, section_class):
+    # EN 1993-1-1 Annex A, Table A.1: Interaction factor k_yz (Method 1)
+    return numpy.select([numpy.less_equal(section_class, 2),True], [0.6*C_mz*mu_y*numpy.sqrt(w_z/w_y)/(C_yz*(1 - r_z)),C_mz*mu_y/(1 - r_z)], default=numpy.nan)
 
 
 def _709b39a9e897d31a3654(r_y, E, F_y):
@@ -359,6 +439,11 @@ def _74ecd0f3e35b26b8f66a(outside, t):
     return outside - 3*t
 
 
+def _759f4c42562f49eb798d(w_y, C_my, lambda_max, n_pl, b_LT, W_el_y, W_pl_y):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term C_yy
+    return functools.reduce(numpy.maximum, [W_el_y/W_pl_y, (-b_LT + n_pl*(-1.6*C_my**2*lambda_max**2/w_y - 1.6*C_my**2*lambda_max/w_y + 2))*(w_y - 1) + 1])
+
+
 def _7673888dbae4f34b7089(M_p, F_y, S_x, lam, lam_pf, lam_rf, E, k_c):
     # AISC 360-22 Eq. F3-1, F3-2: Nominal flexural strength, flange local buckling
     return numpy.select([numpy.less_equal(lam, lam_rf),True], [M_p - (lam - lam_pf)*(-0.7*F_y*S_x + M_p)/(-lam_pf + lam_rf),0.9*E*S_x*k_c/lam**2], default=numpy.nan)
@@ -374,6 +459,16 @@ def _77f20c75cb8dd5a3f922(E_I, K, L):
     return numpy.pi**2*E_I/(K**2*L**2)
 
 
+def _7b5a09dd4e484fe07baf(N_Ed, N_cr):
+    # EN 1993-1-1 Annex A, Table A.1: Critical force ratio r = N_Ed/N_cr
+    return N_Ed/N_cr
+
+
+def _7b94e6b1d46ab495aec2(w_z, w_y, C_mz, lambda_max, n_pl, c_LT, W_el_z, W_pl_z):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term C_yz
+    return functools.reduce(numpy.maximum, [0.6*W_el_z*numpy.sqrt(w_z/w_y)/W_pl_z, (-c_LT + n_pl*(-14*C_mz**2*lambda_max**2/w_z**5 + 2))*(w_z - 1) + 1])
+
+
 def _7beaf44b036bf7c0a6b6(alpha, lambda_rel):
     # EN 1993-1-1 6.3.1.2(1): Value to determine the reduction factor χ
     return (1/2)*alpha*(lambda_rel - 0.2) + (1/2)*lambda_rel**2 + 1/2
@@ -384,14 +479,29 @@ def _7f0ad753675816955567(b, lam, lam_r, F_y, F_cr, F_el):
     return numpy.select([numpy.less_equal(lam, lam_r*numpy.sqrt(F_y/F_cr)),True], [b,b*numpy.sqrt(F_el/F_cr)*(1 - 0.18*numpy.sqrt(F_el/F_cr))], default=numpy.nan)
 
 
+def _83735bc998e3f9032378(n_z, k_zy, M_y_Ed, chi_LT, M_y_Rk, gamma_M1):
+    # EN 1993-1-1 Eq. (6.62): Bending about y-y and axial compression, buckling about z-z
+    return n_z + gamma_M1*k_zy*abs(M_y_Ed)/(M_y_Rk*chi_LT)
+
+
 def _8941ba3018d7c4da8efa(eps):
     # EN 1993-1-1 Table 5.2 (sheet 1): Class 1 limit of an internal part in compression
     return 33*eps
 
 
+def _8cb77420f6b79da407bf(N_Ed, A, f_y, gamma_M1):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term n_pl
+    return N_Ed*gamma_M1/(A*f_y)
+
+
 def _8cc19139d286c3e0d3c2(eps):
     # EN 1993-1-1 Table 5.2 (sheet 3): Class 3 limit of a tube, d/t ≤ 90ε²
     return 90*eps**2
+
+
+def _8e668b6cdfc43e3298c0(C_my, lambda_y, n_y, section_class):
+    # EN 1993-1-1 Annex B, Table B.1: Interaction factor k_yy
+    return numpy.select([numpy.less_equal(section_class, 2),True], [C_my*functools.reduce(numpy.minimum, [0.8*n_y + 1, n_y*(lambda_y - 0.2) + 1]),C_my*functools.reduce(numpy.minimum, [0.6*n_y + 1, 0.6*lambda_y*n_y + 1])], default=numpy.nan)
 
 
 def _8ff5794b5c1fb26fd139(E, F_y):
@@ -424,6 +534,11 @@ def _9b9bd93673a09d933586(eps, alpha):
     return numpy.select([numpy.greater(alpha, 0.5),True], [396*eps/(13*alpha - 1),36*eps/alpha], default=numpy.nan)
 
 
+def _9e2817142db9818ebb5d(a_LT, lambda_0, M_y_Ed, chi_LT, M_pl_y_Rd, M_z_Ed, M_pl_z_Rd):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term b_LT
+    return (1/2)*a_LT*lambda_0**2*abs(M_y_Ed)*abs(M_z_Ed)/(M_pl_y_Rd*M_pl_z_Rd*chi_LT)
+
+
 def _a0259eb1464452636c95(E, D_t):
     # AISC 360-22 Eq. H3-2b: Torsional buckling stress of a round HSS
     return 0.6*E/D_t**(3/2)
@@ -447,6 +562,11 @@ def _a46a8809267c7f4b3a3b(sigma_x, sigma_z, tau, f_y, gamma_M0):
 def _a4dd29e038d0bb5848b9(F_cr, A_e):
     # AISC 360-22 Eq. E7-1: Nominal compressive strength, slender elements
     return A_e*F_cr
+
+
+def _a52c8a43208c508b2c9d(C_1, C_2, z_g, E, I_z, I_w, G, I_t, L_LT):
+    # NCCI SN003a-EN-EU (Access Steel), Elastic critical moment for lateral torsional buckling: three-factor formula, k = k_w: Elastic critical moment for lateral-torsional buckling
+    return numpy.pi**2*C_1*E*I_z*(-C_2*z_g + numpy.sqrt(C_2**2*z_g**2 + I_w/I_z + G*I_t*L_LT**2/(numpy.pi**2*E*I_z)))/L_LT**2
 
 
 def _a661bc4a59d8174df986(E, C_w, L_cz, G, J, I_x, I_y):
@@ -479,6 +599,11 @@ def _aa29a9e86ac8598d7feb(A, b, t):
     return functools.reduce(numpy.minimum, [0.5, (A - 2*b*t)/A])
 
 
+def _ac61001bff5ddfb4353c(C_my, C_mLT, mu_z, r_y, C_zy, w_y, w_z, section_class):
+    # EN 1993-1-1 Annex A, Table A.1: Interaction factor k_zy (Method 1)
+    return numpy.select([numpy.less_equal(section_class, 2),True], [0.6*C_mLT*C_my*mu_z*numpy.sqrt(w_y/w_z)/(C_zy*(1 - r_y)),C_mLT*C_my*mu_z/(1 - r_y)], default=numpy.nan)
+
+
 def _acb9fcfde25855bca109(E, F_y, D_t, A_g):
     # AISC 360-22 Eq. E7-6: Effective area of a round HSS
     return numpy.select([numpy.less_equal(D_t, 0.11*E/F_y),True], [A_g,A_g*(2/3 + 0.038*E/(D_t*F_y))], default=numpy.nan)
@@ -489,9 +614,19 @@ def _acd522560216e9a8e5a2(F_y, A_w, C_v1):
     return 0.6*A_w*C_v1*F_y
 
 
+def _ad1124a63ccf9db69b73(E, I_z, I_w, G, I_t, L_LT):
+    # EN 1993-1-1 Annex A, Table A.2: Elastic critical moment under uniform moment (for λ̄_0)
+    return numpy.pi**2*E*I_z*numpy.sqrt(I_w/I_z + G*I_t*L_LT**2/(numpy.pi**2*E*I_z))/L_LT**2
+
+
 def _ada8a6e7d995f3b785a2(M_pl_Rd, n, a):
     # EN 1993-1-1 Eq. (6.39), (6.40): Reduced plastic moment of an RHS
     return functools.reduce(numpy.minimum, [M_pl_Rd, M_pl_Rd*(1 - n)/(1 - 1/2*a)])
+
+
+def _adeba23d3423b09471da(a_LT, lambda_0, lambda_z, M_y_Ed, C_my, chi_LT, M_pl_y_Rd):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term e_LT
+    return 1.7*a_LT*lambda_0*abs(M_y_Ed)/(C_my*M_pl_y_Rd*chi_LT*(lambda_z**4 + 0.1))
 
 
 def _ae71aaa64bbb7c595492(eps):
@@ -499,9 +634,24 @@ def _ae71aaa64bbb7c595492(eps):
     return 70*eps**2
 
 
+def _aed897c6603e1a9b5064(C_mLT, lambda_z, n_z, section_class):
+    # EN 1993-1-1 Annex B, Table B.2: Interaction factor k_zy, torsional deformation
+    return numpy.select([numpy.greater(section_class, 2),numpy.less(lambda_z, 0.4),True], [functools.reduce(numpy.maximum, [-0.05*n_z/(C_mLT - 0.25) + 1, -0.05*lambda_z*n_z/(C_mLT - 0.25) + 1]),functools.reduce(numpy.minimum, [lambda_z + 0.6, -0.1*lambda_z*n_z/(C_mLT - 0.25) + 1]),functools.reduce(numpy.maximum, [-0.1*n_z/(C_mLT - 0.25) + 1, -0.1*lambda_z*n_z/(C_mLT - 0.25) + 1])], default=numpy.nan)
+
+
 def _af8934e238e12ca5aace(F_y, Z):
     # AISC 360-22 Eq. F2-1: Plastic moment
     return F_y*Z
+
+
+def _af9849b67255cd834e28(C_1, r_z, r_T):
+    # EN 1993-1-1 Annex A, Table A.2: Slenderness limit of λ̄_0 below which torsion is not considered
+    return 0.2*numpy.sqrt(C_1)*functools.reduce(numpy.maximum, [0, (1 - r_T)*(1 - r_z)])**0.25
+
+
+def _b18a461b65e9665f3856(C_mz, lambda_z, n_z, section_class):
+    # EN 1993-1-1 Annex B, Table B.1: Interaction factor k_zz, hollow section
+    return numpy.select([numpy.less_equal(section_class, 2),True], [C_mz*functools.reduce(numpy.minimum, [0.8*n_z + 1, n_z*(lambda_z - 0.2) + 1]),C_mz*functools.reduce(numpy.minimum, [0.6*n_z + 1, 0.6*lambda_z*n_z + 1])], default=numpy.nan)
 
 
 def _b1dde4caf1a28f0f0d9e(A_g, b_1, b_e1, b_2, b_e2, t):
@@ -529,9 +679,29 @@ def _b4b3cb4f99d908167488(E, F_y):
     return 0.91*numpy.sqrt(E/F_y)
 
 
+def _b74aa1bdb1a71561356b(w_y, w_z, C_my, lambda_max, n_pl, d_LT, W_el_y, W_pl_y):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term C_zy
+    return functools.reduce(numpy.maximum, [0.6*W_el_y*numpy.sqrt(w_y/w_z)/W_pl_y, (-d_LT + n_pl*(-14*C_my**2*lambda_max**2/w_y**5 + 2))*(w_y - 1) + 1])
+
+
+def _b800764b2b4f7e736507(a_LT, lambda_0, lambda_z, M_y_Ed, C_my, chi_LT, M_pl_y_Rd):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term c_LT
+    return 10*a_LT*lambda_0**2*abs(M_y_Ed)/(C_my*M_pl_y_Rd*chi_LT*(lambda_z**4 + 5))
+
+
 def _b83ebeb6559328560261(N_c, f_y, c, t_total):
     # EN 1993-1-1 Table 5.2 (sheet 1): Compressed fraction α of an internal part at full plasticity
     return functools.reduce(numpy.minimum, [1, functools.reduce(numpy.maximum, [0.05, (1/2)*N_c/(c*f_y*t_total) + 1/2])])
+
+
+def _b941de2eb4708831fe61(I_t, I_y):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term a_LT
+    return functools.reduce(numpy.maximum, [0, -I_t/I_y + 1])
+
+
+def _ba4c1eb426b844a00c0f(r, chi):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term μ
+    return (1 - r)/(-chi*r + 1)
 
 
 def _ba60d3ef0bfee0b95f40(E, F_y):
@@ -539,9 +709,24 @@ def _ba60d3ef0bfee0b95f40(E, F_y):
     return 0.31*E/F_y
 
 
+def _bc0c5d3b767b25173efd(k_yy, section_class):
+    # EN 1993-1-1 Annex B, Table B.1: Interaction factor k_zy, no torsional deformation
+    return numpy.select([numpy.less_equal(section_class, 2),True], [0.6*k_yy,0.8*k_yy], default=numpy.nan)
+
+
 def _bc9b2e2c73729b9b06e8(F_y, A_g):
     # AISC 360-22 Eq. D2-1: Nominal tensile strength, yielding in the gross section
     return A_g*F_y
+
+
+def _bcf1509c586b11be2a3f(chi_LT, f, lambda_LT):
+    # EN 1993-1-1 Eq. (6.58): Modified reduction factor for lateral-torsional buckling
+    return functools.reduce(numpy.minimum, [1, lambda_LT**(-2.0), chi_LT/f])
+
+
+def _c0d46e2aec8bb27ba4f4(alpha_LT, lambda_LT, lambda_LT_0, beta):
+    # EN 1993-1-1 6.3.2.3(1): Value to determine χ_LT, rolled or equivalent welded
+    return (1/2)*alpha_LT*(lambda_LT - lambda_LT_0) + (1/2)*beta*lambda_LT**2 + 1/2
 
 
 def _c380faef19ad693e0db2(B, H, t):
@@ -549,9 +734,19 @@ def _c380faef19ad693e0db2(B, H, t):
     return -t**3*(18.0 - 4.5*numpy.pi) + t*(2*B - 2*t)*(H - t)
 
 
+def _c383e27d633b8a2fd2e1(G, I_t, E, I_w, L_T, i_y, i_z):
+    # EN 1993-1-1 Annex A, Table A.1: Elastic torsional buckling force
+    return (numpy.pi**2*E*I_w/L_T**2 + G*I_t)/(i_y**2 + i_z**2)
+
+
 def _c5ec42bcf88fd4a4c228(L_c, r):
     # AISC 360-22 Section E2: Slenderness ratio
     return L_c/r
+
+
+def _c65d60e151d3b34f26c1(C_my_0, lambda_0, lambda_0_lim, M_y_Ed, N_Ed, A, W_el_y, a_LT, r_y):
+    # EN 1993-1-1 Annex A, Table A.2: Equivalent uniform moment factor C_my
+    return numpy.select([numpy.less_equal(lambda_0, lambda_0_lim),numpy.less_equal(r_y, 0),True], [C_my_0,1,C_my_0 + a_LT*numpy.sqrt(A/(N_Ed*W_el_y))*(1 - C_my_0)*numpy.sqrt(abs(M_y_Ed))/(a_LT*numpy.sqrt(A/(N_Ed*W_el_y))*numpy.sqrt(abs(M_y_Ed)) + 1)], default=numpy.nan)
 
 
 def _c6b9a3c1bc233218634d(t, E, F_y, lam, b):
@@ -564,9 +759,29 @@ def _c9321b59dafead64b748(A_v, f_y, gamma_M0):
     return (1/3)*numpy.sqrt(3)*A_v*f_y/gamma_M0
 
 
+def _cafc46190d87a4080415(W_pl_y, W_el_y, section_class):
+    # EN 1993-1-1 6.3.2.2(1): Section modulus for lateral-torsional buckling
+    return numpy.select([numpy.less_equal(section_class, 2),numpy.less_equal(section_class, 3)], [W_pl_y,W_el_y], default=numpy.nan)
+
+
 def _ccbce2fc341bab48375d(h_tw, k_v, E, F_y):
     # AISC 360-22 Eq. G2-2, G2-3, G2-4: Web shear strength coefficient
     return numpy.select([numpy.less_equal(h_tw, 1.1*numpy.sqrt(E*k_v/F_y)),True], [1,1.1*numpy.sqrt(E*k_v/F_y)/h_tw], default=numpy.nan)
+
+
+def _ccc0b0e200afd0c59bce(w_z, C_mz, lambda_max, n_pl, e_LT, W_el_z, W_pl_z):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term C_zz
+    return functools.reduce(numpy.maximum, [W_el_z/W_pl_z, (-e_LT + n_pl*(-1.6*C_mz**2*lambda_max**2/w_z - 1.6*C_mz**2*lambda_max/w_z + 2))*(w_z - 1) + 1])
+
+
+def _ccc1468ea91a9d7409b9(N_Ed, chi, A, f_y, gamma_M1):
+    # EN 1993-1-1 Eq. (6.61), (6.62): Axial force ratio for buckling, n = N_Ed/N_b,Rd
+    return N_Ed*gamma_M1/(A*chi*f_y)
+
+
+def _ce2c5756bd228041db56(chi_LT, W_y, f_y, gamma_M1):
+    # EN 1993-1-1 Eq. (6.55): Design buckling resistance moment
+    return W_y*chi_LT*f_y/gamma_M1
 
 
 def _cf31d720b242fe13da62(V_rx, V_ry):
@@ -579,6 +794,11 @@ def _d0583cdfdac436eea4ce(A, f_y, gamma_M0):
     return A*f_y/gamma_M0
 
 
+def _d06027cd009b3c69ea06(n_z, k_zy, M_y_Ed, chi_LT, M_y_Rk, k_zz, M_z_Ed, M_z_Rk, gamma_M1):
+    # EN 1993-1-1 Eq. (6.62): Bending and axial compression, buckling about z-z
+    return n_z + gamma_M1*k_zz*abs(M_z_Ed)/M_z_Rk + gamma_M1*k_zy*abs(M_y_Ed)/(M_y_Rk*chi_LT)
+
+
 def _d063fe98f6a4773bcaea(r_ts, E, F_y, J, c, S_x, h_o):
     # AISC 360-22 Eq. F2-6: Limiting unbraced length for inelastic LTB
     return 2.78571428571429*E*r_ts*numpy.sqrt(J*c/(S_x*h_o) + numpy.sqrt(J**2*c**2/(S_x**2*h_o**2) + 3.3124*F_y**2/E**2))/F_y
@@ -587,6 +807,11 @@ def _d063fe98f6a4773bcaea(r_ts, E, F_y, J, c, S_x, h_o):
 def _d0f17538c605a55fa899(E, F_y):
     # AISC 360-22 Table B4.1a Case 5: Limit λr, web of a doubly symmetric I-shape, axial compression
     return 1.49*numpy.sqrt(E/F_y)
+
+
+def _d22d3001e283e3415b81(r):
+    # EN 1993-1-1 Annex A, Table A.2: C_mi,0 for a uniform load
+    return 1 - 0.18*r
 
 
 def _d58cd29c07ed204bea32(V_Ed, V_pl_Rd):
@@ -602,6 +827,11 @@ def _d5fc9885df801ff972ed(E, I, L_cr):
 def _d72bab8662fac64cd090(F_y, b, t, C_v2):
     # AISC 360-22 Eq. G3-1: Nominal shear strength of a single-angle leg
     return 0.6*C_v2*F_y*b*t
+
+
+def _d8d17ac992d61e68d61c(n_y, k_yy, M_y_Ed, chi_LT, M_y_Rk, k_yz, M_z_Ed, M_z_Rk, gamma_M1):
+    # EN 1993-1-1 Eq. (6.61): Bending and axial compression, buckling about y-y
+    return n_y + gamma_M1*k_yz*abs(M_z_Ed)/M_z_Rk + gamma_M1*k_yy*abs(M_y_Ed)/(M_y_Rk*chi_LT)
 
 
 def _db064a284159df3d50f8(E, F_y):
@@ -624,6 +854,11 @@ def _deedddcb16058df1ab71(P_r, P_c, M_rx, M_cx, M_ry, M_cy):
     return numpy.select([numpy.greater_equal(P_r/P_c, 0.2),True], [P_r/P_c + (8/9)*M_ry/M_cy + (8/9)*M_rx/M_cx,(1/2)*P_r/P_c + M_ry/M_cy + M_rx/M_cx], default=numpy.nan)
 
 
+def _e1fc3dc267f4757b97dc(C_my, C_mLT, mu_y, r_y, C_yy, section_class):
+    # EN 1993-1-1 Annex A, Table A.1: Interaction factor k_yy (Method 1)
+    return numpy.select([numpy.less_equal(section_class, 2),True], [C_mLT*C_my*mu_y/(C_yy*(1 - r_y)),C_mLT*C_my*mu_y/(1 - r_y)], default=numpy.nan)
+
+
 def _e2586545e62ce0c7f5b0(F_y, S):
     # AISC 360-22 Section F10.1: Yield moment about the axis of bending
     return F_y*S
@@ -634,9 +869,19 @@ def _e33f93f62e06bad49456(h_w, t_w, eta):
     return eta*h_w*t_w
 
 
+def _e673c70fd97a3c8b8d3a(n_y, k_yy, M_y_Ed, chi_LT, M_y_Rk, gamma_M1):
+    # EN 1993-1-1 Eq. (6.61): Bending about y-y and axial compression, buckling about y-y
+    return n_y + gamma_M1*k_yy*abs(M_y_Ed)/(M_y_Rk*chi_LT)
+
+
 def _e687105f48613fb1dcf1(N_Ed, N_pl_Rd):
     # EN 1993-1-1 6.2.9.1(5): Ratio of axial force to plastic resistance, n
     return abs(N_Ed)/N_pl_Rd
+
+
+def _e81119fa9125bdc416f1(r):
+    # EN 1993-1-1 Annex A, Table A.2: C_mi,0 for a central point load
+    return 0.03*r + 1
 
 
 def _e85f65b31e65d8a74047(E, F_y):
@@ -684,6 +929,11 @@ def _f35fef2057fcbcbefd78(L_cr, i, lambda_1):
     return L_cr/(i*lambda_1)
 
 
+def _f4f697ca1c4a14df697a(W_pl, W_el):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term w = W_pl/W_el ≤ 1.5
+    return functools.reduce(numpy.minimum, [1.5, W_pl/W_el])
+
+
 def _f621d9b9d204fd5e70de(d, t_w):
     # AISC 360-22 Section G2.1: Web area, Aw = d·tw
     return d*t_w
@@ -702,6 +952,11 @@ def _f858ae49c52b6e519313(M_y):
 def _fb0573ff322c9c6113c8(c_t, limit_1, limit_2, limit_3):
     # EN 1993-1-1 Table 5.2: Class of a part from its c/t ratio and the three limits
     return numpy.select([numpy.less_equal(c_t, limit_1),numpy.less_equal(c_t, limit_2),numpy.less_equal(c_t, limit_3),True], [1,2,3,4], default=numpy.nan)
+
+
+def _fb39b8bb1c1a0ae7453f(C_mz, lambda_z, n_z, section_class):
+    # EN 1993-1-1 Annex B, Table B.1: Interaction factor k_zz, I-section
+    return numpy.select([numpy.less_equal(section_class, 2),True], [C_mz*functools.reduce(numpy.minimum, [1.4*n_z + 1, n_z*(2*lambda_z - 0.6) + 1]),C_mz*functools.reduce(numpy.minimum, [0.6*n_z + 1, 0.6*lambda_z*n_z + 1])], default=numpy.nan)
 
 
 def _fc0b86f61b049afe7451(A, h_w, t_w):
@@ -724,12 +979,16 @@ FUNCTIONS = {
     "02edf9672d435a483665": _02edf9672d435a483665,
     "02f1d2811f39b7ec8635": _02f1d2811f39b7ec8635,
     "0429c11d2458d362675c": _0429c11d2458d362675c,
+    "069e4d3cd77d05aed615": _069e4d3cd77d05aed615,
     "0839fff909ccaabe4193": _0839fff909ccaabe4193,
     "086ab2f9163d829e242f": _086ab2f9163d829e242f,
     "095dc1363414c6727ceb": _095dc1363414c6727ceb,
+    "0d139d9445353a67bbb9": _0d139d9445353a67bbb9,
+    "0d48632a2ae683840ed3": _0d48632a2ae683840ed3,
     "0ef822dbee9a4e6e5af3": _0ef822dbee9a4e6e5af3,
     "11c913d3ba6c08a6f16f": _11c913d3ba6c08a6f16f,
     "1226452d5ae3a903cf87": _1226452d5ae3a903cf87,
+    "123963307ea8562b93d3": _123963307ea8562b93d3,
     "13aaf77b4ecc4782305d": _13aaf77b4ecc4782305d,
     "13ef280319349a572351": _13ef280319349a572351,
     "1439263560bd3f059103": _1439263560bd3f059103,
@@ -740,29 +999,37 @@ FUNCTIONS = {
     "218fcbcaf3f8ead15ba8": _218fcbcaf3f8ead15ba8,
     "21f8d3b1de72b1f48061": _21f8d3b1de72b1f48061,
     "23b3e31a231be6b34c0c": _23b3e31a231be6b34c0c,
+    "24f86a2a37775dd2b3ad": _24f86a2a37775dd2b3ad,
     "2591b6c97a2e54900118": _2591b6c97a2e54900118,
     "27522fc680246d1a9232": _27522fc680246d1a9232,
     "2910791acf975b049344": _2910791acf975b049344,
     "2b82d3179344a75017b7": _2b82d3179344a75017b7,
+    "2b99b3f4bea66a8ae504": _2b99b3f4bea66a8ae504,
     "2cacbdee24ad514d39f1": _2cacbdee24ad514d39f1,
     "2d02a653481b5f241f7d": _2d02a653481b5f241f7d,
     "31cdcda6dcc19c4a3227": _31cdcda6dcc19c4a3227,
     "336f85ec8d5a1f26a81e": _336f85ec8d5a1f26a81e,
+    "343b7ece5a462d0489a1": _343b7ece5a462d0489a1,
     "347d64da819a5807c838": _347d64da819a5807c838,
     "34a384cad20da7fa7fc6": _34a384cad20da7fa7fc6,
     "3531dc15afa1c3c380c1": _3531dc15afa1c3c380c1,
     "35be6253a3612eaaede0": _35be6253a3612eaaede0,
     "360a3ce6dc79299771c7": _360a3ce6dc79299771c7,
+    "362d849919d4749b52ca": _362d849919d4749b52ca,
+    "3a12862e9a711196a587": _3a12862e9a711196a587,
     "3a3fe7cc1dbd0f233257": _3a3fe7cc1dbd0f233257,
     "3dd3202a8c28b52cb272": _3dd3202a8c28b52cb272,
     "3e6240a336d5a5b6112e": _3e6240a336d5a5b6112e,
     "3fb4ae6c2547534b9412": _3fb4ae6c2547534b9412,
     "43e583211c0b74309c01": _43e583211c0b74309c01,
+    "4406c4c7f0c37849579c": _4406c4c7f0c37849579c,
     "44437356c4f5d32105c7": _44437356c4f5d32105c7,
     "45a9555bfde48a4ebac2": _45a9555bfde48a4ebac2,
     "466e1ff29c4bad9f8e26": _466e1ff29c4bad9f8e26,
     "468d5b94783a5c147e02": _468d5b94783a5c147e02,
     "4784815596a3f7bac197": _4784815596a3f7bac197,
+    "4889372fd95577256d94": _4889372fd95577256d94,
+    "49f3f66d56fc53a12c4e": _49f3f66d56fc53a12c4e,
     "4b93d3f7880dc7f94e01": _4b93d3f7880dc7f94e01,
     "4d5e37c65134456daf08": _4d5e37c65134456daf08,
     "4e6d474011dcfd1f3428": _4e6d474011dcfd1f3428,
@@ -773,6 +1040,7 @@ FUNCTIONS = {
     "555999658d56a35ed6cb": _555999658d56a35ed6cb,
     "57bb8f8297635007d9b2": _57bb8f8297635007d9b2,
     "58f8cd2ce20ebb53188d": _58f8cd2ce20ebb53188d,
+    "5dbf5128df6ef63fee29": _5dbf5128df6ef63fee29,
     "5e91245b7b98f766f926": _5e91245b7b98f766f926,
     "60076b235db70a7c438f": _60076b235db70a7c438f,
     "61033bf8d0814c6623c0": _61033bf8d0814c6623c0,
@@ -781,70 +1049,106 @@ FUNCTIONS = {
     "66bb4027d1e4439220ca": _66bb4027d1e4439220ca,
     "6916531ac6c696cb24a9": _6916531ac6c696cb24a9,
     "693b6aa468da87845f2e": _693b6aa468da87845f2e,
+    "6944a5828cc6dd0cc29a": _6944a5828cc6dd0cc29a,
     "6aa5c1f5250fea7df1a9": _6aa5c1f5250fea7df1a9,
     "6af3b4022b88243288ee": _6af3b4022b88243288ee,
     "6b2ee64c2b878b38fb61": _6b2ee64c2b878b38fb61,
     "6b6def47ce058e80922e": _6b6def47ce058e80922e,
+    "6ceeac84a61bf70ffb70": _6ceeac84a61bf70ffb70,
     "6f4216d75cf039ef8c09": _6f4216d75cf039ef8c09,
+    "705d1c3ce35be1cfc4ca": _705d1c3ce35be1cfc4ca,
     "709b39a9e897d31a3654": _709b39a9e897d31a3654,
     "7444a196e0c28f2aab0e": _7444a196e0c28f2aab0e,
     "74ecd0f3e35b26b8f66a": _74ecd0f3e35b26b8f66a,
+    "759f4c42562f49eb798d": _759f4c42562f49eb798d,
     "7673888dbae4f34b7089": _7673888dbae4f34b7089,
     "770850eca8da6495e97c": _770850eca8da6495e97c,
     "77f20c75cb8dd5a3f922": _77f20c75cb8dd5a3f922,
+    "7b5a09dd4e484fe07baf": _7b5a09dd4e484fe07baf,
+    "7b94e6b1d46ab495aec2": _7b94e6b1d46ab495aec2,
     "7beaf44b036bf7c0a6b6": _7beaf44b036bf7c0a6b6,
     "7f0ad753675816955567": _7f0ad753675816955567,
+    "83735bc998e3f9032378": _83735bc998e3f9032378,
     "8941ba3018d7c4da8efa": _8941ba3018d7c4da8efa,
+    "8cb77420f6b79da407bf": _8cb77420f6b79da407bf,
     "8cc19139d286c3e0d3c2": _8cc19139d286c3e0d3c2,
+    "8e668b6cdfc43e3298c0": _8e668b6cdfc43e3298c0,
     "8ff5794b5c1fb26fd139": _8ff5794b5c1fb26fd139,
     "906cc9b7326bd407e2a2": _906cc9b7326bd407e2a2,
     "92199254275541027b3b": _92199254275541027b3b,
     "987ae3cf58517372f266": _987ae3cf58517372f266,
     "997ab3fe735748908034": _997ab3fe735748908034,
     "9b9bd93673a09d933586": _9b9bd93673a09d933586,
+    "9e2817142db9818ebb5d": _9e2817142db9818ebb5d,
     "a0259eb1464452636c95": _a0259eb1464452636c95,
     "a1d811c244c23a656593": _a1d811c244c23a656593,
     "a23b40a872992b706624": _a23b40a872992b706624,
     "a46a8809267c7f4b3a3b": _a46a8809267c7f4b3a3b,
     "a4dd29e038d0bb5848b9": _a4dd29e038d0bb5848b9,
+    "a52c8a43208c508b2c9d": _a52c8a43208c508b2c9d,
     "a661bc4a59d8174df986": _a661bc4a59d8174df986,
     "a6fd63aa0f785d4a2fe7": _a6fd63aa0f785d4a2fe7,
     "a7577ca2a7988b0f4528": _a7577ca2a7988b0f4528,
     "a8860c685b53af0d20b1": _a8860c685b53af0d20b1,
     "a8daed80b44009104e72": _a8daed80b44009104e72,
     "aa29a9e86ac8598d7feb": _aa29a9e86ac8598d7feb,
+    "ac61001bff5ddfb4353c": _ac61001bff5ddfb4353c,
     "acb9fcfde25855bca109": _acb9fcfde25855bca109,
     "acd522560216e9a8e5a2": _acd522560216e9a8e5a2,
+    "ad1124a63ccf9db69b73": _ad1124a63ccf9db69b73,
     "ada8a6e7d995f3b785a2": _ada8a6e7d995f3b785a2,
+    "adeba23d3423b09471da": _adeba23d3423b09471da,
     "ae71aaa64bbb7c595492": _ae71aaa64bbb7c595492,
+    "aed897c6603e1a9b5064": _aed897c6603e1a9b5064,
     "af8934e238e12ca5aace": _af8934e238e12ca5aace,
+    "af9849b67255cd834e28": _af9849b67255cd834e28,
+    "b18a461b65e9665f3856": _b18a461b65e9665f3856,
     "b1dde4caf1a28f0f0d9e": _b1dde4caf1a28f0f0d9e,
     "b26d990aa331a1150fd8": _b26d990aa331a1150fd8,
     "b3c7f45661e0b04d42c4": _b3c7f45661e0b04d42c4,
     "b461767123fab5da53ca": _b461767123fab5da53ca,
     "b4b3cb4f99d908167488": _b4b3cb4f99d908167488,
+    "b74aa1bdb1a71561356b": _b74aa1bdb1a71561356b,
+    "b800764b2b4f7e736507": _b800764b2b4f7e736507,
     "b83ebeb6559328560261": _b83ebeb6559328560261,
+    "b941de2eb4708831fe61": _b941de2eb4708831fe61,
+    "ba4c1eb426b844a00c0f": _ba4c1eb426b844a00c0f,
     "ba60d3ef0bfee0b95f40": _ba60d3ef0bfee0b95f40,
+    "bc0c5d3b767b25173efd": _bc0c5d3b767b25173efd,
     "bc9b2e2c73729b9b06e8": _bc9b2e2c73729b9b06e8,
+    "bcf1509c586b11be2a3f": _bcf1509c586b11be2a3f,
+    "c0d46e2aec8bb27ba4f4": _c0d46e2aec8bb27ba4f4,
     "c380faef19ad693e0db2": _c380faef19ad693e0db2,
+    "c383e27d633b8a2fd2e1": _c383e27d633b8a2fd2e1,
     "c5ec42bcf88fd4a4c228": _c5ec42bcf88fd4a4c228,
+    "c65d60e151d3b34f26c1": _c65d60e151d3b34f26c1,
     "c6b9a3c1bc233218634d": _c6b9a3c1bc233218634d,
     "c9321b59dafead64b748": _c9321b59dafead64b748,
+    "cafc46190d87a4080415": _cafc46190d87a4080415,
     "ccbce2fc341bab48375d": _ccbce2fc341bab48375d,
+    "ccc0b0e200afd0c59bce": _ccc0b0e200afd0c59bce,
+    "ccc1468ea91a9d7409b9": _ccc1468ea91a9d7409b9,
+    "ce2c5756bd228041db56": _ce2c5756bd228041db56,
     "cf31d720b242fe13da62": _cf31d720b242fe13da62,
     "d0583cdfdac436eea4ce": _d0583cdfdac436eea4ce,
+    "d06027cd009b3c69ea06": _d06027cd009b3c69ea06,
     "d063fe98f6a4773bcaea": _d063fe98f6a4773bcaea,
     "d0f17538c605a55fa899": _d0f17538c605a55fa899,
+    "d22d3001e283e3415b81": _d22d3001e283e3415b81,
     "d58cd29c07ed204bea32": _d58cd29c07ed204bea32,
     "d5fc9885df801ff972ed": _d5fc9885df801ff972ed,
     "d72bab8662fac64cd090": _d72bab8662fac64cd090,
+    "d8d17ac992d61e68d61c": _d8d17ac992d61e68d61c,
     "db064a284159df3d50f8": _db064a284159df3d50f8,
     "dc5afa061c21b87c533b": _dc5afa061c21b87c533b,
     "dc696f9983c3fc880f29": _dc696f9983c3fc880f29,
     "deedddcb16058df1ab71": _deedddcb16058df1ab71,
+    "e1fc3dc267f4757b97dc": _e1fc3dc267f4757b97dc,
     "e2586545e62ce0c7f5b0": _e2586545e62ce0c7f5b0,
     "e33f93f62e06bad49456": _e33f93f62e06bad49456,
+    "e673c70fd97a3c8b8d3a": _e673c70fd97a3c8b8d3a,
     "e687105f48613fb1dcf1": _e687105f48613fb1dcf1,
+    "e81119fa9125bdc416f1": _e81119fa9125bdc416f1,
     "e85f65b31e65d8a74047": _e85f65b31e65d8a74047,
     "e92e10dae0ec7bcf9015": _e92e10dae0ec7bcf9015,
     "eacc2e6adfe622ff75c4": _eacc2e6adfe622ff75c4,
@@ -854,10 +1158,12 @@ FUNCTIONS = {
     "f1d9b4d6c4bd5d11cf6a": _f1d9b4d6c4bd5d11cf6a,
     "f3111dfcf6a86f9afbc0": _f3111dfcf6a86f9afbc0,
     "f35fef2057fcbcbefd78": _f35fef2057fcbcbefd78,
+    "f4f697ca1c4a14df697a": _f4f697ca1c4a14df697a,
     "f621d9b9d204fd5e70de": _f621d9b9d204fd5e70de,
     "f7e7ed600e478b2ac869": _f7e7ed600e478b2ac869,
     "f858ae49c52b6e519313": _f858ae49c52b6e519313,
     "fb0573ff322c9c6113c8": _fb0573ff322c9c6113c8,
+    "fb39b8bb1c1a0ae7453f": _fb39b8bb1c1a0ae7453f,
     "fc0b86f61b049afe7451": _fc0b86f61b049afe7451,
     "fc88bd377ce3419b759b": _fc88bd377ce3419b759b,
     "ffe97ef7f0d7bd6b5ecc": _ffe97ef7f0d7bd6b5ecc,

@@ -3,7 +3,10 @@
 Modules: :mod:`~calcsheet.standards.en1993.factors` (partial factors, grades,
 imperfection factors), :mod:`~calcsheet.standards.en1993.classification`
 (Table 5.2), :mod:`~calcsheet.standards.en1993.resistance` (6.2),
-:mod:`~calcsheet.standards.en1993.buckling` (6.3.1, Tables 6.1 and 6.2) and
+:mod:`~calcsheet.standards.en1993.buckling` (6.3.1, Tables 6.1 and 6.2),
+:mod:`~calcsheet.standards.en1993.lateral` (6.3.2, lateral-torsional buckling and M_cr),
+:mod:`~calcsheet.standards.en1993.interaction` (6.3.3, Annex B),
+:mod:`~calcsheet.standards.en1993.annex_a` (6.3.3, Annex A) and
 :mod:`~calcsheet.standards.en1993.member` (the procedure, :func:`write_en1993_checks`)
 and :mod:`~calcsheet.standards.en1993.numeric` (:func:`en1993_checks_numeric`).
 

@@ -3,7 +3,9 @@
 :func:`en1993_member_procedure` classifies the cross-section (Table 5.2), writes
 the cross-section resistances of 6.2 and the flexural buckling resistances of
 6.3.1, and adds one check per verification under the keys of
-:data:`EN_CHECK_TITLES`. It is written against a writer
+:data:`EN_CHECK_TITLES`: with bending about y-y, lateral-torsional buckling (6.3.2);
+with N and bending, the member interaction of 6.3.3 (Eq. 6.61 and 6.62 with the
+factors of Annex B or Annex A, taken as 0 while N is tension). It is written against a writer
 (:mod:`calcsheet.engine.procedure`): :func:`write_en1993_checks` prints it on
 a sheet, :func:`~calcsheet.standards.en1993.numeric.en1993_checks_numeric`
 evaluates it on arrays of load combinations (and sections). Every decision that
@@ -29,6 +31,7 @@ checks by magnitude, so their signs do not matter here.
 
 from __future__ import annotations
 
+import functools
 import math
 from collections.abc import Mapping, Sequence
 from dataclasses import dataclass
@@ -43,8 +46,11 @@ from calcsheet.engine.procedure import ArrayWriter, SheetWriter, Value, Writer
 from calcsheet.errors import InputError
 from calcsheet.sections import Section
 from calcsheet.standards.clause import Clause
+from calcsheet.standards.en1993 import annex_a
 from calcsheet.standards.en1993 import buckling as buck
 from calcsheet.standards.en1993 import classification as cls
+from calcsheet.standards.en1993 import interaction as inter
+from calcsheet.standards.en1993 import lateral as lat
 from calcsheet.standards.en1993 import resistance as res
 from calcsheet.standards.en1993.buckling import CurveChoice
 from calcsheet.standards.en1993.factors import (
@@ -79,6 +85,11 @@ DEMAND_DIMENSIONS: dict[str, str] = {
 }
 DEMAND_ALIASES = {"V_Ed": "V_z_Ed"}
 F_235 = Quantity(235.0, "MPa")  # the reference strength of ε (Table 5.2)
+POISSON_RATIO = 0.3  # EN 1993-1-1 3.2.6(1)
+# EN 1993-1-1 6.3.2.3(1): λ̄_LT,0 ≤ 0.4 and β ≥ 0.75 recommended (a National Annex may
+# give others; the sheet shows them as inputs).
+LAMBDA_LT_0 = 0.4
+BETA_LT = 0.75
 
 # The checks of the procedure by key, as titled on the sheet (in sheet order).
 EN_CHECK_TITLES: dict[str, str] = {
@@ -91,6 +102,9 @@ EN_CHECK_TITLES: dict[str, str] = {
     "combined": "Bending and axial force",
     "buckling_y": "Flexural buckling about y-y",
     "buckling_z": "Flexural buckling about z-z",
+    "ltb": "Lateral-torsional buckling",
+    "interaction_y": "Bending and compression, Eq. (6.61)",
+    "interaction_z": "Bending and compression, Eq. (6.62)",
 }
 
 AXES_TEXT = (
@@ -100,9 +114,13 @@ AXES_TEXT = (
     "shears are checked by magnitude."
 )
 NOT_COVERED_TEXT = (
-    "Not covered by these checks: lateral-torsional buckling (6.3.2), members in bending "
-    "and axial compression (6.3.3), torsion (6.2.7), class 4 cross-sections (EN 1993-1-5), "
-    "local load introduction and connections. They must be verified separately."
+    "Not covered by these checks: torsion (6.2.7), class 4 cross-sections (EN 1993-1-5), "
+    "intermediate lateral restraints, local load introduction and connections. They must be "
+    "verified separately."
+)
+LTB_FIXED = (
+    "follows from the section, the support case, the moment diagram and the load height "
+    "chosen; build the sheet again with them"
 )
 CURVE_FIXED = (
     "the buckling curve follows from the section, the steel grade and its forming; "
@@ -147,6 +165,25 @@ class MemberData:
     k: tuple[float, float]
     net_area: pint.Quantity | None
     interaction: str
+    ltb: LateralData | None = None  # None: not susceptible (CHS, SHS): no LTB check
+    factors_m: lat.DiagramFactors | None = None
+    support_case: str = "cantilever"
+    interaction_method: str = "B"
+    diagram_text: str = "uniform"
+    moment_diagram: str = "uniform"
+    end_moment_ratio: float = 1.0
+
+
+@dataclass(frozen=True)
+class LateralData:
+    """How lateral-torsional buckling is verified (6.3.2), settled when the member is read."""
+
+    method: str  # "6.3.2.2" or "6.3.2.3"
+    curve: CurveChoice
+    z_g: pint.Quantity
+    z_g_source: str
+    k_LT: float
+    k_LT_source: str
 
 
 def write_en1993_checks(
@@ -161,6 +198,12 @@ def write_en1993_checks(
     fabrication: str | None = None,
     net_area: pint.Quantity | str | None = None,
     interaction: str = "plastic",
+    ltb_method: str | None = None,
+    load_height: str | pint.Quantity = "shear centre",
+    support_case: str = "cantilever",
+    moment_diagram: str = "uniform",
+    end_moment_ratio: float = 1.0,
+    interaction_method: str = "B",
 ) -> list[Check]:
     """Write the EN 1993-1-1 checks of ``section`` under ``demands`` on ``sheet``.
 
@@ -179,6 +222,16 @@ def write_en1993_checks(
     "plastic" (6.2.9.1 for class 1 and 2, the stress criterion of 6.2.9.2 for
     class 3) or "linear" (Eq. 6.2 throughout; always used for CHS).
 
+    Lateral-torsional buckling (6.3.2) of I-sections and RHS: ``ltb_method`` is
+    "6.3.2.3" (rolled or equivalent welded; the default for rolled sections) or
+    "6.3.2.2" (general case; the default for welded ones); ``load_height`` is
+    "shear centre" (default), "top flange", "bottom flange" or a length above the
+    shear centre; ``support_case`` "cantilever" (fixed-free, default) or "simply
+    supported"; ``moment_diagram`` the shape of M_y between the supports ("uniform",
+    "end moments" with ``end_moment_ratio`` ψ, "uniform load", "central point load").
+    Members in bending and compression (6.3.3) take their interaction factors from
+    ``interaction_method`` "B" (Annex B, the default) or "A" (Annex A, Method 1).
+
     A class 4 section, or a web that needs a shear buckling verification, is
     refused before anything is written. Returns the checks written, in sheet order.
     """
@@ -192,11 +245,17 @@ def write_en1993_checks(
         fabrication=fabrication,
         net_area=net_area,
         interaction=interaction,
+        ltb_method=ltb_method,
+        load_height=load_height,
+        support_case=support_case,
+        moment_diagram=moment_diagram,
+        end_moment_ratio=end_moment_ratio,
+        interaction_method=interaction_method,
     )
     # The scope depends on the demands (the class of a web under N and M): settle it
     # with the same procedure on the current values, before anything is written.
     current = {key: float(sheet.value(symbol).to_base_units().m) for key, symbol in symbols.items()}
-    problems = scope_problems(run_on_arrays(member, current))
+    problems = scope_problems(run_on_arrays(member, current), member.kind)
     for outside, reason in problems:
         if bool(np.any(outside)):
             raise InputError("section", section.name, SCOPE_TEXT, reason)
@@ -220,26 +279,44 @@ def run_on_arrays(member: MemberData, demands: Mapping[str, Any], **given: Any) 
     return w
 
 
-def scope_problems(w: ArrayWriter) -> list[tuple[np.ndarray, str]]:
-    """Where the procedure run on arrays left its scope: (mask, reason in words) pairs."""
+# The parts each class is the worst of (see _Procedure._classify), by section kind: the
+# part's name, its class symbol and its c/t symbol.
+_CLASS_PARTS: dict[str, dict[str, tuple[tuple[str, str, str], ...]]] = {
+    "I": {
+        "y": (("flange outstand", "class_f", "ct_f"), ("web", "class_w", "ct_w")),
+        "z": (("flange outstand", "class_f", "ct_f"),),
+        "N": (("flange outstand", "class_f", "ct_f"), ("web", "class_wN", "ct_w")),
+    },
+    "RHS": {
+        "y": (("flanges", "class_bN", "ct_b"), ("webs", "class_h", "ct_h")),
+        "z": (("webs", "class_hN", "ct_h"), ("flanges", "class_b", "ct_b")),
+        "N": (("flanges", "class_bN", "ct_b"), ("webs", "class_hN", "ct_h")),
+    },
+    "CHS": {key: (("wall", "class_t", "dt"),) for key in ("y", "z", "N")},
+}
+
+
+def scope_problems(w: ArrayWriter, kind: str = "") -> list[tuple[np.ndarray, str]]:
+    """Where the procedure run on arrays left its scope: (mask, reason in words) pairs.
+
+    With the section ``kind`` ("I", "RHS", "CHS") a class 4 reason names the part, its
+    c/t and the class 3 limit it exceeds.
+    """
     s = w.symbols
     problems = []
-    for key, what in (("y", "bending about y-y with N"), ("z", "bending about z-z with N")):
-        if f"class_{key}" in s:
-            problems.append(
-                (
-                    np.asarray(s[f"class_{key}"]) > 3,
-                    f"class 4 in {what}: effective properties (EN 1993-1-5) are not covered",
-                )
-            )
-    if "class_N" in s:
-        compressed = np.asarray(s["N_Ed"]) < 0
-        problems.append(
-            (
-                (np.asarray(s["class_N"]) > 3) & compressed,
-                "class 4 in compression: effective properties (EN 1993-1-5) are not covered",
-            )
-        )
+    compressed = np.asarray(s["N_Ed"]) < 0 if "N_Ed" in s else np.zeros((), dtype=bool)
+    for key, what in (
+        ("y", "bending about y-y with N"),
+        ("z", "bending about z-z with N"),
+        ("N", "compression"),
+    ):
+        if f"class_{key}" not in s:
+            continue
+        outside = np.asarray(s[f"class_{key}"]) > 3
+        if key == "N":
+            outside = outside & compressed
+        problems.append((outside, f"class 4 in {what}{_class_4_parts(s, kind, key, outside)}: "
+                         "effective properties (EN 1993-1-5 4.4) are not covered"))  # fmt: skip
     for axis in ("z", "y"):
         if f"hw_tw_{axis}" in s:
             ratio, limit = np.asarray(s[f"hw_tw_{axis}"]), np.asarray(s["hw_tw_max"])
@@ -252,6 +329,35 @@ def scope_problems(w: ArrayWriter) -> list[tuple[np.ndarray, str]]:
                 )
             )
     return problems
+
+
+def _class_4_parts(symbols: Mapping[str, Any], kind: str, key: str, outside: np.ndarray) -> str:
+    """ ": the web has c/t = 61.2 > 34.2, the class 3 limit of ..." for the parts of class 4
+    where ``outside`` holds (the largest c/t among those elements)."""
+    if not np.any(outside):
+        return ""
+    named = []
+    for part, class_name, ratio_name in _CLASS_PARTS.get(kind, {}).get(key, ()):
+        if class_name not in symbols or ratio_name not in symbols:
+            continue
+        part_class = np.asarray(symbols[class_name])
+        where = np.broadcast_to(
+            part_class > 3, np.broadcast_shapes(part_class.shape, outside.shape)
+        )
+        where = where & outside
+        if not np.any(where):
+            continue
+        shape = where.shape
+        ratio = np.broadcast_to(np.asarray(symbols[ratio_name], dtype=float), shape)[where]
+        limit_name = f"{class_name.replace('class_', 'ct_')}_3"
+        limit = np.broadcast_to(np.asarray(symbols[limit_name], dtype=float), shape)[where]
+        worst = int(np.argmax(ratio))
+        label = "d/t" if ratio_name == "dt" else "c/t"
+        named.append(
+            f"the {part} has {label} = {ratio[worst]:.3g} > {limit[worst]:.3g}, the class 3 "
+            "limit of EN 1993-1-1 Table 5.2 (class 4)"
+        )
+    return ": " + "; ".join(named) if named else ""
 
 
 def si_inputs(member: MemberData) -> dict[str, float]:
@@ -271,7 +377,23 @@ def si_inputs(member: MemberData) -> dict[str, float]:
     }
     if member.net_area is not None:
         quantities["A_net"] = member.net_area
+    if member.ltb is not None:
+        quantities["z_g"] = member.ltb.z_g
     result = {name: float(value.to_base_units().m) for name, value in quantities.items()}
+    if member.ltb is not None:
+        result.update(
+            nu=POISSON_RATIO,
+            k_LT=member.ltb.k_LT,
+            alpha_LT=member.ltb.curve.alpha,
+            lambda_LT_0=LAMBDA_LT_0,
+            beta_LT=BETA_LT,
+        )
+    diagram = member.factors_m
+    if diagram is not None:
+        result.update(
+            C_1=diagram.C_1, C_2=diagram.C_2, k_c=diagram.k_c, C_my=diagram.C_my,
+            C_mz=diagram.C_mz, C_mLT=diagram.C_mLT,
+        )  # fmt: skip
     result.update(
         gamma_M0=factors.gamma_M0,
         gamma_M1=factors.gamma_M1,
@@ -309,6 +431,12 @@ def member_data(
     fabrication: str | None = None,
     net_area: pint.Quantity | str | None = None,
     interaction: str = "plastic",
+    ltb_method: str | None = None,
+    load_height: str | pint.Quantity = "shear centre",
+    support_case: str = "cantilever",
+    moment_diagram: str = "uniform",
+    end_moment_ratio: float = 1.0,
+    interaction_method: str = "B",
 ) -> MemberData:
     """Read and check everything but the demands (arguments as :func:`write_en1993_checks`)."""
     geometry = _geometry(section, fabrication)
@@ -351,6 +479,43 @@ def member_data(
         reference = geometry.reference if name == "r" else "section dimensions"
         values[name] = (value, labels[name], reference)
     curves = {axis: _curve(geometry, chosen_steel, axis) for axis in ("y", "z")}
+    if interaction_method not in ("A", "B"):
+        raise InputError(
+            "interaction_method", interaction_method,
+            "'B' (EN 1993-1-1 Annex B, the default) or 'A' (Annex A, Method 1)",
+        )  # fmt: skip
+    diagram = lat.moment_diagram_factors(support_case, moment_diagram, float(end_moment_ratio))
+    lateral = _lateral(geometry, ltb_method, load_height, support_case)
+    if (
+        lateral is not None
+        and support_case == "simply supported"
+        and moment_diagram in ("uniform", "end moments")
+        and lateral.z_g.m != 0
+    ):
+        # C2·z_g is the effect of transverse loads; end moments have none, so a load height
+        # would silently drop out (and a uniform moment is not the safe side of a load on
+        # the top flange: a uniform load there gives a lower M_cr).
+        raise InputError(
+            "load_height", load_height,
+            "'shear centre' with end moments only, or the moment diagram of the transverse "
+            "load ('uniform load' or 'central point load')",
+            f"moment_diagram is {moment_diagram!r}, which has no transverse load",
+        )  # fmt: skip
+    if lateral is not None or interaction_method == "A":
+        torsion = (
+            ("I_z", "Iy", "Second moment of area about z-z (calcsheet I_y)"),
+            ("I_t", "J", "Torsion constant"),
+            ("I_w", "Cw", "Warping constant"),
+        )
+        if interaction_method == "A":
+            torsion = (("I_y", "Ix", "Second moment of area about y-y (calcsheet I_x)"), *torsion)
+        for name, key, description in torsion:
+            if key not in props or not math.isfinite(float(props[key].m)):
+                raise InputError(
+                    "section", section.name, f"a section with its {description.lower()}",
+                    "needed for the elastic critical moment (EN 1993-1-1 6.3.2.2)",
+                )  # fmt: skip
+            values[name] = (props[key], description, sources.get(key, ""))
     return MemberData(
         section.name,
         geometry.kind,
@@ -363,7 +528,55 @@ def member_data(
         k,
         area,
         interaction,
+        lateral,
+        diagram,
+        support_case,
+        interaction_method,
+        _diagram_text(support_case, moment_diagram, float(end_moment_ratio)),
+        moment_diagram,
+        float(end_moment_ratio),
     )
+
+
+def _diagram_text(support_case: str, diagram: str, psi: float) -> str:
+    if support_case == "cantilever":
+        return "not used (effective length of the cantilever)"
+    return f"end moments, ψ = {psi:.3g}" if diagram == "end moments" else diagram
+
+
+def _lateral(
+    geometry: _Geometry,
+    method: str | None,
+    load_height: str | pint.Quantity,
+    support_case: str,
+) -> LateralData | None:
+    """How 6.3.2 applies to the member; None for a section not susceptible to it."""
+    dims = geometry.dims
+    if geometry.kind == "CHS" or (
+        geometry.kind == "RHS" and math.isclose(dims["h"].to("mm").m, dims["b"].to("mm").m)
+    ):
+        return None
+    depth = dims["h"]
+    z_g, source = lat.load_height(load_height, depth)
+    if geometry.kind == "I":
+        chosen = method or ("6.3.2.3" if geometry.fabrication == "rolled" else "6.3.2.2")
+        curve = lat.ltb_curve(chosen, geometry.fabrication, depth, dims["b"])
+    else:
+        if method not in (None, "6.3.2.2"):
+            raise InputError(
+                "ltb_method", method, "'6.3.2.2' for a hollow section (6.3.2.3 is for I-sections)"
+            )
+        chosen = "6.3.2.2"
+        alpha = lat.LTB_IMPERFECTION_FACTORS["d"]
+        curve = CurveChoice("d", alpha, "other cross-section: curve d (EN 1993-1-1 Table 6.4)")
+    if support_case == "cantilever":
+        destabilizing = float(z_g.to("mm").m) > 0
+        k_LT = lat.cantilever_length_factor(destabilizing)
+        loading = "destabilizing" if destabilizing else "normal"
+        k_source = f"{lat.CANTILEVER_SOURCE}: {loading} loading"
+    else:
+        k_LT, k_source = 1.0, f"{lat.SN003}: fork supports, k = k_w = 1"
+    return LateralData(chosen, curve, z_g, source, k_LT, k_source)
 
 
 def _curve(geometry: _Geometry, steel: Steel, axis: str) -> CurveChoice:
@@ -526,6 +739,10 @@ class _Procedure:
             self._combined()
         if self.has("N_Ed"):
             self._buckling()
+        if self.has("M_y_Ed"):
+            self._lateral()
+        if self.has("N_Ed") and (self.has("M_y_Ed") or self.has("M_z_Ed")):
+            self._member_interaction()
 
     def _inputs(self) -> None:
         w, steel, factors, member = self.w, self.member.steel, self.member.factors, self.member
@@ -546,7 +763,7 @@ class _Procedure:
             "gamma_M0", factors.gamma_M0, "Partial factor, resistance of cross-sections",
             dimension="dimensionless", reference=factors.reference,
         )  # fmt: skip
-        if self.has("N_Ed"):
+        if self.has("N_Ed") or (self.has("M_y_Ed") and self.member.ltb is not None):
             w.input(
                 "gamma_M1", factors.gamma_M1, "Partial factor, resistance of members to "
                 "instability", dimension="dimensionless", reference=factors.reference,
@@ -994,3 +1211,378 @@ class _Procedure:
             )
             key = f"buckling_{axis}"
             w.check(key, EN_CHECK_TITLES[key], N_c, N_b, reference="EN 1993-1-1 Eq. (6.46), (6.47)")
+
+    # lateral-torsional buckling (6.3.2)
+
+    def _lateral(self) -> None:
+        w, member = self.w, self.member
+        w.heading("Lateral-torsional buckling (EN 1993-1-1 6.3.2)", 2)
+        lateral, diagram = member.ltb, member.factors_m
+        if lateral is None or diagram is None:
+            shape = "circular" if member.kind == "CHS" else "square"
+            w.text(
+                f"A {shape} hollow section is not susceptible to lateral-torsional buckling "
+                "(EN 1993-1-1 6.3.2.1(2)): no verification; χ_LT = 1.0 in 6.3.3."
+            )
+            return
+        support = member.support_case
+        if w.prints:
+            w.text(
+                f"Member {support}"
+                + (" (fixed-free)" if support == "cantilever" else " (fork supports)")
+                + f", moment diagram: {member.diagram_text}. M_y,Ed of the section checked is "
+                "taken as the largest moment between the supports (check the section where M_y "
+                "is largest). Curve: "
+                f"{lateral.curve.reason}."
+            )
+        w.input(
+            "nu", POISSON_RATIO, "Poisson's ratio in the elastic range",
+            dimension="dimensionless", reference="EN 1993-1-1 3.2.6(1)",
+        )  # fmt: skip
+        G = w.clause(lat.shear_modulus, "G", w["E"], w["nu"], unit="MPa")
+        w.input(
+            "C_1", diagram.C_1, "Factor C1 of the moment diagram", dimension="dimensionless",
+            reference=diagram.C_source, fixed=LTB_FIXED,
+        )  # fmt: skip
+        w.input(
+            "C_2", diagram.C_2, "Factor C2 of the load height", dimension="dimensionless",
+            reference=diagram.C_source, fixed=LTB_FIXED,
+        )  # fmt: skip
+        height = {
+            "given": "Height of the load above the shear centre",
+            "shear centre": "Load at the shear centre",
+            "top flange": "Load on the top flange: h/2 above the shear centre",
+            "bottom flange": "Load on the bottom flange: h/2 below the shear centre",
+        }[lateral.z_g_source]
+        w.input("z_g", lateral.z_g, height, dimension="length", fixed=LTB_FIXED)
+        w.input(
+            "k_LT", lateral.k_LT, "Effective length factor for lateral-torsional buckling",
+            dimension="dimensionless", reference=lateral.k_LT_source, fixed=LTB_FIXED,
+        )  # fmt: skip
+        if support == "cantilever" and w.prints:
+            w.text(
+                "Cantilever: M_cr by the uniform-moment formula (C1 = 1, C2 = 0) over the "
+                f"effective length of {lat.CANTILEVER_SOURCE}; the load height chose the "
+                "length (destabilizing above the shear centre)."
+            )
+        L_LT = w.step("L_LT", w["k_LT"] * w["L"], "Length for lateral-torsional buckling")
+        M_cr = w.clause(
+            lat.critical_moment, "M_cr", w["C_1"], w["C_2"], w["z_g"], w["E"], w["I_z"],
+            w["I_w"], G, w["I_t"], L_LT,
+        )  # fmt: skip
+        W_y = w.clause(lat.ltb_modulus, "W_y", w["W_pl_y"], w["W_el_y"], w["class_y"])
+        lam = w.clause(lat.ltb_slenderness, "lambda_LT", W_y, w["f_y"], M_cr)
+        alpha = w.input(
+            "alpha_LT", lateral.curve.alpha, f"Imperfection factor, curve {lateral.curve.curve}",
+            dimension="dimensionless", reference="EN 1993-1-1 Table 6.3", fixed=LTB_FIXED,
+        )  # fmt: skip
+        if lateral.method == "6.3.2.2":
+            phi = w.clause(lat.ltb_phi_general, "Phi_LT", alpha, lam)
+            chi = w.clause(lat.ltb_reduction_general, "chi_LT", phi, lam)
+        else:
+            w.input(
+                "lambda_LT_0", LAMBDA_LT_0, "Plateau length λ̄_LT,0", dimension="dimensionless",
+                reference="EN 1993-1-1 6.3.2.3(1) (recommended value)",
+            )  # fmt: skip
+            w.input(
+                "beta_LT", BETA_LT, "Factor β", dimension="dimensionless",
+                reference="EN 1993-1-1 6.3.2.3(1) (recommended value)",
+            )  # fmt: skip
+            phi = w.clause(lat.ltb_phi_rolled, "Phi_LT", alpha, lam, w["lambda_LT_0"], w["beta_LT"])
+            plain = w.clause(lat.ltb_reduction_rolled, "chi_LT_0", phi, lam, w["beta_LT"])
+            w.input(
+                "k_c", diagram.k_c, "Correction factor for the moment distribution",
+                dimension="dimensionless", reference=diagram.k_c_source, fixed=LTB_FIXED,
+            )  # fmt: skip
+            f = w.clause(lat.ltb_modification_factor, "f_LT", w["k_c"], lam)
+            chi = w.clause(lat.ltb_reduction_modified, "chi_LT", plain, f, lam)
+        M_b = w.clause(lat.ltb_resistance, "M_b_Rd", chi, W_y, w["f_y"], w["gamma_M1"])
+        w.check(
+            "ltb", EN_CHECK_TITLES["ltb"], w.absolute(self.demands["M_y_Ed"]), M_b,
+            reference="EN 1993-1-1 Eq. (6.54), (6.55)",
+        )  # fmt: skip
+
+    # members in bending and axial compression (6.3.3, Annex B)
+
+    def _member_interaction(self) -> None:
+        w, member = self.w, self.member
+        annex = "Annex A" if member.interaction_method == "A" else "Annex B"
+        w.heading(f"Bending and axial compression (EN 1993-1-1 6.3.3, {annex})", 2)
+        diagram = member.factors_m
+        assert diagram is not None
+        N_Ed = self.demands["N_Ed"]
+        axes = [axis for axis in ("y", "z") if self.has(f"M_{axis}_Ed")]
+        if w.prints and float(w.value_of(N_Ed).to_base_units().m) > 0:
+            w.text(
+                "N_Ed is tension: 6.3.3 (members in bending and axial compression) does not "
+                "apply and Eq. (6.61), (6.62) are taken as 0; the cross-section under N and M "
+                "is verified by 6.2.9 (6.2.1(7)) above."
+            )
+        if len(axes) == 2:
+            section_class = w.largest(
+                "class_MN", [("y-y", w["class_y"]), ("z-z", w["class_z"])],
+                "Class under N with bending about both axes (the worse of the two)",
+            )  # fmt: skip
+        else:
+            section_class = w[f"class_{axes[0]}"]
+        n = {}
+        for axis in ("y", "z"):
+            n[axis] = w.clause(
+                inter.buckling_axial_ratio, f"n_{axis}", w["N_c_Ed"], w[f"chi_{axis}"], w["A"],
+                w["f_y"], w["gamma_M1"],
+            )  # fmt: skip
+        rk = {}
+        for axis in axes:
+            rk[axis] = w.clause(
+                inter.characteristic_moment, f"M_{axis}_Rk", w[f"W_pl_{axis}"],
+                w[f"W_el_{axis}"], w["f_y"], section_class,
+            )  # fmt: skip
+        annex_a_used = member.interaction_method == "A"
+        if annex_a_used:
+            k = self._annex_a_factors(axes, section_class)
+        else:
+            k = self._interaction_factors(axes, n, section_class)
+        moments = {axis: self.demands[f"M_{axis}_Ed"] for axis in axes}
+        gamma = w["gamma_M1"]
+        # Eq. (6.61) with k_yy, k_yz and n_y; Eq. (6.62) with k_zy, k_zz and n_z.
+        for axis, key, major, minor in (
+            ("y", "interaction_y", "yy", "yz"),
+            ("z", "interaction_z", "zy", "zz"),
+        ):
+            if axes == ["y", "z"]:
+                clause = inter.interaction_661 if axis == "y" else inter.interaction_662
+                args = (
+                    n[axis], k[major], moments["y"], w["chi_LT"], rk["y"], k[minor],
+                    moments["z"], rk["z"], gamma,
+                )  # fmt: skip
+            elif axes == ["y"]:
+                clause = inter.interaction_661_uniaxial
+                if axis == "z":
+                    clause = inter.interaction_662_uniaxial
+                args = (n[axis], k[major], moments["y"], w["chi_LT"], rk["y"], gamma)
+            else:
+                clause = inter.interaction_661_minor if axis == "y" else inter.interaction_662_minor
+                args = (n[axis], k[minor], moments["z"], rk["z"], gamma)
+            # Compression (or no axial force) only: 6.3.3 does not apply in tension.
+            cases = [(0, N_Ed / w["N_pl_Rd"] > 0)]
+            if annex_a_used:
+                # Beyond a critical force the factors of Annex A lose their meaning (the
+                # member has buckled): the utilization is then the largest N_Ed/N_cr, ≥ 1.
+                ratios = [w["r_y"], w["r_z"], w["r_T"]]
+                beyond = w.any_of(*(ratio >= 1 for ratio in ratios))
+                largest = functools.reduce(w.larger, [n[axis], *ratios])
+                cases.append((largest, beyond))
+            cases.append((_formula(w, clause, *args), True))
+            u = w.branch(
+                f"u_{key}",
+                cases,
+                f"{clause.description} (0 in tension)",
+                reference=clause.reference,
+            )
+            w.check(key, EN_CHECK_TITLES[key], u, sp.Integer(1), reference=clause.reference)
+
+    def _interaction_factors(
+        self, axes: list[str], n: dict[str, Value], section_class: Value
+    ) -> dict[str, Value]:
+        """k_yy, k_zy (with M_y) and k_zz, k_yz (with M_z) of Annex B."""
+        w, member = self.w, self.member
+        diagram = member.factors_m
+        assert diagram is not None
+        torsional = member.kind == "I"
+        k: dict[str, Value] = {}
+        if "y" in axes:
+            w.input(
+                "C_my", diagram.C_my, "Equivalent uniform moment factor, M_y",
+                dimension="dimensionless", reference=diagram.C_m_source, fixed=LTB_FIXED,
+            )  # fmt: skip
+            k["yy"] = w.clause(
+                inter.k_yy, "k_yy", w["C_my"], w["lambda_rel_y"], n["y"], section_class
+            )
+            if torsional:
+                w.input(
+                    "C_mLT", diagram.C_mLT, "Equivalent uniform moment factor, LTB",
+                    dimension="dimensionless", reference=diagram.C_m_source, fixed=LTB_FIXED,
+                )  # fmt: skip
+                k["zy"] = w.clause(
+                    inter.k_zy_torsional, "k_zy", w["C_mLT"], w["lambda_rel_z"], n["z"],
+                    section_class,
+                )  # fmt: skip
+            else:
+                k["zy"] = w.clause(inter.k_zy_rigid, "k_zy", k["yy"], section_class)
+            if member.ltb is None:
+                w.input(
+                    "chi_LT", 1.0, "Not susceptible to lateral-torsional buckling",
+                    dimension="dimensionless", reference="EN 1993-1-1 6.3.2.1(2)",
+                )  # fmt: skip
+        if "z" in axes:
+            w.input(
+                "C_mz", diagram.C_mz, "Equivalent uniform moment factor, M_z",
+                dimension="dimensionless", reference=diagram.C_m_source, fixed=LTB_FIXED,
+            )  # fmt: skip
+            k_zz = inter.k_zz_i if member.kind == "I" else inter.k_zz_hollow
+            k["zz"] = w.clause(k_zz, "k_zz", w["C_mz"], w["lambda_rel_z"], n["z"], section_class)
+            k["yz"] = w.clause(inter.k_yz, "k_yz", k["zz"], section_class)
+        if w.prints:
+            table = "B.2 (an open section: torsional deformation)" if torsional else "B.1"
+            w.text(f"Interaction factors of EN 1993-1-1 Annex B, Table {table}.")
+        return k
+
+    def _annex_a_factors(self, axes: list[str], section_class: Value) -> dict[str, Value]:
+        """k_yy, k_zy (with M_y) and k_zz, k_yz (with M_z) of Annex A (Method 1)."""
+        w, member = self.w, self.member
+        diagram = member.factors_m
+        assert diagram is not None
+        zero = sp.Integer(0)
+        has_y, has_z = "y" in axes, "z" in axes
+        M_y = self.demands["M_y_Ed"] if has_y else zero
+        M_z = self.demands["M_z_Ed"] if has_z else zero
+        N_c = w["N_c_Ed"]
+        if "G" not in w.symbols:
+            w.input(
+                "nu", POISSON_RATIO, "Poisson's ratio in the elastic range",
+                dimension="dimensionless", reference="EN 1993-1-1 3.2.6(1)",
+            )  # fmt: skip
+            w.clause(lat.shear_modulus, "G", w["E"], w["nu"], unit="MPa")
+        E, G = w["E"], w["G"]
+        w.clause(buck.critical_force, "N_cr_y", E, w["I_y"], w["L_cr_y"])
+        w.clause(buck.critical_force, "N_cr_z", E, w["I_z"], w["L_cr_z"])
+        # The torsional buckling length is taken as the minor-axis one (common practice,
+        # no source): the end conditions for twist follow those for lateral bending.
+        w.text("Torsional buckling length taken as the buckling length about z-z, L_cr,z.")
+        w.clause(
+            annex_a.torsional_critical_force, "N_cr_T", G, w["I_t"], E, w["I_w"], w["L_cr_z"],
+            w["i_y"], w["i_z"],
+        )  # fmt: skip
+        r = {
+            key: w.clause(annex_a.critical_ratio, f"r_{key}", N_c, w[f"N_cr_{key}"])
+            for key in ("y", "z", "T")
+        }
+        mu = {axis: w.clause(annex_a.mu, f"mu_{axis}", r[axis], w[f"chi_{axis}"]) for axis in "yz"}
+        ratio = {
+            axis: w.clause(annex_a.plastic_ratio, f"w_{axis}", w[f"W_pl_{axis}"], w[f"W_el_{axis}"])
+            for axis in "yz"
+        }
+        n_pl = w.clause(annex_a.axial_plastic_ratio, "n_pl", N_c, w["A"], w["f_y"], w["gamma_M1"])
+        a_LT = w.clause(annex_a.torsion_ratio, "a_LT", w["I_t"], w["I_y"])
+        lam_max = w.largest(
+            "lambda_max", [("y-y", w["lambda_rel_y"]), ("z-z", w["lambda_rel_z"])],
+            "Larger flexural slenderness λ̄_max",
+        )  # fmt: skip
+        # C_mz,0: the diagram of M_z is not given, so ψ = 1 (uniform moment).
+        if w.prints:
+            w.text(
+                "C_mi,0 of Table A.2: M_z with ψ = 1 (its diagram is not given); M_y "
+                + (
+                    "with ψ = 1 (a cantilever: its diagram between restraints is not given)."
+                    if member.support_case == "cantilever"
+                    else f"from its diagram ({member.diagram_text})."
+                )
+            )
+        k: dict[str, Value] = {}
+        factors: dict[str, Value] = {}
+        if has_z:
+            w.input("psi_z", 1.0, "End moment ratio of M_z (not given: uniform)",
+                    dimension="dimensionless", fixed=LTB_FIXED)  # fmt: skip
+            factors["C_mz"] = w.clause(annex_a.moment_factor_0_linear, "C_mz", w["psi_z"], r["z"])
+        if has_y:
+            if member.ltb is None:
+                w.input(
+                    "chi_LT", 1.0, "Not susceptible to lateral-torsional buckling",
+                    dimension="dimensionless", reference="EN 1993-1-1 6.3.2.1(2)",
+                )  # fmt: skip
+            lam_0 = self._annex_a_lambda_0(a_LT)
+            if "k_c" not in w.symbols:
+                w.input(
+                    "k_c", diagram.k_c, "Correction factor for the moment distribution",
+                    dimension="dimensionless", reference=diagram.k_c_source, fixed=LTB_FIXED,
+                )  # fmt: skip
+            C_1 = w.clause(annex_a.c1_from_kc, "C_1_A", w["k_c"])
+            limit = w.clause(annex_a.lambda_0_limit, "lambda_0_lim", C_1, r["z"], r["T"])
+            C_my_0 = self._annex_a_c_my_0(r["y"])
+            C_my = w.clause(
+                annex_a.moment_factor_y, "C_my", C_my_0, lam_0, limit, M_y, N_c, w["A"],
+                w["W_el_y"], a_LT, r["y"],
+            )  # fmt: skip
+            C_mLT = w.clause(
+                annex_a.moment_factor_lt, "C_mLT", C_my, a_LT, lam_0, limit, r["z"], r["T"]
+            )
+            M_pl = {}
+            for axis in axes:
+                M_pl[axis] = w.step(
+                    f"M_pl_{axis}_Rd", w[f"W_pl_{axis}"] * w["f_y"] / w["gamma_M0"],
+                    f"Plastic moment resistance about {axis}-{axis}",
+                    reference="EN 1993-1-1 Eq. (6.13)",
+                )  # fmt: skip
+            chi_LT = w["chi_LT"]
+            lam_z = w["lambda_rel_z"]
+            if has_z:
+                b = w.clause(
+                    annex_a.b_lt, "b_LT", a_LT, lam_0, M_y, chi_LT, M_pl["y"], M_z, M_pl["z"]
+                )
+                c = w.clause(annex_a.c_lt, "c_LT", a_LT, lam_0, lam_z, M_y, C_my, chi_LT, M_pl["y"])
+                d = w.clause(
+                    annex_a.d_lt, "d_LT", a_LT, lam_0, lam_z, M_y, C_my, chi_LT, M_pl["y"], M_z,
+                    factors["C_mz"], M_pl["z"],
+                )  # fmt: skip
+                e = w.clause(annex_a.e_lt, "e_LT", a_LT, lam_0, lam_z, M_y, C_my, chi_LT, M_pl["y"])
+            else:
+                b = d = zero
+            C_yy = w.clause(
+                annex_a.c_yy, "C_yy", ratio["y"], C_my, lam_max, n_pl, b, w["W_el_y"], w["W_pl_y"]
+            )
+            C_zy = w.clause(
+                annex_a.c_zy, "C_zy", ratio["y"], ratio["z"], C_my, lam_max, n_pl, d, w["W_el_y"],
+                w["W_pl_y"],
+            )  # fmt: skip
+            k["yy"] = w.clause(
+                annex_a.k_yy, "k_yy", C_my, C_mLT, mu["y"], r["y"], C_yy, section_class
+            )
+            k["zy"] = w.clause(
+                annex_a.k_zy, "k_zy", C_my, C_mLT, mu["z"], r["y"], C_zy, ratio["y"], ratio["z"],
+                section_class,
+            )  # fmt: skip
+        if has_z:
+            if not has_y:
+                c = e = zero
+            C_yz = w.clause(
+                annex_a.c_yz, "C_yz", ratio["z"], ratio["y"], factors["C_mz"], lam_max, n_pl, c,
+                w["W_el_z"], w["W_pl_z"],
+            )  # fmt: skip
+            C_zz = w.clause(
+                annex_a.c_zz, "C_zz", ratio["z"], factors["C_mz"], lam_max, n_pl, e, w["W_el_z"],
+                w["W_pl_z"],
+            )  # fmt: skip
+            k["yz"] = w.clause(
+                annex_a.k_yz, "k_yz", factors["C_mz"], mu["y"], r["z"], C_yz, ratio["z"],
+                ratio["y"], section_class,
+            )  # fmt: skip
+            k["zz"] = w.clause(
+                annex_a.k_zz, "k_zz", factors["C_mz"], mu["z"], r["z"], C_zz, section_class
+            )
+        return k
+
+    def _annex_a_lambda_0(self, a_LT: Value) -> Value:
+        """λ̄_0, the slenderness for lateral-torsional buckling under a uniform moment."""
+        w, member = self.w, self.member
+        if member.ltb is None:
+            return w.input(
+                "lambda_0", 0.0, "Not susceptible to lateral-torsional buckling: λ̄_0 = 0",
+                dimension="dimensionless", reference="EN 1993-1-1 6.3.2.1(2)",
+            )  # fmt: skip
+        M_cr_0 = w.clause(
+            annex_a.critical_moment_uniform, "M_cr_0", w["E"], w["I_z"], w["I_w"], w["G"],
+            w["I_t"], w["L_LT"],
+        )  # fmt: skip
+        return w.clause(lat.ltb_slenderness, "lambda_0", w["W_y"], w["f_y"], M_cr_0)
+
+    def _annex_a_c_my_0(self, r_y: Value) -> Value:
+        """C_my,0 of Table A.2 from the moment diagram of M_y."""
+        w, member = self.w, self.member
+        diagram = "uniform" if member.support_case == "cantilever" else member.moment_diagram
+        if diagram == "uniform load":
+            return w.clause(annex_a.moment_factor_0_uniform_load, "C_my_0", r_y)
+        if diagram == "central point load":
+            return w.clause(annex_a.moment_factor_0_point_load, "C_my_0", r_y)
+        psi = member.end_moment_ratio if diagram == "end moments" else 1.0
+        w.input("psi_y", psi, "End moment ratio of M_y", dimension="dimensionless", fixed=LTB_FIXED)
+        return w.clause(annex_a.moment_factor_0_linear, "C_my_0", w["psi_y"], r_y)

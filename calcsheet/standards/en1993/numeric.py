@@ -50,13 +50,20 @@ def en1993_checks_numeric(
     fabrication: str | None = None,
     net_area: pint.Quantity | str | None = None,
     interaction: str = "plastic",
+    ltb_method: str | None = None,
+    load_height: str | pint.Quantity = "shear centre",
+    support_case: str = "cantilever",
+    moment_diagram: str = "uniform",
+    end_moment_ratio: float = 1.0,
+    interaction_method: str = "B",
 ) -> dict[str, np.ndarray]:
     """The utilization of each check of :func:`write_en1993_checks`, as arrays.
 
     ``demands`` maps the sheet's demand names (``N_Ed``, ``M_y_Ed``, ``M_z_Ed``,
     ``V_z_Ed``, ``V_y_Ed``; ``V_Ed`` for ``V_z_Ed``) to arrays of shape ``(m,)`` in
     N and N·m (or pint quantities); a name left out is not checked, as on the
-    sheet. Keys of the result are those of
+    sheet. The options after ``interaction`` are those of lateral-torsional buckling
+    and 6.3.3 (see :func:`write_en1993_checks`). Keys of the result are those of
     :data:`~calcsheet.standards.en1993.member.EN_CHECK_TITLES`. For one section
     each array has shape ``(m,)``; for a sequence of ``n`` sections of one kind and
     fabrication, ``(n, m)``. A combination that takes the section outside the checks
@@ -73,6 +80,12 @@ def en1993_checks_numeric(
         "fabrication": fabrication,
         "net_area": net_area,
         "interaction": interaction,
+        "ltb_method": ltb_method,
+        "load_height": load_height,
+        "support_case": support_case,
+        "moment_diagram": moment_diagram,
+        "end_moment_ratio": end_moment_ratio,
+        "interaction_method": interaction_method,
     }
     member, given, refused = _prepared(section, options)
     return en1993_checks_prepared(member, arrays, given, refused)
@@ -92,7 +105,7 @@ def en1993_checks_prepared(
     arrays = dict(demands)
     w = run_on_arrays(member, arrays, **given)
     outside = refused
-    for mask, _ in scope_problems(w):
+    for mask, _ in scope_problems(w, member.kind):
         outside = outside | mask
     shape = np.broadcast_shapes(np.shape(refused), *(np.shape(v) for v in w.checks.values()))
     shape = np.broadcast_shapes(shape, np.shape(next(iter(arrays.values()))))

@@ -118,9 +118,10 @@ def test_catalog_w_shape_on_the_member_sheet() -> None:
     checks = write_en1993_checks(
         sheet, section, demands=demands, material=steel("S355", f_y="345 MPa"), length="60 in"
     )
-    # Axial, shear z and y, bending y and z, N + M, buckling y and z; the web limit of
-    # 6.2.6(6) is a statement, not a check (issue 12: utilization is demand/capacity).
-    assert len(checks) == 8
+    # Axial, shear z and y, bending y and z, N + M, buckling y and z, lateral-torsional
+    # buckling and Eq. (6.61), (6.62); the web limit of 6.2.6(6) is a statement, not a
+    # check (issue 12: utilization is demand/capacity).
+    assert len(checks) == 11
     # M_y,Ed = calcsheet M_x = e_y·F_z − a·F_y = (−5)(−2) − 60(−6) = 370 kip·in; class 1 or
     # 2 in bending, so M_c,y,Rd = Z_x·f_y = 38.8 in³ · 345 MPa (Eq. 6.13, hand calc).
     M_c = 38.8 * 0.0254**3 * 345e6
@@ -146,7 +147,7 @@ def test_rhs_cold_formed_by_default() -> None:
     A = section.properties["A"].to("m**2").m
     n = 300e3 / (A * 355e6)
     assert sheet.value("alpha_NM").m == pytest.approx(min(1.66 / (1 - 1.13 * n**2), 6))
-    assert len(checks) == 6
+    assert len(checks) == 9  # with LTB (RHS, h ≠ b) and Eq. (6.61), (6.62)
 
 
 def test_chs_uses_the_linear_interaction() -> None:
