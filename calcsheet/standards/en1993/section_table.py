@@ -35,7 +35,14 @@ import pint
 
 from calcsheet.errors import InputError
 from calcsheet.sections import Section, catalog_section, list_designations
-from calcsheet.sections.metric import METRIC_FAMILIES, corner_radii, metric_rows
+from calcsheet.sections.metric import (
+    METRIC_FAMILIES,
+    corner_radii,
+    metric_rows,
+    rectangular_hollow_torsion,
+    rolled_i_torsion,
+    rolled_i_warping,
+)
 from calcsheet.standards.en1993 import buckling as buck
 from calcsheet.standards.en1993.factors import NOMINAL_THICKNESS_LIMIT_MM, PartialFactors, Steel
 from calcsheet.standards.en1993.member import MemberData, member_data, si_inputs
@@ -153,19 +160,30 @@ def family_table(family: str) -> FamilyTable:
     if key in I_FAMILIES:
         h, b, tw, tf, r = (column[name] for name in ("h_mm", "b_mm", "tw_mm", "tf_mm", "r_mm"))
         values = i_section_values(h, b, tw, tf, r)
+        # The torsion and warping constants as the catalog's sections compute them.
+        values["I_t"] = rolled_i_torsion(h, b, tw, tf, r)
+        values["I_w"] = rolled_i_warping(h, b, tf)
         dims = {"h": h, "b": b, "t_w": tw, "t_f": tf, "r": r}
         thickest = np.maximum(tw, tf)
     elif key in ("SHS", "RHS"):
         h, b, t = column["h_mm"], column["b_mm"], column["t_mm"]
         values = hollow_rectangle_values(h, b, t)
+        outer_r, inner_r = corner_radii(1.0, "hot-finished")
+        values["I_t"] = rectangular_hollow_torsion(h, b, t, outer_r * t, inner_r * t)
+        values["I_w"] = np.zeros_like(t)
         dims = {"h": h, "b": b, "t": t}
         thickest = t
     else:
         d, t = column["d_mm"], column["t_mm"]
         values = circular_hollow_values(d, t)
+        values["I_t"] = 2 * values["I_y"]  # the polar moment of the annulus
+        values["I_w"] = np.zeros_like(t)
         dims = {"d": d, "t": t}
         thickest = t
-    power = {"A": 2, "I_y": 4, "I_z": 4, "W_pl_y": 3, "W_el_y": 3, "W_pl_z": 3, "W_el_z": 3}
+    power = {
+        "A": 2, "I_y": 4, "I_z": 4, "I_t": 4, "I_w": 6,
+        "W_pl_y": 3, "W_el_y": 3, "W_pl_z": 3, "W_el_z": 3,
+    }  # fmt: skip
     si = {name: value * MM ** power.get(name, 1) for name, value in values.items()}
     si.update({name: value * MM for name, value in dims.items()})
     return FamilyTable(
