@@ -22,7 +22,7 @@ from calcsheet.calcs.design import (
     lightest_section,
     plan_combinations,
 )
-from calcsheet.engine import Check, Sheet
+from calcsheet.engine import Check, Heading, Prose, Sheet, Step
 from calcsheet.figures.chart import sweep_chart
 from calcsheet.mechanics.deflection import CHECK_KEY as DEFLECTION_KEY
 from calcsheet.mechanics.deflection import CHECK_TITLE as DEFLECTION_TITLE
@@ -40,7 +40,13 @@ _FORCE_COLUMNS = (("N", "force"), ("Vx", "force"), ("Vy", "force"), ("T", "momen
                   ("Mx", "moment"), ("My", "moment"))  # fmt: skip
 
 
+# Concise detail writes a limit state out in full when it governs, when its utilization is
+# at least FULL_ABOVE, or when it is within FULL_WITHIN of the governing one.
+FULL_ABOVE = 0.5
+FULL_WITHIN = 0.8
+
 __all__ = [
+    "condense_checks",
     "write_check_cases",
     "write_combinations",
     "write_exploration",
@@ -163,6 +169,77 @@ def write_check_cases(
             combination=combination,
             station=station,
         )
+
+
+def condense_checks(sheet: Sheet, first: int, checks: Sequence[Check]) -> None:
+    """Concise detail for a specification chapter (``sheet.parts[first:]``, its ``checks``).
+
+    The limit states that govern (see :data:`FULL_ABOVE`, :data:`FULL_WITHIN`) stay
+    written out step by step, with every step their values rest on and every step that
+    settled a decision (a classification, which equation applies). Every other check
+    gets one line in a table (demand, capacity, utilization, worst combination, clause),
+    its own steps evaluated by the same procedure without being printed; a subsection
+    left with nothing shown loses its heading and words.
+    """
+    rated = [(check.worst_utilization or 0.0, check) for check in checks]
+    if not rated:
+        return
+    top = max(utilization for utilization, _ in rated)
+    governing = next(check for utilization, check in rated if utilization == top)
+    full = [
+        check
+        for utilization, check in rated
+        if check is governing or utilization >= FULL_ABOVE or utilization >= FULL_WITHIN * top
+    ]
+    rest = [check for check in checks if all(check is not chosen for chosen in full)]
+    if not rest:
+        return
+    chapter = sheet.parts[first:]
+    needed = sheet.rests_on(
+        [*(c.demand for c in full), *(c.capacity for c in full), *sheet.decided]
+    )
+    for part in chapter:
+        if isinstance(part, Step) and part.shown and part.symbol not in needed:
+            part.shown = False
+    for check in rest:
+        check.shown = False
+    kept = _without_empty_subsections([part for part in chapter if not _is_among(part, rest)])
+    names = ", ".join(f"{c.description} ({c.worst_utilization or 0.0:.3f})" for c in full)
+    note = Prose(
+        f"Written out in full above: the limit states that govern, {names}, that is the "
+        f"largest utilization and any at least {FULL_ABOVE:g} or within "
+        f"{100 * (1 - FULL_WITHIN):g} % of it. The other limit states below are evaluated "
+        'by the same procedure (the steps they alone need are not printed; detail "full" '
+        "prints them) and each shows its demand, capacity, utilization and worst combination."
+    )
+    last_check = max(index for index, part in enumerate(kept) if isinstance(part, Check))
+    kept[last_check + 1 : last_check + 1] = [note, *rest]
+    sheet.parts[first:] = kept
+
+
+def _is_among(part: object, parts: Sequence[object]) -> bool:
+    return any(part is other for other in parts)
+
+
+def _without_empty_subsections(parts: list) -> list:
+    """The parts less the heading and words of each subsection whose steps and checks are
+    all hidden (a subsection of inputs or words only stays as it was)."""
+    kept: list = []
+    section: list = []
+
+    def close() -> None:
+        computed = [p for p in section if isinstance(p, (Step, Check))]
+        if computed and not any(p.shown for p in computed):
+            section[:] = [p for p in section if not isinstance(p, (Heading, Prose))]
+        kept.extend(section)
+        section.clear()
+
+    for part in parts:
+        if isinstance(part, Heading):
+            close()
+        section.append(part)
+    close()
+    return kept
 
 
 def write_exploration(

@@ -21,6 +21,7 @@ import sympy as sp
 
 from calcsheet.calcs.design import DesignBasis, plan_combinations
 from calcsheet.calcs.design_sheet import (
+    condense_checks,
     write_check_cases,
     write_combinations,
     write_exploration,
@@ -183,6 +184,7 @@ def member_sheet(
             points = _write_point_stresses(sheet, section, model, forces, props, shown)
         _write_point_table(sheet, points, stress)
         governing = _write_governing(sheet, points, stress)
+        chapter = len(sheet.parts)
         checks = standard.write(
             CheckContext(
                 sheet, section, basis, forces, governing, symbols, (fy_q, length_q), stress
@@ -190,6 +192,8 @@ def member_sheet(
         )
         if plan is not None:
             write_check_cases(sheet, plan, checks, station_q.to(length_unit))
+            if detail == "concise":
+                condense_checks(sheet, chapter, checks)
         if basis.deflection_ratio:
             # E as the standard states it, so that the deflection shares the checks' input E.
             write_tip_deflection_of(

@@ -172,7 +172,8 @@ class Check:
     """Demand against capacity: utilization = demand / capacity, pass when it is at most 1.
 
     With :attr:`cases` the check also stands for cases not written out: it passes
-    only when the worst of them passes too.
+    only when the worst of them passes too. ``shown`` False gives it one line in a
+    table of such checks instead of a block of its own (it still counts everywhere).
     """
 
     description: str
@@ -184,6 +185,7 @@ class Check:
     utilization: float | None = None
     sheet: Sheet | None = field(default=None, repr=False)
     cases: CheckCases | None = None
+    shown: bool = True
 
     @property
     def worst_utilization(self) -> float | None:

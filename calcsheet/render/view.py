@@ -2,6 +2,7 @@
 
 from __future__ import annotations
 
+import dataclasses
 import datetime
 from dataclasses import dataclass
 from typing import Any
@@ -53,6 +54,8 @@ class PartView:
     columns: tuple[str, ...] = ()
     text_columns: tuple[bool, ...] = ()  # per column: all text (left-aligned) or has values
     cells: tuple[tuple[tuple[bool, str], ...], ...] = ()  # (is math, content) per cell
+    # A table of checks given one line each (``kind`` "check_table"): their views.
+    entries: tuple[PartView, ...] = ()
 
 
 @dataclass(frozen=True)
@@ -164,7 +167,12 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
             )
             check_views[id(part)] = view
             checks.append(view)
-            parts.append(view)
+            if part.shown:
+                parts.append(view)
+            elif parts and parts[-1].kind == "check_table":
+                parts[-1] = dataclasses.replace(parts[-1], entries=(*parts[-1].entries, view))
+            else:
+                parts.append(PartView("check_table", entries=(view,)))
     governing_check = sheet.governing_check()
     governing = check_views.get(id(governing_check)) if governing_check is not None else None
     return SheetView(
