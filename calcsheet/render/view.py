@@ -4,6 +4,7 @@ from __future__ import annotations
 
 import dataclasses
 import datetime
+import re
 from dataclasses import dataclass
 from typing import Any
 
@@ -22,10 +23,14 @@ from calcsheet.engine import (
     Step,
     Table,
 )
+from calcsheet.engine.names import GREEK_LETTERS
 
 # Characters of the plain-text chain above which a step is printed one piece per line,
 # so that it fits the width of a letter or A4 page (measured on the demo's PDF).
 LONG_EQUATION = 90
+# Characters of the plain-text chain up to which a PDF sets the equation beside its words
+# (words in the left column, equation in the right), saving a line per step.
+BESIDE_EQUATION = 64
 
 
 @dataclass(frozen=True)
@@ -54,6 +59,8 @@ class PartView:
     columns: tuple[str, ...] = ()
     text_columns: tuple[bool, ...] = ()  # per column: all text (left-aligned) or has values
     cells: tuple[tuple[tuple[bool, str], ...], ...] = ()  # (is math, content) per cell
+    beside: bool = False  # a short step: the PDF sets its equation beside its words
+    width: float = 0.0  # a figure's printed width in pt (0: as wide as the text)
     # A table of checks given one line each (``kind`` "check_table"): their views.
     entries: tuple[PartView, ...] = ()
 
@@ -72,6 +79,8 @@ class SheetView:
     cautions: tuple[str, ...]
     tool_version: str
     revisions: tuple[Revision, ...] = ()
+    # Sources that several inputs share, printed once under the inputs table: (mark, text).
+    input_notes: tuple[tuple[str, str], ...] = ()
     basis: tuple[tuple[str, tuple[str, ...]], ...] = ()
     references: tuple[str, ...] = ()
     trace: str = ""
@@ -107,7 +116,8 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
                 for row in part.rows
             )
             text_columns = tuple(
-                all(not row[index][0] for row in cells) for index in range(len(part.columns))
+                all(not row[index][0] and not _is_number(row[index][1]) for row in cells)
+                for index in range(len(part.columns))
             )
             parts.append(
                 PartView(
@@ -119,7 +129,8 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
                 )
             )
         elif isinstance(part, Figure):
-            parts.append(PartView("figure", text=part.caption, svg=sheet.figure_svg(part)))
+            svg = sheet.figure_svg(part)
+            parts.append(PartView("figure", text=part.caption, svg=svg, width=_print_width(svg)))
         elif isinstance(part, Input):
             equation = sheet.equation(part, target)
             view = PartView(
@@ -136,10 +147,12 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
             if not part.shown:
                 continue
             equation = sheet.equation(part, target)
-            long = len(sheet.equation(part, "plain").chain()) > LONG_EQUATION
+            plain = sheet.equation(part, "plain").chain()
+            long = len(plain) > LONG_EQUATION
             parts.append(
                 PartView(
                     "step",
+                    beside=_set_width(plain) <= BESIDE_EQUATION,
                     text=part.description,
                     symbol=equation.symbol,
                     math=equation.stacked() if long else equation.chain(),
@@ -151,8 +164,10 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
         elif isinstance(part, Check):
             text = sheet.check_text(part, target)
             written_passes = part.utilization is not None and part.utilization <= 1.0
+            plain = sheet.check_text(part, "plain")
             view = PartView(
                 "check",
+                beside=_set_width(f"{plain.symbolic}    {plain.numeric}") <= BESIDE_EQUATION,
                 text=part.description,
                 symbolic=text.symbolic,
                 numeric=text.numeric,
@@ -173,6 +188,7 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
                 parts[-1] = dataclasses.replace(parts[-1], entries=(*parts[-1].entries, view))
             else:
                 parts.append(PartView("check_table", entries=(view,)))
+    inputs, input_notes = _shared_sources(inputs)
     governing_check = sheet.governing_check()
     governing = check_views.get(id(governing_check)) if governing_check is not None else None
     return SheetView(
@@ -181,6 +197,7 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
         units=sheet.units.name,
         parts=parts,
         inputs=inputs,
+        input_notes=input_notes,
         checks=checks,
         governing=governing,
         cautions=CAUTIONS,
@@ -194,6 +211,67 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
         description=_description(sheet),
         keywords=_keywords(sheet),
     )
+
+
+_GREEK_NAME = re.compile("|".join(sorted(GREEK_LETTERS, key=len, reverse=True)))
+
+
+def _set_width(plain: str) -> int:
+    """About how many characters wide a plain-text equation is when typeset: a Greek
+    letter's name is one letter, underscores and powers' stars take no room. A stacked
+    equation (several lines) counts as too wide to set beside words."""
+    if "\n" in plain:
+        return 10**6
+    shown = _GREEK_NAME.sub("g", plain).replace("**", "").replace("_", "")
+    return len(shown.replace("sqrt", "√"))
+
+
+_NUMBER = re.compile(r"^[−+-]?(\d[\d,]*\.?\d*|\.\d+|∞|—)$")
+
+
+def _is_number(cell: str) -> bool:
+    """A text cell holding a number already printed (or a dash for none): set as a value."""
+    return bool(_NUMBER.match(cell.strip()))
+
+
+# Figures print at this fraction of their drawn size (SVG px at 96 per inch), which keeps
+# their lettering at about 7 pt: a page holds a figure and the steps it illustrates.
+FIGURE_SCALE = 0.72
+_SVG_WIDTH = re.compile(r'<svg\b[^>]*?\swidth="([0-9.]+)"')
+
+
+def _print_width(svg: str) -> float:
+    """The printed width of an SVG drawing in pt (0 when it gives no width)."""
+    found = _SVG_WIDTH.search(svg)
+    return round(float(found[1]) * 0.75 * FIGURE_SCALE, 1) if found else 0.0
+
+
+# A source this long, given for more than one input, is printed once as a note.
+_NOTE_LENGTH = 30
+
+
+def _shared_sources(
+    inputs: list[PartView],
+) -> tuple[list[PartView], tuple[tuple[str, str], ...]]:
+    """The inputs with each long source that several of them share replaced by a note mark
+    ("note a"), and the notes in order of first use."""
+    counts: dict[str, int] = {}
+    for item in inputs:
+        counts[item.reference] = counts.get(item.reference, 0) + 1
+    marks: dict[str, str] = {}
+    for item in inputs:
+        source = item.reference
+        if counts[source] > 1 and len(source) > _NOTE_LENGTH and source not in marks:
+            marks[source] = chr(ord("a") + len(marks)) if len(marks) < 26 else str(len(marks))
+    if not marks:
+        return inputs, ()
+    noted = [
+        dataclasses.replace(item, reference=f"note {marks[item.reference]}")
+        if item.reference in marks
+        else item
+        for item in inputs
+    ]
+    return noted, tuple((mark, source) for source, mark in marks.items())
 
 
 def issue_date(sheet: Sheet, today: datetime.date | None = None) -> datetime.date:
