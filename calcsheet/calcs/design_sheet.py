@@ -22,7 +22,7 @@ from calcsheet.calcs.design import (
     lightest_section,
     plan_combinations,
 )
-from calcsheet.engine import Check, Heading, Prose, Sheet, Step
+from calcsheet.engine import Check, Heading, Input, Prose, Sheet, Step
 from calcsheet.figures.chart import sweep_chart
 from calcsheet.mechanics.deflection import CHECK_KEY as DEFLECTION_KEY
 from calcsheet.mechanics.deflection import CHECK_TITLE as DEFLECTION_TITLE
@@ -139,8 +139,8 @@ def _write_check_matrix(sheet: Sheet, plan: CombinationPlan) -> None:
         ["Combination", *(f"({number})" for number in range(1, len(keys) + 1))],
         [*rows, worst],
         caption=(
-            "Utilization of every check under every combination, by the procedure written "
-            "out below for the governing one, computed when the sheet was built. Checks: "
+            "Utilization of each check under each combination (the procedure written out "
+            "below, computed when the sheet was built): "
             + "; ".join(
                 f"({number}) {titles.get(key, key)}" for number, key in enumerate(keys, start=1)
             )
@@ -206,11 +206,10 @@ def condense_checks(sheet: Sheet, first: int, checks: Sequence[Check]) -> None:
     kept = _without_empty_subsections([part for part in chapter if not _is_among(part, rest)])
     names = ", ".join(f"{c.description} ({c.worst_utilization or 0.0:.3f})" for c in full)
     note = Prose(
-        f"Written out in full above: the limit states that govern, {names}, that is the "
-        f"largest utilization and any at least {FULL_ABOVE:g} or within "
-        f"{100 * (1 - FULL_WITHIN):g} % of it. The other limit states below are evaluated "
-        'by the same procedure (the steps they alone need are not printed; detail "full" '
-        "prints them) and each shows its demand, capacity, utilization and worst combination."
+        f"Written out in full above: {names}, the limit states with the largest utilization, "
+        f"at least {FULL_ABOVE:g} or within {100 * (1 - FULL_WITHIN):g} % of the largest. "
+        "Each other limit state is evaluated by the same procedure (the steps only it needs "
+        'are not printed; detail "full" prints them) and given one line below.'
     )
     last_check = max(index for index, part in enumerate(kept) if isinstance(part, Check))
     kept[last_check + 1 : last_check + 1] = [note, *rest]
@@ -223,7 +222,7 @@ def _is_among(part: object, parts: Sequence[object]) -> bool:
 
 def _without_empty_subsections(parts: list) -> list:
     """The parts less the heading and words of each subsection whose steps and checks are
-    all hidden (a subsection of inputs or words only stays as it was)."""
+    all hidden, and the heading of a subsection of inputs only (the inputs table lists them)."""
     kept: list = []
     section: list = []
 
@@ -231,6 +230,8 @@ def _without_empty_subsections(parts: list) -> list:
         computed = [p for p in section if isinstance(p, (Step, Check))]
         if computed and not any(p.shown for p in computed):
             section[:] = [p for p in section if not isinstance(p, (Heading, Prose))]
+        elif all(isinstance(p, (Heading, Input)) for p in section):
+            section[:] = [p for p in section if isinstance(p, Input)]
         kept.extend(section)
         section.clear()
 
@@ -296,12 +297,10 @@ def write_exploration(
             ["Section", "Weight", "Utilization", "Governing check", "Result"],
             rows,
             caption=(
-                f"The lightest section of the family passing every {basis.kind} check under "
-                "every combination"
-                + (", and the tip deflection," if basis.deflection_ratio else "")
-                + " and the next lighter ones with why they fail "
-                "(computed when the sheet was built; only this sheet's section is written "
-                "out step by step)"
+                f"The lightest section of the family passing every {basis.kind} check "
+                + ("and the tip deflection " if basis.deflection_ratio else "")
+                + "under every combination, and the next lighter ones with why they fail "
+                "(computed when the sheet was built; only this sheet's section is written out)"
             ),
         )
         if chosen is None:

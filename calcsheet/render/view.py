@@ -30,7 +30,7 @@ from calcsheet.engine.names import GREEK_LETTERS
 LONG_EQUATION = 90
 # Characters of the plain-text chain up to which a PDF sets the equation beside its words
 # (words in the left column, equation in the right), saving a line per step.
-BESIDE_EQUATION = 64
+BESIDE_EQUATION = 70
 
 
 @dataclass(frozen=True)
@@ -148,7 +148,7 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
                 continue
             equation = sheet.equation(part, target)
             plain = sheet.equation(part, "plain").chain()
-            long = len(plain) > LONG_EQUATION
+            long = _set_width(plain) > LONG_EQUATION
             parts.append(
                 PartView(
                     "step",
@@ -222,8 +222,32 @@ def _set_width(plain: str) -> int:
     equation (several lines) counts as too wide to set beside words."""
     if "\n" in plain:
         return 10**6
-    shown = _GREEK_NAME.sub("g", plain).replace("**", "").replace("_", "")
-    return len(shown.replace("sqrt", "√"))
+    shown = _GREEK_NAME.sub("g", plain).replace("**", "").replace("_", "").replace("sqrt", "√")
+    return len(_fractions_stacked(shown))
+
+
+def _fractions_stacked(text: str) -> str:
+    """``text`` with each ``(numerator)/(denominator)`` of the plain printer replaced by
+    as many characters as the wider of the two: a fraction is set one above the other."""
+    while (middle := text.find(")/(")) >= 0:
+        start = _matching(text, middle, -1)
+        end = _matching(text, middle + 2, +1)
+        if start < 0 or end < 0:
+            break
+        numerator, denominator = text[start + 1 : middle], text[middle + 3 : end]
+        text = text[:start] + "x" * max(len(numerator), len(denominator)) + text[end + 1 :]
+    return text
+
+
+def _matching(text: str, index: int, direction: int) -> int:
+    """The index of the parenthesis matching the one at ``index`` (-1 when none)."""
+    depth = 0
+    while 0 <= index < len(text):
+        depth += {"(": 1, ")": -1}.get(text[index], 0) * direction
+        if depth == 0:
+            return index
+        index += direction
+    return -1
 
 
 _NUMBER = re.compile(r"^[−+-]?(\d[\d,]*\.?\d*|\.\d+|∞|—)$")
@@ -235,15 +259,21 @@ def _is_number(cell: str) -> bool:
 
 
 # Figures print at this fraction of their drawn size (SVG px at 96 per inch), which keeps
-# their lettering at about 7 pt: a page holds a figure and the steps it illustrates.
-FIGURE_SCALE = 0.72
-_SVG_WIDTH = re.compile(r'<svg\b[^>]*?\swidth="([0-9.]+)"')
+# their lettering at about 6.5 pt, and no taller than FIGURE_HEIGHT pt: a page holds a
+# figure and the steps it illustrates.
+FIGURE_SCALE = 0.66
+FIGURE_HEIGHT = 165.0
+_SVG_SIZE = re.compile(r'<svg\b[^>]*?\swidth="([0-9.]+)"[^>]*?\sheight="([0-9.]+)"')
 
 
 def _print_width(svg: str) -> float:
-    """The printed width of an SVG drawing in pt (0 when it gives no width)."""
-    found = _SVG_WIDTH.search(svg)
-    return round(float(found[1]) * 0.75 * FIGURE_SCALE, 1) if found else 0.0
+    """The printed width of an SVG drawing in pt (0 when it gives no size)."""
+    found = _SVG_SIZE.search(svg)
+    if not found:
+        return 0.0
+    width, height = (float(found[index]) * 0.75 for index in (1, 2))  # px to pt
+    scale = min(FIGURE_SCALE, FIGURE_HEIGHT / height) if height > 0 else FIGURE_SCALE
+    return round(width * scale, 1)
 
 
 # A source this long, given for more than one input, is printed once as a note.
