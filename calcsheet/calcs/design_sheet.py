@@ -35,9 +35,9 @@ CHOSEN_AT_BUILD = (
     "the governing combination was chosen when the sheet was built; build the sheet again "
     "after changing the loads"
 )
-# Table headers as engineers write them (plain text: a header is not math).
-_FORCE_COLUMNS = (("N", "force"), ("Vx", "force"), ("Vy", "force"), ("T", "moment"),
-                  ("Mx", "moment"), ("My", "moment"))  # fmt: skip
+# Table headers as the sheet's equations set the symbols ({M_x}: see engine.marked_text).
+_FORCE_COLUMNS = (("{N}", "force"), ("{V_x}", "force"), ("{V_y}", "force"), ("{T}", "moment"),
+                  ("{M_x}", "moment"), ("{M_y}", "moment"))  # fmt: skip
 
 
 # Concise detail writes a limit state out in full when it governs, when its utilization is

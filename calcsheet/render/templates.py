@@ -5,7 +5,9 @@ from __future__ import annotations
 from functools import lru_cache
 
 import jinja2
+import markupsafe
 
+from calcsheet.engine.marked_text import rich_text
 from calcsheet.engine.typst_literal import typst_string
 
 
@@ -20,16 +22,29 @@ def typst_text(value: object) -> str:
     return typst_string(value, breakable=True)
 
 
+def html_rich(value: object) -> markupsafe.Markup:
+    """Words with ``{symbol}`` marks as HTML: words escaped, symbols as inline MathML."""
+    return markupsafe.Markup(rich_text(str(value), "mathml"))
+
+
+def typst_rich(value: object) -> str:
+    """Words with ``{symbol}`` marks as Typst markup: words as string literals (``#"..."``),
+    symbols as inline math. For markup; in code, put it in brackets (``[...]``)."""
+    return rich_text(str(value), "typst", breakable=True)
+
+
 @lru_cache(maxsize=1)
 def html_environment() -> jinja2.Environment:
     """HTML templates with autoescaping: user text can never become markup."""
-    return jinja2.Environment(
+    environment = jinja2.Environment(
         loader=jinja2.PackageLoader("calcsheet.templates", "."),
         autoescape=True,
         undefined=jinja2.StrictUndefined,
         trim_blocks=True,
         lstrip_blocks=True,
     )
+    environment.filters["rich"] = html_rich
+    return environment
 
 
 @lru_cache(maxsize=1)
@@ -44,4 +59,5 @@ def typst_environment() -> jinja2.Environment:
     )
     environment.filters["text"] = typst_text
     environment.filters["data"] = typst_data
+    environment.filters["rich"] = typst_rich
     return environment

@@ -60,6 +60,7 @@ class PartView:
     text_columns: tuple[bool, ...] = ()  # per column: all text (left-aligned) or has values
     cells: tuple[tuple[tuple[bool, str], ...], ...] = ()  # (is math, content) per cell
     beside: bool = False  # a short step: the PDF sets its equation beside its words
+    floats: bool = False  # a figure the PDF may move to the top or bottom of a page
     width: float = 0.0  # a figure's printed width in pt (0: as wide as the text)
     # A table of checks given one line each (``kind`` "check_table"): their views.
     entries: tuple[PartView, ...] = ()
@@ -189,6 +190,9 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
             else:
                 parts.append(PartView("check_table", entries=(view,)))
     inputs, input_notes = _shared_sources(inputs)
+    figures = [index for index, view in enumerate(parts) if view.kind == "figure"]
+    for index in figures[:-1]:  # the last stays in the flow: nothing floats past the end
+        parts[index] = dataclasses.replace(parts[index], floats=True)
     governing_check = sheet.governing_check()
     governing = check_views.get(id(governing_check)) if governing_check is not None else None
     return SheetView(
