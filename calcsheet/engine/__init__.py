@@ -18,6 +18,7 @@ from calcsheet.engine.parts import (
     Step,
     Table,
     TitleBlock,
+    title_block_items,
 )
 from calcsheet.engine.printers import TARGETS, as_written
 from calcsheet.engine.sheet import CheckText, Equation, Sheet
@@ -39,4 +40,5 @@ __all__ = [
     "Table",
     "TitleBlock",
     "as_written",
+    "title_block_items",
 ]

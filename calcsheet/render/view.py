@@ -22,6 +22,7 @@ from calcsheet.engine import (
     Sheet,
     Step,
     Table,
+    title_block_items,
 )
 from calcsheet.engine.names import GREEK_LETTERS
 
@@ -72,6 +73,8 @@ class SheetView:
 
     title: str
     title_block: Any
+    # The title block as the sheet shows it, (label, text) in order, the units last.
+    title_items: tuple[tuple[str, str], ...]
     units: str
     parts: list[PartView]
     inputs: list[PartView]
@@ -198,6 +201,7 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
     return SheetView(
         title=sheet.title,
         title_block=sheet.title_block,
+        title_items=(*title_block_items(sheet.title_block), ("Units", sheet.units.name)),
         units=sheet.units.name,
         parts=parts,
         inputs=inputs,
