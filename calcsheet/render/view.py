@@ -270,7 +270,7 @@ def _is_number(cell: str) -> bool:
 # their lettering at about 6.5 pt, and no taller than FIGURE_HEIGHT pt: a page holds a
 # figure and the steps it illustrates.
 FIGURE_SCALE = 0.66
-FIGURE_HEIGHT = 165.0
+FIGURE_HEIGHT = 150.0
 _SVG_SIZE = re.compile(r'<svg\b[^>]*?\swidth="([0-9.]+)"[^>]*?\sheight="([0-9.]+)"')
 
 
