@@ -532,12 +532,15 @@ class Sheet:
             if not isinstance(part, Step):
                 continue
             expr = part.expr
+            used: list[sp.Basic] = [expr]
             if isinstance(expr, sp.Piecewise):
-                branch = chosen_branch(expr, self._values, step=part.name)
-                used: list[sp.Basic] = [expr.args[branch][0]]
-                used += [condition for _, condition in expr.args[: branch + 1]]
-            else:
-                used = [expr]
+                try:
+                    branch = chosen_branch(expr, self._values, step=part.name)
+                except (DimensionError, EvaluationError):
+                    branch = None  # no branch applies now: every branch counts
+                if branch is not None:
+                    used = [expr.args[branch][0]]
+                    used += [condition for _, condition in expr.args[: branch + 1]]
             pending += [symbol for piece in used for symbol in _ordered_symbols(piece)]
         return found
 

@@ -78,3 +78,21 @@ def test_concise_lists_the_other_limit_states_and_full_writes_them_out(demo):
         return sorted((c.description, round(c.worst_utilization, 9)) for c in sheet.checks)
 
     assert results(full) == results(demo)
+
+
+def test_rests_on_follows_the_branch_that_applies_and_notes_decisions():
+    from calcsheet.engine import Sheet
+    from calcsheet.engine.functions import Piecewise
+    from calcsheet.engine.procedure import SheetWriter
+
+    sheet = Sheet("Branches")
+    with sheet:
+        a = sheet.input("a", "2 kip", "A force")
+        b = sheet.step("b", 2 * a, "Twice a")
+        c = sheet.step("c", 3 * a, "Three times a")
+        d = sheet.step("d", Piecewise((b, a > 0 * a), (c, True)), "b in tension, else c")
+        e = sheet.step("e", d + c, "Uses both")
+    assert sheet.rests_on([d]) == {d, b, a}  # the branch of c does not apply now
+    assert sheet.rests_on([e]) == {e, d, c, b, a}
+    SheetWriter(sheet).holds(c, ">", b)
+    assert sheet.decided == {c, b}
