@@ -22,7 +22,7 @@ from calcsheet.calcs.design import (
     lightest_section,
     plan_combinations,
 )
-from calcsheet.engine import Check, Heading, Input, Prose, Sheet, Step
+from calcsheet.engine import Check, CheckList, Heading, Input, Prose, Sheet, Step
 from calcsheet.figures.chart import sweep_chart
 from calcsheet.mechanics.deflection import CHECK_KEY as DEFLECTION_KEY
 from calcsheet.mechanics.deflection import CHECK_TITLE as DEFLECTION_TITLE
@@ -203,7 +203,7 @@ def condense_checks(sheet: Sheet, first: int, checks: Sequence[Check]) -> None:
             part.shown = False
     for check in rest:
         check.shown = False
-    kept = _without_empty_subsections([part for part in chapter if not _is_among(part, rest)])
+    kept = _without_empty_subsections(chapter)
     names = ", ".join(f"{c.description} ({c.worst_utilization or 0.0:.3f})" for c in full)
     note = Prose(
         f"Written out in full above: {names}, the limit states with the largest utilization, "
@@ -211,13 +211,14 @@ def condense_checks(sheet: Sheet, first: int, checks: Sequence[Check]) -> None:
         "Each other limit state is evaluated by the same procedure (the steps only it needs "
         'are not printed; detail "full" prints them) and given one line below.'
     )
-    last_check = max(index for index, part in enumerate(kept) if isinstance(part, Check))
-    kept[last_check + 1 : last_check + 1] = [note, *rest]
+    last_shown = max(
+        index for index, part in enumerate(kept) if isinstance(part, Check) and part.shown
+    )
+    table = CheckList(
+        rest, "Limit states not written out step by step, each evaluated by the same procedure"
+    )
+    kept[last_shown + 1 : last_shown + 1] = [note, table]
     sheet.parts[first:] = kept
-
-
-def _is_among(part: object, parts: Sequence[object]) -> bool:
-    return any(part is other for other in parts)
 
 
 def _without_empty_subsections(parts: list) -> list:

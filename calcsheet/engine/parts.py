@@ -247,4 +247,13 @@ class Check:
         return result
 
 
-Part = Heading | Prose | Figure | Table | Input | Step | Check
+@dataclass(eq=False)
+class CheckList:
+    """Checks given one line each in a table instead of a block of their own (their
+    ``shown`` is False; they stay where they were written, for the summary's order)."""
+
+    checks: list[Check]
+    caption: str = ""
+
+
+Part = Heading | Prose | Figure | Table | Input | Step | Check | CheckList

@@ -14,6 +14,7 @@ from calcsheet import __version__
 from calcsheet.engine import (
     CAUTIONS,
     Check,
+    CheckList,
     Figure,
     Heading,
     Input,
@@ -99,7 +100,6 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
     """Print every part of ``sheet`` for ``target`` (``mathml`` or ``typst``)."""
     parts: list[PartView] = []
     inputs: list[PartView] = []
-    checks: list[PartView] = []
     check_views: dict[int, PartView] = {}
     for part in sheet.parts:
         if isinstance(part, Heading):
@@ -166,32 +166,13 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
                 )
             )
         elif isinstance(part, Check):
-            text = sheet.check_text(part, target)
-            written_passes = part.utilization is not None and part.utilization <= 1.0
-            plain = sheet.check_text(part, "plain")
-            view = PartView(
-                "check",
-                beside=_set_width(f"{plain.symbolic}    {plain.numeric}") <= BESIDE_EQUATION,
-                text=part.description,
-                symbolic=text.symbolic,
-                numeric=text.numeric,
-                utilization=text.utilization,
-                status="OK" if written_passes else "NOT OK",
-                reference=part.reference,
-                location=sheet.check_location(part),
-                worst=text.worst,
-                worst_status=part.status,
-                case=part.worst_case,
-                cases=part.cases.count if part.cases is not None else 0,
-            )
-            check_views[id(part)] = view
-            checks.append(view)
+            view = _check_view(sheet, part, target, check_views)
             if part.shown:
                 parts.append(view)
-            elif parts and parts[-1].kind == "check_table":
-                parts[-1] = dataclasses.replace(parts[-1], entries=(*parts[-1].entries, view))
-            else:
-                parts.append(PartView("check_table", entries=(view,)))
+        elif isinstance(part, CheckList):
+            entries = tuple(_check_view(sheet, c, target, check_views) for c in part.checks)
+            parts.append(PartView("check_table", text=part.caption, entries=entries))
+    checks = [_check_view(sheet, check, target, check_views) for check in sheet.checks]
     inputs, input_notes = _shared_sources(inputs)
     figures = [index for index, view in enumerate(parts) if view.kind == "figure"]
     for index in figures[:-1]:  # the last stays in the flow: nothing floats past the end
@@ -310,6 +291,31 @@ def _shared_sources(
         for item in inputs
     ]
     return noted, tuple((mark, source) for source, mark in marks.items())
+
+
+def _check_view(sheet: Sheet, part: Check, target: str, made: dict[int, PartView]) -> PartView:
+    """A check printed for ``target`` (once: ``made`` keeps the views by check)."""
+    if id(part) in made:
+        return made[id(part)]
+    text = sheet.check_text(part, target)
+    written_passes = part.utilization is not None and part.utilization <= 1.0
+    plain = sheet.check_text(part, "plain")
+    made[id(part)] = view = PartView(
+        "check",
+        beside=_set_width(f"{plain.symbolic}    {plain.numeric}") <= BESIDE_EQUATION,
+        text=part.description,
+        symbolic=text.symbolic,
+        numeric=text.numeric,
+        utilization=text.utilization,
+        status="OK" if written_passes else "NOT OK",
+        reference=part.reference,
+        location=sheet.check_location(part),
+        worst=text.worst,
+        worst_status=part.status,
+        case=part.worst_case,
+        cases=part.cases.count if part.cases is not None else 0,
+    )
+    return view
 
 
 def issue_date(sheet: Sheet, today: datetime.date | None = None) -> datetime.date:
