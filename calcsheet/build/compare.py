@@ -11,6 +11,7 @@ unless the caller asks for different members on purpose.
 
 from __future__ import annotations
 
+import dataclasses
 import math
 import re
 from dataclasses import dataclass
@@ -18,7 +19,7 @@ from typing import Any
 
 from calcsheet.build.run import BuildResult
 from calcsheet.build.trace import normalized
-from calcsheet.engine import Sheet, TitleBlock
+from calcsheet.engine import Sheet
 from calcsheet.job import JobError
 
 ABSENT = "(none)"
@@ -145,14 +146,12 @@ def delta_sheet(old: BuildResult, new: BuildResult) -> Sheet:
     new_block = new.sheets[0].sheet.title_block
     sheet = Sheet(
         f"Revision delta: {new.member}, rev. {old_block.revision} to rev. {new_block.revision}",
-        title_block=TitleBlock(
-            project=new_block.project,
-            project_number=new_block.project_number,
+        # The new build's title block, but the subject; not checked yet.
+        title_block=dataclasses.replace(
+            new_block,
             subject=f"Changes from rev. {old_block.revision} to rev. {new_block.revision}",
-            calc_number=new_block.calc_number,
-            prepared_by=new_block.prepared_by,
-            prepared_date=new_block.prepared_date,
-            revision=new_block.revision,
+            checked_by="",
+            checked_date="",
         ),
         units=new.job.sheet.units,
     )

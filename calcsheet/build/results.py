@@ -19,6 +19,7 @@ import pint
 
 from calcsheet import __version__
 from calcsheet.engine import Check, Heading, Sheet, Step
+from calcsheet.engine.marked_text import plain_text
 from calcsheet.units import ureg
 
 # 1: files of calcsheet 0.1.0 (the trace line under "stamp"); 2: "trace", "points",
@@ -223,7 +224,7 @@ def sheet_results(sheet: Sheet) -> dict[str, Any]:
         "inputs": [
             {
                 "name": part.name,
-                "description": part.description,
+                "description": plain_text(part.description),
                 **quantity_data(part.value),
             }
             for part in sheet.inputs
@@ -231,7 +232,7 @@ def sheet_results(sheet: Sheet) -> dict[str, Any]:
         "steps": [
             {
                 "name": part.name,
-                "description": part.description,
+                "description": plain_text(part.description),
                 "reference": part.reference,
                 **quantity_data(part.value),
                 **({"governs_at": sheet.governing_label(part)} if part.candidates else {}),

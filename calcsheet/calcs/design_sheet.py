@@ -23,7 +23,7 @@ from calcsheet.calcs.design import (
     lightest_section,
     plan_combinations,
 )
-from calcsheet.engine import Check, Sheet
+from calcsheet.engine import Check, CheckList, Heading, Input, Prose, Sheet, Step
 from calcsheet.figures.chart import sweep_chart
 from calcsheet.mechanics.deflection import CHECK_KEY as DEFLECTION_KEY
 from calcsheet.mechanics.deflection import CHECK_TITLE as DEFLECTION_TITLE
@@ -36,12 +36,18 @@ CHOSEN_AT_BUILD = (
     "the governing combination was chosen when the sheet was built; build the sheet again "
     "after changing the loads"
 )
-# Table headers as engineers write them (plain text: a header is not math).
-_FORCE_COLUMNS = (("N", "force"), ("Vx", "force"), ("Vy", "force"), ("T", "moment"),
-                  ("Mx", "moment"), ("My", "moment"))  # fmt: skip
+# Table headers as the sheet's equations set the symbols ({M_x}: see engine.marked_text).
+_FORCE_COLUMNS = (("{N}", "force"), ("{V_x}", "force"), ("{V_y}", "force"), ("{T}", "moment"),
+                  ("{M_x}", "moment"), ("{M_y}", "moment"))  # fmt: skip
 
+
+# Concise detail writes a limit state out in full when it governs, when its utilization is
+# at least FULL_ABOVE, or when it is within FULL_WITHIN of the governing one.
+FULL_ABOVE = 0.5
+FULL_WITHIN = 0.8
 
 __all__ = [
+    "condense_checks",
     "write_check_cases",
     "write_combinations",
     "write_exploration",
@@ -137,8 +143,8 @@ def _write_check_matrix(sheet: Sheet, plan: CombinationPlan) -> None:
         ["Combination", *(f"({number})" for number in range(1, len(keys) + 1))],
         [*rows, worst],
         caption=(
-            "Utilization of every check under every combination, by the procedure written "
-            "out below for the governing one, computed when the sheet was built. Checks: "
+            "Utilization of each check under each combination (the procedure written out "
+            "below, computed when the sheet was built): "
             + "; ".join(
                 f"({number}) {titles.get(key, key)}" for number, key in enumerate(keys, start=1)
             )
@@ -167,6 +173,79 @@ def write_check_cases(
             combination=combination,
             station=station,
         )
+
+
+def condense_checks(sheet: Sheet, first: int, checks: Sequence[Check]) -> None:
+    """Concise detail for a specification chapter (``sheet.parts[first:]``, its ``checks``).
+
+    The limit states that govern (see :data:`FULL_ABOVE`, :data:`FULL_WITHIN`) stay
+    written out step by step, with every step their values rest on and every step that
+    settled a decision (a classification, which equation applies). Every other check
+    gets one line in a table (demand, capacity, utilization, worst combination, clause),
+    its own steps evaluated by the same procedure without being printed; a subsection
+    left with nothing shown loses its heading and words.
+    """
+    rated = [(check.worst_utilization or 0.0, check) for check in checks]
+    if not rated:
+        return
+    top = max(utilization for utilization, _ in rated)
+    governing = next(check for utilization, check in rated if utilization == top)
+    full = [
+        check
+        for utilization, check in rated
+        if check is governing or utilization >= FULL_ABOVE or utilization >= FULL_WITHIN * top
+    ]
+    rest = [check for check in checks if all(check is not chosen for chosen in full)]
+    if not rest:
+        return
+    chapter = sheet.parts[first:]
+    needed = sheet.rests_on(
+        [*(c.demand for c in full), *(c.capacity for c in full), *sheet.decided]
+    )
+    for part in chapter:
+        if isinstance(part, Step) and part.shown and part.symbol not in needed:
+            part.shown = False
+    for check in rest:
+        check.shown = False
+    kept = _without_empty_subsections(chapter)
+    names = ", ".join(f"{c.description} ({c.worst_utilization or 0.0:.3f})" for c in full)
+    note = Prose(
+        f"Written out in full above: {names}, the limit states with the largest utilization, "
+        f"at least {FULL_ABOVE:g} or within {100 * (1 - FULL_WITHIN):g} % of the largest. "
+        "Each other limit state is evaluated by the same procedure (the steps only it needs "
+        'are not printed; detail "full" prints them) and given one line below.'
+    )
+    last_shown = max(
+        index for index, part in enumerate(kept) if isinstance(part, Check) and part.shown
+    )
+    table = CheckList(
+        rest, "Limit states not written out step by step, each evaluated by the same procedure"
+    )
+    kept[last_shown + 1 : last_shown + 1] = [note, table]
+    sheet.parts[first:] = kept
+
+
+def _without_empty_subsections(parts: list) -> list:
+    """The parts less the heading and words of each subsection whose steps and checks are
+    all hidden, and the heading of a subsection of inputs only (the inputs table lists them)."""
+    kept: list = []
+    section: list = []
+
+    def close() -> None:
+        computed = [p for p in section if isinstance(p, (Step, Check))]
+        if computed and not any(p.shown for p in computed):
+            section[:] = [p for p in section if not isinstance(p, (Heading, Prose))]
+        elif all(isinstance(p, (Heading, Input)) for p in section):
+            section[:] = [p for p in section if isinstance(p, Input)]
+        kept.extend(section)
+        section.clear()
+
+    for part in parts:
+        if isinstance(part, Heading):
+            close()
+        section.append(part)
+    close()
+    return kept
 
 
 def write_exploration(
@@ -228,12 +307,10 @@ def write_exploration(
             ["Section", "Weight", "Utilization", "Governing check", "Result"],
             rows,
             caption=(
-                f"The lightest section of the family passing every {basis.kind} check under "
-                "every combination"
-                + (", and the tip deflection," if basis.deflection_ratio else "")
-                + " and the next lighter ones with why they fail "
-                "(computed when the sheet was built; only this sheet's section is written "
-                "out step by step)"
+                f"The lightest section of the family passing every {basis.kind} check "
+                + ("and the tip deflection " if basis.deflection_ratio else "")
+                + "under every combination, and the next lighter ones with why they fail "
+                "(computed when the sheet was built; only this sheet's section is written out)"
             ),
         )
         if chosen is None:

@@ -37,7 +37,7 @@ if TYPE_CHECKING:
 GENERIC_CHECK_TITLE = "Von Mises stress, largest over the points"
 NOT_A_SPEC_CHECK = (
     "The check below is a generic allowable-stress check of the von Mises stress "
-    "against F_y/Ω. It is NOT a specification check: member stability (buckling, "
+    "against {F_y}/{Omega}. It is NOT a specification check: member stability (buckling, "
     "lateral-torsional buckling), local buckling, connections and fatigue are not covered."
 )
 
@@ -410,7 +410,7 @@ def _en_write(context: CheckContext) -> list[Check]:
     if grade != basis.grade:
         sheet.text(
             f"No EN 10025 grade given: buckling curves are chosen as for {grade} "
-            "(Table 6.2), with f_y as given."
+            "(Table 6.2), with {f_y} as given."
         )
     # EN 1993-1-1 names the strong axis y-y: our M_x is its M_y,Ed, our V_y its V_z,Ed.
     return write_en1993_checks(

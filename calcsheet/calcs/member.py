@@ -32,6 +32,7 @@ from calcsheet.calcs.design import (
     plan_combinations,
 )
 from calcsheet.calcs.design_sheet import (
+    condense_checks,
     write_check_cases,
     write_combinations,
     write_exploration,
@@ -108,15 +109,16 @@ AXIS_TEXT = (
     "Axes: the member runs along z from the fixed support (z = 0) to the free end "
     "(z = L). The cross-section lies in the x-y plane with x horizontal to the right "
     "and y vertical upward, origin at the centroid; x, y, z are right-handed. Load "
-    "offsets e_x, e_y are measured from the centroid."
+    "offsets {e_x}, {e_y} are measured from the centroid."
 )
 SIGN_TEXT = (
     "Signs: internal forces are those on the cut face whose outward normal is +z "
     "(the face of the support-side part), about the centroid of the cut. By "
     "equilibrium of the free part beyond the cut they equal the resultant of the loads "
-    "on it: N = ΣF_z (tension positive), V_x = ΣF_x, V_y = ΣF_y, and the moments of those "
-    "loads about the cut centroid by the right-hand rule, with lever arm a = z − z_s. "
-    "Positive M_x puts the top (+y) fibres in tension; positive M_y puts the left (−x) "
+    "on it: {N} = Σ{F_z} (tension positive), {V_x} = Σ{F_x}, {V_y} = Σ{F_y}, and the moments "
+    "of those loads about the cut centroid by the right-hand rule, with lever arm "
+    "{a} = {z} − {z_s}. Positive {M_x} puts the top (+y) fibres in tension; positive {M_y} "
+    "puts the left (−x) "
     "fibres in tension. Normal stress is positive in tension."
 )
 AXIS_TEXT_SUPPORTED = (
@@ -378,7 +380,7 @@ def member_sheet(
         props = _write_section_properties(sheet, section, model)
         sheet.figure(
             stress_drawing(section, stress),
-            "Normal stress over the section at the station from N, M_x and M_y "
+            "Normal stress over the section at the station from {N}, {M_x} and {M_y} "
             "(tension positive), with the neutral axis.",
         )
         if model.resultant is not None:
@@ -388,6 +390,7 @@ def member_sheet(
             points = _write_point_stresses(sheet, section, model, forces, props, shown)
         _write_point_table(sheet, points, stress)
         governing_points = _write_governing(sheet, points, stress)
+        chapter = len(sheet.parts)
         checks = standard.write(
             CheckContext(
                 sheet, section, basis, forces, governing_points, symbols, (fy_q, length_q), stress
@@ -397,6 +400,8 @@ def member_sheet(
             write_check_cases(sheet, plan, checks, station_q.to(length_unit))
         if scan is not None and analysis is not None:
             _write_station_cases(sheet, scan, analysis, checks, basis, length_unit)
+        if plan is not None and detail == "concise":
+            condense_checks(sheet, chapter, checks)
         if basis.deflection_ratio:
             if analysis is None or (cantilever and not spread):
                 # E as the standard states it, so that the deflection shares the checks' E.
@@ -547,10 +552,12 @@ def _write_basis(sheet: Sheet, section: Section, basis: DesignBasis, layout: _La
         sheet.add_basis(
             "Codes and editions",
             "No specification clause is checked here: the von Mises stress is compared with a "
-            "generic allowable F_y/Ω. Member stability, local buckling, connections and "
+            "generic allowable {F_y}/{Omega}. Member stability, local buckling, connections and "
             "fatigue need a specification check.",
         )
-        sheet.add_basis("Material", "Steel, linear elastic; F_y and Ω as listed in the inputs.")
+        sheet.add_basis(
+            "Material", "Steel, linear elastic; {F_y} and {Omega} as listed in the inputs."
+        )
     if basis.combination_standard:
         sheet.add_basis(
             "Load combinations",
@@ -591,7 +598,7 @@ def _write_basis(sheet: Sheet, section: Section, basis: DesignBasis, layout: _La
         held,
         *extra,
         "Plane sections remain plane; normal stress by the (unsymmetric) bending formula.",
-        "Transverse shear V·Q/(I·b) as the average over each cut through a point.",
+        "Transverse shear {V}·{Q}/({I}·{b}) as the average over each cut through a point.",
         "St Venant torsion only: warping normal and shear stresses are not included.",
         f"Section {section.name}: properties as sourced beside each value.",
     )
@@ -708,8 +715,8 @@ def _write_point_load(
     if load.direction is not None:
         direction = load.direction
         sheet.text(
-            f"The force points at angle θ_{suffix} from the {direction.from_axis} axis toward "
-            f"the {direction.toward_axis} axis: cos θ along {direction.from_axis}, sin θ "
+            f"The force points at angle {{theta_{suffix}}} from the {direction.from_axis} axis "
+            f"toward the {direction.toward_axis} axis: cos θ along {direction.from_axis}, sin θ "
             f"along {direction.toward_axis}."
         )
         magnitude = sheet.input(f"P_{suffix}", load.magnitude, f"Magnitude of {load.name}")
@@ -901,12 +908,12 @@ def _write_internal_forces(
             f"cut as resultants at their lever arms): {included or 'none'}."
         )
     descriptions = {
-        "N": ("Axial force N = ΣF_z (tension positive)", "force"),
-        "V_x": ("Shear along x, V_x = ΣF_x", "force"),
-        "V_y": ("Shear along y, V_y = ΣF_y", "force"),
-        "T": ("Torque T = Σ(e_x·F_y − e_y·F_x) + ΣC_z", "moment"),
-        "M_x": ("Moment about x, M_x = Σ(e_y·F_z − a·F_y) + ΣC_x", "moment"),
-        "M_y": ("Moment about y, M_y = Σ(a·F_x − e_x·F_z) + ΣC_y", "moment"),
+        "N": ("Axial force {N} = Σ{F_z} (tension positive)", "force"),
+        "V_x": ("Shear along x, {V_x} = Σ{F_x}", "force"),
+        "V_y": ("Shear along y, {V_y} = Σ{F_y}", "force"),
+        "T": ("Torque {T} = Σ({e_x}·{F_y} − {e_y}·{F_x}) + Σ{C_z}", "moment"),
+        "M_x": ("Moment about x, {M_x} = Σ({e_y}·{F_z} − {a}·{F_y}) + Σ{C_x}", "moment"),
+        "M_y": ("Moment about y, {M_y} = Σ({a}·{F_x} − {e_x}·{F_z}) + Σ{C_y}", "moment"),
     }
     forces: dict[str, sp.Symbol] = {}
     zero: dict[str, sp.Symbol] = {}
@@ -1398,15 +1405,19 @@ def _write_section_properties(
             reference=section.sources.get("Ixy", ""),
         )
         props["D"] = sheet.step(
-            "D", product_determinant(props["I_x"], props["I_y"], props["I_xy"]), "Ix·Iy − Ixy²"
+            "D",
+            product_determinant(props["I_x"], props["I_y"], props["I_xy"]),
+            "{I_x}·{I_y} − {I_xy}²",
         )
         sheet.text(
-            "Ixy ≠ 0: bending uses the unsymmetric formula "
-            "σ = [M_x·(I_y·y − I_xy·x) + M_y·(I_xy·y − I_x·x)] / D."
+            "{I_xy} ≠ 0: bending uses the unsymmetric formula {sigma} = [{M_x}·({I_y}·{y} − "
+            "{I_xy}·{x}) + {M_y}·({I_xy}·{y} − {I_x}·{x})] / {D}."
         )
     else:
         props["I_xy"] = props["D"] = None
-        sheet.text("Ixy = 0 (a symmetry axis): σ = N/A + M_x·y/I_x − M_y·x/I_y.")
+        sheet.text(
+            "{I_xy} = 0 (a symmetry axis): {sigma} = {N}/{A} + {M_x}·{y}/{I_x} − {M_y}·{x}/{I_y}."
+        )
     rule = model.torsion
     sheet.text(f"Torsion: {rule.description}. {WARPING_NOTE}")
     unit = section.length_unit
@@ -1456,7 +1467,7 @@ def _write_point_data(sheet: Sheet, section: Section, model: StressModel) -> lis
         f"Section {section.name} to scale, with the stress points numbered as in the tables.",
     )
     sheet.table(
-        ["Point", "Location", "x", "y"],
+        ["Point", "Location", "{x}", "{y}"],
         [[point.number, point.label, point.x, point.y] for point in data],
         caption="Stress points, from the centroid",
         unit=unit,
@@ -1474,15 +1485,24 @@ def _write_point_data(sheet: Sheet, section: Section, model: StressModel) -> lis
             row += [cut.Q_own, Q_other, cut.width] if unsymmetric else [cut.Q_own, cut.width]
         rows.append(row)
     if unsymmetric:
-        columns = ["Point", "Q_x above", "Q_y above", "b", "Q_y right", "Q_x right", "t"]
+        columns = [
+            "Point",
+            "{Q_x} above",
+            "{Q_y} above",
+            "{b}",
+            "{Q_y} right",
+            "{Q_x} right",
+            "{t}",
+        ]
     else:
-        columns = ["Point", "Q_x above", "b", "Q_y right", "t"]
+        columns = ["Point", "{Q_x} above", "{b}", "{Q_y} right", "{t}"]
     sheet.table(
         columns,
         rows,
         caption=(
-            "Cuts through each point: horizontal cut (part above, width b) and vertical cut "
-            f"(part to the right, thickness t); Q in {short}³ (Q_x = ∫y dA, Q_y = ∫x dA), "
+            "Cuts through each point: horizontal cut (part above, width {b}) and vertical cut "
+            f"(part to the right, thickness {{t}}); {{Q}} in {short}³ ({{Q_x}} = ∫y dA, "
+            f"{{Q_y}} = ∫x dA), "
             f"widths in {short}"
         ),
     )
@@ -1534,16 +1554,16 @@ def _write_point_stresses(
 
 
 _TABLE_COLUMNS = (
-    ("sigma_N", "σ from N"),
-    ("sigma_Mx", "σ from Mx"),
-    ("sigma_My", "σ from My"),
-    ("sigma_b", "σ from M_r"),
-    ("sigma", "σ (sum)"),
-    ("tau", "τ"),
-    ("sigma_1", "σ1"),
-    ("sigma_2", "σ2"),
-    ("tau_max", "τmax"),
-    ("sigma_vm", "von Mises"),
+    ("sigma_N", "{sigma} from {N}"),
+    ("sigma_Mx", "{sigma} from {M_x}"),
+    ("sigma_My", "{sigma} from {M_y}"),
+    ("sigma_b", "{sigma} from {M_r}"),
+    ("sigma", "{sigma} (sum)"),
+    ("tau", "{tau}"),
+    ("sigma_1", "{sigma_1}"),
+    ("sigma_2", "{sigma_2}"),
+    ("tau_max", "{tau_max}"),
+    ("sigma_vm", "von Mises {sigma_vm}"),
 )
 
 

@@ -30,10 +30,11 @@ from calcsheet.units import Quantity
 
 ROUND_TEXT = (
     "Round section: every diameter is a principal axis, so bending is taken with the "
-    "resultant moment M_r = √(M_x² + M_y²), largest at the two ends of the diameter "
-    "normal to it: σ = N/A ± M_r·R_o/I. The transverse shear is largest on the neutral "
-    "axis of the resultant shear V_res = √(V_x² + V_y²): τ_V = V_res·Q_0/(I·b_0). Both fibres "
-    "are checked with τ = τ_V + |τ_T| (the largest shear, wherever it acts: conservative)."
+    "resultant moment {M_r} = √({M_x}² + {M_y}²), largest at the two ends of the diameter "
+    "normal to it: {sigma} = {N}/{A} ± {M_r}·{R_o}/{I}. The transverse shear is largest on "
+    "the neutral axis of the resultant shear {V_res} = √({V_x}² + {V_y}²): "
+    "{tau_V} = {V_res}·{Q_0}/({I}·{b_0}). Both fibres are checked with "
+    "{tau} = {tau_V} + |{tau_T}| (the largest shear, wherever it acts: conservative)."
 )
 
 

@@ -10,6 +10,7 @@ from calcsheet.engine.parts import (
     CAUTIONS,
     Check,
     CheckCases,
+    CheckList,
     Figure,
     Heading,
     Input,
@@ -18,6 +19,7 @@ from calcsheet.engine.parts import (
     Step,
     Table,
     TitleBlock,
+    title_block_items,
 )
 from calcsheet.engine.printers import TARGETS, as_written
 from calcsheet.engine.sheet import CheckText, Equation, Sheet
@@ -27,6 +29,7 @@ __all__ = [
     "TARGETS",
     "Check",
     "CheckCases",
+    "CheckList",
     "CheckText",
     "Equation",
     "Figure",
@@ -39,4 +42,5 @@ __all__ = [
     "Table",
     "TitleBlock",
     "as_written",
+    "title_block_items",
 ]

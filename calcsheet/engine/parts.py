@@ -6,7 +6,7 @@ Parts are plain data. The sheet fills in their values; renderers only read them.
 from __future__ import annotations
 
 from collections.abc import Callable
-from dataclasses import dataclass, field
+from dataclasses import dataclass, field, fields
 from typing import TYPE_CHECKING, Any
 
 import pint
@@ -24,19 +24,35 @@ CAUTIONS: tuple[str, ...] = (
 )
 
 
+def _labelled(label: str, default: str = "") -> Any:
+    return field(default=default, metadata={"label": label})
+
+
 @dataclass
 class TitleBlock:
-    """What a reviewer looks for at the top of every page of a calc package."""
+    """What a reviewer looks for at the top of every page of a calc package.
 
-    project: str = ""
-    project_number: str = ""
-    subject: str = ""
-    calc_number: str = ""
-    prepared_by: str = ""
-    prepared_date: str = ""
-    checked_by: str = ""
-    checked_date: str = ""
-    revision: str = "0"
+    The one declaration of the title block's fields, in the order a sheet shows them,
+    each with the label it is shown under: the sheets' title blocks
+    (:func:`title_block_items`), the notebook payload and the job file's
+    ``[title_block]`` (whose keys a test keeps equal to these, less the revision, which
+    the job's revision log gives) follow it.
+    """
+
+    project: str = _labelled("Project")
+    project_number: str = _labelled("Project no.")
+    subject: str = _labelled("Subject")
+    calc_number: str = _labelled("Calc no.")
+    prepared_by: str = _labelled("Prepared by")
+    prepared_date: str = _labelled("Prepared on")
+    checked_by: str = _labelled("Checked by")
+    checked_date: str = _labelled("Checked on")
+    revision: str = _labelled("Revision", "0")
+
+
+def title_block_items(block: TitleBlock) -> list[tuple[str, str]]:
+    """The title block's fields as (label, text) in the order they are declared."""
+    return [(item.metadata["label"], str(getattr(block, item.name))) for item in fields(block)]
 
 
 @dataclass(frozen=True)
@@ -172,7 +188,8 @@ class Check:
     """Demand against capacity: utilization = demand / capacity, pass when it is at most 1.
 
     With :attr:`cases` the check also stands for cases not written out: it passes
-    only when the worst of them passes too.
+    only when the worst of them passes too. ``shown`` False gives it one line in a
+    table of such checks instead of a block of its own (it still counts everywhere).
     """
 
     description: str
@@ -184,6 +201,7 @@ class Check:
     utilization: float | None = None
     sheet: Sheet | None = field(default=None, repr=False)
     cases: CheckCases | None = None
+    shown: bool = True
 
     @property
     def worst_utilization(self) -> float | None:
@@ -229,4 +247,13 @@ class Check:
         return result
 
 
-Part = Heading | Prose | Figure | Table | Input | Step | Check
+@dataclass(eq=False)
+class CheckList:
+    """Checks given one line each in a table instead of a block of their own (their
+    ``shown`` is False; they stay where they were written, for the summary's order)."""
+
+    checks: list[Check]
+    caption: str = ""
+
+
+Part = Heading | Prose | Figure | Table | Input | Step | Check | CheckList

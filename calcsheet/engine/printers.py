@@ -27,6 +27,7 @@ import sympy as sp
 from sympy.printing.printer import Printer
 
 from calcsheet.engine.names import NamePart, SymbolName, parse_symbol_name
+from calcsheet.engine.typst_literal import typst_string
 from calcsheet.errors import DefinitionError
 from calcsheet.units import FormattedNumber
 
@@ -676,8 +677,8 @@ class TypstStepPrinter(_ExpressionPrinter):
         if part.greek:
             return part.text
         if part.upright:
-            return f'upright("{part.text}")'
-        return part.text if len(part.text) == 1 else f'italic("{part.text}")'
+            return f"upright({typst_string(part.text)})"
+        return part.text if len(part.text) == 1 else f"italic({typst_string(part.text)})"
 
     def symbol_name(self, name: SymbolName) -> str:
         base = self._name_part(name.base)
@@ -701,7 +702,7 @@ class TypstStepPrinter(_ExpressionPrinter):
     def _unit(self, unit: tuple[tuple[str, float], ...]) -> str:
         pieces = []
         for index, (symbol, exponent) in enumerate(unit):
-            shown = f'"{_typst_string(symbol)}"'
+            shown = typst_string(symbol)
             power = abs(exponent)
             if power != 1:
                 shown += f"^({_exponent_text(power)})"
@@ -769,7 +770,7 @@ class TypstStepPrinter(_ExpressionPrinter):
         return f" {self.text(f' {word} ')} ".join(pieces)
 
     def text(self, words: str) -> str:
-        return f'"{_typst_string(words)}"'
+        return typst_string(words)
 
     def chain(self, pieces: Sequence[str]) -> str:
         return " = ".join(pieces)
@@ -777,11 +778,6 @@ class TypstStepPrinter(_ExpressionPrinter):
     def stacked(self, pieces: Sequence[str]) -> str:
         rows = [f"{pieces[0]} &= {pieces[1]}", *(f"&= {piece}" for piece in pieces[2:])]
         return " \\\n".join(rows)
-
-
-def _typst_string(text: str) -> str:
-    """Escape text for a Typst string literal: backslash and quote, nothing else is special."""
-    return text.replace("\\", "\\\\").replace('"', '\\"')
 
 
 # --- plain text (terminal, logs, and checking that what is printed is what was computed) -----

@@ -197,6 +197,7 @@ class SheetWriter:
 
     def holds(self, a: Value, op: str, b: Value) -> bool:
         """Whether ``a op b`` holds for the current values (a decision settled now)."""
+        self.sheet.note_decision(a, b)
         return bool(_COMPARE[op](self.value_of(a), self.value_of(b)))
 
     @staticmethod

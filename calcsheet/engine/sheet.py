@@ -17,7 +17,7 @@ symbolic forms.
 from __future__ import annotations
 
 import math
-from collections.abc import Callable, Iterator, Sequence
+from collections.abc import Callable, Iterable, Iterator, Sequence
 from contextlib import ExitStack
 from dataclasses import dataclass
 from functools import lru_cache
@@ -132,6 +132,9 @@ class Sheet:
         # The trace line: what produced this sheet (inputs hash, revision), printed on every
         # page beside the tool version. Not "stamp": that is the engineer's seal.
         self.trace: str = ""
+        # Symbols whose values settled a decision when the calc was written (which
+        # equation applies): a concise sheet keeps the steps that give them.
+        self.decided: set[sp.Symbol] = set()
 
     # -- writing the calc ------------------------------------------------------------
 
@@ -510,6 +513,39 @@ class Sheet:
         if isinstance(check.demand, sp.Symbol) and check.demand.name in self._defined:
             return self.governing_label(check.demand)
         return ""
+
+    def note_decision(self, *values: object) -> None:
+        """Remember the symbols of ``values`` as having settled a decision of the calc."""
+        for value in values:
+            if isinstance(value, sp.Basic):
+                self.decided.update(_ordered_symbols(value))
+
+    def rests_on(self, expressions: Iterable[sp.Basic]) -> set[sp.Symbol]:
+        """Every symbol the current values of ``expressions`` rest on: the symbols they use
+        and, recursively, those of the steps that give them, following only the branch of a
+        piecewise step that applies now (with the conditions tried to reach it)."""
+        found: set[sp.Symbol] = set()
+        pending = [symbol for expr in expressions for symbol in _ordered_symbols(expr)]
+        while pending:
+            symbol = pending.pop()
+            if symbol in found:
+                continue
+            found.add(symbol)
+            part = self._defined.get(symbol.name)
+            if not isinstance(part, Step):
+                continue
+            expr = part.expr
+            used: list[sp.Basic] = [expr]
+            if isinstance(expr, sp.Piecewise):
+                try:
+                    branch = chosen_branch(expr, self._values, step=part.name)
+                except (DimensionError, EvaluationError):
+                    branch = None  # no branch applies now: every branch counts
+                if branch is not None:
+                    used = [expr.args[branch][0]]
+                    used += [condition for _, condition in expr.args[: branch + 1]]
+            pending += [symbol for piece in used for symbol in _ordered_symbols(piece)]
+        return found
 
     def iter_parts(self) -> Iterator[Part]:
         """The parts in order, for renderers."""

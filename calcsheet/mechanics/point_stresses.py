@@ -43,18 +43,20 @@ FORCE_NAMES = ("N", "V_x", "V_y", "T", "M_x", "M_y")
 HORIZONTAL_CUT, VERTICAL_CUT = "zy", "zx"
 
 SHEAR_TEXT = (
-    "Shear: τ_zy is the average over the horizontal cut through the point and τ_zx the "
-    "average over the vertical cut (τ = V·Q/(I·b) in its general unsymmetric form, Q of "
+    "Shear: {tau_zy} is the average over the horizontal cut through the point and {tau_zx} "
+    "the average over the vertical cut ({tau} = {V}·{Q}/({I}·{b}) in its general "
+    "unsymmetric form, {Q} of "
     "the part cut off). On an open section a cut is the stretch of material through the "
     "point and Q is of the part that stretch cuts off; a cut that meets no material at the "
     "point (a free face or toe) carries no shear. At a re-entrant corner the two cuts "
     "cross two different walls and the larger of the two is taken. The torsional shear "
-    "τ_T is added to the transverse shear by magnitude because its direction along the "
+    "{tau_T} is added to the transverse shear by magnitude because its direction along the "
     "wall is not tracked (conservative)."
 )
 COMBINED_TEXT = (
-    "At each point: σ1,2 = σ/2 ± √((σ/2)² + τ²), τ_max = √((σ/2)² + τ²) (shown in the "
-    "summary table) and the von Mises stress σ_vm = √(σ² + 3·τ²) (shown below)."
+    "At each point: {sigma_1}, {sigma_2} = {sigma}/2 ± √(({sigma}/2)² + {tau}²), "
+    "{tau_max} = √(({sigma}/2)² + {tau}²) (shown in the summary table) and the von Mises "
+    "stress {sigma_vm} = √({sigma}² + 3·{tau}²) (shown below)."
 )
 ROUND_FIBRES = (
     ("extreme fibre on the tension side of M_r", 1),
@@ -231,14 +233,14 @@ def _common_torsion(w: Writer, T: Value, section: SectionTerms, stress: str | No
         return w.step(
             "tau_T",
             formulas.torsion_stress_closed(T, section.A_m, section.t),
-            "Torsion, T/(2·A_m·t)",
+            "Torsion, {T}/(2·{A_m}·{t})",
             unit=stress,
         )
     if section.torsion == "open":
         return w.step(
             "tau_T",
             formulas.torsion_stress_open(T, section.t_max, section.J),
-            "Torsion, T·t_max/J",
+            "Torsion, {T}·{t_max}/{J}",
             unit=stress,
         )
     return None
@@ -252,13 +254,13 @@ def _bending_terms(
     sigma_Mx = w.step(
         f"sigma_Mx_{n}",
         formulas.bending_stress_x(forces.M_x, x, y, *inertia),
-        "Term from M_x",
+        "Term from {M_x}",
         unit=stress,
     )
     sigma_My = w.step(
         f"sigma_My_{n}",
         formulas.bending_stress_y(forces.M_y, x, y, *inertia),
-        "Term from M_y",
+        "Term from {M_y}",
         unit=stress,
     )
     return sigma_Mx, sigma_My
@@ -283,7 +285,7 @@ def _shear_term(
     expr = formulas.transverse_shear(
         V_own, V_other, cut.Q_own, cut.Q_other, cut.width, I_own, I_other, section.I_xy, section.D
     )
-    description = f"Transverse shear on the {where} (V·Q/(I·b))"
+    description = f"Transverse shear on the {where} ({{V}}·{{Q}}/({{I}}·{{b}}))"
     return w.step(f"tau_{cut_name}_{n}", expr, description, unit=stress)
 
 

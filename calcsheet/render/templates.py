@@ -2,49 +2,49 @@
 
 from __future__ import annotations
 
-import re
 from functools import lru_cache
 
 import jinja2
+import markupsafe
 
-_CONTROL = re.compile(r"[\x00-\x08\x0b\x0c\x0e-\x1f\x7f]")
-# Typst breaks lines only between words; a longer run gets invisible break points.
-_LONG_RUN = re.compile(r"\S{20}(?=\S)")
-_BREAK_OPPORTUNITY = "\u200b"
+from calcsheet.engine.marked_text import rich_text
+from calcsheet.engine.typst_literal import typst_string
 
 
 def typst_data(value: object) -> str:
     """Data (an SVG drawing) as a Typst string literal, every character kept as it is."""
-    text = str(value).replace("\\", "\\\\").replace('"', '\\"')
-    text = text.replace("\r", "").replace("\n", "\\n")
-    return f'"{text}"'
+    return typst_string(value)
 
 
-def typst_string(value: object) -> str:
-    """User text as a Typst string literal, shown literally with ``#"..."`` in markup.
+def typst_text(value: object) -> str:
+    """User text as a Typst string literal, shown literally with ``#"..."`` in markup;
+    long runs without a space may break (see :func:`typst_string`)."""
+    return typst_string(value, breakable=True)
 
-    Inside a string literal only the backslash and the quote are special, so
-    markup characters (``#``, ``$``, ``*``, ``_``, ``@``, ``<``) stay text and no
-    code can run. Control characters are dropped; newlines are kept as ``\\n``. A run
-    of more than 20 characters without a space gets zero-width break opportunities,
-    so a 2,000-character word wraps instead of running off the page.
-    """
-    text = _CONTROL.sub("", str(value))
-    text = _LONG_RUN.sub(lambda run: run[0] + _BREAK_OPPORTUNITY, text)
-    text = text.replace("\\", "\\\\").replace('"', '\\"').replace("\r", "").replace("\n", "\\n")
-    return f'"{text}"'
+
+def html_rich(value: object) -> markupsafe.Markup:
+    """Words with ``{symbol}`` marks as HTML: words escaped, symbols as inline MathML."""
+    return markupsafe.Markup(rich_text(str(value), "mathml"))
+
+
+def typst_rich(value: object) -> str:
+    """Words with ``{symbol}`` marks as Typst markup: words as string literals (``#"..."``),
+    symbols as inline math. For markup; in code, put it in brackets (``[...]``)."""
+    return rich_text(str(value), "typst", breakable=True)
 
 
 @lru_cache(maxsize=1)
 def html_environment() -> jinja2.Environment:
     """HTML templates with autoescaping: user text can never become markup."""
-    return jinja2.Environment(
+    environment = jinja2.Environment(
         loader=jinja2.PackageLoader("calcsheet.templates", "."),
         autoescape=True,
         undefined=jinja2.StrictUndefined,
         trim_blocks=True,
         lstrip_blocks=True,
     )
+    environment.filters["rich"] = html_rich
+    return environment
 
 
 @lru_cache(maxsize=1)
@@ -57,6 +57,7 @@ def typst_environment() -> jinja2.Environment:
         trim_blocks=True,
         lstrip_blocks=True,
     )
-    environment.filters["text"] = typst_string
+    environment.filters["text"] = typst_text
     environment.filters["data"] = typst_data
+    environment.filters["rich"] = typst_rich
     return environment

@@ -2,7 +2,9 @@
 
 from __future__ import annotations
 
+import dataclasses
 import datetime
+import re
 from dataclasses import dataclass
 from typing import Any
 
@@ -12,6 +14,7 @@ from calcsheet import __version__
 from calcsheet.engine import (
     CAUTIONS,
     Check,
+    CheckList,
     Figure,
     Heading,
     Input,
@@ -20,11 +23,16 @@ from calcsheet.engine import (
     Sheet,
     Step,
     Table,
+    title_block_items,
 )
+from calcsheet.engine.names import GREEK_LETTERS
 
 # Characters of the plain-text chain above which a step is printed one piece per line,
 # so that it fits the width of a letter or A4 page (measured on the demo's PDF).
 LONG_EQUATION = 90
+# Characters of the plain-text chain up to which a PDF sets the equation beside its words
+# (words in the left column, equation in the right), saving a line per step.
+BESIDE_EQUATION = 70
 
 
 @dataclass(frozen=True)
@@ -53,6 +61,11 @@ class PartView:
     columns: tuple[str, ...] = ()
     text_columns: tuple[bool, ...] = ()  # per column: all text (left-aligned) or has values
     cells: tuple[tuple[tuple[bool, str], ...], ...] = ()  # (is math, content) per cell
+    beside: bool = False  # a short step: the PDF sets its equation beside its words
+    floats: bool = False  # a figure the PDF may move to the top or bottom of a page
+    width: float = 0.0  # a figure's printed width in pt (0: as wide as the text)
+    # A table of checks given one line each (``kind`` "check_table"): their views.
+    entries: tuple[PartView, ...] = ()
 
 
 @dataclass(frozen=True)
@@ -61,6 +74,8 @@ class SheetView:
 
     title: str
     title_block: Any
+    # The title block as the sheet shows it, (label, text) in order, the units last.
+    title_items: tuple[tuple[str, str], ...]
     units: str
     parts: list[PartView]
     inputs: list[PartView]
@@ -69,6 +84,8 @@ class SheetView:
     cautions: tuple[str, ...]
     tool_version: str
     revisions: tuple[Revision, ...] = ()
+    # Sources that several inputs share, printed once under the inputs table: (mark, text).
+    input_notes: tuple[tuple[str, str], ...] = ()
     basis: tuple[tuple[str, tuple[str, ...]], ...] = ()
     references: tuple[str, ...] = ()
     trace: str = ""
@@ -83,7 +100,6 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
     """Print every part of ``sheet`` for ``target`` (``mathml`` or ``typst``)."""
     parts: list[PartView] = []
     inputs: list[PartView] = []
-    checks: list[PartView] = []
     check_views: dict[int, PartView] = {}
     for part in sheet.parts:
         if isinstance(part, Heading):
@@ -104,7 +120,8 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
                 for row in part.rows
             )
             text_columns = tuple(
-                all(not row[index][0] for row in cells) for index in range(len(part.columns))
+                all(not row[index][0] and not _is_number(row[index][1]) for row in cells)
+                for index in range(len(part.columns))
             )
             parts.append(
                 PartView(
@@ -116,7 +133,8 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
                 )
             )
         elif isinstance(part, Figure):
-            parts.append(PartView("figure", text=part.caption, svg=sheet.figure_svg(part)))
+            svg = sheet.figure_svg(part)
+            parts.append(PartView("figure", text=part.caption, svg=svg, width=_print_width(svg)))
         elif isinstance(part, Input):
             equation = sheet.equation(part, target)
             view = PartView(
@@ -133,10 +151,12 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
             if not part.shown:
                 continue
             equation = sheet.equation(part, target)
-            long = len(sheet.equation(part, "plain").chain()) > LONG_EQUATION
+            plain = sheet.equation(part, "plain").chain()
+            long = _set_width(plain) > LONG_EQUATION
             parts.append(
                 PartView(
                     "step",
+                    beside=_set_width(plain) <= BESIDE_EQUATION,
                     text=part.description,
                     symbol=equation.symbol,
                     math=equation.stacked() if long else equation.chain(),
@@ -146,33 +166,27 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
                 )
             )
         elif isinstance(part, Check):
-            text = sheet.check_text(part, target)
-            written_passes = part.utilization is not None and part.utilization <= 1.0
-            view = PartView(
-                "check",
-                text=part.description,
-                symbolic=text.symbolic,
-                numeric=text.numeric,
-                utilization=text.utilization,
-                status="OK" if written_passes else "NOT OK",
-                reference=part.reference,
-                location=sheet.check_location(part),
-                worst=text.worst,
-                worst_status=part.status,
-                case=part.worst_case,
-                cases=part.cases.count if part.cases is not None else 0,
-            )
-            check_views[id(part)] = view
-            checks.append(view)
-            parts.append(view)
+            view = _check_view(sheet, part, target, check_views)
+            if part.shown:
+                parts.append(view)
+        elif isinstance(part, CheckList):
+            entries = tuple(_check_view(sheet, c, target, check_views) for c in part.checks)
+            parts.append(PartView("check_table", text=part.caption, entries=entries))
+    checks = [_check_view(sheet, check, target, check_views) for check in sheet.checks]
+    inputs, input_notes = _shared_sources(inputs)
+    figures = [index for index, view in enumerate(parts) if view.kind == "figure"]
+    for index in figures[:-1]:  # the last stays in the flow: nothing floats past the end
+        parts[index] = dataclasses.replace(parts[index], floats=True)
     governing_check = sheet.governing_check()
     governing = check_views.get(id(governing_check)) if governing_check is not None else None
     return SheetView(
         title=sheet.title,
         title_block=sheet.title_block,
+        title_items=(*title_block_items(sheet.title_block), ("Units", sheet.units.name)),
         units=sheet.units.name,
         parts=parts,
         inputs=inputs,
+        input_notes=input_notes,
         checks=checks,
         governing=governing,
         cautions=CAUTIONS,
@@ -186,6 +200,122 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
         description=_description(sheet),
         keywords=_keywords(sheet),
     )
+
+
+_GREEK_NAME = re.compile("|".join(sorted(GREEK_LETTERS, key=len, reverse=True)))
+
+
+def _set_width(plain: str) -> int:
+    """About how many characters wide a plain-text equation is when typeset: a Greek
+    letter's name is one letter, underscores and powers' stars take no room. A stacked
+    equation (several lines) counts as too wide to set beside words."""
+    if "\n" in plain:
+        return 10**6
+    shown = _GREEK_NAME.sub("g", plain).replace("**", "").replace("_", "").replace("sqrt", "√")
+    return len(_fractions_stacked(shown))
+
+
+def _fractions_stacked(text: str) -> str:
+    """``text`` with each ``(numerator)/(denominator)`` of the plain printer replaced by
+    as many characters as the wider of the two: a fraction is set one above the other."""
+    while (middle := text.find(")/(")) >= 0:
+        start = _matching(text, middle, -1)
+        end = _matching(text, middle + 2, +1)
+        if start < 0 or end < 0:
+            break
+        numerator, denominator = text[start + 1 : middle], text[middle + 3 : end]
+        text = text[:start] + "x" * max(len(numerator), len(denominator)) + text[end + 1 :]
+    return text
+
+
+def _matching(text: str, index: int, direction: int) -> int:
+    """The index of the parenthesis matching the one at ``index`` (-1 when none)."""
+    depth = 0
+    while 0 <= index < len(text):
+        depth += {"(": 1, ")": -1}.get(text[index], 0) * direction
+        if depth == 0:
+            return index
+        index += direction
+    return -1
+
+
+_NUMBER = re.compile(r"^[−+-]?(\d[\d,]*\.?\d*|\.\d+|∞|—)$")
+
+
+def _is_number(cell: str) -> bool:
+    """A text cell holding a number already printed (or a dash for none): set as a value."""
+    return bool(_NUMBER.match(cell.strip()))
+
+
+# Figures print at this fraction of their drawn size (SVG px at 96 per inch), which keeps
+# their lettering at about 6.5 pt, and no taller than FIGURE_HEIGHT pt: a page holds a
+# figure and the steps it illustrates.
+FIGURE_SCALE = 0.66
+FIGURE_HEIGHT = 150.0
+_SVG_SIZE = re.compile(r'<svg\b[^>]*?\swidth="([0-9.]+)"[^>]*?\sheight="([0-9.]+)"')
+
+
+def _print_width(svg: str) -> float:
+    """The printed width of an SVG drawing in pt (0 when it gives no size)."""
+    found = _SVG_SIZE.search(svg)
+    if not found:
+        return 0.0
+    width, height = (float(found[index]) * 0.75 for index in (1, 2))  # px to pt
+    scale = min(FIGURE_SCALE, FIGURE_HEIGHT / height) if height > 0 else FIGURE_SCALE
+    return round(width * scale, 1)
+
+
+# A source this long, given for more than one input, is printed once as a note.
+_NOTE_LENGTH = 30
+
+
+def _shared_sources(
+    inputs: list[PartView],
+) -> tuple[list[PartView], tuple[tuple[str, str], ...]]:
+    """The inputs with each long source that several of them share replaced by a note mark
+    ("note a"), and the notes in order of first use."""
+    counts: dict[str, int] = {}
+    for item in inputs:
+        counts[item.reference] = counts.get(item.reference, 0) + 1
+    marks: dict[str, str] = {}
+    for item in inputs:
+        source = item.reference
+        if counts[source] > 1 and len(source) > _NOTE_LENGTH and source not in marks:
+            marks[source] = chr(ord("a") + len(marks)) if len(marks) < 26 else str(len(marks))
+    if not marks:
+        return inputs, ()
+    noted = [
+        dataclasses.replace(item, reference=f"note {marks[item.reference]}")
+        if item.reference in marks
+        else item
+        for item in inputs
+    ]
+    return noted, tuple((mark, source) for source, mark in marks.items())
+
+
+def _check_view(sheet: Sheet, part: Check, target: str, made: dict[int, PartView]) -> PartView:
+    """A check printed for ``target`` (once: ``made`` keeps the views by check)."""
+    if id(part) in made:
+        return made[id(part)]
+    text = sheet.check_text(part, target)
+    written_passes = part.utilization is not None and part.utilization <= 1.0
+    plain = sheet.check_text(part, "plain")
+    made[id(part)] = view = PartView(
+        "check",
+        beside=_set_width(f"{plain.symbolic}    {plain.numeric}") <= BESIDE_EQUATION,
+        text=part.description,
+        symbolic=text.symbolic,
+        numeric=text.numeric,
+        utilization=text.utilization,
+        status="OK" if written_passes else "NOT OK",
+        reference=part.reference,
+        location=sheet.check_location(part),
+        worst=text.worst,
+        worst_status=part.status,
+        case=part.worst_case,
+        cases=part.cases.count if part.cases is not None else 0,
+    )
+    return view
 
 
 def issue_date(sheet: Sheet, today: datetime.date | None = None) -> datetime.date:

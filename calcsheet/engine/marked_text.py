@@ -1,0 +1,82 @@
+"""Symbols in words: ``{M_x}`` in a heading, a paragraph, a caption, a table header or a
+description is the symbol M with subscript x, typeset as the sheet's equations set it.
+
+A calc author writes ``"Term from {M_x}"``; the HTML shows MathML, the PDF Typst math
+and every plain output (JSON, the command line, plain text) ``"Term from M_x"``. Only a
+valid symbol name (see :mod:`calcsheet.engine.names`) between braces is a mark: other
+braces are text. The words between marks are escaped for the target, so a mark can
+never smuggle in markup.
+"""
+
+from __future__ import annotations
+
+import html
+import re
+from functools import lru_cache
+
+from calcsheet.engine.names import GREEK_LETTERS, parse_symbol_name
+from calcsheet.engine.printers import PRINTERS
+from calcsheet.engine.typst_literal import typst_string
+
+_MARK = re.compile(r"\{([A-Za-z][A-Za-z0-9]*(?:_[A-Za-z0-9]+)*)\}")
+
+__all__ = ["marked_pieces", "plain_text", "rich_text"]
+
+
+def marked_pieces(text: str) -> list[tuple[bool, str]]:
+    """``text`` as (is a symbol, content) pieces in order; empty words are left out."""
+    pieces: list[tuple[bool, str]] = []
+    position = 0
+    for found in _MARK.finditer(text):
+        if len(found[1]) > 32:  # longer than any symbol name: text
+            continue
+        if found.start() > position:
+            pieces.append((False, text[position : found.start()]))
+        pieces.append((True, found[1]))
+        position = found.end()
+    if position < len(text):
+        pieces.append((False, text[position:]))
+    return pieces
+
+
+def plain_text(text: str) -> str:
+    """``text`` with each mark replaced by the symbol's name, a Greek letter's name by the
+    letter (``{M_x}`` -> ``M_x``, ``{sigma_vm}`` -> ``σ_vm``)."""
+    return "".join(
+        _plain_symbol(content) if is_symbol else content
+        for is_symbol, content in marked_pieces(str(text))
+    )
+
+
+def _plain_symbol(name: str) -> str:
+    return "_".join(GREEK_LETTERS.get(part, part) for part in name.split("_"))
+
+
+@lru_cache(maxsize=1024)
+def _symbol(name: str, target: str) -> str:
+    return PRINTERS[target]().symbol_name(parse_symbol_name(name))
+
+
+def rich_text(text: str, target: str, *, breakable: bool = False) -> str:
+    """``text`` for ``target``: ``mathml`` gives HTML (words escaped, symbols as inline
+    MathML), ``typst`` gives Typst markup (words as ``#"..."`` literals, symbols as
+    inline math), ``plain`` gives :func:`plain_text`. ``breakable``: long words may
+    wrap in Typst (see :func:`~calcsheet.engine.typst_literal.typst_string`)."""
+    if target == "plain":
+        return plain_text(text)
+    out = []
+    for is_symbol, content in marked_pieces(str(text)):
+        if target == "mathml":
+            out.append(
+                f"<math>{_symbol(content, target)}</math>" if is_symbol else html.escape(content)
+            )
+        elif target == "typst":
+            out.append(
+                f"${_symbol(content, target)}$"
+                if is_symbol
+                else "#" + typst_string(content, breakable=breakable)
+            )
+        else:
+            raise ValueError(f"no rich text for target {target!r}")
+    # An empty text still gives valid markup (an empty string literal in Typst).
+    return "".join(out) if out else ("" if target == "mathml" else '#""')
