@@ -88,7 +88,10 @@ class SpecificationPanel(CheckPanel):
         self.combinations = ChoiceField(
             "combinations", self.combination_options, self.combination_options[0][1]
         )
-        self.K = NumberField("K (effective length)", self.default_K, high=10.0)
+        # Blank: the standard's K for the support case (said on the sheet).
+        self.K = NumberField(
+            "K (effective length)", None, high=10.0, optional=True, placeholder="from the supports"
+        )
         self.deflection = NumberField("deflection L /", 180.0, low=-1e-9, high=10000.0)
         self.extra: dict[str, Field] = {}
 
@@ -106,15 +109,16 @@ class SpecificationPanel(CheckPanel):
 
     def fill(self, spec: CheckSpec) -> None:
         self.combinations.set(spec.combinations)
-        self.K.set(spec.K if spec.K is not None else self.default_K)
+        self.K.set(spec.K)
         self.deflection.set(spec.deflection_limit or 0)
 
     def data(self) -> dict[str, Any]:
-        return {
+        data = {
             "combinations": self.combinations.value,
             "K": self.K.value,
             "deflection_limit": _number_or_none(self.deflection),
         }
+        return {key: value for key, value in data.items() if key != "K" or value is not None}
 
 
 class AiscPanel(SpecificationPanel):
@@ -133,11 +137,16 @@ class AiscPanel(SpecificationPanel):
     def __init__(self) -> None:
         super().__init__()
         self.method = ChoiceField("method", [("LRFD", "LRFD"), ("ASD", "ASD")], "LRFD")
-        self.Cb = NumberField("C_b", 1.0, low=0.999, high=3.0)
+        # Blank: defaulted on the sheet (1.0, or Eq. F1-1 on the moment diagrams of a
+        # member on supports), and labelled so.
+        self.Cb = NumberField(
+            "C_b", None, low=0.999, high=3.0, optional=True, placeholder="defaulted"
+        )
         self.extra = {"check.method": self.method, "check.Cb": self.Cb}
         self.box = self._box(
             "Clause-by-clause member strength; the governing combination is written out. "
-            "K = 2.1 is the recommended design value for a fixed-free member. "
+            "K and C_b left blank are defaulted from the supports (K = 2.1 for a fixed-free "
+            "member, Commentary Table C-A-7.1) and said so on the sheet. "
             "Deflection L/0 leaves the deflection check out."
         )
 
@@ -147,7 +156,10 @@ class AiscPanel(SpecificationPanel):
         self.Cb.set(spec.Cb)
 
     def data(self) -> dict[str, Any]:
-        return {**super().data(), "method": self.method.value, "Cb": self.Cb.value}
+        data = {**super().data(), "method": self.method.value}
+        if self.Cb.value is not None:
+            data["Cb"] = self.Cb.value
+        return data
 
 
 class EurocodePanel(SpecificationPanel):

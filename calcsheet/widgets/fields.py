@@ -247,25 +247,48 @@ class ListQuantityField(QuantityField):
 
 
 class NumberField(Field):
-    """A plain number (a factor of safety), above ``low`` and at most ``high``."""
+    """A plain number (a factor of safety), above ``low`` and at most ``high``.
 
-    def __init__(self, label: str, value: float, *, low: float = 0.0, high: float = 100.0) -> None:
-        super().__init__(label, _text_box(label, f"{value:g}", "", "17em", LABEL_WIDTH))
+    ``optional``: a blank box is no value (None): the sheet defaults it and says from
+    what; ``placeholder`` says so in the empty box.
+    """
+
+    def __init__(
+        self,
+        label: str,
+        value: float | None,
+        *,
+        low: float = 0.0,
+        high: float = 100.0,
+        optional: bool = False,
+        placeholder: str = "",
+    ) -> None:
+        shown = "" if value is None else f"{value:g}"
+        super().__init__(label, _text_box(label, shown, placeholder, "17em", LABEL_WIDTH))
         self.low, self.high = low, high
+        self.optional = optional
 
     @property
-    def value(self) -> float | str:
-        """The number, or the text as typed when it is not one (the job check reports it)."""
+    def value(self) -> float | str | None:
+        """The number, or the text as typed when it is not one (the job check reports it);
+        None for a blank optional box."""
         text = self.widget.value.strip()
+        if not text and self.optional:
+            return None
         try:
             return float(parse_quantity(text, field=self.label, dimension="dimensionless").m)
         except InputError:
             return text
 
     def set(self, value: Any) -> None:
+        if value is None:
+            self.widget.value = ""
+            return
         self.widget.value = f"{value:g}" if isinstance(value, (int, float)) else str(value)
 
     def check(self) -> str | None:
+        if self.optional and not self.widget.value.strip():
+            return None
         try:
             number = parse_quantity(
                 self.widget.value, field=self.label, dimension="dimensionless"
