@@ -41,8 +41,9 @@ _FORCE_COLUMNS = (("{N}", "force"), ("{V_x}", "force"), ("{V_y}", "force"), ("{T
                   ("{M_x}", "moment"), ("{M_y}", "moment"))  # fmt: skip
 
 
-# Concise detail writes a limit state out in full when it governs, when its utilization is
-# at least FULL_ABOVE, or when it is within FULL_WITHIN of the governing one.
+# Concise detail writes a limit state out in full when it governs, or when its utilization
+# is at least FULL_ABOVE; when the governing one is itself at least FULL_ABOVE, also
+# those within FULL_WITHIN of it (a close second matters only near the limit).
 FULL_ABOVE = 0.5
 FULL_WITHIN = 0.8
 
@@ -193,7 +194,9 @@ def condense_checks(sheet: Sheet, first: int, checks: Sequence[Check]) -> None:
     full = [
         check
         for utilization, check in rated
-        if check is governing or utilization >= FULL_ABOVE or utilization >= FULL_WITHIN * top
+        if check is governing
+        or utilization >= FULL_ABOVE
+        or (top >= FULL_ABOVE and utilization >= FULL_WITHIN * top)
     ]
     rest = [check for check in checks if all(check is not chosen for chosen in full)]
     if not rest:
@@ -210,8 +213,9 @@ def condense_checks(sheet: Sheet, first: int, checks: Sequence[Check]) -> None:
     kept = _without_empty_subsections(chapter)
     names = ", ".join(f"{c.description} ({c.worst_utilization or 0.0:.3f})" for c in full)
     note = Prose(
-        f"Written out in full above: {names}, the limit states with the largest utilization, "
-        f"at least {FULL_ABOVE:g} or within {100 * (1 - FULL_WITHIN):g} % of the largest. "
+        f"Written out in full above: {names}: the limit state with the largest utilization, "
+        f"any at {FULL_ABOVE:g} or more and, when the largest is {FULL_ABOVE:g} or more, any "
+        f"within {100 * (1 - FULL_WITHIN):g} % of it. "
         "Each other limit state is evaluated by the same procedure (the steps only it needs "
         'are not printed; detail "full" prints them) and given one line below.'
     )

@@ -46,7 +46,7 @@ from calcsheet.mechanics.supports import Support
 from calcsheet.units import Quantity
 
 DIAGRAM_LENGTH = 440.0  # px for the member length, in every panel
-PANEL_HEIGHT = 64.0  # px from the smallest to the largest value of a panel
+PANEL_HEIGHT = 44.0  # px from the smallest to the largest value of a panel
 LABEL_ROOM = SMALL_FONT_SIZE + 12  # px above and below a panel for its peak labels
 PANEL_GAP = 10.0  # px between one panel's label room and the next one's
 STRIP_HEIGHT = 44.0  # px for the member strip on top (supports, load stations)

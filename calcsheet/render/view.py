@@ -252,6 +252,9 @@ def _is_number(cell: str) -> bool:
 # figure and the steps it illustrates.
 FIGURE_SCALE = 0.66
 FIGURE_HEIGHT = 150.0
+# A tall drawing (the internal-force diagrams) is set no smaller than this, so that its
+# lettering stays readable (about 5 pt); it then takes more than FIGURE_HEIGHT.
+MIN_FIGURE_SCALE = 0.5
 _SVG_SIZE = re.compile(r'<svg\b[^>]*?\swidth="([0-9.]+)"[^>]*?\sheight="([0-9.]+)"')
 
 
@@ -261,7 +264,9 @@ def _print_width(svg: str) -> float:
     if not found:
         return 0.0
     width, height = (float(found[index]) * 0.75 for index in (1, 2))  # px to pt
-    scale = min(FIGURE_SCALE, FIGURE_HEIGHT / height) if height > 0 else FIGURE_SCALE
+    scale = FIGURE_SCALE
+    if height > 0:
+        scale = min(FIGURE_SCALE, max(FIGURE_HEIGHT / height, MIN_FIGURE_SCALE))
     return round(width * scale, 1)
 
 
