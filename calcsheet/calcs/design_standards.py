@@ -389,6 +389,7 @@ def _en_search(family, forces, basis, Fy, length) -> tuple[list[str], dict[str, 
         length=length,
         k_eff=basis.effective_length_factor,
         gamma=_en_gamma(basis),
+        stability=_en_stability(basis),
     )
     checks = en1993_checks_prepared(member, _en_demands(forces), given, refused)
     return list(table.names), checks

@@ -87,6 +87,22 @@ def test_the_search_picks_the_section_a_loop_over_built_sections_picks(family, l
     assert chosen.weight.units == Quantity(1, "kg/m").units
 
 
+@pytest.mark.parametrize("height", ["top flange", "bottom flange"])
+def test_the_search_reads_each_sections_own_ltb_curve_and_load_height(height) -> None:
+    # IPE sections run from h/b ≤ 2 to h/b > 2 (EN 1993-1-1 Table 6.5: curve b, then c),
+    # and z_g = ±h/2 follows each depth: the search must not take the first section's.
+    basis = DesignBasis("EN 1993-1-1", grade="S355", lightest_in="IPE", load_height=height)
+    plan = plan_combinations(catalog_section("IPE 300"), LOADS, TYPES, LENGTH, STATION, basis, FY)
+    _, worst = _brute_force(basis, plan)
+    names, checks = basis.standard.search("IPE", plan.forces, basis, FY, LENGTH)
+    for index, name in enumerate(names):
+        value, searched = worst[name]["ltb"], float(np.max(checks["ltb"][index]))
+        if math.isinf(value):
+            assert math.isinf(searched), name
+        else:
+            assert searched == pytest.approx(value, rel=1e-3), name
+
+
 def test_an_en_job_sheet_lists_the_lightest_section_in_kg_per_metre() -> None:
     from calcsheet.calcs import member_sheet
 

@@ -44,8 +44,10 @@ from calcsheet.sections.metric import (
     rolled_i_warping,
 )
 from calcsheet.standards.en1993 import buckling as buck
+from calcsheet.standards.en1993 import lateral as lat
 from calcsheet.standards.en1993.factors import NOMINAL_THICKNESS_LIMIT_MM, PartialFactors, Steel
 from calcsheet.standards.en1993.member import MemberData, member_data, si_inputs
+from calcsheet.units import Quantity
 
 I_FAMILIES = ("IPE", "HEA", "HEB", "HEM")
 EN_FAMILIES = tuple(METRIC_FAMILIES)  # IPE, HEA, HEB, HEM, SHS, RHS, CHS
@@ -210,6 +212,7 @@ def family_inputs(
     length: pint.Quantity,
     k_eff: float,
     gamma: PartialFactors,
+    stability: Mapping[str, Any] | None = None,
 ) -> tuple[MemberData, dict[str, Any], np.ndarray]:
     """What the EN procedure needs to run on every section of ``table`` at once.
 
@@ -224,10 +227,30 @@ def family_inputs(
         length=length,
         k_eff=k_eff,
         gamma=gamma,
+        **(stability or {}),
     )
     given: dict[str, Any] = dict(si_inputs(member))
     for name in member.values:
         given[name] = table.values[name][:, np.newaxis]
+    if member.ltb is not None and "h" in table.values:
+        # What 6.3.2 reads of each section's own shape: the curve of Table 6.4/6.5 by
+        # h/b and the load's height z_g by the depth (the first section's would do for
+        # none of the others).
+        height = (stability or {}).get("load_height", "shear centre")
+        rows = zip(table.values["h"], table.values["b"], strict=True)
+        curves, heights = [], []
+        for h, b in rows:
+            depth = Quantity(h, "m")
+            if member.kind == "I":
+                chosen = lat.ltb_curve(
+                    member.ltb.method, member.fabrication, depth, Quantity(b, "m")
+                )
+                curves.append(chosen.alpha)
+            else:
+                curves.append(member.ltb.curve.alpha)
+            heights.append(float(lat.load_height(height, depth)[0].to("m").m))
+        given["alpha_LT"] = np.array(curves)[:, np.newaxis]
+        given["z_g"] = np.array(heights)[:, np.newaxis]
     if member.kind == "I":
         for axis in ("y", "z"):
             given[f"alpha_{axis}"] = np.array(
