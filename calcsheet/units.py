@@ -18,7 +18,21 @@ import pint
 
 from calcsheet.errors import InputError
 
-ureg = pint.UnitRegistry(autoconvert_offset_to_baseunit=True)
+
+def _registry() -> pint.UnitRegistry:
+    """The registry, its parsed definitions cached in the user's cache folder.
+
+    Parsing pint's definitions file costs about half of a cold command; the cache
+    (keyed by the file's content, so a new pint makes a new one) cuts that to a
+    fraction. A folder that cannot be written falls back to parsing every time.
+    """
+    try:
+        return pint.UnitRegistry(autoconvert_offset_to_baseunit=True, cache_folder=":auto:")
+    except Exception:  # a read-only or missing cache folder: parse as before
+        return pint.UnitRegistry(autoconvert_offset_to_baseunit=True)
+
+
+ureg = _registry()
 Quantity = ureg.Quantity
 Unit = ureg.Unit
 
