@@ -1,4 +1,4 @@
-"""EN metric sections: I and H sections of EN 10365 and hot-finished hollow sections of EN 10210-2.
+"""EN metric sections: I and H sections of EN 10365, hollow sections of EN 10210-2 and EN 10219-2.
 
 The dimensions come from the files in ``calcsheet/sections/data`` (vendored from
 the eurocodepy package, MIT licence; ``data/README.md`` says which version and
@@ -9,13 +9,20 @@ files); every property is computed here from them:
   include them, as the product tables do.
 * SHS, RHS, CHS (EN 10210-2:2006, hot-finished): the source's corner radius is
   1.5 t on every row, the hot-finished rule of EN 10210-2 for calculating
-  properties (outside corner radius r_o = 1.5 t, inside r_i = 1.0 t). The rule of
-  EN 10219-2 for cold-formed sections is :func:`corner_radii` with
-  ``forming="cold-formed"``; the catalog has no cold-formed family yet.
+  properties (outside corner radius r_o = 1.5 t, inside r_i = 1.0 t).
+* SHS_CF, RHS_CF, CHS_CF (EN 10219-2:2006, cold-formed): the vendored data has
+  no cold-formed list, so each hot-finished row has a cold-formed twin with the
+  same sizes, " CF" after its designation ("SHS 100x100x5 CF"), the corner radii
+  of EN 10219-2 (:func:`corner_radii` with ``forming="cold-formed"``: r_o = 2t,
+  2.5t or 3t by the wall, r_i = r_o − t) and its mass from the area so computed
+  at 7850 kg/m³. The EN 1993-1-1 checks read the family's standard: curve c of
+  Table 6.2 for EN 10219, curve a for EN 10210.
 
 Designations are spelled as the product standards write them ("IPE 300",
-"HE 200 B", "SHS 100x100x5", "RHS 200x100x6.3", "CHS 168.3x8") and looked up
-forgivingly by :mod:`calcsheet.sections.catalog`: case and spaces do not matter,
+"HE 200 B", "SHS 100x100x5", "RHS 200x100x6.3", "CHS 168.3x8", "SHS 100x100x5 CF")
+and looked up forgivingly by :mod:`calcsheet.sections.catalog`: case and spaces do
+not matter, "SHS 100x100x5 CF", "SHS-CF 100x100x5" and "shs cf 100x100x5" are one
+shape (without CF, the hot-finished one),
 "HEB 200", "HEB200" and "HE200B" are the same shape, "x" or "×" separate the
 sizes, and a decimal may be written with a point or a comma ("6,3").
 
