@@ -282,8 +282,10 @@ class ExplorePanel:
                 self.sweep_step.box,
                 self.lightest_in.box,
                 widgets.HTML(
-                    f'<span style="{NOTE_STYLE}">The lightest-section search needs the '
-                    "AISC 360-22 check.</span>"
+                    f'<span style="{NOTE_STYLE}">The lightest-section search needs a '
+                    "specification check: AISC 360-22 (any family) or EN 1993-1-1 (the EN "
+                    "families: IPE, HEA, HEB, HEM, SHS, RHS, CHS and the cold-formed "
+                    "SHS_CF, RHS_CF, CHS_CF).</span>"
                 ),
             ]
         )

@@ -15,7 +15,7 @@ import numpy as np
 import pint
 
 from calcsheet.errors import InputError
-from calcsheet.sections import Section, find_entry
+from calcsheet.sections import Section, catalog_section, find_entry
 from calcsheet.units import Quantity
 
 # Kind of shape -> section families (catalog keys and user-defined names) it covers.
@@ -286,11 +286,16 @@ def catalog_table(designations: Sequence[str]) -> SectionTable:
     """A :class:`SectionTable` straight from the shape tables (fast: no outlines are built).
 
     Same values as ``section_table([catalog_section(d) for d in designations])``:
-    the catalog sections take these properties from the tables too.
+    the catalog sections take these properties from the tables too. EN sections
+    (dimensions only) are built and read that way.
     """
     entries = [find_entry(designation) for designation in designations]
     if not entries:
         raise InputError("designations", designations, "at least one designation")
+    if any(entry.family.metric for entry in entries):
+        # EN sections carry dimensions only: their values come from the built sections,
+        # as section_values gives them to a sheet.
+        return section_table([catalog_section(entry.designation) for entry in entries])
     kinds = {section_kind(entry.family.key) for entry in entries}
     if len(kinds) > 1:
         raise InputError("designations", sorted(kinds), "shapes of one kind")

@@ -83,3 +83,36 @@ def test_an_en_check_on_an_aisc_shape_says_where_the_root_radius_came_from() -> 
 
     member = member_data(catalog_section("W10X33"), length="2 m")
     assert "AISC tables" in member.values["r"][2]
+
+
+def test_the_aisc_lightest_search_runs_on_an_en_family() -> None:
+    """The search's table of an EN family holds the values its sheets print."""
+    from calcsheet.standards.aisc360.section_data import catalog_table
+
+    table = catalog_table(["IPE 200", "IPE 300"])
+    assert table.kind == "I"
+    z_x = section_values(catalog_section("IPE 300"))["Z_x"].quantity.to("m**3").m
+    assert table.values["Z_x"][1, 0] == pytest.approx(z_x, rel=1e-12)
+    assert table.values["k_des"][1, 0] == pytest.approx((10.7 + 15.0) / 1000)
+
+
+def test_the_sheet_prints_how_k_des_was_obtained() -> None:
+    from calcsheet.render.html import render_html
+
+    html = render_html(_sheet("IPE 300"))
+    assert "t_f + r" in html and "for their own shapes only" in html
+
+
+def test_the_aisc_lightest_search_picks_an_ipe_that_passes_on_its_own_sheet() -> None:
+    from calcsheet.calcs.design import lightest_section, plan_combinations
+    from calcsheet.units import Quantity
+
+    basis = DesignBasis("AISC 360-22", lightest_in="IPE")
+    length, fy = Quantity(2, "m"), Quantity(355, "MPa")
+    plan = plan_combinations(
+        catalog_section("IPE 300"), LOADS, ["D"], length, Quantity(0, "m"), basis, fy
+    )
+    chosen, lighter = lightest_section(plan, basis, fy, length, LOADS)
+    assert chosen is not None and chosen.name.startswith("IPE")
+    assert all(not candidate.passes for candidate in lighter)
+    assert all(check.worst_utilization <= 1.0 for check in _sheet(chosen.name).checks)
