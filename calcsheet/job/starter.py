@@ -58,6 +58,20 @@ grade = "ASTM A992"          # prefills Fy; or give Fy = "50 ksi" (wins over the
 [check]
 kind = "allowable stress"    # generic von Mises check against Fy / factor of safety
 factor_of_safety = 1.67
+# kind = "AISC 360-22"       # or "EN 1993-1-1": the specification's member checks
+# method = "LRFD"            # AISC: or "ASD"
+# Cb = 1.0                   # AISC: left out, defaulted from the moment diagram (said so)
+# load_height = "top flange" # where the load acts for lateral-torsional buckling:
+#                            # "top flange", "shear centre" (the default), "bottom flange"
+# tip_restraint = "free"     # AISC cantilever tip: "free", "laterally braced",
+#                            # "torsionally restrained"
+# EN 1993-1-1 only:
+# national_annex = "EN recommended values"  # the set of national choices (γM, ψ, 6.10)
+# gamma_M0 = 1.0             # partial factors; left out, the national set's values
+# gamma_M1 = 1.0
+# gamma_M2 = 1.25
+# ltb_method = "6.3.2.3"     # or "6.3.2.2"; left out, 6.3.2.3 for rolled I-sections
+# interaction_method = "B"   # 6.3.3 k factors by Annex B (the default) or "A"
 
 # Point loads: magnitude and an angle from one axis toward another ...
 [[loads]]

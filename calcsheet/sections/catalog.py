@@ -12,7 +12,8 @@ write fractions with underscores (HSS6X6X3_8, L4X4X1_1_4) and decimals the same
 way (W6X8_5, HSS6_625X0_500); :func:`catalog_section` returns the Manual's
 spelling (HSS6X6X3/8, W6X8.5, HSS6.625X0.500) as the section name.
 
-EN sections (IPE, HEA, HEB, HEM of EN 10365; SHS, RHS, CHS of EN 10210-2) are in
+EN sections (IPE, HEA, HEB, HEM of EN 10365; SHS, RHS, CHS of EN 10210-2, and their
+cold-formed twins of EN 10219-2, "SHS 100x100x5 CF") are in
 the same catalog, from the dimension files vendored in ``sections/data`` (see
 :mod:`calcsheet.sections.metric`): "IPE 300", "ipe300", "HE 200 B", "HEB200",
 "HE200B", "SHS 100x100x5", "RHS 200x100x6.3", "CHS 168.3x8". Their properties
@@ -211,7 +212,8 @@ def find_entry(designation: str) -> CatalogEntry:
         "designation",
         designation,
         "a standard AISC or EN designation such as 'W10X33', 'HSS6X6X3/8', 'Pipe4STD', "
-        "'IPE 300', 'HE 200 B', 'SHS 100x100x5' or 'CHS 168.3x8'",
+        "'IPE 300', 'HE 200 B', 'SHS 100x100x5', 'SHS 100x100x5 CF' (cold-formed) or "
+        "'CHS 168.3x8'",
         f"not in the shape tables; {hint}",
     )
 

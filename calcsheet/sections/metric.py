@@ -1,4 +1,4 @@
-"""EN metric sections: I and H sections of EN 10365 and hot-finished hollow sections of EN 10210-2.
+"""EN metric sections: I and H sections of EN 10365, hollow sections of EN 10210-2 and EN 10219-2.
 
 The dimensions come from the files in ``calcsheet/sections/data`` (vendored from
 the eurocodepy package, MIT licence; ``data/README.md`` says which version and
@@ -9,13 +9,20 @@ files); every property is computed here from them:
   include them, as the product tables do.
 * SHS, RHS, CHS (EN 10210-2:2006, hot-finished): the source's corner radius is
   1.5 t on every row, the hot-finished rule of EN 10210-2 for calculating
-  properties (outside corner radius r_o = 1.5 t, inside r_i = 1.0 t). The rule of
-  EN 10219-2 for cold-formed sections is :func:`corner_radii` with
-  ``forming="cold-formed"``; the catalog has no cold-formed family yet.
+  properties (outside corner radius r_o = 1.5 t, inside r_i = 1.0 t).
+* SHS_CF, RHS_CF, CHS_CF (EN 10219-2:2006, cold-formed): the vendored data has
+  no cold-formed list, so each hot-finished row has a cold-formed twin with the
+  same sizes, " CF" after its designation ("SHS 100x100x5 CF"), the corner radii
+  of EN 10219-2 (:func:`corner_radii` with ``forming="cold-formed"``: r_o = 2t,
+  2.5t or 3t by the wall, r_i = r_o − t) and its mass from the area so computed
+  at 7850 kg/m³. The EN 1993-1-1 checks read the family's standard: curve c of
+  Table 6.2 for EN 10219, curve a for EN 10210.
 
 Designations are spelled as the product standards write them ("IPE 300",
-"HE 200 B", "SHS 100x100x5", "RHS 200x100x6.3", "CHS 168.3x8") and looked up
-forgivingly by :mod:`calcsheet.sections.catalog`: case and spaces do not matter,
+"HE 200 B", "SHS 100x100x5", "RHS 200x100x6.3", "CHS 168.3x8", "SHS 100x100x5 CF")
+and looked up forgivingly by :mod:`calcsheet.sections.catalog`: case and spaces do
+not matter, "SHS 100x100x5 CF", "SHS-CF 100x100x5" and "shs cf 100x100x5" are one
+shape (without CF, the hot-finished one),
 "HEB 200", "HEB200" and "HE200B" are the same shape, "x" or "×" separate the
 sizes, and a decimal may be written with a point or a comma ("6,3").
 
@@ -53,6 +60,8 @@ class MetricFamily:
     title: str
     standard: str
     file: str
+    forming: str = ""  # "hot-finished" or "cold-formed" for a hollow section; "" for I and H
+    shape: str = "I"  # "I", "RHS" (square or rectangular hollow) or "CHS"
 
 
 METRIC_FAMILIES: dict[str, MetricFamily] = {
@@ -67,24 +76,68 @@ METRIC_FAMILIES: dict[str, MetricFamily] = {
             "square hollow sections (hot-finished)",
             "EN 10210-2:2006",
             "en10210_rhs_shs.csv",
+            "hot-finished",
+            "RHS",
         ),
         MetricFamily(
             "RHS",
             "rectangular hollow sections (hot-finished)",
             "EN 10210-2:2006",
             "en10210_rhs_shs.csv",
+            "hot-finished",
+            "RHS",
         ),
         MetricFamily(
-            "CHS", "circular hollow sections (hot-finished)", "EN 10210-2:2006", "en10210_chs.csv"
+            "CHS",
+            "circular hollow sections (hot-finished)",
+            "EN 10210-2:2006",
+            "en10210_chs.csv",
+            "hot-finished",
+            "CHS",
+        ),
+        MetricFamily(
+            "SHS_CF",
+            "square hollow sections (cold-formed)",
+            "EN 10219-2:2006",
+            "en10210_rhs_shs.csv",
+            "cold-formed",
+            "RHS",
+        ),
+        MetricFamily(
+            "RHS_CF",
+            "rectangular hollow sections (cold-formed)",
+            "EN 10219-2:2006",
+            "en10210_rhs_shs.csv",
+            "cold-formed",
+            "RHS",
+        ),
+        MetricFamily(
+            "CHS_CF",
+            "circular hollow sections (cold-formed)",
+            "EN 10219-2:2006",
+            "en10210_chs.csv",
+            "cold-formed",
+            "CHS",
         ),
     )
 }
+# The cold-formed family (EN 10219-2) of each hot-finished one (EN 10210-2). The vendored
+# data has no cold-formed list: a cold-formed section is the hot-finished row's
+# designation with " CF" after it, the same H, B (or d) and t, the corner radii of
+# EN 10219-2 and its mass from the area computed with them (see data/README.md).
+COLD_FORMED = {"SHS": "SHS_CF", "RHS": "RHS_CF", "CHS": "CHS_CF"}
+COLD_FORMED_SUFFIX = " CF"
+STEEL_DENSITY_KG_PER_M3 = 7850.0  # EN 10219-2:2006 and EN 10210-2:2006 mass tables (from memory)
 DATA_SOURCE = "data: eurocodepy 2026.1.1, {file}"
 # The Section.family of a hollow section: the family the analysis and the checks already
 # know as a closed tube. With a family of its own, the torsion rule (mechanics/torsion.py)
 # would take an SHS for an open section, τ = T·t/J, about ten times too small for a
 # closed wall (Bredt); the catalog family (SHS, RHS, CHS) stays on the catalog entry.
-SECTION_FAMILY = {"SHS": "HSS_RECT", "RHS": "HSS_RECT", "CHS": "HSS_ROUND"}
+SECTION_FAMILY = {
+    key: {"RHS": "HSS_RECT", "CHS": "HSS_ROUND"}[family.shape]
+    for key, family in METRIC_FAMILIES.items()
+    if family.shape != "I"
+}
 
 
 @dataclass(frozen=True)
@@ -108,7 +161,23 @@ def metric_rows() -> tuple[MetricRow, ...]:
                 family = METRIC_FAMILIES[record.pop("family")]
                 values = {name: float(text) for name, text in record.items()}
                 rows.append(MetricRow(designation, family, values))
+    rows += [cold_formed_row(row) for row in rows if row.family.key in COLD_FORMED]
     return tuple(rows)
+
+
+def cold_formed_row(row: MetricRow) -> MetricRow:
+    """The cold-formed (EN 10219-2) twin of a hot-finished row: same sizes, " CF" after
+    the designation, the mass of the area with EN 10219-2 corners at 7850 kg/m³."""
+    family = METRIC_FAMILIES[COLD_FORMED[row.family.key]]
+    value = row.values
+    if family.shape == "RHS":
+        outer, inner = corner_radii(value["t_mm"], "cold-formed")
+        area = rectangular_hollow_area(value["h_mm"], value["b_mm"], value["t_mm"], outer, inner)
+    else:
+        area = math.pi * value["t_mm"] * (value["d_mm"] - value["t_mm"])
+    mass = round(area * 1e-6 * STEEL_DENSITY_KG_PER_M3, 2)
+    values = {**value, "mass_kg_per_m": mass}
+    return MetricRow(row.designation + COLD_FORMED_SUFFIX, family, values)
 
 
 def lookup_keys(designation: str) -> set[str]:
@@ -123,6 +192,9 @@ def lookup_keys(designation: str) -> set[str]:
     match = re.fullmatch(r"HE(\d+)([ABM])", key)
     if match:
         keys.add(f"HE{match.group(2)}{match.group(1)}")
+    match = re.fullmatch(r"([A-Z]+)(\d.*)CF", key)
+    if match:  # SHS 100x100x5 CF is also found as "SHS CF 100x100x5", "SHS-CF 100x100x5"
+        keys.add(f"{match.group(1)}CF{match.group(2)}")
     return keys
 
 
@@ -130,9 +202,9 @@ def normalise_metric(text: str) -> str:
     """A typed EN designation in key form: 'rhs 200 x 100 x 6,3' -> 'RHS200X100X6_3'."""
     name = text.strip().upper().replace("×", "X").replace("*", "X")
     name = re.sub(r"(\d),(\d)", r"\1.\2", name)  # a decimal comma
-    name = re.sub(r"\s+", "", name)
-    name = re.sub(r"(\.\d*?)0+(?=X|$)", r"\1", name).replace(".X", "X")  # 5.0 -> 5
-    name = re.sub(r"\.$", "", name)
+    name = re.sub(r"[\s_-]+", "", name)  # "SHS-CF", "SHS_CF": the family key as typed
+    name = re.sub(r"(\.\d*?)0+(?=X|CF$|$)", r"\1", name).replace(".X", "X")  # 5.0 -> 5
+    name = re.sub(r"\.(?=CF$|$)", "", name)
     match = re.fullmatch(r"HE([ABM])(\d+)", name)
     if match:  # HEB200 -> HE200B, one key for both spellings
         name = f"HE{match.group(2)}{match.group(1)}"
@@ -158,6 +230,15 @@ def corner_radii(wall: float, forming: str = "hot-finished") -> tuple[float, flo
     return factor * wall, (factor - 1.0) * wall
 
 
+def rectangular_hollow_area(
+    height: float, width: float, wall: float, outer: float, inner: float
+) -> float:
+    """A of a rectangular hollow section with rounded corners, EN 10210-2:2006 and
+    EN 10219-2:2006 Annex B (typed from memory): A = 2·t·(B + H − 2·t) − (4 − π)·(r_o² − r_i²).
+    """
+    return 2 * wall * (width + height - 2 * wall) - (4 - math.pi) * (outer**2 - inner**2)
+
+
 def rectangular_hollow_torsion(
     height: float, width: float, wall: float, outer: float, inner: float
 ) -> float:
@@ -172,6 +253,12 @@ def rectangular_hollow_torsion(
     enclosed = (width - wall) * (height - wall) - midline_radius**2 * (4 - math.pi)
     k = 2 * enclosed * wall / perimeter
     return wall**3 * perimeter / 3 + 2 * k * enclosed
+
+
+def corner_rule(wall: float, forming: str) -> str:
+    """The corner radii of a hollow section in words: "r_o = 2t, r_i = t" (wall in mm)."""
+    outer, inner = corner_radii(wall, forming)
+    return f"r_o = {outer / wall:g}t, r_i = {'t' if inner == wall else f'{inner / wall:g}t'}"
 
 
 def rolled_i_torsion(depth: float, width: float, web: float, flange: float, root: float) -> float:
@@ -212,7 +299,7 @@ def metric_section(row: MetricRow) -> Section:
     """The section of one row, every property computed from its dimensions (mm)."""
     value, family = row.values, row.family
     source = DATA_SOURCE.format(file=family.file)
-    if family.key in {"IPE", "HEA", "HEB", "HEM"}:
+    if family.shape == "I":
         h, b, tw, tf, r = (value[name] for name in ("h_mm", "b_mm", "tw_mm", "tf_mm", "r_mm"))
         outline = shapes.i_shape(h, b, tw, tf, "mm", root_radius=r)
         outline = replace(
@@ -225,18 +312,19 @@ def metric_section(row: MetricRow) -> Section:
         )
         dimensions = {"d": h, "bf": b, "tw": tw, "tf": tf, "r": r}
         computed = f"computed from {family.standard} dimensions, root fillets included"
-    elif family.key in {"SHS", "RHS"}:
+    elif family.shape == "RHS":
         h, b, t = value["h_mm"], value["b_mm"], value["t_mm"]
-        outer, inner = corner_radii(t, "hot-finished")
+        outer, inner = corner_radii(t, family.forming)
         outline = shapes.rectangular_tube(h, b, t, "mm", outer_radius=outer, inner_radius=inner)
         outline = replace(
             outline,
             torsion_constant=rectangular_hollow_torsion(h, b, t, outer, inner),
-            torsion_note="computed: EN 10210-2:2006 Annex B, I_t = t³·h/3 + 2·K·A_h",
+            torsion_note=f"computed: {family.standard} Annex B, I_t = t³·h/3 + 2·K·A_h",
         )
         dimensions = {"H": h, "B": b, "t": t}
         computed = (
-            f"computed from {family.standard} dimensions, corners r_o = 1.5t, r_i = t (Annex B)"
+            f"computed from {family.standard} dimensions, "
+            f"corners {corner_rule(t, family.forming)} (Annex B)"
         )
     else:
         d, t = value["d_mm"], value["t_mm"]
@@ -261,10 +349,10 @@ def metric_section(row: MetricRow) -> Section:
 
 def tabulated_values(row: MetricRow) -> dict[str, pint.Quantity]:
     """The row as quantities under the section's dimension names (mm), and its mass per metre."""
-    family, value = row.family.key, row.values
-    if family in {"IPE", "HEA", "HEB", "HEM"}:
+    shape, value = row.family.shape, row.values
+    if shape == "I":
         names = {"d": "h_mm", "bf": "b_mm", "tw": "tw_mm", "tf": "tf_mm", "r": "r_mm"}
-    elif family in {"SHS", "RHS"}:
+    elif shape == "RHS":
         names = {"H": "h_mm", "B": "b_mm", "t": "t_mm"}
     else:
         names = {"OD": "d_mm", "t": "t_mm"}

@@ -18,6 +18,7 @@ import ipywidgets as widgets
 
 from calcsheet.job.schema import CheckSpec, ExploreSpec
 from calcsheet.sections import FAMILIES
+from calcsheet.standards.national import NATIONAL_SETS, RECOMMENDED
 from calcsheet.widgets.fields import ChoiceField, Field, NumberField, QuantityField, TextField
 
 NOTE_STYLE = "color:#555;font-size:0.9em"
@@ -71,6 +72,21 @@ class AllowableStressPanel(CheckPanel):
 
     def data(self) -> dict[str, Any]:
         return {"factor_of_safety": self.factor.value}
+
+
+# Where the load acts on the section, for lateral-torsional buckling (AISC cantilevers and
+# EN 1993-1-1 M_cr); "default" leaves the key out, so the standard's default holds.
+LOAD_HEIGHT_OPTIONS: list[tuple[str, str | None]] = [
+    ("default (shear centre)", None),
+    ("top flange", "top flange"),
+    ("shear centre", "shear centre"),
+    ("bottom flange", "bottom flange"),
+]
+
+
+def _given(data: dict[str, Any]) -> dict[str, Any]:
+    """The entries given; a blank (None) leaves the key out of the job file."""
+    return {key: value for key, value in data.items() if value is not None}
 
 
 def _number_or_none(field: NumberField) -> float | str | None:
@@ -142,11 +158,28 @@ class AiscPanel(SpecificationPanel):
         self.Cb = NumberField(
             "C_b", None, low=0.999, high=3.0, optional=True, placeholder="defaulted"
         )
-        self.extra = {"check.method": self.method, "check.Cb": self.Cb}
+        self.load_height = ChoiceField("load height", LOAD_HEIGHT_OPTIONS, None)
+        self.tip_restraint = ChoiceField(
+            "tip restraint",
+            [
+                ("default (free)", None),
+                ("free", "free"),
+                ("laterally braced", "laterally braced"),
+                ("torsionally restrained", "torsionally restrained"),
+            ],
+            None,
+        )
+        self.extra = {
+            "check.method": self.method,
+            "check.Cb": self.Cb,
+            "check.load_height": self.load_height,
+            "check.tip_restraint": self.tip_restraint,
+        }
         self.box = self._box(
             "Clause-by-clause member strength; the governing combination is written out. "
             "K and C_b left blank are defaulted from the supports (K = 2.1 for a fixed-free "
-            "member, Commentary Table C-A-7.1) and said so on the sheet. "
+            "member, Commentary Table C-A-7.1) and said so on the sheet. Load height and tip "
+            "restraint set the unbraced length of a cantilever I-shape. "
             "Deflection L/0 leaves the deflection check out."
         )
 
@@ -154,12 +187,14 @@ class AiscPanel(SpecificationPanel):
         super().fill(spec)
         self.method.set(spec.method)
         self.Cb.set(spec.Cb)
+        self.load_height.set(spec.load_height)
+        self.tip_restraint.set(spec.tip_restraint)
 
     def data(self) -> dict[str, Any]:
-        data = {**super().data(), "method": self.method.value}
-        if self.Cb.value is not None:
-            data["Cb"] = self.Cb.value
-        return data
+        data = {**super().data(), "method": self.method.value, "Cb": self.Cb.value}
+        data["load_height"] = self.load_height.value
+        data["tip_restraint"] = self.tip_restraint.value
+        return _given(data)
 
 
 class EurocodePanel(SpecificationPanel):
@@ -174,22 +209,58 @@ class EurocodePanel(SpecificationPanel):
 
     def __init__(self) -> None:
         super().__init__()
-        self.gamma_M0 = NumberField("γM0", 1.0, low=0.999, high=2.0)
-        self.gamma_M1 = NumberField("γM1", 1.0, low=0.999, high=2.0)
-        self.extra = {"check.gamma_M0": self.gamma_M0, "check.gamma_M1": self.gamma_M1}
+        self.national_annex = ChoiceField(
+            "national choices", [(name, name) for name in NATIONAL_SETS], RECOMMENDED
+        )
+        # Blank: the national set's value (the sheet's design basis lists it).
+        self.gammas = {
+            name: NumberField(
+                label, None, low=0.799, high=2.0, optional=True, placeholder="the set's value"
+            )
+            for name, label in (("gamma_M0", "γM0"), ("gamma_M1", "γM1"), ("gamma_M2", "γM2"))
+        }
+        self.ltb_method = ChoiceField(
+            "LTB (6.3.2)",
+            [
+                ("by the section (6.3.2.3 rolled, else 6.3.2.2)", None),
+                ("6.3.2.2 general case", "6.3.2.2"),
+                ("6.3.2.3 rolled or equivalent welded", "6.3.2.3"),
+            ],
+            None,
+        )
+        self.interaction_method = ChoiceField(
+            "interaction (6.3.3)", [("Annex B k factors", "B"), ("Annex A k factors", "A")], "B"
+        )
+        self.load_height = ChoiceField("load height", LOAD_HEIGHT_OPTIONS, None)
+        self.extra = {
+            "check.national_annex": self.national_annex,
+            **{f"check.{name}": field for name, field in self.gammas.items()},
+            "check.ltb_method": self.ltb_method,
+            "check.interaction_method": self.interaction_method,
+            "check.load_height": self.load_height,
+        }
         self.box = self._box(
-            "Cross-section resistances and flexural buckling; recommended partial factors "
-            "(a National Annex may change them). Load types G, Q, S, W."
+            "Cross-section resistances, flexural and lateral-torsional buckling and member "
+            "interaction. Partial factors left blank take the national set's values (the "
+            "recommended ones unless a set is chosen). Load types G, Q, S, W."
         )
 
     def fill(self, spec: CheckSpec) -> None:
         super().fill(spec)
-        # None: the national set's value (the form shows the recommended 1.0).
-        self.gamma_M0.set(1.0 if spec.gamma_M0 is None else spec.gamma_M0)
-        self.gamma_M1.set(1.0 if spec.gamma_M1 is None else spec.gamma_M1)
+        self.national_annex.set(spec.national_annex)
+        for name, field in self.gammas.items():
+            field.set(getattr(spec, name))
+        self.ltb_method.set(spec.ltb_method)
+        self.interaction_method.set(spec.interaction_method)
+        self.load_height.set(spec.load_height)
 
     def data(self) -> dict[str, Any]:
-        return {**super().data(), "gamma_M0": self.gamma_M0.value, "gamma_M1": self.gamma_M1.value}
+        data = {**super().data(), "national_annex": self.national_annex.value}
+        data |= {name: field.value for name, field in self.gammas.items()}
+        data["ltb_method"] = self.ltb_method.value
+        data["interaction_method"] = self.interaction_method.value
+        data["load_height"] = self.load_height.value
+        return _given(data)
 
 
 CHECK_PANELS: dict[str, type[CheckPanel]] = {
@@ -211,8 +282,10 @@ class ExplorePanel:
                 self.sweep_step.box,
                 self.lightest_in.box,
                 widgets.HTML(
-                    f'<span style="{NOTE_STYLE}">The lightest-section search needs the '
-                    "AISC 360-22 check.</span>"
+                    f'<span style="{NOTE_STYLE}">The lightest-section search needs a '
+                    "specification check: AISC 360-22 (any family) or EN 1993-1-1 (the EN "
+                    "families: IPE, HEA, HEB, HEM, SHS, RHS, CHS and the cold-formed "
+                    "SHS_CF, RHS_CF, CHS_CF).</span>"
                 ),
             ]
         )

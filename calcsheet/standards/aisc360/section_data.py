@@ -15,19 +15,20 @@ import numpy as np
 import pint
 
 from calcsheet.errors import InputError
-from calcsheet.sections import Section, find_entry
+from calcsheet.sections import Section, catalog_section, find_entry
 from calcsheet.units import Quantity
 
 # Kind of shape -> section families (catalog keys and user-defined names) it covers.
 KINDS: dict[str, tuple[str, ...]] = {
-    "I": ("W", "M", "S", "HP"),
+    "I": ("W", "M", "S", "HP", "IPE", "HEA", "HEB", "HEM"),
     "HSS_RECT": ("HSS_RECT", "rectangular HSS"),
     "HSS_ROUND": ("HSS_ROUND", "PIPE", "round HSS"),
     "L": ("L", "angle"),
 }
 SUPPORTED = (
-    "a rolled I-shape (W, M, S, HP), a rectangular or square HSS, a round HSS or pipe, "
-    "or an equal-leg single angle (L)"
+    "a rolled I-shape (W, M, S, HP; IPE, HEA, HEB, HEM of EN 10365), a rectangular or "
+    "square HSS (or EN SHS, RHS), a round HSS, pipe (or EN CHS), or an equal-leg single "
+    "angle (L)"
 )
 
 
@@ -163,9 +164,20 @@ def section_values(section: Section) -> dict[str, SectionValue]:
 
 def _value(section: Section, kind: str, field: Field) -> SectionValue:
     unit = f"{section.length_unit}**{field.power}"
-    # A catalog shape: every value from the shape table, as catalog_table reads it.
     column = {**_COLUMN, **_COLUMN_BY_KIND.get(kind, {})}[field.name]
-    if column in section.tabulated:
+    standard = _metric_standard(section)
+    if standard:  # an EN section: its dimensions as given, properties computed from them
+        if field.name == "k_des":
+            return _metric_k_des(section, field, unit, standard)
+        if field.name == "t":
+            return SectionValue(
+                field, section.dimensions["t"].to(unit), _metric_wall_note(standard)
+            )
+        if column in section.tabulated and field.name not in _PROPERTY:
+            quantity = section.tabulated[column].to(unit)
+            return SectionValue(field, quantity, f"dimension of the {standard} section")
+    # A catalog shape: every value from the shape table, as catalog_table reads it.
+    elif column in section.tabulated:
         source = _tabulated(section)
         if column == "tdes":
             source += "; design wall thickness (AISC 360-22 Section B4.2)"
@@ -183,11 +195,48 @@ def _value(section: Section, kind: str, field: Field) -> SectionValue:
         return SectionValue(field, section.dimensions["t"].to(unit), "section dimension")
     for name in _DIMENSION.get(field.name, ()):
         if name in section.dimensions:
-            return SectionValue(field, section.dimensions[name].to(unit), "section dimension")
+            source = f"dimension of the {standard} section" if standard else "section dimension"
+            return SectionValue(field, section.dimensions[name].to(unit), source)
     raise InputError(
         f"section {section.name} {field.name}",
         "missing",
         f"{field.description.lower()} for the AISC 360-22 checks",
+    )
+
+
+def _metric_standard(section: Section) -> str:
+    """The EN product standard of a catalog section ("EN 10365:2017"); "" for any other."""
+    if section.tabulated.get("mass") is None:  # only the EN catalog sections carry a mass
+        return ""
+    try:
+        return find_entry(section.name).family.standard
+    except InputError:
+        return ""
+
+
+def _metric_k_des(section: Section, field: Field, unit: str, standard: str) -> SectionValue:
+    """k_des of an EN rolled I or H section: flange thickness plus root radius, k_des = t_f + r.
+
+    The AISC tables give k_des for their own shapes only; for an EN 10365 section
+    the distance from the outer face of the flange to the web toe of the fillet is
+    t_f + r with the root radius r of the product standard, so h = d − 2·k_des
+    (AISC 360-22 Table B4.1b) is the web's straight part between the root fillets,
+    as EN 1993-1-1 Table 5.2 takes c = h − 2·t_f − 2·r.
+    """
+    quantity = (section.dimensions["tf"] + section.dimensions["r"]).to(unit)
+    source = (
+        f"k_des = t_f + r, flange thickness plus root radius of the {standard} section "
+        "(the AISC shape tables give k_des for their own shapes only)"
+    )
+    return SectionValue(field, quantity, source)
+
+
+def _metric_wall_note(standard: str) -> str:
+    """The design wall thickness of an EN hollow section, and why it is not 0.93·t."""
+    return (
+        f"wall thickness t of the {standard} section, taken as the design wall thickness: "
+        "the reduction to 0.93 t of AISC 360-22 Section B4.2 applies to electric-resistance-"
+        "welded HSS made to ASTM A500 and like specifications, not to EN hollow sections"
     )
 
 
@@ -237,11 +286,16 @@ def catalog_table(designations: Sequence[str]) -> SectionTable:
     """A :class:`SectionTable` straight from the shape tables (fast: no outlines are built).
 
     Same values as ``section_table([catalog_section(d) for d in designations])``:
-    the catalog sections take these properties from the tables too.
+    the catalog sections take these properties from the tables too. EN sections
+    (dimensions only) are built and read that way.
     """
     entries = [find_entry(designation) for designation in designations]
     if not entries:
         raise InputError("designations", designations, "at least one designation")
+    if any(entry.family.metric for entry in entries):
+        # EN sections carry dimensions only: their values come from the built sections,
+        # as section_values gives them to a sheet.
+        return section_table([catalog_section(entry.designation) for entry in entries])
     kinds = {section_kind(entry.family.key) for entry in entries}
     if len(kinds) > 1:
         raise InputError("designations", sorted(kinds), "shapes of one kind")

@@ -12,9 +12,10 @@ at once:
   formulas behind the product tables (the fillet's area (1 − π/4)·r², its centroid
   r·(10 − 3π)/(3·(4 − π)) from the faces it joins); for W_pl they give
   t_w·h²/4 + (b − t_w)·(h − t_f)·t_f + (4 − π)/2·r²·(h − 2t_f) + (3π − 10)/3·r³.
-* Square and rectangular hollow sections (EN 10210-2, hot-finished): the outer
-  rectangle with corners rounded to r_o = 1.5t less the inner one rounded to
-  r_i = t, EN 10210-2:2006 Annex B (the rule the catalog's sections use).
+* Square and rectangular hollow sections: the outer rectangle with corners rounded
+  to r_o less the inner one rounded to r_i; hot-finished (EN 10210-2:2006 Annex B)
+  r_o = 1.5t, r_i = t, cold-formed (EN 10219-2:2006 Annex B) r_o = 2t, 2.5t or 3t
+  by the wall and r_i = r_o − t (the rule the catalog's sections use).
 * Circular hollow sections: the annulus.
 
 The built section integrates a polygon that follows the arcs, so its values differ
@@ -50,7 +51,7 @@ from calcsheet.standards.en1993.member import MemberData, member_data, si_inputs
 from calcsheet.units import Quantity
 
 I_FAMILIES = ("IPE", "HEA", "HEB", "HEM")
-EN_FAMILIES = tuple(METRIC_FAMILIES)  # IPE, HEA, HEB, HEM, SHS, RHS, CHS
+EN_FAMILIES = tuple(METRIC_FAMILIES)  # IPE, HEA, HEB, HEM, SHS, RHS, CHS, SHS_CF, RHS_CF, CHS_CF
 MM = 1e-3  # metres per millimetre
 
 # The fillet shape (square r × r less a quarter circle of radius r) per unit r:
@@ -118,11 +119,20 @@ def _rounded_rectangle(H, B, R) -> tuple[np.ndarray, ...]:
     return area, I_1, I_2, W_1, W_2
 
 
-def hollow_rectangle_values(h, b, t) -> dict[str, np.ndarray]:
-    """A, I, W_el, W_pl and i of hot-finished SHS or RHS (EN 10210-2 Annex B corners)."""
-    outer_r, inner_r = corner_radii(1.0, "hot-finished")
-    outer = _rounded_rectangle(h, b, outer_r * t)
-    inner = _rounded_rectangle(h - 2 * t, b - 2 * t, inner_r * t)
+def hollow_corner_radii(t, forming: str = "hot-finished") -> tuple[np.ndarray, np.ndarray]:
+    """Outside and inside corner radii of hollow sections of walls ``t`` (mm), by
+    :func:`~calcsheet.sections.metric.corner_radii` (EN 10210-2 or EN 10219-2 Annex B)."""
+    pairs = [corner_radii(float(wall), forming) for wall in np.atleast_1d(t)]
+    outer, inner = (np.array(column).reshape(np.shape(t)) for column in zip(*pairs, strict=True))
+    return outer, inner
+
+
+def hollow_rectangle_values(h, b, t, forming: str = "hot-finished") -> dict[str, np.ndarray]:
+    """A, I, W_el, W_pl and i of SHS or RHS, the corners of EN 10210-2 Annex B
+    (hot-finished) or EN 10219-2 Annex B (cold-formed); dimensions in mm."""
+    outer_r, inner_r = hollow_corner_radii(t, forming)
+    outer = _rounded_rectangle(h, b, outer_r)
+    inner = _rounded_rectangle(h - 2 * t, b - 2 * t, inner_r)
     area, I_y, I_z, W_pl_y, W_pl_z = (o - i for o, i in zip(outer, inner, strict=True))
     return _with_derived(area, I_y, I_z, W_pl_y, W_pl_z, h / 2, b / 2)
 
@@ -152,14 +162,16 @@ def _with_derived(area, I_y, I_z, W_pl_y, W_pl_z, c_y, c_z) -> dict[str, np.ndar
 
 @lru_cache(maxsize=16)
 def family_table(family: str) -> FamilyTable:
-    """The table of a metric family (IPE, HEA, HEB, HEM, SHS, RHS, CHS), read once."""
+    """The table of a metric family (IPE, HEA, HEB, HEM, SHS, RHS, CHS, SHS_CF, RHS_CF,
+    CHS_CF), read once."""
     key = str(family).strip().upper()
     if key not in METRIC_FAMILIES:
         raise InputError("family", family, f"an EN family: {', '.join(METRIC_FAMILIES)}")
     names = list_designations(key, lightest_first=True)
     rows = {row.designation: row.values for row in metric_rows() if row.family.key == key}
     column = {name: np.array([rows[n][name] for n in names]) for name in rows[names[0]]}
-    if key in I_FAMILIES:
+    shape, forming = METRIC_FAMILIES[key].shape, METRIC_FAMILIES[key].forming
+    if shape == "I":
         h, b, tw, tf, r = (column[name] for name in ("h_mm", "b_mm", "tw_mm", "tf_mm", "r_mm"))
         values = i_section_values(h, b, tw, tf, r)
         # The torsion and warping constants as the catalog's sections compute them.
@@ -167,11 +179,11 @@ def family_table(family: str) -> FamilyTable:
         values["I_w"] = rolled_i_warping(h, b, tf)
         dims = {"h": h, "b": b, "t_w": tw, "t_f": tf, "r": r}
         thickest = np.maximum(tw, tf)
-    elif key in ("SHS", "RHS"):
+    elif shape == "RHS":
         h, b, t = column["h_mm"], column["b_mm"], column["t_mm"]
-        values = hollow_rectangle_values(h, b, t)
-        outer_r, inner_r = corner_radii(1.0, "hot-finished")
-        values["I_t"] = rectangular_hollow_torsion(h, b, t, outer_r * t, inner_r * t)
+        values = hollow_rectangle_values(h, b, t, forming)
+        outer_r, inner_r = hollow_corner_radii(t, forming)
+        values["I_t"] = rectangular_hollow_torsion(h, b, t, outer_r, inner_r)
         values["I_w"] = np.zeros_like(t)
         dims = {"h": h, "b": b, "t": t}
         thickest = t
