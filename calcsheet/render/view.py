@@ -98,87 +98,17 @@ class SheetView:
 
 def build_view(sheet: Sheet, target: str) -> SheetView:
     """Print every part of ``sheet`` for ``target`` (``mathml`` or ``typst``)."""
-    parts: list[PartView] = []
-    inputs: list[PartView] = []
-    check_views: dict[int, PartView] = {}
+    builder = _ViewBuilder(sheet, target)
     for part in sheet.parts:
-        if isinstance(part, Heading):
-            parts.append(PartView("heading", text=part.text, level=part.level))
-        elif isinstance(part, Prose):
-            parts.append(PartView("prose", text=part.text))
-        elif isinstance(part, Table):
-            caption = part.caption
-            if part.unit is not None:
-                caption += f" (values in {part.unit:~P})"
-            cells = tuple(
-                tuple(
-                    (True, sheet.cell_text(part, cell, target))
-                    if isinstance(cell, sp.Symbol)
-                    else (False, cell)
-                    for cell in row
-                )
-                for row in part.rows
-            )
-            text_columns = tuple(
-                all(not row[index][0] and not _is_number(row[index][1]) for row in cells)
-                for index in range(len(part.columns))
-            )
-            parts.append(
-                PartView(
-                    "table",
-                    text=caption,
-                    columns=part.columns,
-                    cells=cells,
-                    text_columns=text_columns,
-                )
-            )
-        elif isinstance(part, Figure):
-            svg = sheet.figure_svg(part)
-            parts.append(PartView("figure", text=part.caption, svg=svg, width=_print_width(svg)))
-        elif isinstance(part, Input):
-            equation = sheet.equation(part, target)
-            view = PartView(
-                "input",
-                text=part.description,
-                symbol=equation.symbol,
-                value=equation.result,
-                reference=part.reference,
-            )
-            if part.listed:
-                inputs.append(view)
-            parts.append(view)
-        elif isinstance(part, Step):
-            if not part.shown:
-                continue
-            equation = sheet.equation(part, target)
-            plain = sheet.equation(part, "plain").chain()
-            long = _set_width(plain) > LONG_EQUATION
-            parts.append(
-                PartView(
-                    "step",
-                    beside=_set_width(plain) <= BESIDE_EQUATION,
-                    text=part.description,
-                    symbol=equation.symbol,
-                    math=equation.stacked() if long else equation.chain(),
-                    value=equation.result,
-                    reference=part.reference,
-                    location=sheet.governing_label(part),
-                )
-            )
-        elif isinstance(part, Check):
-            view = _check_view(sheet, part, target, check_views)
-            if part.shown:
-                parts.append(view)
-        elif isinstance(part, CheckList):
-            entries = tuple(_check_view(sheet, c, target, check_views) for c in part.checks)
-            parts.append(PartView("check_table", text=part.caption, entries=entries))
-    checks = [_check_view(sheet, check, target, check_views) for check in sheet.checks]
-    inputs, input_notes = _shared_sources(inputs)
+        builder.visit(part)
+    parts = builder.parts
+    checks = [builder.check_view(check) for check in sheet.checks]
+    inputs, input_notes = _shared_sources(builder.inputs)
     figures = [index for index, view in enumerate(parts) if view.kind == "figure"]
     for index in figures[:-1]:  # the last stays in the flow: nothing floats past the end
         parts[index] = dataclasses.replace(parts[index], floats=True)
     governing_check = sheet.governing_check()
-    governing = check_views.get(id(governing_check)) if governing_check is not None else None
+    governing = builder.check_view(governing_check) if governing_check is not None else None
     return SheetView(
         title=sheet.title,
         title_block=sheet.title_block,
@@ -200,6 +130,110 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
         description=_description(sheet),
         keywords=_keywords(sheet),
     )
+
+
+class _ViewBuilder:
+    """Walks a sheet's parts, one ``visit_<PartType>`` method per part type (as jinja2's
+    ``NodeVisitor`` walks a template's nodes): a new part type is one new method here and
+    one template block. The parts' views go to ``parts`` in order; listed inputs also to
+    ``inputs``."""
+
+    def __init__(self, sheet: Sheet, target: str) -> None:
+        self.sheet = sheet
+        self.target = target
+        self.parts: list[PartView] = []
+        self.inputs: list[PartView] = []
+        self._check_views: dict[int, PartView] = {}
+
+    def visit(self, part: object) -> None:
+        """Add the view of ``part``: the visit method of its type, or of the nearest base
+        class that has one."""
+        for kind in type(part).__mro__:
+            method = getattr(self, f"visit_{kind.__name__}", None)
+            if method is not None:
+                method(part)
+                return
+        raise TypeError(f"no view for a sheet part of type {type(part).__name__}")
+
+    def visit_Heading(self, part: Heading) -> None:
+        self.parts.append(PartView("heading", text=part.text, level=part.level))
+
+    def visit_Prose(self, part: Prose) -> None:
+        self.parts.append(PartView("prose", text=part.text))
+
+    def visit_Table(self, part: Table) -> None:
+        caption = part.caption
+        if part.unit is not None:
+            caption += f" (values in {part.unit:~P})"
+        cells = tuple(
+            tuple(
+                (True, self.sheet.cell_text(part, cell, self.target))
+                if isinstance(cell, sp.Symbol)
+                else (False, cell)
+                for cell in row
+            )
+            for row in part.rows
+        )
+        text_columns = tuple(
+            all(not row[index][0] and not _is_number(row[index][1]) for row in cells)
+            for index in range(len(part.columns))
+        )
+        self.parts.append(
+            PartView(
+                "table", text=caption, columns=part.columns, cells=cells, text_columns=text_columns
+            )
+        )
+
+    def visit_Figure(self, part: Figure) -> None:
+        svg = self.sheet.figure_svg(part)
+        self.parts.append(PartView("figure", text=part.caption, svg=svg, width=_print_width(svg)))
+
+    def visit_Input(self, part: Input) -> None:
+        equation = self.sheet.equation(part, self.target)
+        view = PartView(
+            "input",
+            text=part.description,
+            symbol=equation.symbol,
+            value=equation.result,
+            reference=part.reference,
+        )
+        if part.listed:
+            self.inputs.append(view)
+        self.parts.append(view)
+
+    def visit_Step(self, part: Step) -> None:
+        if not part.shown:
+            return
+        equation = self.sheet.equation(part, self.target)
+        plain = self.sheet.equation(part, "plain").chain()
+        long = _set_width(plain) > LONG_EQUATION
+        self.parts.append(
+            PartView(
+                "step",
+                beside=_set_width(plain) <= BESIDE_EQUATION,
+                text=part.description,
+                symbol=equation.symbol,
+                math=equation.stacked() if long else equation.chain(),
+                value=equation.result,
+                reference=part.reference,
+                location=self.sheet.governing_label(part),
+            )
+        )
+
+    def visit_Check(self, part: Check) -> None:
+        view = self.check_view(part)
+        if part.shown:
+            self.parts.append(view)
+
+    def visit_CheckList(self, part: CheckList) -> None:
+        entries = tuple(self.check_view(check) for check in part.checks)
+        self.parts.append(PartView("check_table", text=part.caption, entries=entries))
+
+    def check_view(self, part: Check) -> PartView:
+        """A check printed for the target, once: the summary reuses the part's view."""
+        if id(part) not in self._check_views:
+            self._check_views[id(part)] = _check_view(self.sheet, part, self.target)
+        return self._check_views[id(part)]
 
 
 _GREEK_NAME = re.compile("|".join(sorted(GREEK_LETTERS, key=len, reverse=True)))
@@ -298,14 +332,12 @@ def _shared_sources(
     return noted, tuple((mark, source) for source, mark in marks.items())
 
 
-def _check_view(sheet: Sheet, part: Check, target: str, made: dict[int, PartView]) -> PartView:
-    """A check printed for ``target`` (once: ``made`` keeps the views by check)."""
-    if id(part) in made:
-        return made[id(part)]
+def _check_view(sheet: Sheet, part: Check, target: str) -> PartView:
+    """A check printed for ``target``."""
     text = sheet.check_text(part, target)
     written_passes = part.utilization is not None and part.utilization <= 1.0
     plain = sheet.check_text(part, "plain")
-    made[id(part)] = view = PartView(
+    return PartView(
         "check",
         beside=_set_width(f"{plain.symbolic}    {plain.numeric}") <= BESIDE_EQUATION,
         text=part.description,
@@ -320,7 +352,6 @@ def _check_view(sheet: Sheet, part: Check, target: str, made: dict[int, PartView
         case=part.worst_case,
         cases=part.cases.count if part.cases is not None else 0,
     )
-    return view
 
 
 def issue_date(sheet: Sheet, today: datetime.date | None = None) -> datetime.date:
