@@ -103,7 +103,7 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
         builder.visit(part)
     parts = builder.parts
     checks = [builder.check_view(check) for check in sheet.checks]
-    inputs, input_notes = _shared_sources(builder.inputs)
+    inputs, input_notes = _shared_sources(_one_row_per_value(builder.inputs, target))
     figures = [index for index, view in enumerate(parts) if view.kind == "figure"]
     for index in figures[:-1]:  # the last stays in the flow: nothing floats past the end
         parts[index] = dataclasses.replace(parts[index], floats=True)
@@ -302,6 +302,57 @@ def _print_width(svg: str) -> float:
     if height > 0:
         scale = min(FIGURE_SCALE, max(FIGURE_HEIGHT / height, MIN_FIGURE_SCALE))
     return round(width * scale, 1)
+
+
+# How the symbols of one inputs-table row are separated, per target.
+_SYMBOL_SEPARATORS = {"mathml": '<mo separator="true">,</mo>', "typst": ", "}
+
+
+def _one_row_per_value(inputs: list[PartView], target: str) -> list[PartView]:
+    """The inputs with those that have the same value from the same source in one row
+    (``A, A_g``: the area and the gross area; ``I_x, I_y`` of a square tube), at the
+    place of the first, so the table lists each value once. Inputs without a source
+    (what the engineer typed) keep a row each."""
+    rows: list[list[PartView]] = []
+    by_value: dict[tuple[str, str], list[PartView]] = {}
+    for item in inputs:
+        key = (item.value, item.reference)
+        if item.reference and key in by_value:
+            by_value[key].append(item)
+            continue
+        row = [item]
+        rows.append(row)
+        if item.reference:
+            by_value[key] = row
+    separator = _SYMBOL_SEPARATORS.get(target, ", ")
+    return [
+        row[0]
+        if len(row) == 1
+        else dataclasses.replace(
+            row[0],
+            symbol=separator.join(item.symbol for item in row),
+            text=_joined_descriptions([item.text for item in row]),
+        )
+        for row in rows
+    ]
+
+
+def _joined_descriptions(texts: list[str]) -> str:
+    """Descriptions of one row joined, their common first words written once: "Elastic
+    section modulus about x / y"; "Area; gross area" when they share none."""
+    if len(set(texts)) == 1:
+        return texts[0]
+    split = [text.split(" ") for text in texts]
+    common = 0
+    while (
+        all(len(words) > common + 1 for words in split)
+        and len({words[common] for words in split}) == 1
+    ):
+        common += 1
+    if common:
+        rest = " / ".join(" ".join(words[common:]) for words in split)
+        return " ".join(split[0][:common]) + " " + rest
+    return "; ".join([texts[0], *(text[:1].lower() + text[1:] for text in texts[1:])])
 
 
 # A source this long, given for more than one input, is printed once as a note.
