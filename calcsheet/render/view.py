@@ -15,6 +15,7 @@ from calcsheet.engine import (
     CAUTIONS,
     Check,
     CheckList,
+    Equation,
     Figure,
     Heading,
     Input,
@@ -33,6 +34,10 @@ LONG_EQUATION = 90
 # Characters of the plain-text chain up to which a PDF sets the equation beside its words
 # (words in the left column, equation in the right), saving a line per step.
 BESIDE_EQUATION = 70
+# Characters of a stacked equation's last line (numbers = result) up to which the result is
+# set on that line: the plain text parenthesises every value, so 105 of its characters take
+# about four fifths of a letter page's text width (measured on the demo's PDF).
+RESULT_BESIDE = 105
 
 
 @dataclass(frozen=True)
@@ -205,7 +210,8 @@ class _ViewBuilder:
         if not part.shown:
             return
         equation = self.sheet.equation(part, self.target)
-        plain = self.sheet.equation(part, "plain").chain()
+        plain_equation = self.sheet.equation(part, "plain")
+        plain = plain_equation.chain()
         long = _set_width(plain) > LONG_EQUATION
         self.parts.append(
             PartView(
@@ -213,7 +219,9 @@ class _ViewBuilder:
                 beside=_set_width(plain) <= BESIDE_EQUATION,
                 text=part.description,
                 symbol=equation.symbol,
-                math=equation.stacked() if long else equation.chain(),
+                math=equation.stacked(_result_fits_beside(plain_equation))
+                if long
+                else equation.chain(),
                 value=equation.result,
                 reference=part.reference,
                 location=self.sheet.governing_label(part),
@@ -234,6 +242,14 @@ class _ViewBuilder:
         if id(part) not in self._check_views:
             self._check_views[id(part)] = _check_view(self.sheet, part, self.target)
         return self._check_views[id(part)]
+
+
+def _result_fits_beside(plain: Equation) -> bool:
+    """Whether a stacked equation's last line, the numbers and the result, fits the page:
+    then the result needs no line of its own."""
+    if plain.substituted is None:
+        return False
+    return _set_width(f"{plain.symbol} = {plain.substituted} = {plain.result}") <= RESULT_BESIDE
 
 
 _GREEK_NAME = re.compile("|".join(sorted(GREEK_LETTERS, key=len, reverse=True)))
