@@ -112,6 +112,8 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
     figures = [index for index, view in enumerate(parts) if view.kind == "figure"]
     for index in figures[:-1]:  # the last stays in the flow: nothing floats past the end
         parts[index] = dataclasses.replace(parts[index], floats=True)
+    if target == "typst":  # pages: a pair of narrow floating figures takes one's height
+        parts = _side_by_side(parts)
     governing_check = sheet.governing_check()
     governing = builder.check_view(governing_check) if governing_check is not None else None
     return SheetView(
@@ -369,6 +371,43 @@ def _joined_descriptions(texts: list[str]) -> str:
         rest = " / ".join(" ".join(words[common:]) for words in split)
         return " ".join(split[0][:common]) + " " + rest
     return "; ".join([texts[0], *(text[:1].lower() + text[1:] for text in texts[1:])])
+
+
+# A floating figure printed at most this wide (pt) is set beside the next one as narrow,
+# each under its own caption: two fit across an A4 or letter page's text (504 pt, 521 pt).
+BESIDE_FIGURE_WIDTH = 240.0
+# ...when at most this many parts lie between them: about a page of text, so neither moves
+# far from the words it illustrates (a float moves to a page's top or bottom anyway).
+BESIDE_FIGURE_DISTANCE = 30
+
+
+def _side_by_side(parts: list[PartView]) -> list[PartView]:
+    """The parts with each pair of narrow floating figures near each other joined into one
+    ``figure_row`` at the place of the first: the pair takes one figure's height."""
+
+    def narrow(view: PartView) -> bool:
+        return view.kind == "figure" and view.floats and 0 < view.width <= BESIDE_FIGURE_WIDTH
+
+    joined: list[PartView] = []
+    moved: set[int] = set()
+    for index, view in enumerate(parts):
+        if index in moved:
+            continue
+        following = next(
+            (later for later in range(index + 1, len(parts)) if parts[later].kind == "figure"),
+            None,
+        )
+        if (
+            narrow(view)
+            and following is not None
+            and following - index - 1 <= BESIDE_FIGURE_DISTANCE
+            and narrow(parts[following])
+        ):
+            joined.append(PartView("figure_row", floats=True, entries=(view, parts[following])))
+            moved.add(following)
+            continue
+        joined.append(view)
+    return joined
 
 
 # A source this long, given for more than one input, is printed once as a note.
