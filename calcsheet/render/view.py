@@ -356,21 +356,27 @@ def _one_row_per_value(inputs: list[PartView], target: str) -> list[PartView]:
 
 
 def _joined_descriptions(texts: list[str]) -> str:
-    """Descriptions of one row joined, their common first words written once: "Elastic
-    section modulus about x / y"; "Area; gross area" when they share none."""
+    """Descriptions of one row joined, the words they share at the start and at the end
+    written once: "Elastic section modulus about x / y"; "Load factor on Q / W in EN 1990
+    Eq. (6.10)"; "Area; gross area" when they share none."""
     if len(set(texts)) == 1:
         return texts[0]
     split = [text.split(" ") for text in texts]
-    common = 0
-    while (
-        all(len(words) > common + 1 for words in split)
-        and len({words[common] for words in split}) == 1
-    ):
-        common += 1
-    if common:
-        rest = " / ".join(" ".join(words[common:]) for words in split)
-        return " ".join(split[0][:common]) + " " + rest
-    return "; ".join([texts[0], *(text[:1].lower() + text[1:] for text in texts[1:])])
+    shortest = min(len(words) for words in split)
+
+    def shared(index: int) -> bool:  # the word at ``index`` (from the end when < 0)
+        return len({words[index] for words in split}) == 1
+
+    start = 0
+    while start < shortest - 1 and shared(start):
+        start += 1
+    end = 0
+    while start + end < shortest - 1 and shared(-1 - end):
+        end += 1
+    if not start and not end:
+        return "; ".join([texts[0], *(text[:1].lower() + text[1:] for text in texts[1:])])
+    middles = " / ".join(" ".join(words[start : len(words) - end]) for words in split)
+    return " ".join([*split[0][:start], middles, *split[0][len(split[0]) - end :]])
 
 
 # A floating figure printed at most this wide (pt) is set beside the next one as narrow,
