@@ -1456,7 +1456,6 @@ def _write_point_data(sheet: Sheet, section: Section, model: StressModel) -> lis
         "within 1 %; on a tube, the points where the centroidal axes meet the walls. "
         "Coordinates and first moments are computed from the section outline."
     )
-    short = f"{ureg.Unit(unit):~P}"
     data = write_point_inputs(sheet, model)
     sheet.figure(
         section_drawing(
@@ -1464,18 +1463,13 @@ def _write_point_data(sheet: Sheet, section: Section, model: StressModel) -> lis
             [(point.number, model.x[i], model.y[i]) for i, point in enumerate(data)],
             unit,
         ),
-        f"Section {section.name} to scale, with the stress points numbered as in the tables.",
+        f"Section {section.name} to scale, with the stress points numbered as in the table.",
     )
-    sheet.table(
-        ["Point", "Location", "{x}", "{y}"],
-        [[point.number, point.label, point.x, point.y] for point in data],
-        caption="Stress points, from the centroid",
-        unit=unit,
-    )
+    # One table of the points and their cuts: a row per point, read across.
     dash = "—"
     rows = []
     for point in data:
-        row: list[str | sp.Symbol] = [point.number]
+        row: list[str | sp.Symbol] = [point.number, point.label, point.x, point.y]
         for name in (HORIZONTAL_CUT, VERTICAL_CUT):
             cut = point.cuts.get(name)
             if cut is None:
@@ -1485,25 +1479,16 @@ def _write_point_data(sheet: Sheet, section: Section, model: StressModel) -> lis
             row += [cut.Q_own, Q_other, cut.width] if unsymmetric else [cut.Q_own, cut.width]
         rows.append(row)
     if unsymmetric:
-        columns = [
-            "Point",
-            "{Q_x} above",
-            "{Q_y} above",
-            "{b}",
-            "{Q_y} right",
-            "{Q_x} right",
-            "{t}",
-        ]
+        cut_columns = ["{Q_x} above", "{Q_y} above", "{b}", "{Q_y} right", "{Q_x} right", "{t}"]
     else:
-        columns = ["Point", "{Q_x} above", "{b}", "{Q_y} right", "{t}"]
+        cut_columns = ["{Q_x} above", "{b}", "{Q_y} right", "{t}"]
     sheet.table(
-        columns,
+        ["Point", "Location", "{x}", "{y}", *cut_columns],
         rows,
         caption=(
-            "Cuts through each point: horizontal cut (part above, width {b}) and vertical cut "
-            f"(part to the right, thickness {{t}}); {{Q}} in {short}³ ({{Q_x}} = ∫y dA, "
-            f"{{Q_y}} = ∫x dA), "
-            f"widths in {short}"
+            "Stress points, from the centroid, and the cuts through each point: horizontal "
+            "cut (part above, width {b}) and vertical cut (part to the right, thickness {t}); "
+            "{Q_x} = ∫y dA, {Q_y} = ∫x dA"
         ),
     )
     return data

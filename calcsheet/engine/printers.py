@@ -20,7 +20,7 @@ import html
 import re
 from collections.abc import Callable, Iterator, Mapping, Sequence
 from contextlib import contextmanager
-from dataclasses import dataclass
+from dataclasses import dataclass, replace
 from itertools import pairwise
 
 import sympy as sp
@@ -245,9 +245,42 @@ class _ExpressionPrinter(Printer):
     def constant(self, letter: str) -> str:
         raise NotImplementedError
 
+    # Plain text writes every operator out, so it parenthesises every substituted value
+    # ("2*(3 in)"); the typeset targets parenthesise a value only where it would misread.
+    parenthesises_every_value = False
+
     def quantity(self, value: Quantityish, grouped: bool, standalone: bool = False) -> str:
-        """A value with its unit; parenthesised when negative or grouped, unless standalone."""
+        """A value with its unit: the one place that decides its sign and parentheses.
+
+        A value standing alone (a result, a table cell) carries its minus sign bare. Inside
+        an expression a negative value is parenthesised, so "a - (-2 in)" never reads as
+        "a - -2 in", and so is a value with a unit that is ``grouped`` (the base of a power:
+        "(3 in)^2", not "3 in^2").
+        """
+        text = self.number_with_unit(value)
+        if standalone:
+            return self.negated_quantity(text) if value.number.negative else text
+        if value.number.negative:
+            return self.grouped_quantity(self.minus_prefix() + text)
+        if (grouped and value.unit) or self.parenthesises_every_value:
+            return self.grouped_quantity(text)
+        return self.lone_quantity(text)
+
+    def number_with_unit(self, value: Quantityish) -> str:
+        """The value's magnitude and unit, without its sign."""
         raise NotImplementedError
+
+    def negated_quantity(self, text: str) -> str:
+        """A negative value standing alone."""
+        return self.minus_prefix() + text
+
+    def grouped_quantity(self, inner: str) -> str:
+        """A value in parentheses inside an expression."""
+        return self.parens(inner)
+
+    def lone_quantity(self, text: str) -> str:
+        """A value inside an expression that needs no parentheses."""
+        return text
 
     def plus_operator(self) -> str:
         raise NotImplementedError
@@ -451,17 +484,11 @@ class LatexStepPrinter(_ExpressionPrinter):
                 pieces.append(("\\cdot " if index else "") + shown)
         return "".join(pieces)
 
-    def quantity(self, value: Quantityish, grouped: bool, standalone: bool = False) -> str:
+    def number_with_unit(self, value: Quantityish) -> str:
         text = self._number(value.number)
         if value.unit:
             unit = self._unit(value.unit)
             text += unit if unit.startswith("{}^") else "\\ " + unit
-        if standalone:
-            return f"-{text}" if value.number.negative else text
-        if value.number.negative:
-            return f"\\left(-{text}\\right)"
-        if grouped and value.unit:
-            return f"\\left({text}\\right)"
         return text
 
     def plus_operator(self) -> str:
@@ -583,17 +610,17 @@ class MathMLStepPrinter(_ExpressionPrinter):
                 pieces.append(("<mo>&#x22C5;</mo>" if index else "") + shown)
         return "".join(pieces)
 
-    def quantity(self, value: Quantityish, grouped: bool, standalone: bool = False) -> str:
+    def number_with_unit(self, value: Quantityish) -> str:
         text = self._number(value.number)
         if value.unit:
             space = "" if value.unit[0][0] == "°" else '<mspace width="0.25em"/>'
             text += space + self._unit(value.unit)
-        if standalone:
-            return f"<mrow><mo>&#x2212;</mo>{text}</mrow>" if value.number.negative else text
-        if value.number.negative:
-            return f"<mrow><mo>(</mo><mo>&#x2212;</mo>{text}<mo>)</mo></mrow>"
-        if grouped and value.unit:
-            return f"<mrow><mo>(</mo>{text}<mo>)</mo></mrow>"
+        return text
+
+    def negated_quantity(self, text: str) -> str:
+        return f"<mrow>{self.minus_prefix()}{text}</mrow>"
+
+    def lone_quantity(self, text: str) -> str:
         return f"<mrow>{text}</mrow>"
 
     def plus_operator(self) -> str:
@@ -712,18 +739,15 @@ class TypstStepPrinter(_ExpressionPrinter):
                 pieces.append((" dot.op " if index else "") + shown)
         return "".join(pieces)
 
-    def quantity(self, value: Quantityish, grouped: bool, standalone: bool = False) -> str:
+    def number_with_unit(self, value: Quantityish) -> str:
         text = self._number(value.number)
         if value.unit:
             space = "" if value.unit[0][0] == "°" else " thin "
             text += space + self._unit(value.unit)
-        if standalone:
-            return f"-{text}" if value.number.negative else text
-        if value.number.negative:
-            return f"(-{text})"
-        if grouped and value.unit:
-            return f"({text})"
         return text
+
+    def grouped_quantity(self, inner: str) -> str:
+        return f"({inner})"  # plain parentheses: a value is never tall enough for lr()
 
     def plus_operator(self) -> str:
         return " + "
@@ -796,8 +820,10 @@ class PlainStepPrinter(_ExpressionPrinter):
     def constant(self, letter: str) -> str:
         return "pi" if letter == "π" else "e"
 
-    def quantity(self, value: Quantityish, grouped: bool, standalone: bool = False) -> str:
-        text = value.number.plain().replace(",", "")
+    parenthesises_every_value = True
+
+    def number_with_unit(self, value: Quantityish) -> str:
+        text = replace(value.number, negative=False).plain().replace(",", "")
         if value.unit:
             unit = (
                 "*".join(
@@ -814,7 +840,7 @@ class PlainStepPrinter(_ExpressionPrinter):
             for symbol, power in below:
                 unit += f"/{symbol}" + (f"**{_exponent_text(power)}" if power != 1 else "")
             text = f"{text} {unit}"
-        return text if standalone else f"({text})"
+        return text
 
     def plus_operator(self) -> str:
         return " + "

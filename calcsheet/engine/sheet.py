@@ -84,11 +84,15 @@ class Equation:
         pieces.append(self.result)
         return self.printer.chain(pieces)
 
-    def stacked(self) -> str:
-        """The same chain one piece per line, equals signs aligned (for long equations)."""
+    def stacked(self, result_beside: bool = False) -> str:
+        """The same chain one piece per line, equals signs aligned (for long equations);
+        ``result_beside`` sets the result on the line of the numbers (``= 1.2 · 3 kip =
+        3.6 kip``), a line shorter, when that line fits."""
         pieces = [self.symbol]
         pieces += [piece for piece in (self.symbolic, self.substituted) if piece is not None]
         pieces.append(self.result)
+        if result_beside and self.substituted is not None:
+            pieces[-2:] = [self.printer.chain(pieces[-2:])]
         if len(pieces) < 3:
             return self.chain()
         return self.printer.stacked(pieces)

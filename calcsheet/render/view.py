@@ -15,6 +15,7 @@ from calcsheet.engine import (
     CAUTIONS,
     Check,
     CheckList,
+    Equation,
     Figure,
     Heading,
     Input,
@@ -33,6 +34,10 @@ LONG_EQUATION = 90
 # Characters of the plain-text chain up to which a PDF sets the equation beside its words
 # (words in the left column, equation in the right), saving a line per step.
 BESIDE_EQUATION = 70
+# Characters of a stacked equation's last line (numbers = result) up to which the result is
+# set on that line: the plain text parenthesises every value, so 105 of its characters take
+# about four fifths of a letter page's text width (measured on the demo's PDF).
+RESULT_BESIDE = 105
 
 
 @dataclass(frozen=True)
@@ -98,87 +103,19 @@ class SheetView:
 
 def build_view(sheet: Sheet, target: str) -> SheetView:
     """Print every part of ``sheet`` for ``target`` (``mathml`` or ``typst``)."""
-    parts: list[PartView] = []
-    inputs: list[PartView] = []
-    check_views: dict[int, PartView] = {}
+    builder = _ViewBuilder(sheet, target)
     for part in sheet.parts:
-        if isinstance(part, Heading):
-            parts.append(PartView("heading", text=part.text, level=part.level))
-        elif isinstance(part, Prose):
-            parts.append(PartView("prose", text=part.text))
-        elif isinstance(part, Table):
-            caption = part.caption
-            if part.unit is not None:
-                caption += f" (values in {part.unit:~P})"
-            cells = tuple(
-                tuple(
-                    (True, sheet.cell_text(part, cell, target))
-                    if isinstance(cell, sp.Symbol)
-                    else (False, cell)
-                    for cell in row
-                )
-                for row in part.rows
-            )
-            text_columns = tuple(
-                all(not row[index][0] and not _is_number(row[index][1]) for row in cells)
-                for index in range(len(part.columns))
-            )
-            parts.append(
-                PartView(
-                    "table",
-                    text=caption,
-                    columns=part.columns,
-                    cells=cells,
-                    text_columns=text_columns,
-                )
-            )
-        elif isinstance(part, Figure):
-            svg = sheet.figure_svg(part)
-            parts.append(PartView("figure", text=part.caption, svg=svg, width=_print_width(svg)))
-        elif isinstance(part, Input):
-            equation = sheet.equation(part, target)
-            view = PartView(
-                "input",
-                text=part.description,
-                symbol=equation.symbol,
-                value=equation.result,
-                reference=part.reference,
-            )
-            if part.listed:
-                inputs.append(view)
-            parts.append(view)
-        elif isinstance(part, Step):
-            if not part.shown:
-                continue
-            equation = sheet.equation(part, target)
-            plain = sheet.equation(part, "plain").chain()
-            long = _set_width(plain) > LONG_EQUATION
-            parts.append(
-                PartView(
-                    "step",
-                    beside=_set_width(plain) <= BESIDE_EQUATION,
-                    text=part.description,
-                    symbol=equation.symbol,
-                    math=equation.stacked() if long else equation.chain(),
-                    value=equation.result,
-                    reference=part.reference,
-                    location=sheet.governing_label(part),
-                )
-            )
-        elif isinstance(part, Check):
-            view = _check_view(sheet, part, target, check_views)
-            if part.shown:
-                parts.append(view)
-        elif isinstance(part, CheckList):
-            entries = tuple(_check_view(sheet, c, target, check_views) for c in part.checks)
-            parts.append(PartView("check_table", text=part.caption, entries=entries))
-    checks = [_check_view(sheet, check, target, check_views) for check in sheet.checks]
-    inputs, input_notes = _shared_sources(inputs)
+        builder.visit(part)
+    parts = builder.parts
+    checks = [builder.check_view(check) for check in sheet.checks]
+    inputs, input_notes = _shared_sources(_one_row_per_value(builder.inputs, target))
     figures = [index for index, view in enumerate(parts) if view.kind == "figure"]
     for index in figures[:-1]:  # the last stays in the flow: nothing floats past the end
         parts[index] = dataclasses.replace(parts[index], floats=True)
+    if target == "typst":  # pages: a pair of narrow floating figures takes one's height
+        parts = _side_by_side(parts)
     governing_check = sheet.governing_check()
-    governing = check_views.get(id(governing_check)) if governing_check is not None else None
+    governing = builder.check_view(governing_check) if governing_check is not None else None
     return SheetView(
         title=sheet.title,
         title_block=sheet.title_block,
@@ -200,6 +137,121 @@ def build_view(sheet: Sheet, target: str) -> SheetView:
         description=_description(sheet),
         keywords=_keywords(sheet),
     )
+
+
+class _ViewBuilder:
+    """Walks a sheet's parts, one ``visit_<PartType>`` method per part type (as jinja2's
+    ``NodeVisitor`` walks a template's nodes): a new part type is one new method here and
+    one template block. The parts' views go to ``parts`` in order; listed inputs also to
+    ``inputs``."""
+
+    def __init__(self, sheet: Sheet, target: str) -> None:
+        self.sheet = sheet
+        self.target = target
+        self.parts: list[PartView] = []
+        self.inputs: list[PartView] = []
+        self._check_views: dict[int, PartView] = {}
+
+    def visit(self, part: object) -> None:
+        """Add the view of ``part``: the visit method of its type, or of the nearest base
+        class that has one."""
+        for kind in type(part).__mro__:
+            method = getattr(self, f"visit_{kind.__name__}", None)
+            if method is not None:
+                method(part)
+                return
+        raise TypeError(f"no view for a sheet part of type {type(part).__name__}")
+
+    def visit_Heading(self, part: Heading) -> None:
+        self.parts.append(PartView("heading", text=part.text, level=part.level))
+
+    def visit_Prose(self, part: Prose) -> None:
+        self.parts.append(PartView("prose", text=part.text))
+
+    def visit_Table(self, part: Table) -> None:
+        caption = part.caption
+        if part.unit is not None:
+            caption += f" (values in {part.unit:~P})"
+        cells = tuple(
+            tuple(
+                (True, self.sheet.cell_text(part, cell, self.target))
+                if isinstance(cell, sp.Symbol)
+                else (False, cell)
+                for cell in row
+            )
+            for row in part.rows
+        )
+        text_columns = tuple(
+            all(not row[index][0] and not _is_number(row[index][1]) for row in cells)
+            for index in range(len(part.columns))
+        )
+        self.parts.append(
+            PartView(
+                "table", text=caption, columns=part.columns, cells=cells, text_columns=text_columns
+            )
+        )
+
+    def visit_Figure(self, part: Figure) -> None:
+        svg = self.sheet.figure_svg(part)
+        self.parts.append(PartView("figure", text=part.caption, svg=svg, width=_print_width(svg)))
+
+    def visit_Input(self, part: Input) -> None:
+        equation = self.sheet.equation(part, self.target)
+        view = PartView(
+            "input",
+            text=part.description,
+            symbol=equation.symbol,
+            value=equation.result,
+            reference=part.reference,
+        )
+        if part.listed:
+            self.inputs.append(view)
+        self.parts.append(view)
+
+    def visit_Step(self, part: Step) -> None:
+        if not part.shown:
+            return
+        equation = self.sheet.equation(part, self.target)
+        plain_equation = self.sheet.equation(part, "plain")
+        plain = plain_equation.chain()
+        long = _set_width(plain) > LONG_EQUATION
+        self.parts.append(
+            PartView(
+                "step",
+                beside=_set_width(plain) <= BESIDE_EQUATION,
+                text=part.description,
+                symbol=equation.symbol,
+                math=equation.stacked(_result_fits_beside(plain_equation))
+                if long
+                else equation.chain(),
+                value=equation.result,
+                reference=part.reference,
+                location=self.sheet.governing_label(part),
+            )
+        )
+
+    def visit_Check(self, part: Check) -> None:
+        view = self.check_view(part)
+        if part.shown:
+            self.parts.append(view)
+
+    def visit_CheckList(self, part: CheckList) -> None:
+        entries = tuple(self.check_view(check) for check in part.checks)
+        self.parts.append(PartView("check_table", text=part.caption, entries=entries))
+
+    def check_view(self, part: Check) -> PartView:
+        """A check printed for the target, once: the summary reuses the part's view."""
+        if id(part) not in self._check_views:
+            self._check_views[id(part)] = _check_view(self.sheet, part, self.target)
+        return self._check_views[id(part)]
+
+
+def _result_fits_beside(plain: Equation) -> bool:
+    """Whether a stacked equation's last line, the numbers and the result, fits the page:
+    then the result needs no line of its own."""
+    if plain.substituted is None:
+        return False
+    return _set_width(f"{plain.symbol} = {plain.substituted} = {plain.result}") <= RESULT_BESIDE
 
 
 _GREEK_NAME = re.compile("|".join(sorted(GREEK_LETTERS, key=len, reverse=True)))
@@ -270,6 +322,100 @@ def _print_width(svg: str) -> float:
     return round(width * scale, 1)
 
 
+# How the symbols of one inputs-table row are separated, per target.
+_SYMBOL_SEPARATORS = {"mathml": '<mo separator="true">,</mo>', "typst": ", "}
+
+
+def _one_row_per_value(inputs: list[PartView], target: str) -> list[PartView]:
+    """The inputs with those that have the same value from the same source in one row
+    (``A, A_g``: the area and the gross area; ``I_x, I_y`` of a square tube), at the
+    place of the first, so the table lists each value once. Inputs without a source
+    (what the engineer typed) keep a row each."""
+    rows: list[list[PartView]] = []
+    by_value: dict[tuple[str, str], list[PartView]] = {}
+    for item in inputs:
+        key = (item.value, item.reference)
+        if item.reference and key in by_value:
+            by_value[key].append(item)
+            continue
+        row = [item]
+        rows.append(row)
+        if item.reference:
+            by_value[key] = row
+    separator = _SYMBOL_SEPARATORS.get(target, ", ")
+    return [
+        row[0]
+        if len(row) == 1
+        else dataclasses.replace(
+            row[0],
+            symbol=separator.join(item.symbol for item in row),
+            text=_joined_descriptions([item.text for item in row]),
+        )
+        for row in rows
+    ]
+
+
+def _joined_descriptions(texts: list[str]) -> str:
+    """Descriptions of one row joined, the words they share at the start and at the end
+    written once: "Elastic section modulus about x / y"; "Load factor on Q / W in EN 1990
+    Eq. (6.10)"; "Area; gross area" when they share none."""
+    if len(set(texts)) == 1:
+        return texts[0]
+    split = [text.split(" ") for text in texts]
+    shortest = min(len(words) for words in split)
+
+    def shared(index: int) -> bool:  # the word at ``index`` (from the end when < 0)
+        return len({words[index] for words in split}) == 1
+
+    start = 0
+    while start < shortest - 1 and shared(start):
+        start += 1
+    end = 0
+    while start + end < shortest - 1 and shared(-1 - end):
+        end += 1
+    if not start and not end:
+        return "; ".join([texts[0], *(text[:1].lower() + text[1:] for text in texts[1:])])
+    middles = " / ".join(" ".join(words[start : len(words) - end]) for words in split)
+    return " ".join([*split[0][:start], middles, *split[0][len(split[0]) - end :]])
+
+
+# A floating figure printed at most this wide (pt) is set beside the next one as narrow,
+# each under its own caption: two fit across an A4 or letter page's text (504 pt, 521 pt).
+BESIDE_FIGURE_WIDTH = 240.0
+# ...when at most this many parts lie between them: about a page of text, so neither moves
+# far from the words it illustrates (a float moves to a page's top or bottom anyway).
+BESIDE_FIGURE_DISTANCE = 30
+
+
+def _side_by_side(parts: list[PartView]) -> list[PartView]:
+    """The parts with each pair of narrow floating figures near each other joined into one
+    ``figure_row`` at the place of the first: the pair takes one figure's height."""
+
+    def narrow(view: PartView) -> bool:
+        return view.kind == "figure" and view.floats and 0 < view.width <= BESIDE_FIGURE_WIDTH
+
+    joined: list[PartView] = []
+    moved: set[int] = set()
+    for index, view in enumerate(parts):
+        if index in moved:
+            continue
+        following = next(
+            (later for later in range(index + 1, len(parts)) if parts[later].kind == "figure"),
+            None,
+        )
+        if (
+            narrow(view)
+            and following is not None
+            and following - index - 1 <= BESIDE_FIGURE_DISTANCE
+            and narrow(parts[following])
+        ):
+            joined.append(PartView("figure_row", floats=True, entries=(view, parts[following])))
+            moved.add(following)
+            continue
+        joined.append(view)
+    return joined
+
+
 # A source this long, given for more than one input, is printed once as a note.
 _NOTE_LENGTH = 30
 
@@ -298,14 +444,12 @@ def _shared_sources(
     return noted, tuple((mark, source) for source, mark in marks.items())
 
 
-def _check_view(sheet: Sheet, part: Check, target: str, made: dict[int, PartView]) -> PartView:
-    """A check printed for ``target`` (once: ``made`` keeps the views by check)."""
-    if id(part) in made:
-        return made[id(part)]
+def _check_view(sheet: Sheet, part: Check, target: str) -> PartView:
+    """A check printed for ``target``."""
     text = sheet.check_text(part, target)
     written_passes = part.utilization is not None and part.utilization <= 1.0
     plain = sheet.check_text(part, "plain")
-    made[id(part)] = view = PartView(
+    return PartView(
         "check",
         beside=_set_width(f"{plain.symbolic}    {plain.numeric}") <= BESIDE_EQUATION,
         text=part.description,
@@ -320,7 +464,6 @@ def _check_view(sheet: Sheet, part: Check, target: str, made: dict[int, PartView
         case=part.worst_case,
         cases=part.cases.count if part.cases is not None else 0,
     )
-    return view
 
 
 def issue_date(sheet: Sheet, today: datetime.date | None = None) -> datetime.date:

@@ -92,3 +92,30 @@ def test_only_the_branch_that_applies_is_substituted():
     sheet.set_input("theta", "60 deg")
     assert "0.6*" in sheet.equation(sheet["F_b"], "plain").substituted
     assert "0.66" not in sheet.equation(sheet["F_b"], "plain").substituted
+
+
+def test_the_sign_and_parenthesis_decision_is_made_once():
+    # Issue 17: the structural printer decides; a target gives its number, unit and wraps.
+    from calcsheet.engine.printers import PRINTERS, _ExpressionPrinter
+
+    assert all("quantity" not in vars(printer) for printer in PRINTERS.values())
+    assert "quantity" in vars(_ExpressionPrinter)
+    sheet = _sample_sheet()
+    results = {t: sheet.equation(sheet["f_b"], t).result for t in TARGETS}
+    assert results["latex"].startswith("-") and "\\left(" not in results["latex"]
+    assert results["mathml"].startswith("<mrow><mo>&#x2212;</mo>")
+    assert results["typst"].startswith("-") and not results["typst"].startswith("(")
+    assert results["plain"].startswith("-") and not results["plain"].startswith("(")
+
+
+def test_a_stacked_step_may_set_its_result_beside_the_numbers():
+    sheet = _sample_sheet()
+    for target in TARGETS:
+        equation = sheet.equation(sheet["sigma_min"], target)
+        three = equation.stacked()
+        two = equation.stacked(result_beside=True)
+        assert equation.result in two
+        assert equation.printer.chain([equation.substituted, equation.result]) in two
+        assert two != three
+    plain = sheet.equation(sheet["sigma_min"], "plain")
+    assert plain.stacked(result_beside=True).count("\n") == plain.stacked().count("\n") - 1
