@@ -1069,33 +1069,10 @@ class _Procedure:
         w.heading("Torsion (EN 1993-1-1 6.2.7)", 2)
         T_Ed = self.demands["T_Ed"]
         w.text(CLOSED_TEXT if kind in ("RHS", "CHS") else WARPING_TEXT)
-        w.text(NO_TORQUE_TEXT)
-        moments = [w.absolute(self.demands[key]) for key in ("M_y_Ed", "M_z_Ed") if self.has(key)]
-        round_off = tor.TORQUE_ROUND_OFF * functools.reduce(operator.add, moments, 0 * T_Ed)
-        T_abs = w.absolute(T_Ed)
-        T_t = w.branch(
-            "T_t_Ed",
-            [(T_abs, T_abs > round_off), (0 * T_Ed, True)],
-            "St Venant torque, the magnitude of T_Ed (zero within round-off)",
-            reference="EN 1993-1-1 6.2.7(2)",
-        )
         tau_Rd = w.clause(tor.shear_yield_strength, "tau_Rd", w["f_y"], w["gamma_M0"], unit="MPa")
-        # The St Venant shear stress in the part that carries each shear force, by key.
-        part_stress: dict[str, Value] = {}
         if kind == "I":
-            t_max = w.step("t_T", w.larger(w["t_f"], w["t_w"]), "Thickest element (flange or web)")
-            tau = w.clause(
-                tor.open_section_torsion_stress, "tau_t_Ed", T_t, t_max, w["I_t"], unit="MPa"
-            )
-            T_Rd = w.clause(tor.open_section_torsion_resistance, "T_Rd", w["I_t"], t_max, tau_Rd)
-            for axis, thickness, part in (("z", "t_w", "web"), ("y", "t_f", "flanges")):
-                if self.has(f"V_{axis}_Ed"):
-                    part_stress[axis] = w.clause(
-                        tor.open_section_torsion_stress, f"tau_t_{axis}_Ed", T_t, w[thickness],
-                        w["I_t"], unit="MPa",
-                    )  # fmt: skip
-                    if w.prints:
-                        w.text(f"τ_t,Ed in the {part}, which carry V_{axis},Ed.")
+            t_T = w.step("t_T", w.larger(w["t_f"], w["t_w"]), "Thickest element (flange or web)")
+            T_Rd = w.clause(tor.open_section_torsion_resistance, "T_Rd", w["I_t"], t_T, tau_Rd)
         else:
             if kind == "RHS":
                 self._torsion_walls()
@@ -1113,10 +1090,34 @@ class _Procedure:
                         "Shear buckling of the tube wall under torsion (EN 1993-1-1 6.2.7(8)) "
                         "is not covered by these checks."
                     )
+            T_Rd = w.clause(tor.closed_section_torsion_resistance, "T_Rd", A_m, w["t"], tau_Rd)
+        w.text(NO_TORQUE_TEXT)
+        moments = [w.absolute(self.demands[key]) for key in ("M_y_Ed", "M_z_Ed") if self.has(key)]
+        round_off = tor.TORQUE_ROUND_OFF * functools.reduce(operator.add, moments, 0 * T_Ed)
+        T_abs = w.absolute(T_Ed)
+        # Compared over T_Rd, so that the condition has no unit (a zero torque compares as 0).
+        T_t = w.branch(
+            "T_t_Ed",
+            [(T_abs, T_abs / T_Rd > round_off / T_Rd), (0 * T_abs / T_Rd * T_Rd, True)],
+            "St Venant torque, the magnitude of T_Ed (zero within round-off)",
+            reference="EN 1993-1-1 6.2.7(2)",
+        )
+        # The St Venant shear stress in the part that carries each shear force, by axis.
+        part_stress: dict[str, Value] = {}
+        if kind == "I":
+            w.clause(tor.open_section_torsion_stress, "tau_t_Ed", T_t, t_T, w["I_t"], unit="MPa")
+            for axis, thickness, part in (("z", "t_w", "web"), ("y", "t_f", "flanges")):
+                if self.has(f"V_{axis}_Ed"):
+                    part_stress[axis] = w.clause(
+                        tor.open_section_torsion_stress, f"tau_t_{axis}_Ed", T_t, w[thickness],
+                        w["I_t"], unit="MPa",
+                    )  # fmt: skip
+                    if w.prints:
+                        w.text(f"τ_t,Ed in the {part}, which carry V_{axis},Ed.")
+        else:
             tau = w.clause(
                 tor.closed_section_torsion_stress, "tau_t_Ed", T_t, A_m, w["t"], unit="MPa"
             )
-            T_Rd = w.clause(tor.closed_section_torsion_resistance, "T_Rd", A_m, w["t"], tau_Rd)
             part_stress = {axis: tau for axis in ("z", "y") if self.has(f"V_{axis}_Ed")}
         w.check(
             "torsion", EN_CHECK_TITLES["torsion"], T_t, T_Rd,
@@ -1131,8 +1132,9 @@ class _Procedure:
             w.text(
                 "Where τ_t,Ed reaches "
                 + ("1.25·τ_Rd" if kind == "I" else "τ_Rd")
-                + " no shear resistance is left: the utilization shown is then τ_t,Ed over "
-                "that stress (1 or more). V_pl,T,Rd also takes the place of V_pl,Rd in the "
+                + " no shear resistance is left: under a shear force the utilization shown is "
+                "then τ_t,Ed over that stress (1 or more; without one it is 0, and the torsion "
+                "check above has failed already). V_pl,T,Rd also takes the place of V_pl,Rd in the "
                 "reduction for shear of 6.2.8 (6.2.8(4))."
             )
         for axis, tau_part in part_stress.items():
@@ -1140,15 +1142,19 @@ class _Procedure:
             V_abs = w.absolute(self.demands[f"V_{axis}_Ed"])
             u = w.branch(
                 f"u_VT_{axis}",
-                [(V_abs / V_pl_T, V_pl_T > 0 * V_pl_T), (tau_part / (limit * tau_Rd), True)],
+                [
+                    (V_abs / V_pl_T, tau_part < limit * tau_Rd),
+                    (tau_part / (limit * tau_Rd), V_abs / w[f"V_pl_{axis}_Rd"] > 0),
+                    (sp.Integer(0), True),
+                ],
                 f"Utilization in shear along {axis} with torsion (τ_t,Ed over its limit where "
-                "V_pl,T,Rd = 0)",
+                "V_pl,T,Rd = 0 under a shear force)",
                 reference=f"{reduced.reference.split(', ')[0]}, Eq. (6.25)",
             )
             key = f"shear_torsion_{axis}"
             w.check(
                 key, EN_CHECK_TITLES[key], u, sp.Integer(1),
-                reference=f"EN 1993-1-1 Eq. (6.25), {reduced.reference.split(', ')[-1]}",
+                reference=f"EN 1993-1-1 Eq. (6.25), {reduced.reference.split('Eq. ')[-1]}",
             )  # fmt: skip
 
     def _torsion_walls(self) -> None:
