@@ -1093,12 +1093,16 @@ class _Procedure:
             T_Rd = w.clause(tor.closed_section_torsion_resistance, "T_Rd", A_m, w["t"], tau_Rd)
         w.text(NO_TORQUE_TEXT)
         moments = [w.absolute(self.demands[key]) for key in ("M_y_Ed", "M_z_Ed") if self.has(key)]
-        round_off = tor.TORQUE_ROUND_OFF * functools.reduce(operator.add, moments, 0 * T_Ed)
         T_abs = w.absolute(T_Ed)
-        # Compared over T_Rd, so that the condition has no unit (a zero torque compares as 0).
+        if moments:
+            round_off = tor.TORQUE_ROUND_OFF * functools.reduce(operator.add, moments)
+            present = T_abs > round_off
+        else:
+            # Over T_Rd, so that the condition has no unit (a bare 0 has none).
+            present = T_abs / T_Rd > 0
         T_t = w.branch(
             "T_t_Ed",
-            [(T_abs, T_abs / T_Rd > round_off / T_Rd), (0 * T_abs / T_Rd * T_Rd, True)],
+            [(T_abs, present), (0 * T_abs, True)],
             "St Venant torque, the magnitude of T_Ed (zero within round-off)",
             reference="EN 1993-1-1 6.2.7(2)",
         )
@@ -1108,12 +1112,13 @@ class _Procedure:
             w.clause(tor.open_section_torsion_stress, "tau_t_Ed", T_t, t_T, w["I_t"], unit="MPa")
             for axis, thickness, part in (("z", "t_w", "web"), ("y", "t_f", "flanges")):
                 if self.has(f"V_{axis}_Ed"):
+                    if w.prints:
+                        carry = "carries" if part == "web" else "carry"
+                        w.text(f"τ_t,Ed in the {part}, which {carry} V_{axis},Ed:")
                     part_stress[axis] = w.clause(
                         tor.open_section_torsion_stress, f"tau_t_{axis}_Ed", T_t, w[thickness],
                         w["I_t"], unit="MPa",
                     )  # fmt: skip
-                    if w.prints:
-                        w.text(f"τ_t,Ed in the {part}, which carry V_{axis},Ed.")
         else:
             tau = w.clause(
                 tor.closed_section_torsion_stress, "tau_t_Ed", T_t, A_m, w["t"], unit="MPa"
