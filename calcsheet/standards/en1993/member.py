@@ -1,8 +1,9 @@
 """EN 1993-1-1 checks of a member, written once for a sheet and for arrays.
 
 :func:`en1993_member_procedure` classifies the cross-section (Table 5.2), writes
-the cross-section resistances of 6.2 and the flexural buckling resistances of
-6.3.1, and adds one check per verification under the keys of
+the cross-section resistances of 6.2 (with a torque T_Ed, St Venant torsion of 6.2.7
+and shear with torsion of 6.2.7(9): :mod:`~calcsheet.standards.en1993.torsion`) and the
+flexural buckling resistances of 6.3.1, and adds one check per verification under the keys of
 :data:`EN_CHECK_TITLES`: with bending about y-y, lateral-torsional buckling (6.3.2);
 with N and bending, the member interaction of 6.3.3 (Eq. 6.61 and 6.62 with the
 factors of Annex B or Annex A, taken as 0 while N is tension). It is written against a writer
@@ -239,8 +240,9 @@ def write_en1993_checks(
     """Write the EN 1993-1-1 checks of ``section`` under ``demands`` on ``sheet``.
 
     ``demands`` maps ``"N_Ed"``, ``"M_y_Ed"``, ``"M_z_Ed"``, ``"V_z_Ed"`` and
-    ``"V_y_Ed"`` (``"V_Ed"`` is taken as ``V_z_Ed``, the shear along the web) to
-    symbols of design forces already on the sheet, in the standard's axes (see
+    ``"V_y_Ed"`` (``"V_Ed"`` is taken as ``V_z_Ed``, the shear along the web) and
+    ``"T_Ed"`` (the torque about the member axis) to symbols of design forces already on
+    the sheet, in the standard's axes (see
     the module docstring); a force left out is not checked. ``material`` is a
     :class:`Steel`, a grade ("S355") or keywords of :func:`steel`. ``k_eff`` is
     the effective-length factor, one value or (k_y, k_z); 2.0 is the theoretical
