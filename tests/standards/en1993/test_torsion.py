@@ -325,3 +325,19 @@ def test_a_member_failing_only_in_torsion_is_not_ok() -> None:
     start = html.index('<section class="summary">')
     summary = html[start : html.index("</section>", start)]
     assert re.search(r"Torsion \(St Venant\).*?NOT OK", summary, re.S)
+
+
+def test_rho_of_6_2_8_4_takes_v_pl_t_rd() -> None:
+    """EN 1993-1-1 6.2.8(4) (from memory): with torsion, ρ = (2·V_Ed/V_pl,T,Rd − 1)², 0 for
+    V_Ed ≤ 0.5·V_pl,T,Rd. IPE 300, S355, V_z,Ed = 250 kN: without torsion 250 ≤ 0.5·526.3 =
+    263.2 kN, ρ = 0; with T_Ed = 2 kN·m, V_pl,T,Rd = 448.0 kN (hand calc above), 250 > 224.0,
+    ρ = (500/448.0 − 1)² = 0.013 (0.0134 with V_pl,T,Rd unrounded: ρ is sensitive to it)."""
+    section = catalog_section("IPE 300")
+    base = {"M_y_Ed": 100e3, "V_z_Ed": 250e3}
+    sheet, _ = sheet_checks(section, base, material="S355", length="3 m")
+    assert float(sheet.value("rho_z").m) == 0.0
+    sheet, _ = sheet_checks(section, {**base, "T_Ed": 2e3}, material="S355", length="3 m")
+    V_pl_T = float(sheet.value("V_pl_T_z_Rd").to("N").m)
+    assert V_pl_T / 1e3 == pytest.approx(448.0, abs=0.1)
+    assert float(sheet.value("rho_z").m) == pytest.approx((2 * 250e3 / V_pl_T - 1) ** 2, rel=1e-9)
+    assert float(sheet.value("rho_z").m) == pytest.approx(0.0134, abs=1e-4)
