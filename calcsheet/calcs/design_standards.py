@@ -364,9 +364,10 @@ def _en_evaluate(section, forces, basis, Fy, length) -> Evaluation:
 
 
 def _en_demands(forces: np.ndarray) -> dict[str, np.ndarray]:
-    # EN y-y is our x-x: N, M_y,Ed = M_x, M_z,Ed = M_y, V_z,Ed = V_y, V_y,Ed = V_x.
+    # EN y-y is our x-x: N, M_y,Ed = M_x, M_z,Ed = M_y, V_z,Ed = V_y, V_y,Ed = V_x; the
+    # torque about the member axis is T_Ed.
     return {"N_Ed": forces[:, 0], "M_y_Ed": forces[:, 4], "M_z_Ed": forces[:, 5],
-            "V_z_Ed": forces[:, 2], "V_y_Ed": forces[:, 1]}  # fmt: skip
+            "V_z_Ed": forces[:, 2], "V_y_Ed": forces[:, 1], "T_Ed": forces[:, 3]}  # fmt: skip
 
 
 def _en_search(family, forces, basis, Fy, length) -> tuple[list[str], dict[str, np.ndarray]]:
@@ -423,6 +424,7 @@ def _en_write(context: CheckContext) -> list[Check]:
             "M_z_Ed": forces["M_y"],
             "V_z_Ed": forces["V_y"],
             "V_y_Ed": forces["V_x"],
+            "T_Ed": forces["T"],
         },
         material=steel(grade, f_y=Fy),
         length=length,

@@ -39,6 +39,11 @@ def _069e4d3cd77d05aed615(n_y, k_yz, M_z_Ed, M_z_Rk, gamma_M1):
     return n_y + gamma_M1*k_yz*abs(M_z_Ed)/M_z_Rk
 
 
+def _06a2360bfd1de0ee22b6(A_m, t, tau_Rd):
+    # EN 1993-1-1 6.2.7(1), (5), Eq. (6.23): Torsional resistance, closed section
+    return 2*A_m*t*tau_Rd
+
+
 def _0839fff909ccaabe4193(d, t_f):
     # AISC 360-22 Section F2.2: Distance between flange centroids, ho = d − tf
     return d - t_f
@@ -369,6 +374,11 @@ def _62b2c72e231a54c2cdd9(A, b, t_f):
     return functools.reduce(numpy.minimum, [0.5, (A - 2*b*t_f)/A])
 
 
+def _64df9f199da5f9f4d2bf(tau_t, tau_Rd, V_pl_Rd):
+    # EN 1993-1-1 6.2.7(9), Eq. (6.26): Plastic shear resistance with torsion, I or H
+    return V_pl_Rd*numpy.sqrt(functools.reduce(numpy.maximum, [0, 1 - 0.8*tau_t/tau_Rd]))
+
+
 def _66bb4027d1e4439220ca(A):
     # EN 1993-1-1 6.2.6(3)g: Shear area of a CHS of uniform thickness
     return 2*A/numpy.pi
@@ -694,6 +704,11 @@ def _b83ebeb6559328560261(N_c, f_y, c, t_total):
     return functools.reduce(numpy.minimum, [1, functools.reduce(numpy.maximum, [0.05, (1/2)*N_c/(c*f_y*t_total) + 1/2])])
 
 
+def _b86f3872000aaaeb7ff8(T_t, t, I_t):
+    # EN 1993-1-1 6.2.7(4): St Venant shear stress, open section
+    return T_t*t/I_t
+
+
 def _b941de2eb4708831fe61(I_t, I_y):
     # EN 1993-1-1 Annex A, Table A.1: Auxiliary term a_LT
     return functools.reduce(numpy.maximum, [0, -I_t/I_y + 1])
@@ -724,6 +739,11 @@ def _bcf1509c586b11be2a3f(chi_LT, f, lambda_LT):
     return functools.reduce(numpy.minimum, [1, lambda_LT**(-2.0), chi_LT/f])
 
 
+def _c0b245bec74298f53be9(d, t):
+    # EN 1993-1-1 6.2.7(4): Area enclosed by the mid-line of the wall, circular section
+    return (1/4)*numpy.pi*(d - t)**2
+
+
 def _c0d46e2aec8bb27ba4f4(alpha_LT, lambda_LT, lambda_LT_0, beta):
     # EN 1993-1-1 6.3.2.3(1): Value to determine χ_LT, rolled or equivalent welded
     return (1/2)*alpha_LT*(lambda_LT - lambda_LT_0) + (1/2)*beta*lambda_LT**2 + 1/2
@@ -739,6 +759,11 @@ def _c383e27d633b8a2fd2e1(G, I_t, E, I_w, L_T, i_y, i_z):
     return (numpy.pi**2*E*I_w/L_T**2 + G*I_t)/(i_y**2 + i_z**2)
 
 
+def _c4686c0f0c10319639ef(f_y, gamma_M0):
+    # EN 1993-1-1 6.2.7(5), 6.2.1(5) Eq. (6.1): Design shear strength, yield criterion
+    return (1/3)*numpy.sqrt(3)*f_y/gamma_M0
+
+
 def _c5ec42bcf88fd4a4c228(L_c, r):
     # AISC 360-22 Section E2: Slenderness ratio
     return L_c/r
@@ -752,6 +777,11 @@ def _c65d60e151d3b34f26c1(C_my_0, lambda_0, lambda_0_lim, M_y_Ed, N_Ed, A, W_el_
 def _c6b9a3c1bc233218634d(t, E, F_y, lam, b):
     # AISC 360-22 Eq. F7-4: Effective width of the compression flange
     return functools.reduce(numpy.minimum, [b, 1.92*t*numpy.sqrt(E/F_y)*(1 - 0.38*numpy.sqrt(E/F_y)/lam)])
+
+
+def _c7ec74e5824e3c89db9b(tau_t, tau_Rd, V_pl_Rd):
+    # EN 1993-1-1 6.2.7(9), Eq. (6.28): Plastic shear resistance with torsion, hollow
+    return V_pl_Rd*functools.reduce(numpy.maximum, [0, 1 - tau_t/tau_Rd])
 
 
 def _c9321b59dafead64b748(A_v, f_y, gamma_M0):
@@ -812,6 +842,11 @@ def _d0f17538c605a55fa899(E, F_y):
 def _d22d3001e283e3415b81(r):
     # EN 1993-1-1 Annex A, Table A.2: C_mi,0 for a uniform load
     return 1 - 0.18*r
+
+
+def _d2e7c4af2b915f33f31c(T_t, A_m, t):
+    # EN 1993-1-1 6.2.7(4), (7): St Venant shear stress, closed thin-walled section
+    return (1/2)*T_t/(A_m*t)
 
 
 def _d58cd29c07ed204bea32(V_Ed, V_pl_Rd):
@@ -914,6 +949,11 @@ def _ef6a6b665d0c53b41b48(b_f):
     return (1/2)*b_f
 
 
+def _f17fc1f3de102ca772c0(b, h, t, R_m):
+    # EN 10210-2:2006 and EN 10219-2:2006 Annex B (A_h): Area enclosed by the mid-line of the wall, rectangular hollow section
+    return -R_m**2*(4 - numpy.pi) + (b - t)*(h - t)
+
+
 def _f1d9b4d6c4bd5d11cf6a(M_p, F_y, S_y, lam, lam_pf, lam_rf, E):
     # AISC 360-22 Eq. F6-2, F6-3, F6-4: Nominal flexural strength, flange local buckling
     return numpy.select([numpy.less_equal(lam, lam_rf),True], [M_p - (lam - lam_pf)*(-0.7*F_y*S_y + M_p)/(-lam_pf + lam_rf),0.69*E*S_y/lam**2], default=numpy.nan)
@@ -949,6 +989,11 @@ def _f858ae49c52b6e519313(M_y):
     return 0.8*M_y
 
 
+def _f9c22f94a7d18ff29662(I_t, t, tau_Rd):
+    # EN 1993-1-1 6.2.7(1), (5), Eq. (6.23): Torsional resistance, open section
+    return I_t*tau_Rd/t
+
+
 def _fb0573ff322c9c6113c8(c_t, limit_1, limit_2, limit_3):
     # EN 1993-1-1 Table 5.2: Class of a part from its c/t ratio and the three limits
     return numpy.select([numpy.less_equal(c_t, limit_1),numpy.less_equal(c_t, limit_2),numpy.less_equal(c_t, limit_3),True], [1,2,3,4], default=numpy.nan)
@@ -980,6 +1025,7 @@ FUNCTIONS = {
     "02f1d2811f39b7ec8635": _02f1d2811f39b7ec8635,
     "0429c11d2458d362675c": _0429c11d2458d362675c,
     "069e4d3cd77d05aed615": _069e4d3cd77d05aed615,
+    "06a2360bfd1de0ee22b6": _06a2360bfd1de0ee22b6,
     "0839fff909ccaabe4193": _0839fff909ccaabe4193,
     "086ab2f9163d829e242f": _086ab2f9163d829e242f,
     "095dc1363414c6727ceb": _095dc1363414c6727ceb,
@@ -1046,6 +1092,7 @@ FUNCTIONS = {
     "61033bf8d0814c6623c0": _61033bf8d0814c6623c0,
     "6179be05e9d32de4185a": _6179be05e9d32de4185a,
     "62b2c72e231a54c2cdd9": _62b2c72e231a54c2cdd9,
+    "64df9f199da5f9f4d2bf": _64df9f199da5f9f4d2bf,
     "66bb4027d1e4439220ca": _66bb4027d1e4439220ca,
     "6916531ac6c696cb24a9": _6916531ac6c696cb24a9,
     "693b6aa468da87845f2e": _693b6aa468da87845f2e,
@@ -1111,18 +1158,22 @@ FUNCTIONS = {
     "b74aa1bdb1a71561356b": _b74aa1bdb1a71561356b,
     "b800764b2b4f7e736507": _b800764b2b4f7e736507,
     "b83ebeb6559328560261": _b83ebeb6559328560261,
+    "b86f3872000aaaeb7ff8": _b86f3872000aaaeb7ff8,
     "b941de2eb4708831fe61": _b941de2eb4708831fe61,
     "ba4c1eb426b844a00c0f": _ba4c1eb426b844a00c0f,
     "ba60d3ef0bfee0b95f40": _ba60d3ef0bfee0b95f40,
     "bc0c5d3b767b25173efd": _bc0c5d3b767b25173efd,
     "bc9b2e2c73729b9b06e8": _bc9b2e2c73729b9b06e8,
     "bcf1509c586b11be2a3f": _bcf1509c586b11be2a3f,
+    "c0b245bec74298f53be9": _c0b245bec74298f53be9,
     "c0d46e2aec8bb27ba4f4": _c0d46e2aec8bb27ba4f4,
     "c380faef19ad693e0db2": _c380faef19ad693e0db2,
     "c383e27d633b8a2fd2e1": _c383e27d633b8a2fd2e1,
+    "c4686c0f0c10319639ef": _c4686c0f0c10319639ef,
     "c5ec42bcf88fd4a4c228": _c5ec42bcf88fd4a4c228,
     "c65d60e151d3b34f26c1": _c65d60e151d3b34f26c1,
     "c6b9a3c1bc233218634d": _c6b9a3c1bc233218634d,
+    "c7ec74e5824e3c89db9b": _c7ec74e5824e3c89db9b,
     "c9321b59dafead64b748": _c9321b59dafead64b748,
     "cafc46190d87a4080415": _cafc46190d87a4080415,
     "ccbce2fc341bab48375d": _ccbce2fc341bab48375d,
@@ -1135,6 +1186,7 @@ FUNCTIONS = {
     "d063fe98f6a4773bcaea": _d063fe98f6a4773bcaea,
     "d0f17538c605a55fa899": _d0f17538c605a55fa899,
     "d22d3001e283e3415b81": _d22d3001e283e3415b81,
+    "d2e7c4af2b915f33f31c": _d2e7c4af2b915f33f31c,
     "d58cd29c07ed204bea32": _d58cd29c07ed204bea32,
     "d5fc9885df801ff972ed": _d5fc9885df801ff972ed,
     "d72bab8662fac64cd090": _d72bab8662fac64cd090,
@@ -1155,6 +1207,7 @@ FUNCTIONS = {
     "eb77fc16745bc940ff21": _eb77fc16745bc940ff21,
     "ef572fd1566076ebea8f": _ef572fd1566076ebea8f,
     "ef6a6b665d0c53b41b48": _ef6a6b665d0c53b41b48,
+    "f17fc1f3de102ca772c0": _f17fc1f3de102ca772c0,
     "f1d9b4d6c4bd5d11cf6a": _f1d9b4d6c4bd5d11cf6a,
     "f3111dfcf6a86f9afbc0": _f3111dfcf6a86f9afbc0,
     "f35fef2057fcbcbefd78": _f35fef2057fcbcbefd78,
@@ -1162,6 +1215,7 @@ FUNCTIONS = {
     "f621d9b9d204fd5e70de": _f621d9b9d204fd5e70de,
     "f7e7ed600e478b2ac869": _f7e7ed600e478b2ac869,
     "f858ae49c52b6e519313": _f858ae49c52b6e519313,
+    "f9c22f94a7d18ff29662": _f9c22f94a7d18ff29662,
     "fb0573ff322c9c6113c8": _fb0573ff322c9c6113c8,
     "fb39b8bb1c1a0ae7453f": _fb39b8bb1c1a0ae7453f,
     "fc0b86f61b049afe7451": _fc0b86f61b049afe7451,

@@ -3,6 +3,7 @@
 Modules: :mod:`~calcsheet.standards.en1993.factors` (partial factors, grades,
 imperfection factors), :mod:`~calcsheet.standards.en1993.classification`
 (Table 5.2), :mod:`~calcsheet.standards.en1993.resistance` (6.2),
+:mod:`~calcsheet.standards.en1993.torsion` (6.2.7, torsion and shear with torsion),
 :mod:`~calcsheet.standards.en1993.buckling` (6.3.1, Tables 6.1 and 6.2),
 :mod:`~calcsheet.standards.en1993.lateral` (6.3.2, lateral-torsional buckling and M_cr),
 :mod:`~calcsheet.standards.en1993.interaction` (6.3.3, Annex B),

@@ -1,8 +1,9 @@
 """EN 1993-1-1 checks of a member, written once for a sheet and for arrays.
 
 :func:`en1993_member_procedure` classifies the cross-section (Table 5.2), writes
-the cross-section resistances of 6.2 and the flexural buckling resistances of
-6.3.1, and adds one check per verification under the keys of
+the cross-section resistances of 6.2 (with a torque T_Ed, St Venant torsion of 6.2.7
+and shear with torsion of 6.2.7(9): :mod:`~calcsheet.standards.en1993.torsion`) and the
+flexural buckling resistances of 6.3.1, and adds one check per verification under the keys of
 :data:`EN_CHECK_TITLES`: with bending about y-y, lateral-torsional buckling (6.3.2);
 with N and bending, the member interaction of 6.3.3 (Eq. 6.61 and 6.62 with the
 factors of Annex B or Annex A, taken as 0 while N is tension). It is written against a writer
@@ -33,6 +34,7 @@ from __future__ import annotations
 
 import functools
 import math
+import operator
 from collections.abc import Mapping, Sequence
 from dataclasses import dataclass
 from typing import Any
@@ -45,6 +47,7 @@ from calcsheet.engine import Check, Sheet, as_written
 from calcsheet.engine.procedure import ArrayWriter, SheetWriter, Value, Writer
 from calcsheet.errors import InputError
 from calcsheet.sections import Section
+from calcsheet.sections.metric import corner_radii
 from calcsheet.standards.clause import Clause
 from calcsheet.standards.en1993 import annex_a
 from calcsheet.standards.en1993 import buckling as buck
@@ -52,6 +55,7 @@ from calcsheet.standards.en1993 import classification as cls
 from calcsheet.standards.en1993 import interaction as inter
 from calcsheet.standards.en1993 import lateral as lat
 from calcsheet.standards.en1993 import resistance as res
+from calcsheet.standards.en1993 import torsion as tor
 from calcsheet.standards.en1993.buckling import CurveChoice
 from calcsheet.standards.en1993.factors import (
     NOMINAL_THICKNESS_LIMIT_MM,
@@ -82,6 +86,7 @@ DEMAND_DIMENSIONS: dict[str, str] = {
     "M_z_Ed": "moment",
     "V_z_Ed": "force",
     "V_y_Ed": "force",
+    "T_Ed": "moment",
 }
 DEMAND_ALIASES = {"V_Ed": "V_z_Ed"}
 F_235 = Quantity(235.0, "MPa")  # the reference strength of ε (Table 5.2)
@@ -97,6 +102,9 @@ EN_CHECK_TITLES: dict[str, str] = {
     "net_section": "Tension, net section",
     "shear_z": "Shear along z",
     "shear_y": "Shear along y",
+    "torsion": "Torsion (St Venant)",
+    "shear_torsion_z": "Shear along z with torsion",
+    "shear_torsion_y": "Shear along y with torsion",
     "bending_y": "Bending about y-y",
     "bending_z": "Bending about z-z",
     "combined": "Bending and axial force",
@@ -117,6 +125,27 @@ NOT_COVERED_TEXT = (
     "Not covered by these checks: torsion (6.2.7), class 4 cross-sections (EN 1993-1-5), "
     "intermediate lateral restraints, local load introduction and connections. They must be "
     "verified separately."
+)
+NOT_COVERED_WITH_TORQUE_TEXT = (
+    "Not covered by these checks: warping torsion of open sections (the warping torque "
+    "T_w,Ed and the bimoment B_Ed of EN 1993-1-1 6.2.7(2), (4), and their direct stresses "
+    "combined with bending), class 4 cross-sections (EN 1993-1-5), intermediate lateral "
+    "restraints, local load introduction and connections. They must be verified separately."
+)
+WARPING_TEXT = (
+    "An open section: T_Ed is taken as St Venant torsion throughout (T_t,Ed = T_Ed, "
+    "6.2.7(2)), with τ_t,Ed = T_t,Ed·t/I_t largest in the thickest element. Warping torsion "
+    "(T_w,Ed and the bimoment B_Ed, 6.2.7(2), (4), (7)) is not included in this check; where "
+    "the member's stress steps include warping, its stresses appear there, not here."
+)
+CLOSED_TEXT = (
+    "A closed hollow section: warping is neglected (EN 1993-1-1 6.2.7(7)) and T_Ed is "
+    "carried as St Venant torsion, the shear stress of the thin wall by Bredt's formula "
+    "τ_t,Ed = T_Ed/(2·A_m·t), A_m the area enclosed by the mid-line of the wall."
+)
+NO_TORQUE_TEXT = (
+    "The checks of 6.2.7 apply to a member under torsion: a torque of at most 10⁻⁹·(|M_y,Ed| "
+    "+ |M_z,Ed|), the round-off of statics, is taken as zero."
 )
 LTB_FIXED = (
     "follows from the section, the support case, the moment diagram and the load height "
@@ -172,6 +201,9 @@ class MemberData:
     diagram_text: str = "uniform"
     moment_diagram: str = "uniform"
     end_moment_ratio: float = 1.0
+    # RHS: the mid-line corner radius over the wall thickness, (r_o + r_i)/(2t), and its source.
+    corner_ratio: float = 0.0
+    corner_source: str = ""
 
 
 @dataclass(frozen=True)
@@ -208,8 +240,9 @@ def write_en1993_checks(
     """Write the EN 1993-1-1 checks of ``section`` under ``demands`` on ``sheet``.
 
     ``demands`` maps ``"N_Ed"``, ``"M_y_Ed"``, ``"M_z_Ed"``, ``"V_z_Ed"`` and
-    ``"V_y_Ed"`` (``"V_Ed"`` is taken as ``V_z_Ed``, the shear along the web) to
-    symbols of design forces already on the sheet, in the standard's axes (see
+    ``"V_y_Ed"`` (``"V_Ed"`` is taken as ``V_z_Ed``, the shear along the web) and
+    ``"T_Ed"`` (the torque about the member axis) to symbols of design forces already on
+    the sheet, in the standard's axes (see
     the module docstring); a force left out is not checked. ``material`` is a
     :class:`Steel`, a grade ("S355") or keywords of :func:`steel`. ``k_eff`` is
     the effective-length factor, one value or (k_y, k_z); 2.0 is the theoretical
@@ -267,7 +300,7 @@ def write_en1993_checks(
     # ``with sheet`` block, whose exit would otherwise be cut short by ours.
     with as_written():
         en1993_member_procedure(w, member, symbols)
-    sheet.text(NOT_COVERED_TEXT)
+    sheet.text(NOT_COVERED_WITH_TORQUE_TEXT if "T_Ed" in symbols else NOT_COVERED_TEXT)
     return list(w.checks.values())
 
 
@@ -328,6 +361,17 @@ def scope_problems(w: ArrayWriter, kind: str = "") -> list[tuple[np.ndarray, str
                     "Section 5 is not covered (EN 1993-1-1 6.2.6(6))",
                 )
             )
+    if "hw_tw_T" in s:
+        ratio, limit = np.asarray(s["hw_tw_T"]), np.asarray(s["hw_tw_max"])
+        torqued = np.asarray(s["T_t_Ed"]) > 0
+        problems.append(
+            (
+                (ratio > limit) & torqued,
+                f"wall slenderness h_w/t = {np.max(ratio):.4g} > 72ε/η = {np.min(limit):.4g} "
+                "under torsion: the design shear strength of the walls to EN 1993-1-5 is not "
+                "covered (EN 1993-1-1 6.2.7(8))",
+            )
+        )
     return problems
 
 
@@ -403,6 +447,8 @@ def si_inputs(member: MemberData) -> dict[str, float]:
         alpha_y=member.curves["y"].alpha,
         alpha_z=member.curves["z"].alpha,
     )
+    if member.kind == "RHS":
+        result["k_R"] = member.corner_ratio
     return result
 
 
@@ -535,7 +581,23 @@ def member_data(
         _diagram_text(support_case, moment_diagram, float(end_moment_ratio)),
         moment_diagram,
         float(end_moment_ratio),
+        *_corner_ratio(geometry),
     )
+
+
+def _corner_ratio(geometry: _Geometry) -> tuple[float, str]:
+    """(r_o + r_i)/(2t) of a rectangular hollow section's corners and its source; (0, "")
+    for other sections. Hot-finished: EN 10210-2 Annex B; cold-formed: EN 10219-2 Annex B
+    (r_o by the wall thickness)."""
+    if geometry.kind != "RHS":
+        return 0.0, ""
+    wall = float(geometry.dims["t"].to("mm").m)
+    outer, inner = corner_radii(wall, geometry.fabrication)
+    if geometry.fabrication == "hot-finished":
+        source = "EN 10210-2:2006 Annex B: r_o = 1.5t, r_i = t"
+    else:
+        source = f"EN 10219-2:2006 Annex B: r_o = {outer / wall:.3g}t, r_i = r_o − t"
+    return (outer + inner) / (2 * wall), source
 
 
 def _diagram_text(support_case: str, diagram: str, psi: float) -> str:
@@ -734,6 +796,8 @@ class _Procedure:
         if self.has("N_Ed"):
             self._axial()
         self._shear()
+        if self.has("T_Ed"):
+            self._torsion()
         self._bending()
         if self.has("N_Ed") and (self.has("M_y_Ed") or self.has("M_z_Ed")):
             self._combined()
@@ -999,6 +1063,131 @@ class _Procedure:
                 reference="EN 1993-1-1 Eq. (6.17), (6.18)",
             )  # fmt: skip
 
+    # torsion (6.2.7) and shear with torsion (6.2.7(9))
+
+    def _torsion(self) -> None:
+        """T_Ed/T_Rd (Eq. 6.23) with St Venant torsion, and V_Ed/V_pl,T,Rd (Eq. 6.25)."""
+        w, kind = self.w, self.member.kind
+        w.heading("Torsion (EN 1993-1-1 6.2.7)", 2)
+        T_Ed = self.demands["T_Ed"]
+        w.text(CLOSED_TEXT if kind in ("RHS", "CHS") else WARPING_TEXT)
+        tau_Rd = w.clause(tor.shear_yield_strength, "tau_Rd", w["f_y"], w["gamma_M0"], unit="MPa")
+        if kind == "I":
+            t_T = w.step("t_T", w.larger(w["t_f"], w["t_w"]), "Thickest element (flange or web)")
+            T_Rd = w.clause(tor.open_section_torsion_resistance, "T_Rd", w["I_t"], t_T, tau_Rd)
+        else:
+            if kind == "RHS":
+                self._torsion_walls()
+                w.input(
+                    "k_R", self.member.corner_ratio,
+                    "Mid-line corner radius over the wall thickness, (r_o + r_i)/(2t)",
+                    dimension="dimensionless", reference=self.member.corner_source,
+                )  # fmt: skip
+                R_m = w.step("R_m", w["k_R"] * w["t"], "Mid-line corner radius")
+                A_m = w.clause(tor.enclosed_area_rhs, "A_m_T", w["b"], w["h"], w["t"], R_m)
+            else:
+                A_m = w.clause(tor.enclosed_area_chs, "A_m_T", w["d"], w["t"])
+                if w.prints:
+                    w.text(
+                        "Shear buckling of the tube wall under torsion (EN 1993-1-1 6.2.7(8)) "
+                        "is not covered by these checks."
+                    )
+            T_Rd = w.clause(tor.closed_section_torsion_resistance, "T_Rd", A_m, w["t"], tau_Rd)
+        w.text(NO_TORQUE_TEXT)
+        moments = [w.absolute(self.demands[key]) for key in ("M_y_Ed", "M_z_Ed") if self.has(key)]
+        T_abs = w.absolute(T_Ed)
+        if moments:
+            round_off = tor.TORQUE_ROUND_OFF * functools.reduce(operator.add, moments)
+            present = T_abs > round_off
+        else:
+            # Over T_Rd, so that the condition has no unit (a bare 0 has none).
+            present = T_abs / T_Rd > 0
+        T_t = w.branch(
+            "T_t_Ed",
+            [(T_abs, present), (0 * T_abs, True)],
+            "St Venant torque, the magnitude of T_Ed (zero within round-off)",
+            reference="EN 1993-1-1 6.2.7(2)",
+        )
+        # The St Venant shear stress in the part that carries each shear force, by axis.
+        part_stress: dict[str, Value] = {}
+        if kind == "I":
+            w.clause(tor.open_section_torsion_stress, "tau_t_Ed", T_t, t_T, w["I_t"], unit="MPa")
+            for axis, thickness, part in (("z", "t_w", "web"), ("y", "t_f", "flanges")):
+                if self.has(f"V_{axis}_Ed"):
+                    if w.prints:
+                        carry = "carries" if part == "web" else "carry"
+                        w.text(f"τ_t,Ed in the {part}, which {carry} V_{axis},Ed:")
+                    part_stress[axis] = w.clause(
+                        tor.open_section_torsion_stress, f"tau_t_{axis}_Ed", T_t, w[thickness],
+                        w["I_t"], unit="MPa",
+                    )  # fmt: skip
+        else:
+            tau = w.clause(
+                tor.closed_section_torsion_stress, "tau_t_Ed", T_t, A_m, w["t"], unit="MPa"
+            )
+            part_stress = {axis: tau for axis in ("z", "y") if self.has(f"V_{axis}_Ed")}
+        w.check(
+            "torsion", EN_CHECK_TITLES["torsion"], T_t, T_Rd,
+            reference="EN 1993-1-1 Eq. (6.23); 6.2.7(5), Eq. (6.1)",
+        )  # fmt: skip
+        if not part_stress:
+            return
+        w.heading("Shear force and torsion (EN 1993-1-1 6.2.7(9))", 2)
+        reduced = tor.torsion_reduced_shear_i if kind == "I" else tor.torsion_reduced_shear_hollow
+        limit = tor.I_SECTION_TORSION_FACTOR if kind == "I" else 1
+        if w.prints:
+            w.text(
+                "Where τ_t,Ed reaches "
+                + ("1.25·τ_Rd" if kind == "I" else "τ_Rd")
+                + " no shear resistance is left: under a shear force the utilization shown is "
+                "then τ_t,Ed over that stress (1 or more; without one it is 0, and the torsion "
+                "check above has failed already). V_pl,T,Rd also takes the place of V_pl,Rd in the "
+                "reduction for shear of 6.2.8 (6.2.8(4))."
+            )
+        for axis, tau_part in part_stress.items():
+            V_pl_T = w.clause(reduced, f"V_pl_T_{axis}_Rd", tau_part, tau_Rd, w[f"V_pl_{axis}_Rd"])
+            V_abs = w.absolute(self.demands[f"V_{axis}_Ed"])
+            u = w.branch(
+                f"u_VT_{axis}",
+                [
+                    (V_abs / V_pl_T, tau_part < limit * tau_Rd),
+                    (tau_part / (limit * tau_Rd), V_abs / w[f"V_pl_{axis}_Rd"] > 0),
+                    (sp.Integer(0), True),
+                ],
+                f"Utilization in shear along {axis} with torsion (τ_t,Ed over its limit where "
+                "V_pl,T,Rd = 0 under a shear force)",
+                reference=f"{reduced.reference.split(', ')[0]}, Eq. (6.25)",
+            )
+            key = f"shear_torsion_{axis}"
+            w.check(
+                key, EN_CHECK_TITLES[key], u, sp.Integer(1),
+                reference=f"EN 1993-1-1 Eq. (6.25), {reduced.reference.split('Eq. ')[-1]}",
+            )  # fmt: skip
+
+    def _torsion_walls(self) -> None:
+        """6.2.7(8) as a statement: the walls of an RHS under torsion are stocky enough
+        for the shear yield strength (else refused, as 6.2.6(6) refuses them in shear)."""
+        w = self.w
+        if "eta" not in w.symbols:
+            w.input(
+                "eta", 1.0, "Factor η of the shear area (1.0 may be used conservatively)",
+                dimension="dimensionless", reference="EN 1993-1-1 6.2.6(3) Note",
+                fixed=LIMIT_FIXED,
+            )  # fmt: skip
+        if "hw_tw_max" not in w.symbols:
+            w.clause(res.shear_buckling_limit, "hw_tw_max", w["epsilon"], w["eta"])
+        ratio = w.step(
+            "hw_tw_T", (w.larger(w["h"], w["b"]) - 2 * w["t"]) / w["t"],
+            "Slenderness of the wider walls in shear from torsion",
+        )  # fmt: skip
+        if w.prints:
+            shown = float(w.value_of(ratio).m)
+            limit = float(w.value_of(w["hw_tw_max"]).m)
+            w.text(
+                f"h_w/t = {shown:.3g} ≤ 72ε/η = {limit:.3g}: the walls need no shear buckling "
+                "verification (EN 1993-1-1 6.2.6(6), 6.2.7(8)); τ_Rd applies."
+            )
+
     def _shear_area(self, axis: str) -> Value:
         w, member = self.w, self.member
         if member.kind == "CHS":
@@ -1059,9 +1248,11 @@ class _Procedure:
         shears = [(key[2], key) for key in ("V_z_Ed", "V_y_Ed") if self.has(key)]
         if shears:
             for axis, key in shears:
-                w.clause(
-                    res.shear_reduction, f"rho_{axis}", self.demands[key], w[f"V_pl_{axis}_Rd"]
+                # 6.2.8(4): with torsion, ρ from V_pl,T,Rd (6.2.7(9)).
+                resistance = (
+                    f"V_pl_T_{axis}_Rd" if f"V_pl_T_{axis}_Rd" in w.symbols else (f"V_pl_{axis}_Rd")
                 )
+                w.clause(res.shear_reduction, f"rho_{axis}", self.demands[key], w[resistance])
             w.largest(
                 "rho", [(f"V_{axis}", w[f"rho_{axis}"]) for axis, _ in shears],
                 "Larger reduction factor",

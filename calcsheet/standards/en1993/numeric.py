@@ -60,7 +60,7 @@ def en1993_checks_numeric(
     """The utilization of each check of :func:`write_en1993_checks`, as arrays.
 
     ``demands`` maps the sheet's demand names (``N_Ed``, ``M_y_Ed``, ``M_z_Ed``,
-    ``V_z_Ed``, ``V_y_Ed``; ``V_Ed`` for ``V_z_Ed``) to arrays of shape ``(m,)`` in
+    ``V_z_Ed``, ``V_y_Ed``, ``T_Ed``; ``V_Ed`` for ``V_z_Ed``) to arrays of shape ``(m,)`` in
     N and N·m (or pint quantities); a name left out is not checked, as on the
     sheet. The options after ``interaction`` are those of lateral-torsional buckling
     and 6.3.3 (see :func:`write_en1993_checks`). Keys of the result are those of

@@ -278,6 +278,14 @@ def family_inputs(
                     )
                 ]
             )  # fmt: skip
+    if member.kind == "RHS":
+        # Torsion (6.2.7) reads each section's mid-line corner radius over t: for cold-formed
+        # sections it steps with the wall thickness (EN 10219-2 Annex B).
+        ratios = []
+        for wall in table.values["t"]:
+            outer, inner = corner_radii(float(wall / MM), member.fabrication)
+            ratios.append((outer + inner) / (2 * float(wall / MM)))
+        given["k_R"] = np.array(ratios)[:, np.newaxis]
     refused = np.zeros((len(table.names), 1), dtype=bool)
     if material.source != "given":
         refused = (table.thickest > NOMINAL_THICKNESS_LIMIT_MM)[:, np.newaxis]
