@@ -125,12 +125,6 @@ def test_the_aisc_panel_keeps_load_height_and_tip_restraint(tmp_path) -> None:
     assert saved["tip_restraint"] == "torsionally restrained" and "load_height" not in saved
 
 
-@pytest.mark.xfail(
-    strict=True,
-    reason="EN 1993-1-1 Annex A on the member sheet names its strong-axis I_y as the sheet's "
-    "I_y (calcsheet's minor axis): 'the sheet already defines I_y'. In "
-    "standards/en1993/member.py, outside this change.",
-)
 def test_a_job_with_annex_a_builds(tmp_path) -> None:
     from calcsheet.build import build_sheets
 

@@ -554,7 +554,8 @@ def member_data(
             ("I_w", "Cw", "Warping constant"),
         )
         if interaction_method == "A":
-            torsion = (("I_y", "Ix", "Second moment of area about y-y (calcsheet I_x)"), *torsion)
+            # Named I_yy: a member sheet's own I_y is calcsheet's minor axis.
+            torsion = (("I_yy", "Ix", "Second moment of area about y-y (calcsheet I_x)"), *torsion)
         for name, key, description in torsion:
             if key not in props or not math.isfinite(float(props[key].m)):
                 raise InputError(
@@ -1635,7 +1636,7 @@ class _Procedure:
             )  # fmt: skip
             w.clause(lat.shear_modulus, "G", w["E"], w["nu"], unit="MPa")
         E, G = w["E"], w["G"]
-        w.clause(buck.critical_force, "N_cr_y", E, w["I_y"], w["L_cr_y"])
+        w.clause(buck.critical_force, "N_cr_y", E, w["I_yy"], w["L_cr_y"])
         w.clause(buck.critical_force, "N_cr_z", E, w["I_z"], w["L_cr_z"])
         # The torsional buckling length is taken as the minor-axis one (common practice,
         # no source): the end conditions for twist follow those for lateral bending.
@@ -1654,7 +1655,7 @@ class _Procedure:
             for axis in "yz"
         }
         n_pl = w.clause(annex_a.axial_plastic_ratio, "n_pl", N_c, w["A"], w["f_y"], w["gamma_M1"])
-        a_LT = w.clause(annex_a.torsion_ratio, "a_LT", w["I_t"], w["I_y"])
+        a_LT = w.clause(annex_a.torsion_ratio, "a_LT", w["I_t"], w["I_yy"])
         lam_max = w.largest(
             "lambda_max", [("y-y", w["lambda_rel_y"]), ("z-z", w["lambda_rel_z"])],
             "Larger flexural slenderness λ̄_max",

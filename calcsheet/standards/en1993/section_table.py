@@ -200,6 +200,7 @@ def family_table(family: str) -> FamilyTable:
     }  # fmt: skip
     si = {name: value * MM ** power.get(name, 1) for name, value in values.items()}
     si.update({name: value * MM for name, value in dims.items()})
+    si["I_yy"] = si["I_y"]  # the EN strong axis under the name the Annex A steps use
     return FamilyTable(
         family=key,
         names=tuple(names),
