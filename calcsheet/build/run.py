@@ -46,6 +46,7 @@ class BuiltSheet:
     stem: str
     paths: list[Path] = field(default_factory=list)
     station: str = ""  # "z = 30 in" when the job has several stations
+    typst: str = ""  # the Typst markup its PDF was compiled from (kept for a calc package)
 
     @cached_property
     def results(self) -> dict:
@@ -233,15 +234,16 @@ def write_outputs(
     nothing is written. ``waiting`` is told when another build holds the folder.
     """
     # Imported here: rendering and the PDF engine are only needed when writing.
-    from calcsheet.export.files import folder_lock, make_folder, pdf_bytes, write_all_atomically
+    from calcsheet.export.files import compile_pdf, folder_lock, make_folder, write_all_atomically
     from calcsheet.render.html import render_html
+    from calcsheet.render.typst import render_typst
 
     formats = result.job.output.formats
     rendered: list[tuple[Path, bytes]] = []
     for built in result.sheets:
         if "pdf" in formats:
-            data = pdf_bytes(built.sheet, paper=result.job.output.paper)
-            rendered.append((folder / f"{built.stem}.pdf", data))
+            built.typst = render_typst(built.sheet, paper=result.job.output.paper)
+            rendered.append((folder / f"{built.stem}.pdf", compile_pdf(built.typst)))
         if "html" in formats:
             rendered.append((folder / f"{built.stem}.html", render_html(built.sheet).encode()))
         if "json" in formats:
@@ -289,27 +291,73 @@ def issued_hash(folder: Path, stem: str) -> str | None:
 def refuse_replacing_issued(result: BuildResult, folder: Path) -> None:
     """Raise :class:`JobError` if writing would replace files built from other inputs."""
     revision = result.sheets[0].sheet.title_block.revision if result.sheets else "0"
+    refuse_replacing(
+        folder,
+        [built.stem for built in result.sheets],
+        result.hash,
+        revision=revision,
+        source=result.source,
+        command="calcsheet build --replace-issued",
+    )
+
+
+def refuse_replacing(
+    folder: Path, stems: list[str], inputs: str, *, revision: str, source: str, command: str
+) -> None:
+    """Raise :class:`JobError` if files ``stems``.* in ``folder`` came from inputs other
+    than ``inputs`` (a hash) under the same revision: a sheet's files, or a calc package's."""
     problems = []
-    for built in result.sheets:
-        found = issued_hash(folder, built.stem)
-        if found is None or found == result.hash:
+    for stem in stems:
+        found = issued_hash(folder, stem)
+        if found is None or found == inputs:
             continue
         if found:
             why = (
-                f"{folder / built.stem}.* were built from other inputs "
-                f"(inputs {found} then, {result.hash} now) under the same revision {revision!r}"
+                f"{folder / stem}.* were built from other inputs "
+                f"(inputs {found} then, {inputs} now) under the same revision {revision!r}"
             )
         else:
             why = (
-                f"{folder / built.stem}.* exist and do not say which inputs built them "
+                f"{folder / stem}.* exist and do not say which inputs built them "
                 "(no JSON or HTML of theirs)"
             )
         problems.append(
             (
                 "revisions",
                 f"{why}: add a [[revisions]] entry with a new mark to issue the change, "
-                "or replace the issued files on purpose (calcsheet build --replace-issued)",
+                f"or replace the issued files on purpose ({command})",
             )
         )
     if problems:
-        raise JobError(result.source, problems)
+        raise JobError(source, problems)
+
+
+@dataclass(frozen=True)
+class PackageEntry:
+    """What a calc package needs of one member: its sheets' markup and its title block.
+
+    Made in the process that built the member (a batch worker), so the package is set
+    from the very markup the member's own PDF was compiled from, without building again.
+    """
+
+    markups: tuple[str, ...]  # one per sheet (station), in order
+    title_block: tuple[tuple[str, str], ...]  # (field name, text), as TitleBlock declares
+    issued: str  # the date the sheets are issued on (ISO), for the package's own date
+    inputs: str  # the member's inputs hash
+    paper: str
+
+
+def package_entry(result: BuildResult) -> PackageEntry:
+    """The package's part of a built and written job (its PDF markup must be rendered)."""
+    from dataclasses import asdict
+
+    from calcsheet.render.view import issue_date  # rendering only where a package is made
+
+    first = result.sheets[0].sheet
+    return PackageEntry(
+        markups=tuple(built.typst for built in result.sheets if built.typst),
+        title_block=tuple((key, str(value)) for key, value in asdict(first.title_block).items()),
+        issued=issue_date(first).isoformat(),
+        inputs=result.hash,
+        paper=result.job.output.paper,
+    )
