@@ -235,16 +235,12 @@ def _read_text(path: Path, *, limit: int, kind: str) -> str:
 
 def _batch(arguments: argparse.Namespace) -> int:
     from calcsheet.build.batch import (
-        LOG_NAME,
-        batch_log,
         members_from_csv,
         members_from_toml,
-        run_batch,
-        summary_csv,
-        summary_sheet,
+        run_batch_and_summary,
         write_package,
     )
-    from calcsheet.export.files import export_sheet, make_folder, write_atomically
+    from calcsheet.export.files import make_folder, write_all_atomically
     from calcsheet.job import JobError
     from calcsheet.job.load import MAX_JOB_BYTES
 
@@ -265,7 +261,7 @@ def _batch(arguments: argparse.Namespace) -> int:
     else:
         members = members_from_toml(text, source=str(table), base=base)
     folder = arguments.out or Path("batch-out")
-    outcomes = run_batch(
+    run = run_batch_and_summary(
         members,
         folder,
         source=str(table),
@@ -274,16 +270,15 @@ def _batch(arguments: argparse.Namespace) -> int:
         replace_issued=arguments.replace_issued,
         package=arguments.package is not None,
     )
+    outcomes = run.outcomes
     for outcome in outcomes:
         if not outcome.ok:
             print(f"skipped {outcome.name}:\n{outcome.message}", file=sys.stderr)
     make_folder(folder)
-    write_atomically(folder / "summary.csv", summary_csv(outcomes).encode())
-    write_atomically(folder / LOG_NAME, batch_log(outcomes, source=str(table)).encode())
-    for path in export_sheet(summary_sheet(outcomes), folder, "summary"):
+    summary = [(folder / name, data) for name, data in run.summary]
+    write_all_atomically(summary)
+    for path, _ in summary:
         print(f"wrote {path}")
-    print(f"wrote {folder / 'summary.csv'}")
-    print(f"wrote {folder / LOG_NAME}")
     if arguments.package is not None:  # after the summary: a package refused loses nothing
         package = write_package(
             outcomes,

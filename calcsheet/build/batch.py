@@ -24,6 +24,7 @@ from __future__ import annotations
 
 import copy
 import csv
+import dataclasses
 import difflib
 import io
 import multiprocessing
@@ -482,6 +483,43 @@ def run_batch(
     ``package``: each outcome carries its member's part of a calc package
     (:func:`write_package` sets them into one PDF).
     """
+    return run_batch_and_summary(
+        members,
+        folder,
+        source=source,
+        workers=workers,
+        progress=progress,
+        replace_issued=replace_issued,
+        package=package,
+        summarize=False,
+    ).outcomes
+
+
+@dataclass(frozen=True)
+class BatchRun:
+    """A batch's outcomes, and its summary files rendered but not yet written."""
+
+    outcomes: list[MemberOutcome]
+    summary: list[tuple[str, bytes]]  # (file name, contents), see :func:`summary_files`
+
+
+def run_batch_and_summary(
+    members: Sequence[BatchMember | dict[str, Any]],
+    folder: Path,
+    *,
+    source: str,
+    workers: int | None = None,
+    progress: Callable[[int, int, MemberOutcome], None] | None = None,
+    replace_issued: bool = False,
+    package: bool = False,
+    summarize: bool = True,
+) -> BatchRun:
+    """:func:`run_batch`, and the summary's files rendered by a worker already warm.
+
+    A worker has the sheet engine imported and its PDF compiler's fonts loaded; the parent
+    has neither (it only hands out members), and would spend a second or more on them
+    after the last member, with every worker idle.
+    """
     if workers is not None and (isinstance(workers, bool) or workers < 1):
         raise InputError("workers", workers, "a whole number of processes, at least 1")
     entries = [_as_member(index, member) for index, member in enumerate(members)]
@@ -497,7 +535,7 @@ def run_batch(
             outcomes.append(outcome)
             if progress:
                 progress(done, count, outcome)
-        return outcomes
+        return BatchRun(outcomes, summary_files(outcomes, source=source) if summarize else [])
     # "spawn": a forked worker would inherit the parent's PDF compiler and its threads.
     context = multiprocessing.get_context("spawn")
     with ProcessPoolExecutor(
@@ -515,7 +553,12 @@ def run_batch(
             outcomes.append(outcome)
             if progress:
                 progress(done, count, outcome)
-    return outcomes
+        if not summarize:
+            return BatchRun(outcomes, [])
+        # The package parts stay here: the summary needs none of their markup.
+        light = [dataclasses.replace(outcome, package=None) for outcome in outcomes]
+        summary = pool.submit(summary_files, light, source=source).result()
+    return BatchRun(outcomes, summary)
 
 
 SUMMARY_COLUMNS = [
@@ -757,3 +800,21 @@ def write_package(
             )
         write_all_atomically(files)
     return PackageFiles(tuple(path for path, _ in files), len(built), len(outcomes) - len(built))
+
+
+SUMMARY_NAME = "summary"
+
+
+def summary_files(outcomes: list[MemberOutcome], *, source: str) -> list[tuple[str, bytes]]:
+    """The batch's summary as files (name, contents): the summary sheet's HTML and PDF,
+    ``summary.csv`` and the batch log, in the order they are reported."""
+    from calcsheet.export.files import pdf_bytes
+    from calcsheet.render.html import render_html
+
+    sheet = summary_sheet(outcomes)
+    return [
+        (f"{SUMMARY_NAME}.html", render_html(sheet).encode("utf-8")),
+        (f"{SUMMARY_NAME}.pdf", pdf_bytes(sheet)),
+        (f"{SUMMARY_NAME}.csv", summary_csv(outcomes).encode()),
+        (LOG_NAME, batch_log(outcomes, source=source).encode()),
+    ]

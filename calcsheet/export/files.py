@@ -26,16 +26,18 @@ import time
 from collections.abc import Callable, Iterator
 from functools import lru_cache
 from pathlib import Path
-from typing import Any
+from typing import TYPE_CHECKING, Any
 
-from calcsheet.engine import Sheet
 from calcsheet.errors import ExportError
-from calcsheet.render.html import render_html
-from calcsheet.render.typst import paper_inputs, render_typst
+
+if TYPE_CHECKING:  # the renderers load when a sheet is rendered: a batch's parent only writes
+    from calcsheet.engine import Sheet
 
 
 def pdf_bytes(sheet: Sheet, *, paper: str = "letter") -> bytes:
     """Compile the sheet's Typst markup to PDF in memory (fonts come with the typst wheel)."""
+    from calcsheet.render.typst import render_typst
+
     return compile_pdf(render_typst(sheet, paper=paper))
 
 
@@ -70,6 +72,8 @@ PDF_STANDARDS = ["a-2b"]
 
 def compile_pdf(source: str, *, paper: str | None = None) -> bytes:
     """Compile Typst markup from ``render_typst`` to PDF/A-2b; ``paper`` overrides its paper."""
+    from calcsheet.render.typst import paper_inputs
+
     # Validated before the compiler runs, so a wrong paper names the field, not Typst.
     inputs = paper_inputs(paper) if paper is not None else {}
     try:
@@ -305,6 +309,8 @@ def _cannot_write(path: Path, error: OSError) -> str:
 
 def export_sheet(sheet: Sheet, folder: Path, stem: str, *, paper: str = "letter") -> list[Path]:
     """Write ``stem``.html and ``stem``.pdf into ``folder``, both built before either is written."""
+    from calcsheet.render.html import render_html
+
     folder = Path(folder)
     make_folder(folder)
     html = render_html(sheet).encode("utf-8")
