@@ -386,16 +386,21 @@ class PackageEntry:
 
 
 def package_entry(result: BuildResult) -> PackageEntry:
-    """The package's part of a built and written job (its PDF markup must be rendered)."""
+    """The package's part of a built job: its sheets' markup and its title block."""
     from dataclasses import asdict
 
+    from calcsheet.render.typst import render_typst
     from calcsheet.render.view import issue_date  # rendering only where a package is made
 
     first = result.sheets[0].sheet
+    paper = result.job.output.paper
     return PackageEntry(
-        markups=tuple(built.typst for built in result.sheets if built.typst),
+        # The markup its PDF was compiled from; rendered here if the job writes no PDF.
+        markups=tuple(
+            built.typst or render_typst(built.sheet, paper=paper) for built in result.sheets
+        ),
         title_block=tuple((key, str(value)) for key, value in asdict(first.title_block).items()),
         issued=issue_date(first).isoformat(),
         inputs=result.hash,
-        paper=result.job.output.paper,
+        paper=paper,
     )

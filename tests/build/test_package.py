@@ -128,3 +128,18 @@ def test_a_package_with_no_member_built_says_so(batch: tuple[Path, list], tmp_pa
         write_package(skipped, tmp_path, source="members.csv")
     assert "nothing was written" in str(raised.value)
     assert not list(tmp_path.iterdir())
+
+
+def test_a_member_written_without_a_pdf_still_goes_into_the_package(tmp_path: Path) -> None:
+    base = _base()
+    base["output"]["formats"] = ["json"]
+    members = members_from_csv(TABLE.splitlines()[0] + "\nP1,W8X31,1 kip\n", base, source="one.csv")
+    outcomes = run_batch(members, tmp_path, source="one.csv", workers=1, package=True)
+    assert not list(tmp_path.glob("P1-*.pdf"))
+    files = write_package(outcomes, tmp_path, source="one.csv", calc_number="PK-2")
+    reader = pypdf.PdfReader(files.paths[0])
+    top = [item for item in reader.outline if not isinstance(item, list)]
+    assert [item.title for item in top][-1] == "P1"
+    assert (
+        "Davit arm P1" in reader.pages[reader.get_destination_page_number(top[-1])].extract_text()
+    )
