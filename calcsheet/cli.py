@@ -26,6 +26,7 @@ examples:
   calcsheet compare rev-A.toml rev-B.toml  the revision delta as PDF and HTML
   calcsheet batch members.toml             one sheet per member plus a summary
   calcsheet batch members.csv --base davit.toml
+  calcsheet batch members.toml --package C-100   ... and one calc package PDF, calc no. C-100
 """
 
 OK, CHECK_FAILS, BAD_INPUT, NOT_WRITTEN, INTERNAL = 0, 1, 2, 3, 4
@@ -110,6 +111,16 @@ def _parser() -> argparse.ArgumentParser:
         "--workers", type=_processes, default=None, help="processes, at least 1 (default: CPUs)"
     )
     batch.add_argument("--replace-issued", action="store_true", help=REPLACE_ISSUED_HELP)
+    batch.add_argument(
+        "--package",
+        nargs="?",
+        const="",
+        default=None,
+        metavar="CALC_NO",
+        help="also write one calc package PDF: a cover, contents, the summary and every "
+        "member's sheets numbered through; CALC_NO is its calc number (default: "
+        "'<table> package')",
+    )
     return parser
 
 
@@ -224,15 +235,12 @@ def _read_text(path: Path, *, limit: int, kind: str) -> str:
 
 def _batch(arguments: argparse.Namespace) -> int:
     from calcsheet.build.batch import (
-        LOG_NAME,
-        batch_log,
         members_from_csv,
         members_from_toml,
-        run_batch,
-        summary_csv,
-        summary_sheet,
+        run_batch_and_summary,
+        write_package,
     )
-    from calcsheet.export.files import export_sheet, make_folder, write_atomically
+    from calcsheet.export.files import make_folder, write_all_atomically
     from calcsheet.job import JobError
     from calcsheet.job.load import MAX_JOB_BYTES
 
@@ -253,24 +261,34 @@ def _batch(arguments: argparse.Namespace) -> int:
     else:
         members = members_from_toml(text, source=str(table), base=base)
     folder = arguments.out or Path("batch-out")
-    outcomes = run_batch(
+    run = run_batch_and_summary(
         members,
         folder,
         source=str(table),
         workers=arguments.workers,
         progress=_progress,
         replace_issued=arguments.replace_issued,
+        package=arguments.package is not None,
     )
+    outcomes = run.outcomes
     for outcome in outcomes:
         if not outcome.ok:
             print(f"skipped {outcome.name}:\n{outcome.message}", file=sys.stderr)
     make_folder(folder)
-    write_atomically(folder / "summary.csv", summary_csv(outcomes).encode())
-    write_atomically(folder / LOG_NAME, batch_log(outcomes, source=str(table)).encode())
-    for path in export_sheet(summary_sheet(outcomes), folder, "summary"):
+    summary = [(folder / name, data) for name, data in run.summary]
+    write_all_atomically(summary)
+    for path, _ in summary:
         print(f"wrote {path}")
-    print(f"wrote {folder / 'summary.csv'}")
-    print(f"wrote {folder / LOG_NAME}")
+    if arguments.package is not None:  # after the summary: a package refused loses nothing
+        package = write_package(
+            outcomes,
+            folder,
+            source=str(table),
+            calc_number=arguments.package,
+            replace_issued=arguments.replace_issued,
+        )
+        for path in package.paths:
+            print(f"wrote {path}")
     if any(outcome.not_written for outcome in outcomes):
         return NOT_WRITTEN
     if any(not outcome.ok for outcome in outcomes):

@@ -1,8 +1,37 @@
-"""Building jobs: job -> model -> member sheet -> PDF, HTML and JSON on disk."""
+"""Building jobs: job -> model -> member sheet -> PDF, HTML and JSON on disk.
 
-from calcsheet.build.model import MemberModel, member_model
-from calcsheet.build.run import BuildResult, build_sheets, output_folder, safe_stem, write_outputs
-from calcsheet.build.trace import inputs_hash, trace_text
+The names below load on first use (PEP 562): a batch's parent process imports
+``calcsheet.build.batch`` only to read the table and hand members to workers, and
+should not pay for the calcs it never runs (over a second, before any worker starts).
+"""
+
+from __future__ import annotations
+
+import importlib
+from typing import TYPE_CHECKING, Any
+
+if TYPE_CHECKING:
+    from calcsheet.build.model import MemberModel, member_model
+    from calcsheet.build.run import (
+        BuildResult,
+        build_sheets,
+        output_folder,
+        safe_stem,
+        write_outputs,
+    )
+    from calcsheet.build.trace import inputs_hash, trace_text
+
+_HOMES = {
+    "MemberModel": "calcsheet.build.model",
+    "member_model": "calcsheet.build.model",
+    "BuildResult": "calcsheet.build.run",
+    "build_sheets": "calcsheet.build.run",
+    "output_folder": "calcsheet.build.run",
+    "safe_stem": "calcsheet.build.run",
+    "write_outputs": "calcsheet.build.run",
+    "inputs_hash": "calcsheet.build.trace",
+    "trace_text": "calcsheet.build.trace",
+}
 
 __all__ = [
     "BuildResult",
@@ -15,3 +44,12 @@ __all__ = [
     "trace_text",
     "write_outputs",
 ]
+
+
+def __getattr__(name: str) -> Any:
+    home = _HOMES.get(name)
+    if home is None:
+        raise AttributeError(f"module {__name__!r} has no attribute {name!r}")
+    value = getattr(importlib.import_module(home), name)
+    globals()[name] = value  # once loaded, an ordinary attribute
+    return value

@@ -24,6 +24,7 @@ from __future__ import annotations
 
 import copy
 import csv
+import dataclasses
 import difflib
 import io
 import multiprocessing
@@ -37,13 +38,16 @@ from collections.abc import Callable, Iterator, Sequence
 from concurrent.futures import ProcessPoolExecutor
 from dataclasses import dataclass
 from pathlib import Path
-from typing import Any
+from typing import TYPE_CHECKING, Any
 
 from pydantic import BaseModel
 
 from calcsheet.errors import CalcsheetError, ExportError, InputError
 from calcsheet.job import JobError, job_from_data
 from calcsheet.job.schema import Job
+
+if TYPE_CHECKING:  # the build stage is heavy: workers import it, the parent need not
+    from calcsheet.build.run import PackageEntry
 
 MAX_MEMBERS = 5000
 MAX_INDEX = 200
@@ -92,6 +96,7 @@ class MemberOutcome:
     governing: str = ""  # the governing check, where it governs
     reason: str = ""  # why the member was skipped, on one line
     not_written: bool = False  # skipped because its files could not be written
+    package: PackageEntry | None = None  # its part of a calc package, when one is made
 
     @property
     def status(self) -> str:
@@ -411,9 +416,13 @@ def build_member(
     folder: str,
     source: str,
     replace_issued: bool = False,
+    package: bool = False,
 ) -> MemberOutcome:
-    """Build and write one member (runs in a worker process); never raises for bad input."""
-    from calcsheet.build.run import build_sheets, write_outputs  # heavy: only in workers
+    """Build and write one member (runs in a worker process); never raises for bad input.
+
+    ``package``: also hand back the member's part of a calc package (its PDF markup).
+    """
+    from calcsheet.build.run import build_sheets, package_entry, write_outputs  # workers only
 
     member = _personalized(_as_member(0, member))
     name = member.name or "?"
@@ -450,6 +459,7 @@ def build_member(
         result.summary(),
         tuple(str(path) for path in paths),
         governing=result.governing_text(),
+        package=package_entry(result) if package else None,
     )
 
 
@@ -466,8 +476,50 @@ def run_batch(
     workers: int | None = None,
     progress: Callable[[int, int, MemberOutcome], None] | None = None,
     replace_issued: bool = False,
+    package: bool = False,
 ) -> list[MemberOutcome]:
-    """Build every member in parallel processes; outcomes in the table's order."""
+    """Build every member in parallel processes; outcomes in the table's order.
+
+    ``package``: each outcome carries its member's part of a calc package
+    (:func:`write_package` sets them into one PDF).
+    """
+    return run_batch_and_summary(
+        members,
+        folder,
+        source=source,
+        workers=workers,
+        progress=progress,
+        replace_issued=replace_issued,
+        package=package,
+        summarize=False,
+    ).outcomes
+
+
+@dataclass(frozen=True)
+class BatchRun:
+    """A batch's outcomes, and its summary files rendered but not yet written."""
+
+    outcomes: list[MemberOutcome]
+    summary: list[tuple[str, bytes]]  # (file name, contents), see :func:`summary_files`
+
+
+def run_batch_and_summary(
+    members: Sequence[BatchMember | dict[str, Any]],
+    folder: Path,
+    *,
+    source: str,
+    workers: int | None = None,
+    progress: Callable[[int, int, MemberOutcome], None] | None = None,
+    replace_issued: bool = False,
+    package: bool = False,
+    summarize: bool = True,
+) -> BatchRun:
+    """:func:`run_batch`, and the summary's files rendered by a worker already warm.
+
+    A worker has the sheet engine imported and its PDF compiler's fonts loaded; the parent
+    has neither (it only hands out members), and would spend a second or more on them
+    after the last member, with every worker idle.
+    """
     if workers is not None and (isinstance(workers, bool) or workers < 1):
         raise InputError("workers", workers, "a whole number of processes, at least 1")
     entries = [_as_member(index, member) for index, member in enumerate(members)]
@@ -477,13 +529,13 @@ def run_batch(
     count = len(entries)
     if workers == 1:
         results: Iterator[MemberOutcome] = (
-            build_member(entry, str(folder), source, replace_issued) for entry in entries
+            build_member(entry, str(folder), source, replace_issued, package) for entry in entries
         )
         for done, outcome in enumerate(results, start=1):
             outcomes.append(outcome)
             if progress:
                 progress(done, count, outcome)
-        return outcomes
+        return BatchRun(outcomes, summary_files(outcomes, source=source) if summarize else [])
     # "spawn": a forked worker would inherit the parent's PDF compiler and its threads.
     context = multiprocessing.get_context("spawn")
     with ProcessPoolExecutor(
@@ -495,12 +547,18 @@ def run_batch(
             [str(folder)] * count,
             [source] * count,
             [replace_issued] * count,
+            [package] * count,
         )
         for done, outcome in enumerate(mapped, start=1):
             outcomes.append(outcome)
             if progress:
                 progress(done, count, outcome)
-    return outcomes
+        if not summarize:
+            return BatchRun(outcomes, [])
+        # The package parts stay here: the summary needs none of their markup.
+        light = [dataclasses.replace(outcome, package=None) for outcome in outcomes]
+        summary = pool.submit(summary_files, light, source=source).result()
+    return BatchRun(outcomes, summary)
 
 
 SUMMARY_COLUMNS = [
@@ -567,3 +625,196 @@ def summary_sheet(outcomes: list[MemberOutcome], *, title: str = "Batch summary"
     rows = list(csv.reader(io.StringIO(summary_csv(outcomes))))
     sheet.table(rows[0], rows[1:], caption="Governing utilization of each member")
     return sheet
+
+
+# Why a package is ONE Typst document (the members' markup set one after another) rather
+# than the members' PDFs joined: one document has one PDF/A-2b metadata stream and one
+# bookmark outline, and Typst's page counter numbers the sheets through the package by
+# itself; PDFs joined afterwards would need a PDF library at run time and their PDF/A
+# metadata and outlines rebuilt by hand.
+PACKAGE_LABEL = "calcsheet-member-{index}"
+
+
+@dataclass(frozen=True)
+class PackageFiles:
+    """The files of a calc package and what it holds."""
+
+    paths: tuple[Path, ...]
+    members: int  # members whose sheets are in it
+    left_out: int  # members skipped (their line in the contents says why)
+
+
+def _shared(entries: list[PackageEntry], key: str) -> str:
+    """The title-block value every member shares, else the distinct values joined."""
+    values = [dict(entry.title_block).get(key, "") for entry in entries]
+    distinct = list(dict.fromkeys(value for value in values if value))
+    return ", ".join(distinct)
+
+
+def write_package(
+    outcomes: list[MemberOutcome],
+    folder: Path,
+    *,
+    source: str,
+    calc_number: str = "",
+    replace_issued: bool = False,
+    waiting: Callable[[str], None] | None = None,
+) -> PackageFiles:
+    """Write the calc package of a batch: one PDF/A-2b with a cover, the contents, the
+    summary and every member's sheets numbered through, and a JSON saying what is in it.
+
+    ``outcomes`` come from :func:`run_batch` with ``package=True``. The package's inputs
+    hash covers every member's; an issued package of the same name and revision is
+    replaced only by the same inputs, or with ``replace_issued`` (as a member's files).
+    Raises :class:`JobError` when no member could be built.
+    """
+    import datetime
+    import hashlib
+    import json
+
+    from calcsheet import __version__
+    from calcsheet.build.run import refuse_replacing, safe_stem
+    from calcsheet.engine import CAUTIONS
+    from calcsheet.export.files import (
+        compile_pdf,
+        folder_lock,
+        make_folder,
+        package_markup,
+        write_all_atomically,
+    )
+    from calcsheet.render.typst import typst_paper
+
+    built = [outcome for outcome in outcomes if outcome.ok and outcome.package is not None]
+    entries = [outcome.package for outcome in built if outcome.package is not None]
+    if not entries:
+        raise JobError(
+            source,
+            [
+                (
+                    "package",
+                    f"none of the {len(outcomes)} members was built (see why in {LOG_NAME}), "
+                    "so there are no sheets to put in a calc package; nothing was written "
+                    "for it",
+                )
+            ],
+        )
+    revision = _shared(entries, "revision") or "0"
+    calc_number = calc_number.strip() or f"{Path(source).stem} package"
+    fingerprint = "\n".join(
+        [calc_number, revision]
+        + [
+            f"{outcome.name}\t{outcome.status}\t{outcome.package.inputs if outcome.package else ''}"
+            for outcome in outcomes
+        ]
+    )
+    inputs = hashlib.sha256(fingerprint.encode("utf-8")).hexdigest()[:12]
+    trace = f"inputs {inputs} · rev. {revision}"
+    labels = {
+        outcome.name: PACKAGE_LABEL.format(index=index) for index, outcome in enumerate(built)
+    }
+    summary_rows = list(csv.reader(io.StringIO(summary_csv(outcomes))))
+    contents = [
+        {
+            "name": outcome.name,
+            "section": outcome.section,
+            "utilization": f"{outcome.utilization:.3f}" if outcome.utilization is not None else "",
+            "status": outcome.status,
+            "note": outcome.governing if outcome.ok else outcome.reason,
+            "label": labels.get(outcome.name, ""),
+        }
+        for outcome in outcomes
+    ]
+    members = [
+        {"name": outcome.name, "label": labels[outcome.name], "markups": outcome.package.markups}
+        for outcome in built
+        if outcome.package is not None
+    ]
+    project = _shared(entries, "project")
+    title_items = [
+        ("Project", project),
+        ("Project no.", _shared(entries, "project_number")),
+        ("Calc no.", calc_number),
+        ("Revision", revision),
+        ("Members", f"{len(built)} of {len(outcomes)} ({source})"),
+        ("Prepared by", _shared(entries, "prepared_by")),
+        ("Checked by", _shared(entries, "checked_by")),
+        ("Checked on", _shared(entries, "checked_date")),
+    ]
+    markup = package_markup(
+        {
+            "paper": typst_paper(entries[0].paper),
+            "title": f"Calc package {calc_number}",
+            "title_items": title_items,
+            "project": project,
+            "project_number": _shared(entries, "project_number"),
+            "calc_number": calc_number,
+            "revision": revision,
+            "tool_version": __version__,
+            "trace": trace,
+            "cautions": CAUTIONS,
+            "contents": contents,
+            "counts": _counts(outcomes) + ".",
+            "summary_columns": summary_rows[0],
+            "summary_rows": summary_rows[1:],
+            "members": members,
+            "authors": [_shared(entries, "prepared_by")] if _shared(entries, "prepared_by") else [],
+            "description": f"{project}: calc package {calc_number}, {_counts(outcomes)}",
+            "keywords": [calc_number, f"rev. {revision}", trace],
+            "date": max(datetime.date.fromisoformat(entry.issued) for entry in entries),
+        }
+    )
+    pdf = compile_pdf(markup)
+    manifest = {
+        "package": calc_number,
+        "revision": revision,
+        "trace": trace,
+        "source": source,
+        "members": [
+            {
+                "name": outcome.name,
+                "status": outcome.status,
+                "governing_utilization": outcome.utilization,
+                "inputs": outcome.package.inputs if outcome.package else None,
+            }
+            for outcome in outcomes
+        ],
+    }
+    stem = f"{safe_stem(calc_number, fallback='package')}-rev{safe_stem(revision, fallback='0')}"
+    files = [
+        (folder / f"{stem}.pdf", pdf),
+        (
+            folder / f"{stem}.json",
+            (json.dumps(manifest, indent=2, ensure_ascii=False) + "\n").encode(),
+        ),
+    ]
+    make_folder(folder)
+    with folder_lock(folder, waiting=waiting):
+        if not replace_issued:
+            refuse_replacing(
+                folder,
+                [stem],
+                inputs,
+                revision=revision,
+                source=source,
+                command="calcsheet batch --package --replace-issued",
+            )
+        write_all_atomically(files)
+    return PackageFiles(tuple(path for path, _ in files), len(built), len(outcomes) - len(built))
+
+
+SUMMARY_NAME = "summary"
+
+
+def summary_files(outcomes: list[MemberOutcome], *, source: str) -> list[tuple[str, bytes]]:
+    """The batch's summary as files (name, contents): the summary sheet's HTML and PDF,
+    ``summary.csv`` and the batch log, in the order they are reported."""
+    from calcsheet.export.files import pdf_bytes
+    from calcsheet.render.html import render_html
+
+    sheet = summary_sheet(outcomes)
+    return [
+        (f"{SUMMARY_NAME}.html", render_html(sheet).encode("utf-8")),
+        (f"{SUMMARY_NAME}.pdf", pdf_bytes(sheet)),
+        (f"{SUMMARY_NAME}.csv", summary_csv(outcomes).encode()),
+        (LOG_NAME, batch_log(outcomes, source=source).encode()),
+    ]

@@ -12,9 +12,10 @@ folder's lock, so a second build into the folder waits for the first.
 
 from __future__ import annotations
 
+import contextlib
 import json
 import re
-from collections.abc import Callable
+from collections.abc import Callable, Iterator
 from dataclasses import dataclass, field
 from functools import cached_property
 from pathlib import Path
@@ -46,6 +47,7 @@ class BuiltSheet:
     stem: str
     paths: list[Path] = field(default_factory=list)
     station: str = ""  # "z = 30 in" when the job has several stations
+    typst: str = ""  # the Typst markup its PDF was compiled from (kept for a calc package)
 
     @cached_property
     def results(self) -> dict:
@@ -233,20 +235,13 @@ def write_outputs(
     nothing is written. ``waiting`` is told when another build holds the folder.
     """
     # Imported here: rendering and the PDF engine are only needed when writing.
-    from calcsheet.export.files import folder_lock, make_folder, pdf_bytes, write_all_atomically
-    from calcsheet.render.html import render_html
+    from calcsheet.export.files import folder_lock, make_folder, write_all_atomically
 
     formats = result.job.output.formats
     rendered: list[tuple[Path, bytes]] = []
     for built in result.sheets:
-        if "pdf" in formats:
-            data = pdf_bytes(built.sheet, paper=result.job.output.paper)
-            rendered.append((folder / f"{built.stem}.pdf", data))
-        if "html" in formats:
-            rendered.append((folder / f"{built.stem}.html", render_html(built.sheet).encode()))
-        if "json" in formats:
-            text = json.dumps(built.results, indent=2, ensure_ascii=False, sort_keys=False)
-            rendered.append((folder / f"{built.stem}.json", (text + "\n").encode()))
+        with _each_figure_drawn_once(built.sheet):
+            rendered += _rendered(built, folder, formats, result.job.output.paper)
     make_folder(folder)
     # The check and the writes under one lock: a build that waited sees what the other wrote.
     with folder_lock(folder, waiting=waiting):
@@ -257,6 +252,51 @@ def write_outputs(
     for built in result.sheets:
         built.paths = [path for path in written if path.stem == built.stem]
     return written
+
+
+def _rendered(
+    built: BuiltSheet, folder: Path, formats: list[str], paper: str
+) -> list[tuple[Path, bytes]]:
+    """The sheet's outputs in ``formats`` as (path, bytes), nothing written yet."""
+    # Imported here: rendering and the PDF engine are only needed when writing.
+    from calcsheet.export.files import compile_pdf
+    from calcsheet.render.html import render_html
+    from calcsheet.render.typst import render_typst
+
+    rendered = []
+    if "pdf" in formats:
+        built.typst = render_typst(built.sheet, paper=paper)
+        rendered.append((folder / f"{built.stem}.pdf", compile_pdf(built.typst)))
+    if "html" in formats:
+        rendered.append((folder / f"{built.stem}.html", render_html(built.sheet).encode()))
+    if "json" in formats:
+        text = json.dumps(built.results, indent=2, ensure_ascii=False, sort_keys=False)
+        rendered.append((folder / f"{built.stem}.json", (text + "\n").encode()))
+    return rendered
+
+
+@contextlib.contextmanager
+def _each_figure_drawn_once(sheet: Sheet) -> Iterator[None]:
+    """While its outputs are rendered, a sheet's drawings are made once, not per output.
+
+    A figure drawn from the sheet's values is drawn again by every view (the PDF's, the
+    HTML's); the values cannot change while the outputs are rendered, so the PDF's
+    drawing serves the HTML too (a tenth of a member's time in a batch went to drawing
+    each figure twice).
+    """
+    drawn: dict[int, str] = {}
+    draw = sheet.figure_svg
+
+    def figure_svg(figure: Any) -> str:
+        if id(figure) not in drawn:
+            drawn[id(figure)] = draw(figure)
+        return drawn[id(figure)]
+
+    sheet.figure_svg = figure_svg  # type: ignore[method-assign]  # this sheet, this block only
+    try:
+        yield
+    finally:
+        del sheet.figure_svg
 
 
 def issued_hash(folder: Path, stem: str) -> str | None:
@@ -289,27 +329,78 @@ def issued_hash(folder: Path, stem: str) -> str | None:
 def refuse_replacing_issued(result: BuildResult, folder: Path) -> None:
     """Raise :class:`JobError` if writing would replace files built from other inputs."""
     revision = result.sheets[0].sheet.title_block.revision if result.sheets else "0"
+    refuse_replacing(
+        folder,
+        [built.stem for built in result.sheets],
+        result.hash,
+        revision=revision,
+        source=result.source,
+        command="calcsheet build --replace-issued",
+    )
+
+
+def refuse_replacing(
+    folder: Path, stems: list[str], inputs: str, *, revision: str, source: str, command: str
+) -> None:
+    """Raise :class:`JobError` if files ``stems``.* in ``folder`` came from inputs other
+    than ``inputs`` (a hash) under the same revision: a sheet's files, or a calc package's."""
     problems = []
-    for built in result.sheets:
-        found = issued_hash(folder, built.stem)
-        if found is None or found == result.hash:
+    for stem in stems:
+        found = issued_hash(folder, stem)
+        if found is None or found == inputs:
             continue
         if found:
             why = (
-                f"{folder / built.stem}.* were built from other inputs "
-                f"(inputs {found} then, {result.hash} now) under the same revision {revision!r}"
+                f"{folder / stem}.* were built from other inputs "
+                f"(inputs {found} then, {inputs} now) under the same revision {revision!r}"
             )
         else:
             why = (
-                f"{folder / built.stem}.* exist and do not say which inputs built them "
+                f"{folder / stem}.* exist and do not say which inputs built them "
                 "(no JSON or HTML of theirs)"
             )
         problems.append(
             (
                 "revisions",
                 f"{why}: add a [[revisions]] entry with a new mark to issue the change, "
-                "or replace the issued files on purpose (calcsheet build --replace-issued)",
+                f"or replace the issued files on purpose ({command})",
             )
         )
     if problems:
-        raise JobError(result.source, problems)
+        raise JobError(source, problems)
+
+
+@dataclass(frozen=True)
+class PackageEntry:
+    """What a calc package needs of one member: its sheets' markup and its title block.
+
+    Made in the process that built the member (a batch worker), so the package is set
+    from the very markup the member's own PDF was compiled from, without building again.
+    """
+
+    markups: tuple[str, ...]  # one per sheet (station), in order
+    title_block: tuple[tuple[str, str], ...]  # (field name, text), as TitleBlock declares
+    issued: str  # the date the sheets are issued on (ISO), for the package's own date
+    inputs: str  # the member's inputs hash
+    paper: str
+
+
+def package_entry(result: BuildResult) -> PackageEntry:
+    """The package's part of a built job: its sheets' markup and its title block."""
+    from dataclasses import asdict
+
+    from calcsheet.render.typst import render_typst
+    from calcsheet.render.view import issue_date  # rendering only where a package is made
+
+    first = result.sheets[0].sheet
+    paper = result.job.output.paper
+    return PackageEntry(
+        # The markup its PDF was compiled from; rendered here if the job writes no PDF.
+        markups=tuple(
+            built.typst or render_typst(built.sheet, paper=paper) for built in result.sheets
+        ),
+        title_block=tuple((key, str(value)) for key, value in asdict(first.title_block).items()),
+        issued=issue_date(first).isoformat(),
+        inputs=result.hash,
+        paper=paper,
+    )

@@ -26,16 +26,18 @@ import time
 from collections.abc import Callable, Iterator
 from functools import lru_cache
 from pathlib import Path
-from typing import Any
+from typing import TYPE_CHECKING, Any
 
-from calcsheet.engine import Sheet
 from calcsheet.errors import ExportError
-from calcsheet.render.html import render_html
-from calcsheet.render.typst import paper_inputs, render_typst
+
+if TYPE_CHECKING:  # the renderers load when a sheet is rendered: a batch's parent only writes
+    from calcsheet.engine import Sheet
 
 
 def pdf_bytes(sheet: Sheet, *, paper: str = "letter") -> bytes:
     """Compile the sheet's Typst markup to PDF in memory (fonts come with the typst wheel)."""
+    from calcsheet.render.typst import render_typst
+
     return compile_pdf(render_typst(sheet, paper=paper))
 
 
@@ -70,6 +72,8 @@ PDF_STANDARDS = ["a-2b"]
 
 def compile_pdf(source: str, *, paper: str | None = None) -> bytes:
     """Compile Typst markup from ``render_typst`` to PDF/A-2b; ``paper`` overrides its paper."""
+    from calcsheet.render.typst import paper_inputs
+
     # Validated before the compiler runs, so a wrong paper names the field, not Typst.
     inputs = paper_inputs(paper) if paper is not None else {}
     try:
@@ -225,6 +229,9 @@ def folder_lock(
     path = Path(folder) / LOCK_NAME
     deadline = time.monotonic() + limit
     told = False
+    # A batch's workers take the lock for each member's few milliseconds of writing: a
+    # short first wait, doubling to a tenth of a second, keeps them from idling behind it.
+    pause = 0.005
     while True:
         try:
             descriptor = os.open(path, os.O_RDWR | os.O_CREAT, 0o666)
@@ -251,7 +258,8 @@ def folder_lock(
                     f"(lock file {path})"
                 )
                 (waiting or _say_waiting)(message)
-            time.sleep(0.1)
+            time.sleep(pause)
+            pause = min(pause * 2, 0.1)
             continue
         # The holder before us may have removed the file after we opened it: then our
         # lock is on a file nobody else sees, so try again on the current one.
@@ -301,6 +309,8 @@ def _cannot_write(path: Path, error: OSError) -> str:
 
 def export_sheet(sheet: Sheet, folder: Path, stem: str, *, paper: str = "letter") -> list[Path]:
     """Write ``stem``.html and ``stem``.pdf into ``folder``, both built before either is written."""
+    from calcsheet.render.html import render_html
+
     folder = Path(folder)
     make_folder(folder)
     html = render_html(sheet).encode("utf-8")
@@ -308,3 +318,12 @@ def export_sheet(sheet: Sheet, folder: Path, stem: str, *, paper: str = "letter"
     files = [(folder / f"{stem}.html", html), (folder / f"{stem}.pdf", pdf)]
     write_all_atomically(files)
     return [path for path, _ in files]
+
+
+def package_markup(context: dict[str, Any]) -> str:
+    """A calc package (``templates/package.typ.j2``) as Typst markup: the cover, contents
+    and summary, then every member's sheet markup, in one document (see ``write_package``
+    in :mod:`calcsheet.build.batch` for what ``context`` holds)."""
+    from calcsheet.render.templates import typst_environment
+
+    return typst_environment().get_template("package.typ.j2").render(**context)

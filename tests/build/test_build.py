@@ -98,7 +98,7 @@ def test_a_failed_pdf_leaves_the_previous_outputs_intact(tmp_path: Path, monkeyp
     def broken(*args, **kwargs):
         raise ExportError("the PDF engine failed: simulated")
 
-    monkeypatch.setattr(files, "pdf_bytes", broken)
+    monkeypatch.setattr(files, "compile_pdf", broken)
     changed = _job(STARTER.replace('"3 kip"', '"4 kip"'))
     with pytest.raises(ExportError):
         write_outputs(build_sheets(changed), tmp_path)
