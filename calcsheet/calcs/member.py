@@ -1006,7 +1006,7 @@ def _write_distributed(
             sign = 1 if start[axis] > 0 else -1
             q_a[axis] = q_b[axis] = sheet.step(
                 f"q_{axis}a{number}", w_sw if sign > 0 else -w_sw, f"Self-weight along {axis}",
-                unit=str(weight.weight.units) if weight.kind == "catalog" else None,
+                unit=sheet.units.preferred["force per length"],
             )  # fmt: skip
         z_a = sheet.input(
             f"z_wa{number}", Quantity(0.0, length_unit), "Start of the self-weight",
@@ -1134,9 +1134,11 @@ def _write_distributed(
 
 def _write_weight(sheet: Sheet, weight: SectionWeight) -> sp.Symbol:
     """The weight per length of the member: the catalog's, or the area × unit weight."""
+    # In the sheet's unit of a line load, as the distributed loads are (kip/ft, kN/m).
+    shown = sheet.units.preferred["force per length"]
     if weight.kind == "catalog":
         return sheet.input(
-            "w_sw", weight.weight, "Weight of the member per length (nominal)",
+            "w_sw", weight.weight.to(shown), "Weight of the member per length (nominal)",
             reference=weight.source,
         )  # fmt: skip
     if weight.kind == "mass":
@@ -1148,12 +1150,12 @@ def _write_weight(sheet: Sheet, weight: SectionWeight) -> sp.Symbol:
             "g_n", STANDARD_GRAVITY, "Standard acceleration of gravity",
             reference="3rd CGPM (1901), standard acceleration of gravity",
         )  # fmt: skip
-        return sheet.step("w_sw", mass * g, "Weight of the member per length", unit="N/m")
+        return sheet.step("w_sw", mass * g, "Weight of the member per length", unit=shown)
     gamma = sheet.input(
         "gamma_st", STEEL_UNIT_WEIGHT, "Unit weight of steel", reference=STEEL_UNIT_WEIGHT_SOURCE
     )
     area = sheet.input("A_sw", weight.weight / STEEL_UNIT_WEIGHT, "Area of the section")
-    return sheet.step("w_sw", area * gamma, "Weight of the member per length, A·γ", unit="N/m")
+    return sheet.step("w_sw", area * gamma, "Weight of the member per length, A·γ", unit=shown)
 
 
 def _write_reactions(
