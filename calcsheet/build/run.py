@@ -95,8 +95,12 @@ class BuildResult:
         built, check = found
         at = built.sheet.check_location(check)
         where = f", at {at}" if at else ""
-        if built.station:
+        # The case names its own station when the check was scanned along the member.
+        named = check.cases is not None and check.cases.station is not None
+        if built.station and not named:
             where += f", station {built.station}"
+        elif built.station and built.station.startswith("auto"):
+            where += ", station auto"
         case = f", under {check.cases.case}" if check.cases is not None else ""
         return f"{check.description}{where}{case}"
 
