@@ -183,8 +183,8 @@ def main() -> None:
 def bench_cold_ratio(cold_ms: float) -> None:
     """The cold command against a bare Typst compile of the same markup, each in a
     fresh process, side by side (issue 17: at most 4 times)."""
-    from calcsheet.build.run import build_sheets
     from calcsheet.job import read_job
+    from calcsheet.pipeline.run import build_sheets
     from calcsheet.render.typst import render_typst
 
     job = read_job("examples/outrigger.toml")

@@ -125,8 +125,8 @@ def _parser() -> argparse.ArgumentParser:
 
 
 def _build(arguments: argparse.Namespace) -> int:
-    from calcsheet.build import build_sheets, output_folder, write_outputs
     from calcsheet.job import read_job
+    from calcsheet.pipeline import build_sheets, output_folder, write_outputs
 
     job = read_job(arguments.job)
     result = build_sheets(job, source=str(arguments.job))
@@ -138,9 +138,9 @@ def _build(arguments: argparse.Namespace) -> int:
 
 
 def _check(arguments: argparse.Namespace) -> int:
-    from calcsheet.build import build_sheets, output_folder
     from calcsheet.errors import CalcsheetError
     from calcsheet.job import JobError, read_job
+    from calcsheet.pipeline import build_sheets, output_folder
 
     status = OK
     for path in arguments.jobs:
@@ -195,10 +195,10 @@ def _new(arguments: argparse.Namespace) -> int:
 
 
 def _compare(arguments: argparse.Namespace) -> int:
-    from calcsheet.build import build_sheets, output_folder, safe_stem
-    from calcsheet.build.compare import changed_inputs, check_comparable, delta_sheet
     from calcsheet.export.files import export_sheet
     from calcsheet.job import read_job
+    from calcsheet.pipeline import build_sheets, output_folder, safe_stem
+    from calcsheet.pipeline.compare import changed_inputs, check_comparable, delta_sheet
 
     old_job, new_job = read_job(arguments.old), read_job(arguments.new)
     old = build_sheets(old_job, source=str(arguments.old))
@@ -234,15 +234,15 @@ def _read_text(path: Path, *, limit: int, kind: str) -> str:
 
 
 def _batch(arguments: argparse.Namespace) -> int:
-    from calcsheet.build.batch import (
+    from calcsheet.export.files import make_folder, write_all_atomically
+    from calcsheet.job import JobError
+    from calcsheet.job.load import MAX_JOB_BYTES
+    from calcsheet.pipeline.batch import (
         members_from_csv,
         members_from_toml,
         run_batch_and_summary,
         write_package,
     )
-    from calcsheet.export.files import make_folder, write_all_atomically
-    from calcsheet.job import JobError
-    from calcsheet.job.load import MAX_JOB_BYTES
 
     table: Path = arguments.table
     text = _read_text(table, limit=MAX_TABLE_BYTES, kind="batch table")

@@ -19,8 +19,8 @@ def demo_job_text() -> str:
 
 def outrigger_sheet() -> Sheet:
     """The demo sheet, built from the demo job with the same code as the command line."""
-    from calcsheet.build import build_sheets
     from calcsheet.job import parse_job
+    from calcsheet.pipeline import build_sheets
 
     job = parse_job(demo_job_text(), source="demo job")
     return build_sheets(job, source="demo job").sheets[0].sheet

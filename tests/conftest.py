@@ -37,7 +37,7 @@ def check_results_schema(data: dict) -> None:
     """Fail unless ``data`` (JSON results, as read back from text) fits the shipped schema."""
     import jsonschema
 
-    from calcsheet.build.results import results_schema
+    from calcsheet.pipeline.results import results_schema
 
     validator = jsonschema.Draft202012Validator(results_schema())
     problems = sorted(validator.iter_errors(data), key=lambda error: list(error.absolute_path))
@@ -54,7 +54,7 @@ def _every_results_json_fits_the_schema(monkeypatch: pytest.MonkeyPatch) -> None
     import json
     import sys
 
-    run = sys.modules.get("calcsheet.build.run")  # imported by the tests that build jobs
+    run = sys.modules.get("calcsheet.pipeline.run")  # imported by the tests that build jobs
     if run is None:
         return
     original = run.sheet_results

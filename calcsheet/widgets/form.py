@@ -37,7 +37,6 @@ from typing import Any
 
 import ipywidgets as widgets
 
-from calcsheet.build import BuildResult, build_sheets, output_folder, write_outputs
 from calcsheet.engine import Sheet
 from calcsheet.errors import CalcsheetError
 from calcsheet.job import Job, JobError, job_from_data, parse_job, read_job
@@ -50,6 +49,7 @@ from calcsheet.job.schema import (
 )
 from calcsheet.job.starter import STARTER
 from calcsheet.mechanics.supports import SUPPORT_CASES
+from calcsheet.pipeline import BuildResult, build_sheets, output_folder, write_outputs
 from calcsheet.units import parse_quantity
 from calcsheet.widgets.checks import CheckChooser
 from calcsheet.widgets.fields import (

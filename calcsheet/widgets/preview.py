@@ -11,8 +11,8 @@ import html
 
 import ipywidgets as widgets
 
-from calcsheet.build import BuildResult
 from calcsheet.engine import Sheet
+from calcsheet.pipeline import BuildResult
 from calcsheet.render.html import render_fragment
 
 OK_COLOUR = "#1f6f3f"

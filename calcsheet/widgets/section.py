@@ -8,9 +8,9 @@ from typing import Any, get_args
 
 import ipywidgets as widgets
 
-from calcsheet.build.model import section_dimension_keys
 from calcsheet.errors import InputError
 from calcsheet.job.schema import SectionKind, SectionSpec
+from calcsheet.pipeline.model import section_dimension_keys
 from calcsheet.sections.catalog import FAMILIES, find_entry, list_designations
 from calcsheet.widgets.fields import (
     ChoiceField,

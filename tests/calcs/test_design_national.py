@@ -11,11 +11,11 @@ from pathlib import Path
 
 import pytest
 
-from calcsheet.build.model import member_model
 from calcsheet.calcs.design import DesignBasis, plan_combinations
 from calcsheet.errors import InputError
 from calcsheet.job import JobError, parse_job
 from calcsheet.mechanics import point_load
+from calcsheet.pipeline.model import member_model
 from calcsheet.sections import catalog_section
 from calcsheet.standards import combinations as combos
 from calcsheet.standards.national import (

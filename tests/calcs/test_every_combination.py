@@ -17,11 +17,11 @@ from __future__ import annotations
 
 import pytest
 
-from calcsheet.build.results import sheet_results
 from calcsheet.calcs import member_sheet
 from calcsheet.calcs.design import DesignBasis, plan_combinations
 from calcsheet.mechanics import point_load
 from calcsheet.mechanics.loads import PointLoad
+from calcsheet.pipeline.results import sheet_results
 from calcsheet.sections import catalog_section
 from calcsheet.units import Quantity
 

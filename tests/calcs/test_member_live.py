@@ -16,12 +16,12 @@ import dataclasses
 
 import pytest
 
-from calcsheet.build.results import sheet_results
 from calcsheet.calcs import member_sheet
 from calcsheet.calcs.design import DesignBasis
 from calcsheet.engine import Figure
 from calcsheet.errors import InputError
 from calcsheet.mechanics import applied_moment, point_load
+from calcsheet.pipeline.results import sheet_results
 from calcsheet.sections import catalog_section
 from calcsheet.units import Quantity
 

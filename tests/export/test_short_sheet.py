@@ -8,10 +8,10 @@ import io
 import pypdf
 import pytest
 
-from calcsheet.build import build_sheets
 from calcsheet.demo import demo_job_text, outrigger_sheet
 from calcsheet.export.files import pdf_bytes
 from calcsheet.job import parse_job
+from calcsheet.pipeline import build_sheets
 from calcsheet.render.html import render_html
 
 # Issue 17 asks for the demo at <= 10 pages (letter and A4), with the member's own weight,

@@ -32,12 +32,12 @@ import pytest
 from hypothesis import HealthCheck, example, given, settings
 from hypothesis import strategies as st
 
-from calcsheet.build import build_sheets, write_outputs
 from calcsheet.cli import main
 from calcsheet.errors import CalcsheetError, InputError
 from calcsheet.job import Job, JobError, job_from_data, parse_job
 from calcsheet.job.starter import STARTER
 from calcsheet.mechanics import point_load
+from calcsheet.pipeline import build_sheets, write_outputs
 from calcsheet.units import DIMENSIONS, parse_quantity
 
 from .support import (

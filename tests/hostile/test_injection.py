@@ -22,9 +22,9 @@ from pathlib import Path
 import pypdf
 import pytest
 
-from calcsheet.build import build_sheets, output_folder, write_outputs
 from calcsheet.cli import main
 from calcsheet.job import parse_job
+from calcsheet.pipeline import build_sheets, output_folder, write_outputs
 
 from .support import starter_data, toml_text
 

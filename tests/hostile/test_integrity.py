@@ -15,10 +15,10 @@ from pathlib import Path
 import pypdf
 import pytest
 
-from calcsheet.build import inputs_hash
 from calcsheet.cli import main
 from calcsheet.job import JobError, parse_job, read_job
 from calcsheet.job.starter import STARTER
+from calcsheet.pipeline import inputs_hash
 
 from .support import OUTRIGGER, starter_data, toml_text
 

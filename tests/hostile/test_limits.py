@@ -12,12 +12,12 @@ from pathlib import Path
 import pypdf
 import pytest
 
-from calcsheet.build import build_sheets, write_outputs
-from calcsheet.build.batch import MAX_MEMBERS, members_from_toml, run_batch
 from calcsheet.cli import main
 from calcsheet.job import JobError, job_from_data, read_job
 from calcsheet.job.load import MAX_JOB_BYTES
 from calcsheet.job.schema import MAX_TEXT
+from calcsheet.pipeline import build_sheets, write_outputs
+from calcsheet.pipeline.batch import MAX_MEMBERS, members_from_toml, run_batch
 
 from .support import no_hang, starter_data, toml_text
 

@@ -2,7 +2,7 @@
 
 Supports (a named case with positions, or supports of the job's own), distributed
 loads with their types, self-weight (on by default) with its gravity axis, brace
-points and the automatic station, read by :func:`calcsheet.build.model.member_model`.
+points and the automatic station, read by :func:`calcsheet.pipeline.model.member_model`.
 """
 
 from __future__ import annotations
@@ -13,12 +13,12 @@ from pathlib import Path
 
 import pytest
 
-from calcsheet.build.model import member_model
 from calcsheet.calcs.member import member_sheet
 from calcsheet.job import JobError, job_from_data, parse_job, read_job
 from calcsheet.job.starter import STARTER
 from calcsheet.mechanics.distributed import DistributedLoad
 from calcsheet.mechanics.supports import FIXED, PINNED, Support
+from calcsheet.pipeline.model import member_model
 from calcsheet.units import Quantity
 
 BASE = """
@@ -204,7 +204,7 @@ def test_the_starters_commented_tables_are_valid_when_uncommented(header: str, k
 
 def test_a_batch_table_sets_the_support_case_self_weight_and_stations() -> None:
     """The batch CSV columns are job key paths: the frame keys are columns like any other."""
-    from calcsheet.build.batch import column_problem, members_from_csv
+    from calcsheet.pipeline.batch import column_problem, members_from_csv
 
     base = tomllib.loads(job_text())
     table = (
@@ -223,7 +223,7 @@ def test_a_batch_table_sets_the_support_case_self_weight_and_stations() -> None:
 
 
 def test_a_batch_cell_that_is_not_yes_or_no_names_the_key() -> None:
-    from calcsheet.build.batch import members_from_csv
+    from calcsheet.pipeline.batch import members_from_csv
 
     base = tomllib.loads(job_text())
     (member,) = members_from_csv("member.self_weight\nmaybe\n", base, source="b.csv")
@@ -235,7 +235,7 @@ def test_a_batch_cell_that_is_not_yes_or_no_names_the_key() -> None:
 
 def test_the_inputs_hash_reads_the_frame_quantities_in_any_unit() -> None:
     """Quantities hash in SI base units: 20 ft and 240 in are one input (1 ft = 12 in)."""
-    from calcsheet.build import inputs_hash
+    from calcsheet.pipeline import inputs_hash
 
     feet = parse_job(job_text('braces = ["10 ft"]', WIND))
     inches = parse_job(

@@ -7,11 +7,11 @@ import json
 
 import pypdf
 
-from calcsheet.build.results import sheet_results
 from calcsheet.demo import outrigger_sheet
 from calcsheet.engine import Sheet
 from calcsheet.engine.marked_text import marked_pieces, plain_text, rich_text
 from calcsheet.export.files import pdf_bytes
+from calcsheet.pipeline.results import sheet_results
 from calcsheet.render.html import render_html
 from calcsheet.render.typst import render_typst
 

@@ -207,7 +207,7 @@ z = "2 m"
 
 
 def test_job_file_takes_a_metric_name_and_names_the_key_of_an_unknown_one() -> None:
-    from calcsheet.build.model import member_model
+    from calcsheet.pipeline.model import member_model
 
     model = member_model(parse_job(JOB.format(section="HE200B")))
     assert model.section.name == "HE 200 B"

@@ -14,10 +14,10 @@ from pathlib import Path
 
 import pytest
 
-from calcsheet.build import build_sheets, inputs_hash
-from calcsheet.build.model import section_dimension_keys
 from calcsheet.job import read_job
 from calcsheet.job.schema import SectionSpec
+from calcsheet.pipeline import build_sheets, inputs_hash
+from calcsheet.pipeline.model import section_dimension_keys
 from calcsheet.widgets import FormError, MemberForm
 from calcsheet.widgets import form as form_module
 from calcsheet.widgets.fields import BAD_BACKGROUND

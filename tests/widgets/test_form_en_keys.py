@@ -14,10 +14,10 @@ from pathlib import Path
 
 import pytest
 
-from calcsheet.build.model import design_basis
 from calcsheet.job import read_job
 from calcsheet.job.schema import CheckSpec
 from calcsheet.job.starter import STARTER
+from calcsheet.pipeline.model import design_basis
 from calcsheet.widgets import MemberForm
 
 EN_CHECK = """[check]
@@ -126,7 +126,7 @@ def test_the_aisc_panel_keeps_load_height_and_tip_restraint(tmp_path) -> None:
 
 
 def test_a_job_with_annex_a_builds(tmp_path) -> None:
-    from calcsheet.build import build_sheets
+    from calcsheet.pipeline import build_sheets
 
     path = _job_file(tmp_path, EN_CHECK, "en.toml")
     build_sheets(read_job(path))

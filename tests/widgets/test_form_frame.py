@@ -14,8 +14,8 @@ from pathlib import Path
 
 import pytest
 
-from calcsheet.build.model import member_model
 from calcsheet.job import read_job
+from calcsheet.pipeline.model import member_model
 from calcsheet.widgets import MemberForm
 from calcsheet.widgets.form import OWN_SUPPORTS
 from calcsheet.widgets.rows import LINEAR

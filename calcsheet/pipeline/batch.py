@@ -47,7 +47,7 @@ from calcsheet.job import JobError, job_from_data
 from calcsheet.job.schema import Job
 
 if TYPE_CHECKING:  # the build stage is heavy: workers import it, the parent need not
-    from calcsheet.build.run import PackageEntry
+    from calcsheet.pipeline.run import PackageEntry
 
 MAX_MEMBERS = 5000
 MAX_INDEX = 200
@@ -329,7 +329,7 @@ def _value(data: dict[str, Any], table: str, key: str) -> str:
 
 def _file_stem(member: BatchMember) -> str:
     """The file name part a member's outputs would start with (before the revision)."""
-    from calcsheet.build.run import safe_stem  # the one rule for file names
+    from calcsheet.pipeline.run import safe_stem  # the one rule for file names
 
     return safe_stem(_value(member.data, "output", "stem") or member.name.strip())
 
@@ -422,7 +422,7 @@ def build_member(
 
     ``package``: also hand back the member's part of a calc package (its PDF markup).
     """
-    from calcsheet.build.run import build_sheets, package_entry, write_outputs  # workers only
+    from calcsheet.pipeline.run import build_sheets, package_entry, write_outputs  # workers only
 
     member = _personalized(_as_member(0, member))
     name = member.name or "?"
@@ -673,7 +673,6 @@ def write_package(
     import json
 
     from calcsheet import __version__
-    from calcsheet.build.run import refuse_replacing, safe_stem
     from calcsheet.engine import CAUTIONS
     from calcsheet.export.files import (
         compile_pdf,
@@ -682,6 +681,7 @@ def write_package(
         package_markup,
         write_all_atomically,
     )
+    from calcsheet.pipeline.run import refuse_replacing, safe_stem
     from calcsheet.render.typst import typst_paper
 
     built = [outcome for outcome in outcomes if outcome.ok and outcome.package is not None]

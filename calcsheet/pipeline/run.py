@@ -21,13 +21,13 @@ from functools import cached_property
 from pathlib import Path
 from typing import Any
 
-from calcsheet.build.model import MemberModel, member_model
-from calcsheet.build.results import sheet_results
-from calcsheet.build.trace import hash_in_trace, inputs_hash, trace_text
 from calcsheet.calcs import member_sheet
 from calcsheet.engine import Sheet
 from calcsheet.errors import CalcsheetError, InputError
 from calcsheet.job import Job, JobError
+from calcsheet.pipeline.model import MemberModel, member_model
+from calcsheet.pipeline.results import sheet_results
+from calcsheet.pipeline.trace import hash_in_trace, inputs_hash, trace_text
 
 _UNSAFE = re.compile(r"[^A-Za-z0-9._-]+")
 MAX_STEM = 80

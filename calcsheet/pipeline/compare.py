@@ -17,10 +17,10 @@ import re
 from dataclasses import dataclass
 from typing import Any
 
-from calcsheet.build.run import BuildResult
-from calcsheet.build.trace import normalized
 from calcsheet.engine import Sheet
 from calcsheet.job import JobError
+from calcsheet.pipeline.run import BuildResult
+from calcsheet.pipeline.trace import normalized
 
 ABSENT = "(none)"
 

@@ -7,12 +7,12 @@ from pathlib import Path
 
 import pytest
 
-from calcsheet.build import build_sheets, inputs_hash, output_folder, safe_stem, write_outputs
-from calcsheet.build.compare import changed_inputs, check_comparable, delta_sheet
 from calcsheet.export import files
 from calcsheet.export.files import ExportError
 from calcsheet.job import JobError, parse_job
 from calcsheet.job.starter import STARTER
+from calcsheet.pipeline import build_sheets, inputs_hash, output_folder, safe_stem, write_outputs
+from calcsheet.pipeline.compare import changed_inputs, check_comparable, delta_sheet
 
 
 def _job(text: str = STARTER):

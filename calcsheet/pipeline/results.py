@@ -249,5 +249,5 @@ def sheet_results(sheet: Sheet) -> dict[str, Any]:
 @lru_cache(maxsize=1)
 def results_schema() -> dict[str, Any]:
     """The JSON Schema (draft 2020-12) of the results file, as shipped in the package."""
-    text = resources.files("calcsheet.build").joinpath("results.schema.json").read_text("utf-8")
+    text = resources.files("calcsheet.pipeline").joinpath("results.schema.json").read_text("utf-8")
     return json.loads(text)

@@ -1,7 +1,7 @@
 """Building jobs: job -> model -> member sheet -> PDF, HTML and JSON on disk.
 
 The names below load on first use (PEP 562): a batch's parent process imports
-``calcsheet.build.batch`` only to read the table and hand members to workers, and
+``calcsheet.pipeline.batch`` only to read the table and hand members to workers, and
 should not pay for the calcs it never runs (over a second, before any worker starts).
 """
 
@@ -11,26 +11,26 @@ import importlib
 from typing import TYPE_CHECKING, Any
 
 if TYPE_CHECKING:
-    from calcsheet.build.model import MemberModel, member_model
-    from calcsheet.build.run import (
+    from calcsheet.pipeline.model import MemberModel, member_model
+    from calcsheet.pipeline.run import (
         BuildResult,
         build_sheets,
         output_folder,
         safe_stem,
         write_outputs,
     )
-    from calcsheet.build.trace import inputs_hash, trace_text
+    from calcsheet.pipeline.trace import inputs_hash, trace_text
 
 _HOMES = {
-    "MemberModel": "calcsheet.build.model",
-    "member_model": "calcsheet.build.model",
-    "BuildResult": "calcsheet.build.run",
-    "build_sheets": "calcsheet.build.run",
-    "output_folder": "calcsheet.build.run",
-    "safe_stem": "calcsheet.build.run",
-    "write_outputs": "calcsheet.build.run",
-    "inputs_hash": "calcsheet.build.trace",
-    "trace_text": "calcsheet.build.trace",
+    "MemberModel": "calcsheet.pipeline.model",
+    "member_model": "calcsheet.pipeline.model",
+    "BuildResult": "calcsheet.pipeline.run",
+    "build_sheets": "calcsheet.pipeline.run",
+    "output_folder": "calcsheet.pipeline.run",
+    "safe_stem": "calcsheet.pipeline.run",
+    "write_outputs": "calcsheet.pipeline.run",
+    "inputs_hash": "calcsheet.pipeline.trace",
+    "trace_text": "calcsheet.pipeline.trace",
 }
 
 __all__ = [

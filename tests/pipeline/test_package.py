@@ -12,9 +12,9 @@ from pathlib import Path
 import pypdf
 import pytest
 
-from calcsheet.build.batch import members_from_csv, run_batch, write_package
 from calcsheet.job import JobError
 from calcsheet.job.starter import STARTER
+from calcsheet.pipeline.batch import members_from_csv, run_batch, write_package
 
 # Invented demo members: one passes, one fails its checks (200 kip on a W8X18), one names
 # a section no table has (W8X19) and is skipped.

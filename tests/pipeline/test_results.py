@@ -7,10 +7,10 @@ from importlib import resources
 
 import pytest
 
-from calcsheet.build import build_sheets
-from calcsheet.build.results import results_schema, unit_name
 from calcsheet.job import parse_job
 from calcsheet.job.starter import STARTER
+from calcsheet.pipeline import build_sheets
+from calcsheet.pipeline.results import results_schema, unit_name
 from calcsheet.units import ureg
 
 from ..conftest import check_results_schema
@@ -30,7 +30,7 @@ def demo() -> dict:
 
 def test_the_demo_results_fit_the_shipped_schema(demo: dict) -> None:
     check_results_schema(demo)
-    shipped = resources.files("calcsheet.build").joinpath("results.schema.json")
+    shipped = resources.files("calcsheet.pipeline").joinpath("results.schema.json")
     assert json.loads(shipped.read_text("utf-8")) == results_schema()
 
 
@@ -131,8 +131,8 @@ def test_units_are_written_force_first_with_superscripts(unit: str, written: str
 
 def test_a_plain_sheet_with_an_unbounded_worst_case_gives_null_and_fits_the_schema() -> None:
     """JSON has no infinity (RFC 8259 section 6): a worst case against no capacity is null."""
-    from calcsheet.build.results import sheet_results
     from calcsheet.engine import Sheet
+    from calcsheet.pipeline.results import sheet_results
 
     sheet = Sheet("Bracket")
     with sheet:

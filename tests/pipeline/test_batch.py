@@ -9,7 +9,10 @@ from pathlib import Path
 
 import pytest
 
-from calcsheet.build.batch import (
+from calcsheet.errors import InputError
+from calcsheet.job import JobError
+from calcsheet.job.starter import STARTER
+from calcsheet.pipeline.batch import (
     BASE_VALUE,
     batch_log,
     column_problem,
@@ -18,9 +21,6 @@ from calcsheet.build.batch import (
     run_batch,
     summary_csv,
 )
-from calcsheet.errors import InputError
-from calcsheet.job import JobError
-from calcsheet.job.starter import STARTER
 
 # Twelve W8 members with loads growing by 1 kip (invented demo numbers).
 SECTIONS = ["W8X31", "W8X24", "W8X18", "W8X40"] * 3
