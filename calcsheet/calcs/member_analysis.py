@@ -20,6 +20,7 @@ All numbers are SI (N, m) floats; quantities at the edges.
 
 from __future__ import annotations
 
+import itertools
 import math
 from collections.abc import Sequence
 from dataclasses import dataclass
@@ -41,7 +42,19 @@ from calcsheet.mechanics.loads import (
     parse_signed_axis,
 )
 from calcsheet.mechanics.supports import FIXED, MOTIONS, SUPPORT_CASES, Support, support_case
+from calcsheet.mechanics.torsion import (
+    WarpingRestraints,
+    shear_centre_torque,
+    warping_restraints,
+)
+from calcsheet.mechanics.warping_torsion import (
+    ConcentratedTorque,
+    DistributedTorque,
+    TwistSolution,
+    unit_twists,
+)
 from calcsheet.sections import Section
+from calcsheet.sections.warping import WarpingProperties, warping_properties
 from calcsheet.standards.combinations import Combination, combinations, factor_matrix
 from calcsheet.units import Quantity, parse_quantity
 
@@ -404,6 +417,7 @@ def _scan(
     forces = np.stack(
         [result.internal_forces(stations, analysis.factors, side=side) for side in SIDES]
     )  # (sides, combos, stations, 6)
+    forces = shear_centre_forces(section, forces)  # T about the shear centre, as the sheet's
     per_check_flat, measure = basis.standard.evaluate(
         section, forces.reshape(-1, 6), basis, Fy, length
     )
@@ -525,3 +539,160 @@ def force_diagrams(
     both = np.stack([left, right], axis=2).reshape(left.shape[0], -1, 6)
     at = np.repeat(stations, 2)
     return ForceDiagrams(at, both[governing], both.min(axis=0), both.max(axis=0))
+
+
+# --- torsion of open sections with warping (AISC Design Guide 9) ------------------------------
+
+# A linearly varying distributed load's torque is taken as this many uniform pieces.
+_TORQUE_PIECES = 16
+
+
+@dataclass(frozen=True, eq=False)
+class MemberTwist:
+    """The member's twist for the torsion of an open section with warping, in SI (N, m).
+
+    ``restraints`` the end restraints and why (:func:`warping_restraints`); ``solution``
+    the unit twists of ``loads`` (None when warping is not modelled: ``restraints.ends``
+    None); ``weights`` (combinations, loads) combine them; ``x_s``, ``y_s`` the shear
+    centre from the centroid (m); E, G (Pa), G·J (N·m²), E·Cw (N·m⁴).
+    """
+
+    restraints: WarpingRestraints
+    solution: TwistSolution | None
+    weights: NDArray[np.float64]
+    x_s: float
+    y_s: float
+    E: float
+    G: float
+    GJ: float
+    ECw: float
+
+    @property
+    def modelled(self) -> bool:
+        """Whether the warping stresses are computed (supports at the ends only)."""
+        return self.solution is not None
+
+    @property
+    def torsion_parameter(self) -> float:
+        """λ = √(G·J/(E·Cw)) in 1/m (AISC Design Guide 9's 1/a)."""
+        return math.sqrt(self.GJ / self.ECw) if self.ECw > 0 else math.inf
+
+    def derivatives(self, station: float, side: str) -> NDArray[np.float64]:
+        """φ′, φ″, φ‴ (1/m, 1/m², 1/m³) at ``station`` (m) under every combination:
+        (combinations, 3). ``side`` as :data:`SIDES`: "station" takes the stretch before
+        a torque at the station (it acts beyond the cut), "right" the one after it."""
+        assert self.solution is not None
+        combined = self.solution.combined(self.weights)
+        values = combined.derivatives([station], "before" if side == "station" else "after")
+        return values[..., 1:, 0]
+
+    def derivatives_along(self, stations: NDArray[np.float64], side: str) -> NDArray[np.float64]:
+        """φ′, φ″, φ‴ at many stations: (combinations, stations, 3)."""
+        assert self.solution is not None
+        combined = self.solution.combined(self.weights)
+        values = combined.derivatives(stations, "before" if side == "station" else "after")
+        return np.moveaxis(values[..., 1:, :], -2, -1)
+
+
+def torsion_loads(
+    loads: Sequence[MemberLoad], x_s: float, y_s: float, length: float
+) -> list[ConcentratedTorque | DistributedTorque]:
+    """Each load's torque about the shear-centre axis at (x_s, y_s) (m), SI.
+
+    A force (F_x, F_y) at (e_x, e_y): (e_x − x_s)·F_y − (e_y − y_s)·F_x; a couple its
+    M_z; a distributed load the same per unit length, a linearly varying one as
+    :data:`_TORQUE_PIECES` uniform pieces at their mid-point values (the twist at a
+    station differs from the exact linear torque by far less than 1 %).
+    """
+    found: list[ConcentratedTorque | DistributedTorque] = []
+
+    def si(value: pint.Quantity, unit: str) -> float:
+        return float(value.to(unit).m)
+
+    for load in loads:
+        if isinstance(load, PointLoad):
+            arm_x, arm_y = si(load.ex, "m") - x_s, si(load.ey, "m") - y_s
+            torque = arm_x * si(load.Fy, "N") - arm_y * si(load.Fx, "N")
+            found.append(ConcentratedTorque(torque, min(si(load.z, "m"), length)))
+        elif isinstance(load, AppliedMoment):
+            found.append(ConcentratedTorque(si(load.Mz, "N*m"), min(si(load.z, "m"), length)))
+        else:
+            arm_x, arm_y = si(load.ex, "m") - x_s, si(load.ey, "m") - y_s
+            start, end = si(load.z_start, "m"), min(si(load.z_end, "m"), length)
+            m0 = arm_x * si(load.q_start[1], "N/m") - arm_y * si(load.q_start[0], "N/m")
+            m1 = arm_x * si(load.q_end[1], "N/m") - arm_y * si(load.q_end[0], "N/m")
+            pieces = 1 if m0 == m1 else _TORQUE_PIECES
+            edges = np.linspace(start, end, pieces + 1)
+            for low, high in itertools.pairwise(edges):
+                middle = ((low + high) / 2 - start) / (end - start)
+                found.append(DistributedTorque(m0 + (m1 - m0) * middle, low, high))
+    return found
+
+
+def member_twist(
+    section: Section,
+    warping: WarpingProperties,
+    length: pint.Quantity,
+    supports: Sequence[Support],
+    loads: Sequence[MemberLoad],
+    types: Sequence[str],
+    factors: NDArray[np.float64],
+    factor_types: Sequence[str],
+    modulus: str,
+) -> MemberTwist:
+    """The twist of an open section with a warping model under every combination.
+
+    ``factors`` (combinations, factor_types) are the combinations' load factors, the
+    loads of type t taking column t. The end restraints follow the supports
+    (:func:`warping_restraints`); supports away from the ends leave the twist
+    unsolved (``solution`` None). AISC Design Guide 9, Torsional Analysis of Structural
+    Steel Members: the torsion differential equation G·J·φ′ − E·Cw·φ‴ = T solved in
+    closed form (:func:`~calcsheet.mechanics.warping_torsion.unit_twists`).
+    """
+    length_m = float(length.to("m").m)
+    unit = warping.length_unit
+    x_s = float(Quantity(warping.x_s, unit).to("m").m)
+    y_s = float(Quantity(warping.y_s, unit).to("m").m)
+    E = float(parse_quantity(modulus, field="E").to("Pa").m)
+    G = float(parse_quantity(shear_modulus(modulus)[0], field="G").to("Pa").m)
+    GJ = G * float(section.properties["J"].to("m**4").m)
+    ECw = E * float(Quantity(warping.Cw, f"{unit}**6").to("m**6").m)
+    restraints = warping_restraints(list(supports), length_m)
+    torques: list[ConcentratedTorque | DistributedTorque] = []
+    per_load: list[str] = []  # each torque takes its load's type's factor
+    for load, kind in zip(loads, types, strict=True):
+        pieces = torsion_loads([load], x_s, y_s, length_m)
+        torques += pieces
+        per_load += [kind] * len(pieces)
+    columns = [list(factor_types).index(kind) for kind in per_load]
+    weights = np.asarray(factors, dtype=float)[:, columns]
+    solution = None
+    if restraints.ends is not None and torques:
+        solution = unit_twists(length_m, GJ, ECw, *restraints.ends, torques)
+    return MemberTwist(restraints, solution, weights, x_s, y_s, E, G, GJ, ECw)
+
+
+def shear_centre_forces(section: Section, forces: NDArray[np.float64]) -> NDArray[np.float64]:
+    """Internal forces (..., 6) in N, N·m with T about the shear-centre axis.
+
+    The frame and the statics give T about the centroid; the section twists about its
+    shear centre, so T_s = T − x_s·V_y + y_s·V_x
+    (:func:`calcsheet.mechanics.torsion.shear_centre_torque`). The same forces for a
+    section whose shear centre is the centroid or is not known (a built-up shape).
+    """
+    centre = _shear_centre_m(section)
+    values = np.array(forces, dtype=float)
+    if centre is not None and (centre[0] or centre[1]):
+        values[..., 3] = shear_centre_torque(
+            values[..., 3], values[..., 1], values[..., 2], centre[0], centre[1]
+        )
+    return values
+
+
+def _shear_centre_m(section: Section) -> tuple[float, float] | None:
+    """The shear centre (m) from the centroid of an open section with a warping model."""
+    try:
+        props = warping_properties(section, "m")
+    except InputError:
+        return None
+    return (props.x_s, props.y_s) if props.warps else None
