@@ -68,10 +68,12 @@ from calcsheet.calcs.member_analysis import (
     shear_centre_forces,
     shear_modulus,
     solve_member,
+    station_rows,
     support_kind,
     torsion_loads,
     validate_braces,
     validate_distributed,
+    warping_constant,
 )
 from calcsheet.calcs.member_analysis import (
     force_diagrams as member_force_diagrams,
@@ -116,8 +118,8 @@ from calcsheet.mechanics.torsion import (
     WARPING_NOTE,
     shear_centre_torque,
 )
+from calcsheet.mechanics.warping_torsion import ConcentratedTorque
 from calcsheet.sections import Section, family_title
-from calcsheet.standards.combinations import factor_matrix
 from calcsheet.units import Quantity, format_number, parse_quantity, unit_system, ureg
 
 AXIS_TEXT = (
@@ -324,23 +326,30 @@ def member_sheet(
     preset = unit_system(units).preferred
     stress, length_unit = preset["stress"], preset["length"]
     model = stress_model(section, section.length_unit)
+    twist = (
+        analysis.twist
+        if analysis is not None
+        else member_twist(section, length_q, held, every_load, every_type, basis.standard.modulus)
+    )
     if analysis is not None:
         plan = plan_combinations(
             section, every_load, every_type, length_q, station_q, basis, fy_q,
-            by_type=shear_centre_forces(section, forces_at(analysis, cut.station, side)),
+            by_type=station_rows(analysis, section, cut.station, side),
         )  # fmt: skip
         if plan is not None and scan is not None:
-            plan.scanned_forces = scan.forces.reshape(-1, 6)
+            # The search tries other sections: their own twist is not known, St Venant.
+            plan.scanned_forces = scan.forces[..., :6].reshape(-1, 6)
     else:
         # T about the shear centre, as the sheet writes it (T_s).
         by_type = shear_centre_forces(section, forces_by_type(loads, types, length_q, station_q)[1])
+        if twist is not None and twist.modelled:
+            by_type = np.concatenate(
+                [by_type, twist.columns([cut.station], side)[:, 0, :]], axis=-1
+            )
         plan = plan_combinations(
             section, loads, types, length_q, station_q, basis, fy_q, by_type=by_type
         )
-    torsion = _plan_torsion(
-        section, model, length_q, held, every_load, every_type, plan, cut,
-        basis.standard.modulus,
-    )  # fmt: skip
+    torsion = _plan_torsion(model, every_load, twist, plan, cut)
     layout = _Layout(case, held, cantilever, brace_points)
     sheet = Sheet(title, units=units, title_block=title_block)
     _write_basis(sheet, section, basis, layout)
@@ -401,7 +410,9 @@ def member_sheet(
         )
         _draw_force_diagrams(sheet, diagram_analysis, plan, every_load, preset)
         props = _write_section_properties(sheet, section, model, torsion)
-        forces, twist = _write_torsion(sheet, section, model, forces, props, torsion, length_unit)
+        forces, twist_terms = _write_torsion(
+            sheet, section, model, forces, props, torsion, length_unit
+        )
         sheet.figure(
             stress_drawing(section, stress),
             "Normal stress over the section at the station from {N}, {M_x} and {M_y} "
@@ -410,8 +421,10 @@ def member_sheet(
         if model.resultant is not None:
             points = write_round_point_stresses(sheet, section, model, forces, props)
         else:
-            shown = None if detail == "full" else _governing_points(sheet, model, forces, twist)
-            points = _write_point_stresses(sheet, section, model, forces, props, shown, twist)
+            shown = (
+                None if detail == "full" else _governing_points(sheet, model, forces, twist_terms)
+            )
+            points = _write_point_stresses(sheet, section, model, forces, props, shown, twist_terms)
         _write_point_table(sheet, points, stress)
         governing_points = _write_governing(sheet, points, stress)
         chapter = len(sheet.parts)
@@ -1550,18 +1563,13 @@ def _governing_points(
         float(sheet.value(forces[name]).to(to).m)
         for name, to in zip(("N", "V_x", "V_y", "T", "M_x", "M_y"), units, strict=True)
     ]
-    if twist is None:
-        result = model.stresses(np.array([values]))
-    else:
-        rates = [
-            float(sheet.value(symbol).to(f"1/{unit}**{power}").m)
-            for power, symbol in enumerate((twist.phi_1, twist.phi_2, twist.phi_3), start=1)
-        ]
-        moduli = (
-            float(sheet.value(twist.E).to(f"N/{unit}**2").m),
-            float(sheet.value(twist.G).to(f"N/{unit}**2").m),
-        )
-        result = model.stresses(np.array([values]), np.array([rates]), moduli)
+    if twist is not None:  # the twist columns G·φ′, E·φ″, E·φ‴ (StressModel.stresses)
+        for power, (symbol, modulus) in enumerate(
+            ((twist.phi_1, twist.G), (twist.phi_2, twist.E), (twist.phi_3, twist.E)), start=1
+        ):
+            product = sheet.value(modulus) * sheet.value(symbol)
+            values.append(float(product.to(f"N/{unit}**{power + 2}").m))
+    result = model.stresses(np.array([values]))
     return {int(result.governing_index(measure)[0]) for measure in MEASURES}
 
 
@@ -1756,14 +1764,15 @@ class _TorsionPlan:
     """Which torsion model the sheet writes at the station, and why (in words).
 
     ``twist`` is the member's twist when warping is modelled, ``derivatives`` φ′, φ″, φ‴
-    at the cut under the governing combination (SI); ``title`` names the model.
+    at the cut under the governing combination (``governing``) or the loads as given
+    (SI); ``title`` names the model.
     """
 
     title: str
     words: str
     twist: MemberTwist | None = None
     derivatives: NDArray[np.float64] | None = None
-    combination: int = 0
+    governing: bool = False
 
     @property
     def warping(self) -> bool:
@@ -1771,61 +1780,45 @@ class _TorsionPlan:
 
 
 def _plan_torsion(
-    section: Section,
     model: StressModel,
-    length: pint.Quantity,
-    held: Sequence[Support],
     loads: Sequence[MemberLoad],
-    types: Sequence[str],
+    twist: MemberTwist | None,
     plan: CombinationPlan | None,
     cut: _Cut,
-    modulus: str,
 ) -> _TorsionPlan:
     """The torsion model for the station: warping for an open section with a warping model
     and supports at the ends, St Venant otherwise, with the reason in words."""
     rule = model.torsion
-    if rule.kind != "open":
+    if rule.kind != "open" or model.resultant is not None:
         return _TorsionPlan(rule.description, CLOSED_NOTE)
-    warping = model.warping
-    twisted = any(
-        torque.torque != 0 or getattr(torque, "per_length", 0) != 0
-        for torque in torsion_loads(loads, 0.0, 0.0, cut.length)
-    )
-    if warping is None:
-        if twisted:
-            return _TorsionPlan(rule.description, UNKNOWN_WARPING_NOTE)
-        return _TorsionPlan(rule.description, WARPING_NOTE)
+    if twist is None:
+        twisted = any(
+            (torque.torque if isinstance(torque, ConcentratedTorque) else torque.per_length)
+            for torque in torsion_loads(loads, 0.0, 0.0, cut.length)
+        )
+        return _TorsionPlan(rule.description, UNKNOWN_WARPING_NOTE if twisted else WARPING_NOTE)
+    if not twist.modelled:
+        return _TorsionPlan(
+            rule.description,
+            "St Venant torsion only, warping normal and shear stresses not included: "
+            f"{twist.reason}.",
+        )
     if plan is not None:
-        factor_types, factors = plan.types, factor_matrix(plan.combos, plan.types)
-        governing = plan.governing
-    else:
-        factor_types = list(dict.fromkeys(types))
-        factors, governing = np.ones((1, len(factor_types))), 0
-    twist = member_twist(
-        section, warping, length, held, loads, types, factors, factor_types, modulus
-    )
-    if twist.solution is None:
-        return _TorsionPlan(
-            rule.description,
-            f"St Venant torsion only, warping normal and shear stresses not included: "
-            f"{twist.restraints.reason}.",
-        )
-    if not np.any(twist.solution.constants) and not np.any(twist.solution.per_length):
-        return _TorsionPlan(
-            rule.description,
-            "No load twists the member about its shear centre: no torsion stresses.",
-        )
-    derivatives = twist.derivatives(cut.station, cut.side)
+        derivatives = plan.forces[plan.governing, 6:9] / [twist.G, twist.E, twist.E]
+        governing = True
+    else:  # the loads as given: every type at factor 1
+        derivatives = twist.derivatives([cut.station], cut.side)[:, 0, :].sum(axis=0)
+        governing = False
     return _TorsionPlan(
         "non-uniform torsion of a thin-walled open section (St Venant and warping)",
         "An open section (I, channel, tee or angle) warps when it twists, and where warping "
         "is restrained its flanges bend: the twist φ(z) is solved along the member from the "
         "torsion differential equation G·J·φ′ − E·C_w·φ‴ = T in closed form (AISC Design "
         "Guide 9, Torsional Analysis of Structural Steel Members), with the member "
-        f"{twist.restraints.reason}. At the station the St Venant shear G·t·φ′, the warping "
+        f"{twist.reason}. At the station the St Venant shear G·t·φ′, the warping "
         "shear −E·S_w·φ‴/t and the warping normal stress E·W_n·φ″ are added at every point.",
         twist,
-        derivatives,
+        np.asarray(derivatives, dtype=float),
         governing,
     )
 
@@ -1883,10 +1876,13 @@ def _write_torsion(
         "G_s", Quantity(twist.G, "Pa").to(sheet.units.preferred["stress"]),
         "Shear modulus (for the twist)", dimension="stress",
     )  # fmt: skip
+    own = section.properties.get("Cw")
     C_w = sheet.input(
-        "C_w", Quantity(warping.Cw, f"{warping.length_unit}**6"), "Warping constant",
-        reference=CW_SOURCE,
-    )  # fmt: skip
+        "C_w",
+        warping_constant(section, warping),
+        "Warping constant",
+        reference=section.sources.get("Cw", "") if own is not None and own.m > 0 else CW_SOURCE,
+    )
     sheet.step(
         "lambda_t",
         sp.sqrt(G * props["J"] / (E * C_w)),
@@ -1894,14 +1890,14 @@ def _write_torsion(
         unit=f"1/{length_unit}",
         reference=WARPING_REFERENCE,
     )
-    combination = "the governing combination" if torsion.twist.weights.shape[0] > 1 else "the loads"
+    combination = "the governing combination" if torsion.governing else "the loads"
     sheet.text(
         f"Derivatives of the twist at the station under {combination}, from the closed-form "
         "solution of G·J·φ′ − E·C_w·φ‴ = T for the concentrated torques of the point loads "
         "and couples and the uniform torques of the distributed loads about the shear "
         "centre: {phi_1} = φ′, {phi_2} = φ″, {phi_3} = φ‴."
     )
-    values = torsion.derivatives[torsion.combination]
+    values = torsion.derivatives
     names = ("phi_1", "phi_2", "phi_3")
     words = ("Rate of twist, φ′", "Second derivative of the twist, φ″", "Third derivative, φ‴")
     symbols = [

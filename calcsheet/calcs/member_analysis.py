@@ -27,7 +27,7 @@ from dataclasses import dataclass
 
 import numpy as np
 import pint
-from numpy.typing import NDArray
+from numpy.typing import ArrayLike, NDArray
 
 from calcsheet.calcs.design import DesignBasis
 from calcsheet.errors import InputError
@@ -299,6 +299,8 @@ class MemberAnalysis:
     types: list[str]
     combos: list[Combination] | None
     factors: NDArray[np.float64]
+    # The twist of an open section with warping, per load type (None: no warping model).
+    twist: MemberTwist | None = None
 
     @property
     def service_factors(self) -> NDArray[np.float64]:
@@ -344,7 +346,8 @@ def solve_member(
         Ixy=props["Ixy"],
     )
     result = solve_frame(length, supports, stiffness, cases, force_unit="N", length_unit="m")
-    return MemberAnalysis(supports, case, result, present, combos, factors)
+    twist = member_twist(section, length, supports, loads, types, modulus)
+    return MemberAnalysis(supports, case, result, present, combos, factors, twist)
 
 
 @dataclass
@@ -352,7 +355,9 @@ class StationScan:
     """Every check under every combination at every candidate station, both sides.
 
     ``per_check`` maps a check key to utilizations (sides, combinations, stations);
-    ``stations`` in m; ``forces`` (sides, combinations, stations, 6) in N, N·m.
+    ``stations`` in m; ``forces`` (sides, combinations, stations, 6) in N, N·m, T about
+    the shear centre, with the twist columns G·φ′, E·φ″, E·φ‴ after them (9) when the
+    warping of an open section is modelled (:meth:`MemberTwist.columns`).
     """
 
     stations: NDArray[np.float64]
@@ -418,14 +423,32 @@ def _scan(
         [result.internal_forces(stations, analysis.factors, side=side) for side in SIDES]
     )  # (sides, combos, stations, 6)
     forces = shear_centre_forces(section, forces)  # T about the shear centre, as the sheet's
+    twist = analysis.twist
+    if twist is not None and twist.modelled:
+        columns = np.stack(
+            [np.tensordot(analysis.factors, twist.columns(stations, side), 1) for side in SIDES]
+        )
+        forces = np.concatenate([forces, columns], axis=-1)
     per_check_flat, measure = basis.standard.evaluate(
-        section, forces.reshape(-1, 6), basis, Fy, length
+        section, forces.reshape(-1, forces.shape[-1]), basis, Fy, length
     )
     if not per_check_flat:
         raise InputError("check kind", basis.kind, "a standard whose checks can be evaluated")
     shape = forces.shape[:3]
     per_check = {key: np.asarray(values).reshape(shape) for key, values in per_check_flat.items()}
     return StationScan(stations, forces, per_check, measure)
+
+
+def station_rows(
+    analysis: MemberAnalysis, section: Section, station: float, side: str
+) -> NDArray[np.float64]:
+    """The rows by load type at a station: forces with T about the shear centre, and the
+    twist columns when warping is modelled ((types, 6) or (types, 9), SI)."""
+    rows = shear_centre_forces(section, forces_at(analysis, station, side))
+    twist = analysis.twist
+    if twist is None or not twist.modelled:
+        return rows
+    return np.concatenate([rows, twist.columns([station], side)[:, 0, :]], axis=-1)
 
 
 def forces_at(analysis: MemberAnalysis, station: float, side: str) -> NDArray[np.float64]:
@@ -552,9 +575,11 @@ class MemberTwist:
     """The member's twist for the torsion of an open section with warping, in SI (N, m).
 
     ``restraints`` the end restraints and why (:func:`warping_restraints`); ``solution``
-    the unit twists of ``loads`` (None when warping is not modelled: ``restraints.ends``
-    None); ``weights`` (combinations, loads) combine them; ``x_s``, ``y_s`` the shear
-    centre from the centroid (m); E, G (Pa), G·J (N·m²), E·Cw (N·m⁴).
+    the unit twists of the loads' torques (None when warping is not modelled: supports
+    not at the ends, or no torque about the shear centre; ``reason`` says why);
+    ``weights`` (rows, torques) combine them: one row per load type (factor 1), so a
+    combination's twist is its factors times the rows, as its forces are. ``x_s``,
+    ``y_s`` the shear centre from the centroid (m); E, G (Pa), G·J (N·m²), E·Cw (N·m⁴).
     """
 
     restraints: WarpingRestraints
@@ -566,10 +591,11 @@ class MemberTwist:
     G: float
     GJ: float
     ECw: float
+    reason: str = ""
 
     @property
     def modelled(self) -> bool:
-        """Whether the warping stresses are computed (supports at the ends only)."""
+        """Whether the warping stresses are computed."""
         return self.solution is not None
 
     @property
@@ -577,21 +603,20 @@ class MemberTwist:
         """λ = √(G·J/(E·Cw)) in 1/m (AISC Design Guide 9's 1/a)."""
         return math.sqrt(self.GJ / self.ECw) if self.ECw > 0 else math.inf
 
-    def derivatives(self, station: float, side: str) -> NDArray[np.float64]:
-        """φ′, φ″, φ‴ (1/m, 1/m², 1/m³) at ``station`` (m) under every combination:
-        (combinations, 3). ``side`` as :data:`SIDES`: "station" takes the stretch before
-        a torque at the station (it acts beyond the cut), "right" the one after it."""
-        assert self.solution is not None
-        combined = self.solution.combined(self.weights)
-        values = combined.derivatives([station], "before" if side == "station" else "after")
-        return values[..., 1:, 0]
+    def derivatives(self, stations: ArrayLike, side: str) -> NDArray[np.float64]:
+        """φ′, φ″, φ‴ (1/m, 1/m², 1/m³) at ``stations`` (m) per row: (rows, stations, 3).
 
-    def derivatives_along(self, stations: NDArray[np.float64], side: str) -> NDArray[np.float64]:
-        """φ′, φ″, φ‴ at many stations: (combinations, stations, 3)."""
+        ``side`` as :data:`SIDES`: "station" takes the stretch before a torque at the
+        station (it acts beyond the cut), "right" the one after it."""
         assert self.solution is not None
         combined = self.solution.combined(self.weights)
         values = combined.derivatives(stations, "before" if side == "station" else "after")
         return np.moveaxis(values[..., 1:, :], -2, -1)
+
+    def columns(self, stations: ArrayLike, side: str) -> NDArray[np.float64]:
+        """The twist columns of a row of forces: G·φ′, E·φ″, E·φ‴ (Pa/m, Pa/m², Pa/m³),
+        (rows, stations, 3) (:meth:`calcsheet.mechanics.stresses.StressModel.stresses`)."""
+        return self.derivatives(stations, side) * [self.G, self.E, self.E]
 
 
 def torsion_loads(
@@ -631,45 +656,55 @@ def torsion_loads(
 
 def member_twist(
     section: Section,
-    warping: WarpingProperties,
     length: pint.Quantity,
     supports: Sequence[Support],
     loads: Sequence[MemberLoad],
     types: Sequence[str],
-    factors: NDArray[np.float64],
-    factor_types: Sequence[str],
     modulus: str,
-) -> MemberTwist:
-    """The twist of an open section with a warping model under every combination.
+) -> MemberTwist | None:
+    """The twist of an open section with a warping model under each load type; None for
+    a section without one (closed, solid, round, built-up).
 
-    ``factors`` (combinations, factor_types) are the combinations' load factors, the
-    loads of type t taking column t. The end restraints follow the supports
-    (:func:`warping_restraints`); supports away from the ends leave the twist
-    unsolved (``solution`` None). AISC Design Guide 9, Torsional Analysis of Structural
-    Steel Members: the torsion differential equation G·J·φ′ − E·Cw·φ‴ = T solved in
-    closed form (:func:`~calcsheet.mechanics.warping_torsion.unit_twists`).
+    The end restraints follow the supports (:func:`warping_restraints`); supports away
+    from the ends, or no torque about the shear centre, leave it unsolved
+    (``solution`` None, with the reason). AISC Design Guide 9, Torsional Analysis of
+    Structural Steel Members: the torsion differential equation
+    G·J·φ′ − E·Cw·φ‴ = T solved in closed form
+    (:func:`~calcsheet.mechanics.warping_torsion.unit_twists`).
     """
+    try:
+        warping = warping_properties(section, "m")
+    except InputError:
+        return None
+    if not warping.warps:
+        return None
     length_m = float(length.to("m").m)
-    unit = warping.length_unit
-    x_s = float(Quantity(warping.x_s, unit).to("m").m)
-    y_s = float(Quantity(warping.y_s, unit).to("m").m)
     E = float(parse_quantity(modulus, field="E").to("Pa").m)
     G = float(parse_quantity(shear_modulus(modulus)[0], field="G").to("Pa").m)
     GJ = G * float(section.properties["J"].to("m**4").m)
-    ECw = E * float(Quantity(warping.Cw, f"{unit}**6").to("m**6").m)
+    ECw = E * float(warping_constant(section, warping).to("m**6").m)
     restraints = warping_restraints(list(supports), length_m)
+    present = list(dict.fromkeys(types))
     torques: list[ConcentratedTorque | DistributedTorque] = []
-    per_load: list[str] = []  # each torque takes its load's type's factor
+    rows: list[int] = []  # each torque takes its load's type
     for load, kind in zip(loads, types, strict=True):
-        pieces = torsion_loads([load], x_s, y_s, length_m)
+        pieces = torsion_loads([load], warping.x_s, warping.y_s, length_m)
         torques += pieces
-        per_load += [kind] * len(pieces)
-    columns = [list(factor_types).index(kind) for kind in per_load]
-    weights = np.asarray(factors, dtype=float)[:, columns]
-    solution = None
-    if restraints.ends is not None and torques:
+        rows += [present.index(kind)] * len(pieces)
+    weights = np.zeros((len(present), len(torques)))
+    weights[rows, np.arange(len(torques))] = 1.0
+    solution, reason = None, restraints.reason
+    twisted = any(
+        (torque.torque if isinstance(torque, ConcentratedTorque) else torque.per_length) != 0
+        for torque in torques
+    )
+    if not twisted:
+        reason = "no load twists the member about its shear centre"
+    elif restraints.ends is not None:
         solution = unit_twists(length_m, GJ, ECw, *restraints.ends, torques)
-    return MemberTwist(restraints, solution, weights, x_s, y_s, E, G, GJ, ECw)
+    return MemberTwist(
+        restraints, solution, weights, warping.x_s, warping.y_s, E, G, GJ, ECw, reason
+    )
 
 
 def shear_centre_forces(section: Section, forces: NDArray[np.float64]) -> NDArray[np.float64]:
@@ -696,3 +731,17 @@ def _shear_centre_m(section: Section) -> tuple[float, float] | None:
     except InputError:
         return None
     return (props.x_s, props.y_s) if props.warps else None
+
+
+def warping_constant(section: Section, warping: WarpingProperties) -> pint.Quantity:
+    """Cw for the twist: the section's own (the AISC table's for a catalog shape, the
+    thin-walled formula for a user-defined one), else the warping model's.
+
+    The table's Cw is the value a checker looks up, and the one the standard's checks
+    write under the same name; the warping model's differs from it by the fillets and
+    the through-thickness term (well under 1 % for a W shape).
+    """
+    own = section.properties.get("Cw")
+    if own is not None and float(own.m) > 0:
+        return own
+    return Quantity(warping.Cw, f"{warping.length_unit}**6")

@@ -79,6 +79,7 @@ from calcsheet.sections import Section, SectionNumbers
 from calcsheet.sections.geometry import NO_MATERIAL, ChordCut, Outline
 from calcsheet.sections.shapes import Wall
 from calcsheet.sections.warping import WarpingPoints, WarpingProperties, warping_properties
+from calcsheet.units import Quantity
 
 Array = NDArray[np.float64]
 CENTROID_LABEL = "centroid"
@@ -341,22 +342,17 @@ class StressModel:
         point = PointTerms("all", "all points", self.x, self.y, arrays, self.junction)
         return self.section_terms(), point
 
-    def stresses(
-        self,
-        forces: ArrayLike,
-        twist: ArrayLike | None = None,
-        moduli: tuple[float, float] | None = None,
-    ) -> PointStresses:
-        """Stresses at every point for internal forces of shape (..., 6).
+    def stresses(self, forces: ArrayLike) -> PointStresses:
+        """Stresses at every point for internal forces of shape (..., 6) or (..., 9).
 
         The forces (N, Vx, Vy, T, Mx, My) in F and F·L with the model's length unit L
         give stresses in F/L², of shape (..., n_points). T is the torque the section
         twists under, about its shear-centre axis (:meth:`shear_centre_forces` turns a
         centroid's T into it).
 
-        ``twist`` (..., 3): φ′, φ″, φ‴ in 1/L, 1/L², 1/L³ with ``moduli`` (E, G) in
-        F/L², for a section with a warping model: the warping stresses are added
-        (module docstring). A section without one ignores them (St Venant only).
+        Three more columns give the twist of an open section with warping:
+        G·φ′ (F/L³), E·φ″ (F/L⁴), E·φ‴ (F/L⁵); the warping stresses are then added
+        (module docstring). A section without a warping model ignores them (St Venant).
         """
         from calcsheet.engine.procedure import ArrayWriter  # imported when run: module doc
 
@@ -364,14 +360,10 @@ class StressModel:
         terms = ForceTerms(*(forces[..., i : i + 1] for i in range(6)))
         section, point = self._arrays
         twist_terms = None
-        warped = self.warping_points
-        if twist is not None and warped is not None:
-            if moduli is None:
-                raise ValueError("the twist needs the moduli (E, G)")
-            values = np.asarray(twist, dtype=float)
-            twist_terms = TwistTerms(
-                *(values[..., i : i + 1] for i in range(3)), E=moduli[0], G=moduli[1]
-            )
+        warped = self.warping_points if forces.shape[-1] == 9 else None
+        if warped is not None:
+            # The moduli ride in the columns: E = G = 1 in the procedure.
+            twist_terms = TwistTerms(*(forces[..., i : i + 1] for i in range(6, 9)), E=1.0, G=1.0)
             point = dataclasses.replace(
                 point, warping=PointWarping(warped.Wn_midline, warped.Sw, warped.thickness)
             )
@@ -399,6 +391,15 @@ class StressModel:
             tau_max=values["tau_max"],
             von_mises=values["sigma_vm"],
         )
+
+
+def model_forces(forces: ArrayLike, length_unit: str) -> Array:
+    """Rows of forces in N and N·m (and twist columns in Pa/m, Pa/m², Pa/m³) turned into
+    N and N·L with L = ``length_unit``, as :meth:`StressModel.stresses` takes them."""
+    values = np.asarray(forces, dtype=float)
+    metres = float(Quantity(1.0, length_unit).to("m").m)
+    scale = [1, 1, 1, 1 / metres, 1 / metres, 1 / metres, metres**3, metres**4, metres**5]
+    return values * scale[: values.shape[-1]]
 
 
 def _full(value: Array, shape: tuple[int, ...]) -> Array:
