@@ -30,7 +30,6 @@ from calcsheet.calcs.design import (
     DesignBasis,
     FixedShare,
     check_titles,
-    forces_by_type,
     plan_combinations,
 )
 from calcsheet.calcs.design_sheet import (
@@ -65,9 +64,9 @@ from calcsheet.calcs.member_analysis import (
     recommended_K,
     resolve_supports,
     scan_stations,
-    shear_centre_forces,
     shear_modulus,
     solve_member,
+    statics_rows,
     station_rows,
     support_kind,
     torsion_loads,
@@ -340,12 +339,8 @@ def member_sheet(
             # The search tries other sections: their own twist is not known, St Venant.
             plan.scanned_forces = scan.forces[..., :6].reshape(-1, 6)
     else:
-        # T about the shear centre, as the sheet writes it (T_s).
-        by_type = shear_centre_forces(section, forces_by_type(loads, types, length_q, station_q)[1])
-        if twist is not None and twist.modelled:
-            by_type = np.concatenate(
-                [by_type, twist.columns([cut.station], side)[:, 0, :]], axis=-1
-            )
+        # T about the shear centre, as the sheet writes it (T_s), and the twist.
+        by_type = statics_rows(section, loads, types, length_q, station_q, twist, side)
         plan = plan_combinations(
             section, loads, types, length_q, station_q, basis, fy_q, by_type=by_type
         )

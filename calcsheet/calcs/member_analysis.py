@@ -29,7 +29,7 @@ import numpy as np
 import pint
 from numpy.typing import ArrayLike, NDArray
 
-from calcsheet.calcs.design import DesignBasis
+from calcsheet.calcs.design import DesignBasis, forces_by_type
 from calcsheet.errors import InputError
 from calcsheet.mechanics.distributed import DistributedLoad, check_distributed_on_member
 from calcsheet.mechanics.distributed import self_weight as self_weight_load
@@ -745,3 +745,24 @@ def warping_constant(section: Section, warping: WarpingProperties) -> pint.Quant
     if own is not None and float(own.m) > 0:
         return own
     return Quantity(warping.Cw, f"{warping.length_unit}**6")
+
+
+def statics_rows(
+    section: Section,
+    loads: Sequence[PointLoad | AppliedMoment],
+    types: Sequence[str],
+    length: pint.Quantity,
+    station: pint.Quantity,
+    twist: MemberTwist | None,
+    side: str = "station",
+) -> NDArray[np.float64]:
+    """The rows by load type of a cantilever by statics of its free part: the forces with
+    T about the shear centre, and the twist columns when warping is modelled (SI).
+
+    ``twist`` is :func:`member_twist` of the cantilever's loads (None: no warping model).
+    """
+    rows = shear_centre_forces(section, forces_by_type(loads, types, length, station)[1])
+    if twist is None or not twist.modelled:
+        return rows
+    at = float(station.to("m").m)
+    return np.concatenate([rows, twist.columns([at], side)[:, 0, :]], axis=-1)

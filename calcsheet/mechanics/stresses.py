@@ -92,6 +92,8 @@ CENTROID_LABEL = "centroid"
 PEAK_TOLERANCE = 0.008
 DIRECTION_STEPS = 1800
 _MAX_WALL_POINTS = 40
+# Relative difference below which two points' stresses are a tie (round-off).
+_TIE = 1e-9
 # Relative size (of A^1.5) below which a first moment is round-off of an exact zero.
 _ZERO_Q = 1e-9
 
@@ -193,7 +195,12 @@ class PointStresses:
         }
         if measure not in values:
             raise KeyError(f"unknown measure {measure!r}; known: {sorted(MEASURES)}")
-        return np.argmax(values[measure], axis=-1)
+        chosen = values[measure]
+        # Points equal but for round-off (the two sides of a symmetric section) are a tie,
+        # and a tie goes to the first point, as the sheet's governing steps take it.
+        largest = np.max(chosen, axis=-1, keepdims=True)
+        scale = np.max(np.abs(chosen), axis=-1, keepdims=True)
+        return np.argmax(chosen >= largest - _TIE * scale, axis=-1)
 
     def governing_label(self, measure: str) -> str:
         """Label of the governing point of a single load case."""
