@@ -1657,6 +1657,7 @@ _TABLE_COLUMNS = (
     ("sigma_Mx", "{sigma} from {M_x}"),
     ("sigma_My", "{sigma} from {M_y}"),
     ("sigma_b", "{sigma} from {M_r}"),
+    ("sigma_w", "{sigma_w} warping"),
     ("sigma", "{sigma} (sum)"),
     ("tau", "{tau}"),
     ("sigma_1", "{sigma_1}"),

@@ -394,6 +394,12 @@ def scan_stations(
     candidates = stations is None
     if stations is None:
         stations = analysis.result.candidate_stations(analysis.factors)
+        twist = analysis.twist
+        if twist is not None and twist.solution is not None:
+            # φ′, φ″, φ‴ can peak inside a span (a fixed-ended member under uniform torque):
+            # every combination's peaks join the candidates.
+            combined = twist.solution.combined(analysis.factors @ twist.weights)
+            stations = np.union1d(stations, combined.peak_stations())
     scan = _scan(analysis, section, basis, Fy, length, np.asarray(stations, dtype=float))
     if not candidates or len(scan.stations) < 3:
         return scan
