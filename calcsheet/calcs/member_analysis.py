@@ -20,15 +20,16 @@ All numbers are SI (N, m) floats; quantities at the edges.
 
 from __future__ import annotations
 
+import itertools
 import math
 from collections.abc import Sequence
 from dataclasses import dataclass
 
 import numpy as np
 import pint
-from numpy.typing import NDArray
+from numpy.typing import ArrayLike, NDArray
 
-from calcsheet.calcs.design import DesignBasis
+from calcsheet.calcs.design import DesignBasis, forces_by_type
 from calcsheet.errors import InputError
 from calcsheet.mechanics.distributed import DistributedLoad, check_distributed_on_member
 from calcsheet.mechanics.distributed import self_weight as self_weight_load
@@ -41,7 +42,19 @@ from calcsheet.mechanics.loads import (
     parse_signed_axis,
 )
 from calcsheet.mechanics.supports import FIXED, MOTIONS, SUPPORT_CASES, Support, support_case
+from calcsheet.mechanics.torsion import (
+    WarpingRestraints,
+    shear_centre_torque,
+    warping_restraints,
+)
+from calcsheet.mechanics.warping_torsion import (
+    ConcentratedTorque,
+    DistributedTorque,
+    TwistSolution,
+    unit_twists,
+)
 from calcsheet.sections import Section
+from calcsheet.sections.warping import WarpingProperties, warping_properties
 from calcsheet.standards.combinations import Combination, combinations, factor_matrix
 from calcsheet.units import Quantity, parse_quantity
 
@@ -286,6 +299,8 @@ class MemberAnalysis:
     types: list[str]
     combos: list[Combination] | None
     factors: NDArray[np.float64]
+    # The twist of an open section with warping, per load type (None: no warping model).
+    twist: MemberTwist | None = None
 
     @property
     def service_factors(self) -> NDArray[np.float64]:
@@ -331,7 +346,8 @@ def solve_member(
         Ixy=props["Ixy"],
     )
     result = solve_frame(length, supports, stiffness, cases, force_unit="N", length_unit="m")
-    return MemberAnalysis(supports, case, result, present, combos, factors)
+    twist = member_twist(section, length, supports, loads, types, modulus)
+    return MemberAnalysis(supports, case, result, present, combos, factors, twist)
 
 
 @dataclass
@@ -339,7 +355,9 @@ class StationScan:
     """Every check under every combination at every candidate station, both sides.
 
     ``per_check`` maps a check key to utilizations (sides, combinations, stations);
-    ``stations`` in m; ``forces`` (sides, combinations, stations, 6) in N, N·m.
+    ``stations`` in m; ``forces`` (sides, combinations, stations, 6) in N, N·m, T about
+    the shear centre, with the twist columns G·φ′, E·φ″, E·φ‴ after them (9) when the
+    warping of an open section is modelled (:meth:`MemberTwist.columns`).
     """
 
     stations: NDArray[np.float64]
@@ -376,6 +394,12 @@ def scan_stations(
     candidates = stations is None
     if stations is None:
         stations = analysis.result.candidate_stations(analysis.factors)
+        twist = analysis.twist
+        if twist is not None and twist.solution is not None:
+            # φ′, φ″, φ‴ can peak inside a span (a fixed-ended member under uniform torque):
+            # every combination's peaks join the candidates.
+            combined = twist.solution.combined(analysis.factors @ twist.weights)
+            stations = np.union1d(stations, combined.peak_stations())
     scan = _scan(analysis, section, basis, Fy, length, np.asarray(stations, dtype=float))
     if not candidates or len(scan.stations) < 3:
         return scan
@@ -404,14 +428,33 @@ def _scan(
     forces = np.stack(
         [result.internal_forces(stations, analysis.factors, side=side) for side in SIDES]
     )  # (sides, combos, stations, 6)
+    forces = shear_centre_forces(section, forces)  # T about the shear centre, as the sheet's
+    twist = analysis.twist
+    if twist is not None and twist.modelled:
+        columns = np.stack(
+            [np.tensordot(analysis.factors, twist.columns(stations, side), 1) for side in SIDES]
+        )
+        forces = np.concatenate([forces, columns], axis=-1)
     per_check_flat, measure = basis.standard.evaluate(
-        section, forces.reshape(-1, 6), basis, Fy, length
+        section, forces.reshape(-1, forces.shape[-1]), basis, Fy, length
     )
     if not per_check_flat:
         raise InputError("check kind", basis.kind, "a standard whose checks can be evaluated")
     shape = forces.shape[:3]
     per_check = {key: np.asarray(values).reshape(shape) for key, values in per_check_flat.items()}
     return StationScan(stations, forces, per_check, measure)
+
+
+def station_rows(
+    analysis: MemberAnalysis, section: Section, station: float, side: str
+) -> NDArray[np.float64]:
+    """The rows by load type at a station: forces with T about the shear centre, and the
+    twist columns when warping is modelled ((types, 6) or (types, 9), SI)."""
+    rows = shear_centre_forces(section, forces_at(analysis, station, side))
+    twist = analysis.twist
+    if twist is None or not twist.modelled:
+        return rows
+    return np.concatenate([rows, twist.columns([station], side)[:, 0, :]], axis=-1)
 
 
 def forces_at(analysis: MemberAnalysis, station: float, side: str) -> NDArray[np.float64]:
@@ -525,3 +568,207 @@ def force_diagrams(
     both = np.stack([left, right], axis=2).reshape(left.shape[0], -1, 6)
     at = np.repeat(stations, 2)
     return ForceDiagrams(at, both[governing], both.min(axis=0), both.max(axis=0))
+
+
+# --- torsion of open sections with warping (AISC Design Guide 9) ------------------------------
+
+# A linearly varying distributed load's torque is taken as this many uniform pieces.
+_TORQUE_PIECES = 16
+
+
+@dataclass(frozen=True, eq=False)
+class MemberTwist:
+    """The member's twist for the torsion of an open section with warping, in SI (N, m).
+
+    ``restraints`` the end restraints and why (:func:`warping_restraints`); ``solution``
+    the unit twists of the loads' torques (None when warping is not modelled: supports
+    not at the ends, or no torque about the shear centre; ``reason`` says why);
+    ``weights`` (rows, torques) combine them: one row per load type (factor 1), so a
+    combination's twist is its factors times the rows, as its forces are. ``x_s``,
+    ``y_s`` the shear centre from the centroid (m); E, G (Pa), G·J (N·m²), E·Cw (N·m⁴).
+    """
+
+    restraints: WarpingRestraints
+    solution: TwistSolution | None
+    weights: NDArray[np.float64]
+    x_s: float
+    y_s: float
+    E: float
+    G: float
+    GJ: float
+    ECw: float
+    reason: str = ""
+
+    @property
+    def modelled(self) -> bool:
+        """Whether the warping stresses are computed."""
+        return self.solution is not None
+
+    @property
+    def torsion_parameter(self) -> float:
+        """λ = √(G·J/(E·Cw)) in 1/m (AISC Design Guide 9's 1/a)."""
+        return math.sqrt(self.GJ / self.ECw) if self.ECw > 0 else math.inf
+
+    def derivatives(self, stations: ArrayLike, side: str) -> NDArray[np.float64]:
+        """φ′, φ″, φ‴ (1/m, 1/m², 1/m³) at ``stations`` (m) per row: (rows, stations, 3).
+
+        ``side`` as :data:`SIDES`: "station" takes the stretch before a torque at the
+        station (it acts beyond the cut), "right" the one after it."""
+        assert self.solution is not None
+        combined = self.solution.combined(self.weights)
+        values = combined.derivatives(stations, "before" if side == "station" else "after")
+        return np.moveaxis(values[..., 1:, :], -2, -1)
+
+    def columns(self, stations: ArrayLike, side: str) -> NDArray[np.float64]:
+        """The twist columns of a row of forces: G·φ′, E·φ″, E·φ‴ (Pa/m, Pa/m², Pa/m³),
+        (rows, stations, 3) (:meth:`calcsheet.mechanics.stresses.StressModel.stresses`)."""
+        return self.derivatives(stations, side) * [self.G, self.E, self.E]
+
+
+def torsion_loads(
+    loads: Sequence[MemberLoad], x_s: float, y_s: float, length: float
+) -> list[ConcentratedTorque | DistributedTorque]:
+    """Each load's torque about the shear-centre axis at (x_s, y_s) (m), SI.
+
+    A force (F_x, F_y) at (e_x, e_y): (e_x − x_s)·F_y − (e_y − y_s)·F_x; a couple its
+    M_z; a distributed load the same per unit length, a linearly varying one as
+    :data:`_TORQUE_PIECES` uniform pieces at their mid-point values (the twist at a
+    station differs from the exact linear torque by far less than 1 %).
+    """
+    found: list[ConcentratedTorque | DistributedTorque] = []
+
+    def si(value: pint.Quantity, unit: str) -> float:
+        return float(value.to(unit).m)
+
+    for load in loads:
+        if isinstance(load, PointLoad):
+            arm_x, arm_y = si(load.ex, "m") - x_s, si(load.ey, "m") - y_s
+            torque = arm_x * si(load.Fy, "N") - arm_y * si(load.Fx, "N")
+            found.append(ConcentratedTorque(torque, min(si(load.z, "m"), length)))
+        elif isinstance(load, AppliedMoment):
+            found.append(ConcentratedTorque(si(load.Mz, "N*m"), min(si(load.z, "m"), length)))
+        else:
+            arm_x, arm_y = si(load.ex, "m") - x_s, si(load.ey, "m") - y_s
+            start, end = si(load.z_start, "m"), min(si(load.z_end, "m"), length)
+            m0 = arm_x * si(load.q_start[1], "N/m") - arm_y * si(load.q_start[0], "N/m")
+            m1 = arm_x * si(load.q_end[1], "N/m") - arm_y * si(load.q_end[0], "N/m")
+            pieces = 1 if m0 == m1 else _TORQUE_PIECES
+            edges = np.linspace(start, end, pieces + 1)
+            for low, high in itertools.pairwise(edges):
+                middle = ((low + high) / 2 - start) / (end - start)
+                found.append(DistributedTorque(m0 + (m1 - m0) * middle, low, high))
+    return found
+
+
+def member_twist(
+    section: Section,
+    length: pint.Quantity,
+    supports: Sequence[Support],
+    loads: Sequence[MemberLoad],
+    types: Sequence[str],
+    modulus: str,
+) -> MemberTwist | None:
+    """The twist of an open section with a warping model under each load type; None for
+    a section without one (closed, solid, round, built-up).
+
+    The end restraints follow the supports (:func:`warping_restraints`); supports away
+    from the ends, or no torque about the shear centre, leave it unsolved
+    (``solution`` None, with the reason). AISC Design Guide 9, Torsional Analysis of
+    Structural Steel Members: the torsion differential equation
+    G·J·φ′ − E·Cw·φ‴ = T solved in closed form
+    (:func:`~calcsheet.mechanics.warping_torsion.unit_twists`).
+    """
+    try:
+        warping = warping_properties(section, "m")
+    except InputError:
+        return None
+    if not warping.warps:
+        return None
+    length_m = float(length.to("m").m)
+    E = float(parse_quantity(modulus, field="E").to("Pa").m)
+    G = float(parse_quantity(shear_modulus(modulus)[0], field="G").to("Pa").m)
+    GJ = G * float(section.properties["J"].to("m**4").m)
+    ECw = E * float(warping_constant(section, warping).to("m**6").m)
+    restraints = warping_restraints(list(supports), length_m)
+    present = list(dict.fromkeys(types))
+    torques: list[ConcentratedTorque | DistributedTorque] = []
+    rows: list[int] = []  # each torque takes its load's type
+    for load, kind in zip(loads, types, strict=True):
+        pieces = torsion_loads([load], warping.x_s, warping.y_s, length_m)
+        torques += pieces
+        rows += [present.index(kind)] * len(pieces)
+    weights = np.zeros((len(present), len(torques)))
+    weights[rows, np.arange(len(torques))] = 1.0
+    solution, reason = None, restraints.reason
+    twisted = any(
+        (torque.torque if isinstance(torque, ConcentratedTorque) else torque.per_length) != 0
+        for torque in torques
+    )
+    if not twisted:
+        reason = "no load twists the member about its shear centre"
+    elif restraints.ends is not None:
+        solution = unit_twists(length_m, GJ, ECw, *restraints.ends, torques)
+    return MemberTwist(
+        restraints, solution, weights, warping.x_s, warping.y_s, E, G, GJ, ECw, reason
+    )
+
+
+def shear_centre_forces(section: Section, forces: NDArray[np.float64]) -> NDArray[np.float64]:
+    """Internal forces (..., 6) in N, N·m with T about the shear-centre axis.
+
+    The frame and the statics give T about the centroid; the section twists about its
+    shear centre, so T_s = T − x_s·V_y + y_s·V_x
+    (:func:`calcsheet.mechanics.torsion.shear_centre_torque`). The same forces for a
+    section whose shear centre is the centroid or is not known (a built-up shape).
+    """
+    centre = _shear_centre_m(section)
+    values = np.array(forces, dtype=float)
+    if centre is not None and (centre[0] or centre[1]):
+        values[..., 3] = shear_centre_torque(
+            values[..., 3], values[..., 1], values[..., 2], centre[0], centre[1]
+        )
+    return values
+
+
+def _shear_centre_m(section: Section) -> tuple[float, float] | None:
+    """The shear centre (m) from the centroid of an open section with a warping model."""
+    try:
+        props = warping_properties(section, "m")
+    except InputError:
+        return None
+    return (props.x_s, props.y_s) if props.warps else None
+
+
+def warping_constant(section: Section, warping: WarpingProperties) -> pint.Quantity:
+    """Cw for the twist: the section's own (the AISC table's for a catalog shape, the
+    thin-walled formula for a user-defined one), else the warping model's.
+
+    The table's Cw is the value a checker looks up, and the one the standard's checks
+    write under the same name; the warping model's differs from it by the fillets and
+    the through-thickness term (well under 1 % for a W shape).
+    """
+    own = section.properties.get("Cw")
+    if own is not None and float(own.m) > 0:
+        return own
+    return Quantity(warping.Cw, f"{warping.length_unit}**6")
+
+
+def statics_rows(
+    section: Section,
+    loads: Sequence[PointLoad | AppliedMoment],
+    types: Sequence[str],
+    length: pint.Quantity,
+    station: pint.Quantity,
+    twist: MemberTwist | None,
+    side: str = "station",
+) -> NDArray[np.float64]:
+    """The rows by load type of a cantilever by statics of its free part: the forces with
+    T about the shear centre, and the twist columns when warping is modelled (SI).
+
+    ``twist`` is :func:`member_twist` of the cantilever's loads (None: no warping model).
+    """
+    rows = shear_centre_forces(section, forces_by_type(loads, types, length, station)[1])
+    if twist is None or not twist.modelled:
+        return rows
+    at = float(station.to("m").m)
+    return np.concatenate([rows, twist.columns([at], side)[:, 0, :]], axis=-1)

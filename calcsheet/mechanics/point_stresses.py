@@ -19,6 +19,15 @@ Both run against a writer (:mod:`calcsheet.engine.procedure`):
   point without a cut has a zero first moment on a unit width there, which gives
   the zero the sheet leaves out.
 
+Open sections with a warping model (I, channel, tee, angle) may be given the twist
+at the station (:class:`TwistTerms`: φ′, φ″, φ‴ of the torsion differential
+equation, AISC Design Guide 9) and each point its warping values
+(:class:`PointWarping`): the point then takes the warping normal stress
+σ_w = E·Wn·φ″ into σ, and its torsional shear is the St Venant shear G·t·φ′ of the
+wall it lies on plus the warping shear −E·Sw·φ‴/t, both by magnitude (their
+directions along the wall are not tracked: conservative), in place of T·t_max/J.
+Wn is the mid-line value Design Guide 9 tabulates (see :class:`PointWarping`).
+
 The writers live in the engine; a caller passes one in, so importing
 :mod:`calcsheet.mechanics` stays light.
 """
@@ -120,6 +129,46 @@ class Cut:
     width: Value
 
 
+# AISC Design Guide 9 (Torsional Analysis of Structural Steel Members), Chapter 4.
+WARPING_REFERENCE = "AISC Design Guide 9, Torsional Analysis of Structural Steel Members"
+WARPING_TEXT = (
+    "Torsion of the open section with warping: at each point the warping normal stress "
+    "{sigma_w} = {E}·{W_n}·φ″ is added to the normal stress, and the torsional shear is the "
+    "St Venant shear {tau_t} = {G}·{t_w}·φ′ of the wall through the point plus the warping "
+    "shear {tau_w} = −{E}·{S_w}·φ‴/{t_w}, added by magnitude because their directions along "
+    "the wall are not tracked (conservative). {W_n} is the normalized warping function on "
+    "the wall mid-line at the point and {S_w} the warping statical moment of the part of "
+    "the wall cut off beyond it, as AISC Design Guide 9 (Torsional Analysis of Structural "
+    "Steel Members) tabulates them."
+)
+
+
+@dataclass(frozen=True)
+class TwistTerms:
+    """The twist derivatives φ′, φ″, φ‴ at the station with E and G (writer values)."""
+
+    phi_1: Value
+    phi_2: Value
+    phi_3: Value
+    E: Value
+    G: Value
+
+
+@dataclass(frozen=True)
+class PointWarping:
+    """A point's mid-line warping function Wn, warping statical moment Sw and wall t.
+
+    Wn is the mid-line value (Design Guide 9's W_no at a flange tip, not the value at
+    the outer face, which differs by t_f/h_0): the thin-walled theory the twist
+    derivatives come from is a mid-line theory, and the tables a checker compares
+    with give the mid-line values.
+    """
+
+    Wn: Value
+    Sw: Value
+    t: Value
+
+
 @dataclass(frozen=True)
 class PointTerms:
     """One stress point (a sheet) or all of them (arrays): number, label, x, y, cuts.
@@ -137,6 +186,8 @@ class PointTerms:
     junction: Flag = False
     # False: evaluated step by step but not printed (the sheet's table shows it).
     shown: bool = True
+    # The warping values at the point (open sections with a warping model), or None.
+    warping: PointWarping | None = None
 
 
 @dataclass(frozen=True)
@@ -152,9 +203,9 @@ class RoundTerms:
 class PointRecord:
     """The values written for one point (or all points, on arrays), by term.
 
-    Terms: sigma_N, sigma_Mx, sigma_My (round: sigma_b), sigma, tau_zy, tau_zx (those
-    of the cuts through material; round: tau_V), tau_T, tau, sigma_1, sigma_2, tau_max,
-    sigma_vm.
+    Terms: sigma_N, sigma_Mx, sigma_My (round: sigma_b), sigma_w (with warping), sigma,
+    tau_zy, tau_zx (those of the cuts through material; round: tau_V), tau_t and tau_w
+    (with warping), tau_T, tau, sigma_1, sigma_2, tau_max, sigma_vm.
     """
 
     number: str
@@ -163,18 +214,26 @@ class PointRecord:
 
 
 def point_stress_procedure(
-    w: Writer, points: Sequence[PointTerms], forces: ForceTerms, section: SectionTerms
+    w: Writer,
+    points: Sequence[PointTerms],
+    forces: ForceTerms,
+    section: SectionTerms,
+    twist: TwistTerms | None = None,
 ) -> list[PointRecord]:
     """The stresses at every point (module docstring); one record per point given.
 
     Steps: ``sigma_N`` and, for closed and open sections, ``tau_T`` once; per point
-    n ``sigma_Mx_n``, ``sigma_My_n``, ``sigma_z_n``, ``tau_zy_n``/``tau_zx_n`` (the cuts
-    through material), ``r_n`` and ``tau_T_n`` (round), ``tau_n``, then
-    :func:`combined_stress_procedure`.
+    n ``sigma_Mx_n``, ``sigma_My_n``, ``sigma_w_n`` (with ``twist``), ``sigma_z_n``,
+    ``tau_zy_n``/``tau_zx_n`` (the cuts through material), ``r_n`` and ``tau_T_n``
+    (round), ``tau_t_n``, ``tau_w_n`` and ``tau_T_n`` (with ``twist``), ``tau_n``, then
+    :func:`combined_stress_procedure`. With ``twist`` every point must carry its
+    :class:`PointWarping`: the warping stresses of Design Guide 9 replace T·t_max/J.
     """
     stress = w.unit("stress")
     w.heading("Stresses at the points of the section")
     w.text(SHEAR_TEXT)
+    if twist is not None:
+        w.text(WARPING_TEXT)
     w.text(COMBINED_TEXT)
     sigma_N = w.step(
         "sigma_N",
@@ -182,7 +241,7 @@ def point_stress_procedure(
         "Axial term, N/A (same at every point)",
         unit=stress,
     )
-    tau_T_common = _common_torsion(w, forces.T, section, stress)
+    tau_T_common = None if twist is not None else _common_torsion(w, forces.T, section, stress)
     records = []
     outer = w
     for point in points:
@@ -191,16 +250,30 @@ def point_stress_procedure(
         record = PointRecord(n, point.label)
         w.heading(f"Point {n}: {point.label}", level=2)
         sigma_Mx, sigma_My = _bending_terms(w, point, forces, section, stress)
-        sigma = w.step(
-            f"sigma_z_{n}", sigma_N + sigma_Mx + sigma_My, "Normal stress (sum)", unit=stress
-        )
+        normal = sigma_N + sigma_Mx + sigma_My
+        warping = point.warping if twist is not None else None
+        if twist is not None and warping is None:
+            raise ValueError(f"point {n} has no warping values for the twist given")
+        if twist is not None and warping is not None:
+            sigma_w = w.step(
+                f"sigma_w_{n}",
+                twist.E * warping.Wn * twist.phi_2,
+                "Warping normal stress, {E}·{W_n}·φ″",
+                unit=stress,
+                reference=WARPING_REFERENCE,
+            )
+            normal = normal + sigma_w
+            record.terms["sigma_w"] = sigma_w
+        sigma = w.step(f"sigma_z_{n}", normal, "Normal stress (sum)", unit=stress)
         record.terms.update(sigma_N=sigma_N, sigma_Mx=sigma_Mx, sigma_My=sigma_My, sigma=sigma)
         transverse = []
         for cut_name, cut in point.cuts.items():
             term = _shear_term(w, cut_name, n, cut, forces, section, stress)
             transverse.append(term)
             record.terms[f"tau_{cut_name}"] = term
-        if tau_T_common is None:  # round: τ = T·r/J at the point's radius
+        if twist is not None and warping is not None:
+            tau_T = _warping_shear(w, n, warping, twist, record, stress)
+        elif tau_T_common is None:  # round: τ = T·r/J at the point's radius
             r = w.step(
                 f"r_{n}",
                 formulas.resultant(w, point.x, point.y),
@@ -225,6 +298,43 @@ def point_stress_procedure(
         combined_stress_procedure(w, record)
         records.append(record)
     return records
+
+
+def _warping_shear(
+    w: Writer,
+    n: str,
+    warping: PointWarping,
+    twist: TwistTerms,
+    record: PointRecord,
+    stress: str | None,
+) -> Value:
+    """St Venant shear G·t·φ′ and warping shear −E·Sw·φ‴/t at a point, and their sum.
+
+    AISC Design Guide 9, Torsional Analysis of Structural Steel Members, Section 4.1
+    (τ_t = G·t·θ′, τ_ws = −E·Sw·θ‴/t; section numbers from memory). The two are added
+    by magnitude: their directions along the wall are not tracked (conservative).
+    """
+    tau_t = w.step(
+        f"tau_t_{n}",
+        twist.G * warping.t * twist.phi_1,
+        "St Venant shear of the wall, {G}·{t_w}·φ′",
+        unit=stress,
+        reference=WARPING_REFERENCE,
+    )
+    tau_w = w.step(
+        f"tau_w_{n}",
+        -twist.E * warping.Sw * twist.phi_3 / warping.t,
+        "Warping shear, −{E}·{S_w}·φ‴/{t_w}",
+        unit=stress,
+        reference=WARPING_REFERENCE,
+    )
+    record.terms.update(tau_t=tau_t, tau_w=tau_w)
+    return w.step(
+        f"tau_T_{n}",
+        w.absolute(tau_t) + w.absolute(tau_w),
+        "Torsional shear, |{tau_t}| + |{tau_w}|",
+        unit=stress,
+    )
 
 
 def _common_torsion(w: Writer, T: Value, section: SectionTerms, stress: str | None) -> Value:

@@ -19,7 +19,11 @@ At each point (x, y) measured from the centroid:
   channel takes the bottom flange tip, not both tips; a cut that meets no material
   at the point (a free face, a toe) gives no shear. Tubes and built-up plates use
   the whole line across the section;
-* τ_T from St Venant torsion (:mod:`calcsheet.mechanics.torsion`);
+* τ_T from St Venant torsion (:mod:`calcsheet.mechanics.torsion`) of the torque
+  about the shear-centre axis (:meth:`StressModel.shear_centre_forces` turns the
+  centroid's T into it); or, when the twist
+  derivatives φ′, φ″, φ‴ are given (open sections with a warping model), the warping
+  normal stress E·Wn·φ″ into σ and the shear G·t·φ′ + |E·Sw·φ‴/t| (AISC Design Guide 9);
 * τ = √(τzx² + τzy²) + |τ_T|, except at a re-entrant corner of an open section,
   where the two cuts cross two different walls and τ = max(|τzx|, |τzy|) + |τ_T|
   (:func:`formulas.shear_at_point`); then σ1, σ2, τ_max and von Mises.
@@ -41,12 +45,14 @@ the walls at the neutral axis of each bending plane, where V·Q/(I·b) peaks.
 
 from __future__ import annotations
 
+import dataclasses
 import functools
 from dataclasses import dataclass
 
 import numpy as np
 from numpy.typing import ArrayLike, NDArray
 
+from calcsheet.errors import InputError
 from calcsheet.mechanics import formulas
 from calcsheet.mechanics.point_stresses import (
     HORIZONTAL_CUT,
@@ -56,15 +62,24 @@ from calcsheet.mechanics.point_stresses import (
     ForceTerms,
     PointRecord,
     PointTerms,
+    PointWarping,
     RoundTerms,
     SectionTerms,
+    TwistTerms,
     point_stress_procedure,
     round_stress_procedure,
 )
-from calcsheet.mechanics.torsion import ROUND_FAMILIES, TorsionRule, torsion_rule
+from calcsheet.mechanics.torsion import (
+    ROUND_FAMILIES,
+    TorsionRule,
+    shear_centre_torque,
+    torsion_rule,
+)
 from calcsheet.sections import Section, SectionNumbers
 from calcsheet.sections.geometry import NO_MATERIAL, ChordCut, Outline
 from calcsheet.sections.shapes import Wall
+from calcsheet.sections.warping import WarpingPoints, WarpingProperties, warping_properties
+from calcsheet.units import Quantity
 
 Array = NDArray[np.float64]
 CENTROID_LABEL = "centroid"
@@ -77,6 +92,8 @@ CENTROID_LABEL = "centroid"
 PEAK_TOLERANCE = 0.008
 DIRECTION_STEPS = 1800
 _MAX_WALL_POINTS = 40
+# Relative difference below which two points' stresses are a tie (round-off).
+_TIE = 1e-9
 # Relative size (of A^1.5) below which a first moment is round-off of an exact zero.
 _ZERO_Q = 1e-9
 
@@ -178,7 +195,12 @@ class PointStresses:
         }
         if measure not in values:
             raise KeyError(f"unknown measure {measure!r}; known: {sorted(MEASURES)}")
-        return np.argmax(values[measure], axis=-1)
+        chosen = values[measure]
+        # Points equal but for round-off (the two sides of a symmetric section) are a tie,
+        # and a tie goes to the first point, as the sheet's governing steps take it.
+        largest = np.max(chosen, axis=-1, keepdims=True)
+        scale = np.max(np.abs(chosen), axis=-1, keepdims=True)
+        return np.argmax(chosen >= largest - _TIE * scale, axis=-1)
 
     def governing_label(self, measure: str) -> str:
         """Label of the governing point of a single load case."""
@@ -223,6 +245,44 @@ class StressModel:
     torsion: TorsionRule
     junction: Array  # (n,) bool: a re-entrant corner where two walls meet
     resultant: RoundTerms | None = None
+    # The section itself, for its warping model (computed when first asked for).
+    section: Section | None = None
+
+    @functools.cached_property
+    def warping(self) -> WarpingProperties | None:
+        """The section's warping model (shear centre, Cw), or None.
+
+        None for a section without one: a round section, a closed or solid one (they do
+        not warp and their shear centre is the centroid) and a built-up shape whose walls
+        are not known (:func:`calcsheet.sections.warping.warping_properties` refuses it).
+        """
+        if self.section is None or self.resultant is not None:
+            return None
+        try:
+            props = warping_properties(self.section, self.length_unit)
+        except InputError:
+            return None
+        return props if props.warps else None
+
+    def shear_centre_forces(self, forces: ArrayLike) -> Array:
+        """Internal forces (..., 6) with T about the centroid turned into T about the shear centre.
+
+        The same forces for a section whose shear centre is the centroid (doubly
+        symmetric, closed, solid) or is not known (a built-up shape).
+        """
+        values = np.array(forces, dtype=float)
+        props = self.warping
+        if props is not None and (props.x_s or props.y_s):
+            values[..., 3] = shear_centre_torque(
+                values[..., 3], values[..., 1], values[..., 2], props.x_s, props.y_s
+            )
+        return values
+
+    @functools.cached_property
+    def warping_points(self) -> WarpingPoints | None:
+        """Wn (mid-line), Sw and the wall thickness at every point, or None (no model)."""
+        props = self.warping
+        return None if props is None else props.at_points(self.x, self.y)
 
     @property
     def symmetric(self) -> bool:
@@ -290,16 +350,30 @@ class StressModel:
         return self.section_terms(), point
 
     def stresses(self, forces: ArrayLike) -> PointStresses:
-        """Stresses at every point for internal forces of shape (..., 6).
+        """Stresses at every point for internal forces of shape (..., 6) or (..., 9).
 
         The forces (N, Vx, Vy, T, Mx, My) in F and F·L with the model's length unit L
-        give stresses in F/L², of shape (..., n_points).
+        give stresses in F/L², of shape (..., n_points). T is the torque the section
+        twists under, about its shear-centre axis (:meth:`shear_centre_forces` turns a
+        centroid's T into it).
+
+        Three more columns give the twist of an open section with warping:
+        G·φ′ (F/L³), E·φ″ (F/L⁴), E·φ‴ (F/L⁵); the warping stresses are then added
+        (module docstring). A section without a warping model ignores them (St Venant).
         """
         from calcsheet.engine.procedure import ArrayWriter  # imported when run: module doc
 
         forces = np.asarray(forces, dtype=float)
         terms = ForceTerms(*(forces[..., i : i + 1] for i in range(6)))
         section, point = self._arrays
+        twist_terms = None
+        warped = self.warping_points if forces.shape[-1] == 9 else None
+        if warped is not None:
+            # The moduli ride in the columns: E = G = 1 in the procedure.
+            twist_terms = TwistTerms(*(forces[..., i : i + 1] for i in range(6, 9)), E=1.0, G=1.0)
+            point = dataclasses.replace(
+                point, warping=PointWarping(warped.Wn_midline, warped.Sw, warped.thickness)
+            )
         w = ArrayWriter()
         with np.errstate(divide="ignore", invalid="ignore"):
             if self.resultant is not None:
@@ -308,7 +382,7 @@ class StressModel:
                 )
                 records = _joined(fibres)
             else:
-                (record,) = point_stress_procedure(w, [point], terms, section)
+                (record,) = point_stress_procedure(w, [point], terms, section, twist_terms)
                 records = record.terms
         shape = (*forces.shape[:-1], len(self.labels))
         values = {key: _full(value, shape) for key, value in records.items()}
@@ -324,6 +398,15 @@ class StressModel:
             tau_max=values["tau_max"],
             von_mises=values["sigma_vm"],
         )
+
+
+def model_forces(forces: ArrayLike, length_unit: str) -> Array:
+    """Rows of forces in N and N·m (and twist columns in Pa/m, Pa/m², Pa/m³) turned into
+    N and N·L with L = ``length_unit``, as :meth:`StressModel.stresses` takes them."""
+    values = np.asarray(forces, dtype=float)
+    metres = float(Quantity(1.0, length_unit).to("m").m)
+    scale = [1, 1, 1, 1 / metres, 1 / metres, 1 / metres, metres**3, metres**4, metres**5]
+    return values * scale[: values.shape[-1]]
 
 
 def _full(value: Array, shape: tuple[int, ...]) -> Array:
@@ -659,6 +742,7 @@ def stress_model(
         cuts=cut_data(section, x_arr, y_arr, length_unit),
         torsion=torsion_rule(section, x_arr, y_arr, length_unit),
         junction=re_entrant_corners(numbers.outline, x_arr, y_arr),
+        section=section,
     )
 
 

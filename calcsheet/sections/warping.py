@@ -301,10 +301,14 @@ def warping_properties(section: Section, length_unit: str = "inch") -> WarpingPr
     r1 = np.sum((nodes[ends] - shear_centre) * tangent, axis=1)
     secondary = float(np.sum(thickness**3 / 12 * lengths * (r0 * r0 + r0 * r1 + r1 * r1) / 3))
     shift = centroid - np.array([x_bar, y_bar])  # the model's centroid from the section's
+    size = float(np.ptp(model.nodes, axis=0).max())
+    # A shear centre on a symmetry axis comes out as round-off of zero there: make it zero,
+    # so a doubly symmetric section's torque about it is exactly the centroid's.
+    located = np.where(np.abs(shear_centre + shift) < 1e-9 * size, -shift, shear_centre)
     return WarpingProperties(
         length_unit=length_unit,
-        x_s=float(shear_centre[0] + shift[0]),
-        y_s=float(shear_centre[1] + shift[1]),
+        x_s=float(located[0] + shift[0]),
+        y_s=float(located[1] + shift[1]),
         Cw=primary + secondary,
         Cw_midline=primary,
         note=model.note,

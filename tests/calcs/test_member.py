@@ -15,6 +15,7 @@ from calcsheet.engine import Prose
 from calcsheet.errors import InputError
 from calcsheet.mechanics import applied_moment, internal_forces, point_load, stress_model
 from calcsheet.sections import angle, catalog_section, plate, round_bar
+from tests.calcs.twist_rows import cantilever_rows
 
 LOADS = [
     point_load(
@@ -44,9 +45,9 @@ LOADS = [
 )
 def test_sheet_matches_the_vectorised_path(section) -> None:
     sheet = member_sheet(section, LOADS, length="60 in", station="10 in")
-    forces = internal_forces("60 in", LOADS, "10 in")
     model = stress_model(section, section.length_unit)
-    numeric = model.stresses(forces.as_array("kip", section.length_unit))
+    # T about the shear centre and the twist of the open section, as the sheet takes them.
+    numeric = model.stresses(cantilever_rows(section, LOADS, "60 in", "10 in"))
     for index in range(len(model.labels)):
         n = index + 1
         assert sheet.value(f"sigma_z_{n}").to("ksi").m == pytest.approx(numeric.sigma[index])
