@@ -319,3 +319,10 @@ def write_exploration(
         )
         if chosen is None:
             sheet.text(f"None of the {family_title(basis.lightest_in)} passes every check.")
+        if np.any(np.abs(plan.forces[:, 3]) > 0):
+            # The other sections' twist is not solved: the search's torsion is St Venant's.
+            sheet.text(
+                "The member carries a torque: the search takes the other sections' torsion "
+                "as St Venant torsion only (their warping stresses are not computed). "
+                "Build the chosen section's own sheet before adopting it."
+            )
