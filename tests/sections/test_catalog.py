@@ -115,7 +115,7 @@ def test_catalog_section_uses_tabulated_values_by_default_and_says_so() -> None:
     assert section.A.to("inch**2").m == pytest.approx(9.71)
     assert section.Ix.m == pytest.approx(171)
     assert section.Cw.to("inch**6").m == pytest.approx(791)
-    assert "W_shapes.csv" in section.sources["Ix"]
+    assert "AISC shape tables (W shapes)" in section.sources["Ix"]
     assert section.sources["Ixy"].startswith("computed")
     assert section.name == "W10X33"
     assert section.dimensions["d"].to("inch").m == pytest.approx(9.73)
