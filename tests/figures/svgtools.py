@@ -5,6 +5,9 @@ from __future__ import annotations
 import re
 import xml.etree.ElementTree as ET
 
+from calcsheet.figures.labels import Box
+from calcsheet.figures.svg import text_width
+
 SVG = "{http://www.w3.org/2000/svg}"
 NUMBER = re.compile(r"-?\d+(?:\.\d+)?")
 
@@ -38,3 +41,24 @@ def line_ends(element: ET.Element) -> tuple[tuple[float, float], tuple[float, fl
 def texts(root: ET.Element) -> list[str]:
     """The content of every <text>, in order."""
     return [element.text or "" for element in root.iter(f"{SVG}text")]
+
+
+def text_boxes(root: ET.Element) -> list[tuple[str, Box]]:
+    """Each horizontal text's words and its box as the figure code estimates it
+    (:func:`calcsheet.figures.svg.text_width`); turned texts (a vertical dimension or
+    axis title) are left out."""
+    boxes = []
+    for element in root.iter(f"{SVG}text"):
+        if element.get("transform"):
+            continue
+        words = "".join(element.itertext())
+        size = float(element.get("font-size", "0"))
+        width = text_width(words, size)
+        x, middle = float(element.get("x", "0")), float(element.get("y", "0")) - 0.35 * size
+        start = {"start": 0.0, "middle": -width / 2, "end": -width}[
+            element.get("text-anchor", "start")
+        ]
+        boxes.append(
+            (words, Box(x + start, middle - size / 2, x + start + width, middle + size / 2))
+        )
+    return boxes

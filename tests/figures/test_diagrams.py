@@ -16,10 +16,9 @@ import pytest
 from calcsheet.errors import InputError
 from calcsheet.figures.annotate import value_text
 from calcsheet.figures.diagrams import SIGN_CONVENTION, force_diagrams, support_marks
-from calcsheet.figures.labels import Box
 from calcsheet.mechanics import distributed_load, member_stiffness, solve_frame, support_case
 from calcsheet.units import Quantity
-from tests.figures.svgtools import SVG, by_class, parse, texts
+from tests.figures.svgtools import SVG, by_class, parse, text_boxes, texts
 
 L = 6.0  # m
 W = 10e3  # N/m
@@ -139,21 +138,6 @@ def test_sign_convention_is_written_under_the_figure():
     assert notes == SIGN_CONVENTION
 
 
-def _text_boxes(root) -> list[tuple[str, Box]]:
-    """Estimated boxes of every text, as the builder estimates them (no turned text here)."""
-    boxes = []
-    for element in root.iter(f"{SVG}text"):
-        size = float(element.get("font-size"))
-        x, baseline = float(element.get("x")), float(element.get("y"))
-        width = 0.62 * size * len(element.text or "")
-        left = {"start": x, "middle": x - width / 2, "end": x - width}[element.get("text-anchor")]
-        center_y = baseline - 0.35 * size
-        boxes.append(
-            (element.text, Box(left, center_y - size / 2, left + width, center_y + size / 2))
-        )
-    return boxes
-
-
 @pytest.mark.parametrize("supports", [[(0.0, "fixed")], [(0.0, "pinned"), (4.5, "roller")]])
 def test_no_two_texts_overlap(supports):
     z, forces = _simple_beam(241)
@@ -161,7 +145,7 @@ def test_no_two_texts_overlap(supports):
     forces[:, 5] = 3e3 * np.sin(np.pi * z / L)  # My
     high = forces * 1.3
     root = parse(_draw(z, forces, forces * 0.2, high, supports_m=supports, loads_m=[(3.0, "P")]))
-    boxes = _text_boxes(root)
+    boxes = text_boxes(root)
     for (first, a), (second, b) in itertools.combinations(boxes, 2):
         assert not a.overlaps(b), (first, second)
 
@@ -254,6 +238,6 @@ def test_no_text_overlaps_in_random_diagrams():
             loads_m=loads,
             governing_name="1.2D + 1.6L + 0.5S",
         )
-        boxes = _text_boxes(parse(svg))
+        boxes = text_boxes(parse(svg))
         for (first, a), (second, b) in itertools.combinations(boxes, 2):
             assert not a.overlaps(b), (first, second)

@@ -14,29 +14,8 @@ import pytest
 from calcsheet.engine import Sheet
 from calcsheet.engine.parts import Figure
 from calcsheet.errors import InputError
-from calcsheet.figures.labels import Box
-from calcsheet.figures.svg import text_width
 from tests.export.test_nothing_leaves_the_page import CORPUS, corpus_sheet
-from tests.figures.svgtools import SVG, parse
-
-
-def label_boxes(svg: str) -> list[tuple[str, Box]]:
-    """Each horizontal text's words and estimated box (turned texts left out)."""
-    boxes = []
-    for element in parse(svg).iter(f"{SVG}text"):
-        if element.get("transform"):  # a turned dimension or axis title
-            continue
-        words = "".join(element.itertext())
-        size = float(element.get("font-size", "0"))
-        width = text_width(words, size)
-        x, middle = float(element.get("x", "0")), float(element.get("y", "0")) - 0.35 * size
-        start = {"start": 0.0, "middle": -width / 2, "end": -width}[
-            element.get("text-anchor", "start")
-        ]
-        boxes.append(
-            (words, Box(x + start, middle - size / 2, x + start + width, middle + size / 2))
-        )
-    return boxes
+from tests.figures.svgtools import parse, text_boxes
 
 
 def _figures(sheet: Sheet) -> Iterator[tuple[str, str]]:
@@ -53,7 +32,7 @@ def test_no_two_figure_labels_overlap(index: int) -> None:
         pytest.skip(str(error))
     overlaps = []
     for caption, svg in _figures(sheet):
-        boxes = label_boxes(svg)
+        boxes = text_boxes(parse(svg))
         for first, (words, box) in enumerate(boxes):
             for other_words, other in boxes[first + 1 :]:
                 # Half a point of shared edge is the estimate's own slack.

@@ -6,25 +6,7 @@ import numpy as np
 import pytest
 
 from calcsheet.figures.chart import sweep_chart
-from calcsheet.figures.labels import Box
-from calcsheet.figures.svg import text_width
-from tests.figures.svgtools import SVG, parse
-
-
-def _boxes(svg: str) -> list[tuple[str, Box]]:
-    boxes = []
-    for element in parse(svg).iter(f"{SVG}text"):
-        if element.get("transform"):
-            continue
-        words = element.text or ""
-        size = float(element.get("font-size"))
-        width = text_width(words, size)
-        x, middle = float(element.get("x")), float(element.get("y")) - 0.35 * size
-        start = {"start": 0.0, "middle": -width / 2, "end": -width}[element.get("text-anchor")]
-        boxes.append(
-            (words, Box(x + start, middle - size / 2, x + start + width, middle + size / 2))
-        )
-    return boxes
+from tests.figures.svgtools import parse, text_boxes
 
 
 @pytest.mark.parametrize("drawn_deg", [145.0, 150.0, 155.0, 0.0, 360.0])
@@ -33,7 +15,9 @@ def test_worst_and_drawn_labels_do_not_overlap_anything(drawn_deg):
     angles = np.arange(0.0, 361.0, 5.0)
     values = 0.5 + 0.4 * np.sin(np.radians(angles - 60.0))
     drawn_value = float(0.5 + 0.4 * np.sin(np.radians(drawn_deg - 60.0)))
-    boxes = _boxes(sweep_chart(angles, values, drawn=(drawn_deg, drawn_value), title="sweep"))
+    boxes = text_boxes(
+        parse(sweep_chart(angles, values, drawn=(drawn_deg, drawn_value), title="sweep"))
+    )
     for index, (words, box) in enumerate(boxes):
         for other_words, other in boxes[index + 1 :]:
             assert not box.padded(-0.5).overlaps(other.padded(-0.5)), (words, other_words)
