@@ -136,48 +136,23 @@ def main() -> None:
         return pdf_bytes(demo)
 
     report("document: demo sheet to PDF, warm (an input changed)", timed(changed_pdf, 5), 150)
-    # A fresh folder: files issued by an earlier version are never replaced silently.
-    out = Path(tempfile.mkdtemp(prefix="calcsheet-bench-"))
-    cold = timed(
-        lambda: subprocess.run(
-            [
-                sys.executable,
-                "-m",
-                "calcsheet.cli",
-                "build",
-                "examples/outrigger.toml",
-                "--out",
-                str(out),
-            ],
-            check=True,
-            capture_output=True,
-        ),
-        3,
-    )
+    cold = cold_build("examples/outrigger.toml")
     report("document: cold command, start to PDF and HTML on disk", cold, 2500)
     bench_cold_ratio(cold)
-    column = Path(tempfile.mkdtemp(prefix="calcsheet-bench-"))
-    cold_column = timed(
-        lambda: subprocess.run(
-            [
-                sys.executable,
-                "-m",
-                "calcsheet.cli",
-                "build",
-                "examples/column-bracket.toml",
-                "--out",
-                str(column),
-            ],
-            check=True,
-            capture_output=True,
-        ),
-        3,
-    )
+    cold_column = cold_build("examples/column-bracket.toml")
     report("document: cold command, column on supports (frame, scan, diagrams)", cold_column, 2500)
     bench_frame_forces()
     bench_torsion_stresses()
     bench_form()
     bench_batch()
+
+
+def cold_build(job: str) -> float:
+    """Median ms of ``calcsheet build`` of ``job`` in a fresh process, into a fresh folder
+    (files issued by an earlier version are never replaced silently)."""
+    out = Path(tempfile.mkdtemp(prefix="calcsheet-bench-"))
+    command = [sys.executable, "-m", "calcsheet.cli", "build", job, "--out", str(out)]
+    return timed(lambda: subprocess.run(command, check=True, capture_output=True), 3)
 
 
 def bench_cold_ratio(cold_ms: float) -> None:
