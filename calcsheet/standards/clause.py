@@ -79,12 +79,27 @@ class Clause:
         return hashlib.sha256(text.encode()).hexdigest()[:20]
 
     @cached_property
+    def written_key(self) -> str:
+        """Names this clause's builder as written: its name, source text and closure values.
+
+        Found without building the expression (sympy work that cost a tenth of a
+        second a process), so a cold build looks its numeric code up cheaply. A builder
+        edited since the code was written gets a new key and falls back to lambdify; a
+        change in a helper it calls changes :attr:`code_key` instead, which the test of
+        the written module catches.
+        """
+        build = self.build
+        closure = tuple(repr(cell.cell_contents) for cell in build.__closure__ or ())
+        text = f"{build.__module__}.{build.__qualname__}|{inspect.getsource(build)}|{closure}"
+        return hashlib.sha256(text.encode()).hexdigest()[:20]
+
+    @cached_property
     def _numeric_function(self) -> Callable[..., Any]:
         # The expression written out as numpy code (reviewed, in the package) is the same
         # printer's output as lambdify's; a clause changed since it was written falls back.
         from calcsheet.standards.clause_code import FUNCTIONS
 
-        written = FUNCTIONS.get(self.code_key)
+        written = FUNCTIONS.get(self.written_key)
         if written is not None:
             return written
         placeholders = [sp.Symbol(name, real=True) for name in self.parameters]

@@ -7,7 +7,7 @@ Turning the expression into a function (sympy's ``lambdify``) costs tens of
 milliseconds a clause, paid again in every process. Instead the functions are
 printed once by sympy's NumPy printer (the printer ``lambdify`` itself uses) into
 the module :mod:`calcsheet.standards.clause_code`, keyed by
-:attr:`Clause.code_key`; a test keeps the module in step with the clauses.
+:attr:`Clause.written_key`; a test keeps the module in step with the clauses.
 """
 
 from __future__ import annotations
@@ -26,7 +26,7 @@ HEADER = '''"""Numeric functions of the clauses, written by calcsheet.standards.
 
 Do not edit: run ``python -m calcsheet.standards.write_clause_code`` after changing a
 clause (a test says when). Each function is sympy's NumPy printing of the clause's
-expression; the key is :attr:`calcsheet.standards.clause.Clause.code_key`.
+expression; the key is :attr:`calcsheet.standards.clause.Clause.written_key`.
 """
 
 # ruff: noqa
@@ -50,10 +50,15 @@ def load_all_clauses() -> list[Clause]:
 
 
 def clause_code(clauses: list[Clause]) -> str:
-    """The module text for ``clauses`` (each distinct expression once, in key order)."""
+    """The module text for ``clauses`` (each builder once, in key order).
+
+    Keyed by :attr:`Clause.written_key` (cheap to find at run time); each function
+    also names its expression's :attr:`Clause.code_key`, so that a formula changed in
+    a helper the builder calls changes this text and the test comparing it fails.
+    """
     functions: dict[str, str] = {}
     for clause in clauses:
-        key = clause.code_key
+        key = clause.written_key
         if key in functions:
             continue
         printer = NumPyPrinter({"fully_qualified_modules": True, "inline": True})
@@ -62,6 +67,7 @@ def clause_code(clauses: list[Clause]) -> str:
         functions[key] = (
             f"def _{key}({arguments}):\n"
             f"    # {clause.reference}: {clause.description}\n"
+            f"    # expression {clause.code_key}\n"
             f"    return {body}\n"
         )
     table = "".join(f'    "{key}": _{key},\n' for key in sorted(functions))

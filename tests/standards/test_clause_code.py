@@ -13,7 +13,7 @@ from calcsheet.standards.write_clause_code import clause_code as written_text
 def test_the_written_module_is_up_to_date() -> None:
     """After changing a clause: python -m calcsheet.standards.write_clause_code."""
     clauses = load_all_clauses()
-    missing = [c.reference for c in clauses if c.code_key not in clause_code.FUNCTIONS]
+    missing = [c.reference for c in clauses if c.written_key not in clause_code.FUNCTIONS]
     assert not missing, f"run python -m calcsheet.standards.write_clause_code ({missing[:3]})"
     assert TARGET.read_text(encoding="utf-8") == written_text(clauses)
 
