@@ -191,3 +191,15 @@ def test_every_tenth_catalog_shape_builds() -> None:
             assert section.A.m > 0 and section.Ix.m > 0
             count += 1
     assert count > 100
+
+
+def test_the_look_up_by_leading_letters_finds_what_the_whole_catalog_finds() -> None:
+    """find_entry reads only the tables a designation's letters name; for every key of the
+    whole catalog it must find the same row (or leave the key to the whole catalog)."""
+    from calcsheet.sections import catalog
+
+    whole = catalog._catalog()
+    for key, entry in whole.items():
+        named = catalog._named_family_entries(key)
+        found = named.get(key) or named.get(catalog._without_trailing_zeros(key))
+        assert found is entry or (found is None and entry.family.metric), key
