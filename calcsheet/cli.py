@@ -12,9 +12,13 @@ command that needs them.
 from __future__ import annotations
 
 import argparse
+import atexit
+import contextlib
+import gc
 import os
 import sys
 from pathlib import Path
+from typing import NoReturn
 
 EXAMPLES = """\
 examples:
@@ -341,5 +345,27 @@ def main(argv: list[str] | None = None) -> int:
         return INTERNAL
 
 
+def run() -> NoReturn:
+    """The ``calcsheet`` command: :func:`main`, then leave without tearing down the
+    interpreter.
+
+    Freeing every object of a finished build (sympy's caches, the unit registry, the
+    PDF engine's caches) took about 0.15 s, a seventh of a cold build, for nothing:
+    the files are whole on disk by then. Output is flushed and the exit handlers run
+    first, as a normal exit does.
+    """
+    # A build allocates many long-lived objects (sympy's, pint's): collecting young objects
+    # every 700 allocations cost a twentieth of a cold build; every 20,000 is ample for
+    # one command's life.
+    gc.set_threshold(20_000, 20, 20)
+    status = main()
+    for stream in (sys.stdout, sys.stderr):
+        # A closed pipe (``calcsheet check job.toml | head``): nothing more to say.
+        with contextlib.suppress(OSError, ValueError):
+            stream.flush()
+    atexit._run_exitfuncs()  # clean-ups registered by us and by libraries
+    os._exit(status)
+
+
 if __name__ == "__main__":
-    sys.exit(main())
+    run()
