@@ -263,19 +263,27 @@ def _rendered(
 ) -> list[tuple[Path, bytes]]:
     """The sheet's outputs in ``formats`` as (path, bytes), nothing written yet."""
     # Imported here: rendering and the PDF engine are only needed when writing.
+    from concurrent.futures import ThreadPoolExecutor
+
     from calcsheet.export.files import compile_pdf
-    from calcsheet.render.html import render_html
     from calcsheet.render.typst import render_typst
 
     rendered = []
-    if "pdf" in formats:
-        built.typst = render_typst(built.sheet, paper=paper)
-        rendered.append((folder / f"{built.stem}.pdf", compile_pdf(built.typst)))
-    if "html" in formats:
-        rendered.append((folder / f"{built.stem}.html", render_html(built.sheet).encode()))
-    if "json" in formats:
-        text = json.dumps(built.results, indent=2, ensure_ascii=False, sort_keys=False)
-        rendered.append((folder / f"{built.stem}.json", (text + "\n").encode()))
+    # The PDF engine works in a thread of its own (it lets go of the interpreter) while
+    # the HTML and JSON are made: a cold build otherwise waited on each in turn.
+    with ThreadPoolExecutor(max_workers=1) as engine:
+        if "pdf" in formats:
+            built.typst = render_typst(built.sheet, paper=paper)
+            pdf = engine.submit(compile_pdf, built.typst)
+        from calcsheet.render.html import render_html  # while the PDF compiles
+
+        if "html" in formats:
+            rendered.append((folder / f"{built.stem}.html", render_html(built.sheet).encode()))
+        if "json" in formats:
+            text = json.dumps(built.results, indent=2, ensure_ascii=False, sort_keys=False)
+            rendered.append((folder / f"{built.stem}.json", (text + "\n").encode()))
+        if "pdf" in formats:
+            rendered.insert(0, (folder / f"{built.stem}.pdf", pdf.result()))
     return rendered
 
 
