@@ -18,7 +18,9 @@ _CONTROL = re.compile(r"[\x00-\x08\x0b\x0c\x0e-\x1f\x7f]")
 # Typst breaks lines only between words; a longer run gets invisible break points.
 _LONG_RUN = re.compile(r"\S{20}(?=\S)")
 _BREAK_OPPORTUNITY = "\u200b"
-_ESCAPES = str.maketrans({"\\": "\\\\", '"': '\\"', "\n": "\\n", "\r": "", "\t": "\\t"})
+# In this order: the backslash first, so the escapes added after it stay single. (A chain
+# of replace() is several times faster than str.translate on a drawing's 50 kB.)
+_ESCAPES = (("\\", "\\\\"), ('"', '\\"'), ("\n", "\\n"), ("\r", ""), ("\t", "\\t"))
 
 
 def typst_string(value: object, *, breakable: bool = False) -> str:
@@ -32,4 +34,6 @@ def typst_string(value: object, *, breakable: bool = False) -> str:
     text = _CONTROL.sub("", str(value))
     if breakable:
         text = _LONG_RUN.sub(lambda run: run[0] + _BREAK_OPPORTUNITY, text)
-    return f'"{text.translate(_ESCAPES)}"'
+    for character, escaped in _ESCAPES:
+        text = text.replace(character, escaped)
+    return f'"{text}"'

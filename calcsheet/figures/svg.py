@@ -29,12 +29,14 @@ _NOT_XML = re.compile(r"[\x00-\x08\x0b\x0c\x0e-\x1f\ufffe\uffff]")
 Point = tuple[float, float]
 
 
+_FIXED = f".{DECIMALS}f"
+_ZEROS = frozenset((format(0.0, _FIXED), format(-0.0, _FIXED)))
+
+
 def number(value: float) -> str:
     """A coordinate with fixed decimals; never "-0.00" (so output does not depend on signs of 0)."""
-    text = f"{value:.{DECIMALS}f}"
-    return (
-        "0" if text in {f"{0:.{DECIMALS}f}", f"-{0:.{DECIMALS}f}"} else text.rstrip("0").rstrip(".")
-    )
+    text = format(value, _FIXED)
+    return "0" if text in _ZEROS else text.rstrip("0").rstrip(".")
 
 
 def clean_text(text: object) -> str:
@@ -63,7 +65,7 @@ def quoteattr(text: str) -> str:
 
 def _attribute(value: object) -> str:
     if isinstance(value, float | int) and not isinstance(value, bool):
-        return quoteattr(number(float(value)))
+        return f'"{number(float(value))}"'  # digits, sign and point: nothing to escape
     return quoteattr(clean_text(value))
 
 
