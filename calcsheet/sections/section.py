@@ -248,6 +248,15 @@ def build_section(
     centroidal = outline.integrals()
     unit = ureg(length_unit).units
     sources: dict[str, str] = {}
+    tabulated = dict(tabulated or {})
+    chosen = [key for key in use_tabulated if key in tabulated]
+
+    def plastic_modulus(key: str, turned: bool) -> float:
+        # Found by bisection of the outline (a tenth of a cold build for an HSS), so not
+        # when the table's value replaces it below.
+        if key in chosen:
+            return math.nan
+        return (outline.quarter_turned() if turned else outline).plastic_modulus_about_horizontal()
 
     values: dict[str, float] = {
         "A": centroidal.area,
@@ -260,8 +269,8 @@ def build_section(
         "Ix": centroidal.second_yy,
         "Iy": centroidal.second_xx,
         "Ixy": centroidal.product_xy,
-        "Zx": outline.plastic_modulus_about_horizontal(),
-        "Zy": outline.quarter_turned().plastic_modulus_about_horizontal(),
+        "Zx": plastic_modulus("Zx", turned=False),
+        "Zy": plastic_modulus("Zy", turned=True),
     }
     sources.update(dict.fromkeys(values, COMPUTED))
     if shape.torsion_constant is not None:
@@ -270,9 +279,6 @@ def build_section(
     if shape.warping_constant is not None:
         values["Cw"] = shape.warping_constant
     sources["Cw"] = shape.warping_note
-
-    tabulated = dict(tabulated or {})
-    chosen = [key for key in use_tabulated if key in tabulated]
 
     def take_tabulated() -> None:
         for key in chosen:
