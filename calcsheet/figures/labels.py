@@ -18,7 +18,7 @@ import numpy as np
 
 from calcsheet.figures.style import FONT_SIZE
 from calcsheet.figures.svg import Point, text_width
-from calcsheet.mechanics.stresses import point_in_material
+from calcsheet.mechanics.stresses import point_in_edges, ring_edges
 
 _TURNS_DEGREES = (0, 25, -25, 50, -50, 75, -75, 105, -105, 135, -135, 180)
 _DISTANCES = (3.0, 8.0, 15.0, 24.0, 36.0, 52.0, 72.0, 96.0)
@@ -103,6 +103,7 @@ class Obstacles:
     regions: list[list[np.ndarray]] = field(default_factory=list)
     _segment_array: np.ndarray | None = None
     _segment_bounds: np.ndarray | None = None
+    _region_edges: list[list[tuple[np.ndarray, ...]]] = field(default_factory=list)
 
     def add_box(self, box: Box) -> None:
         """Keep labels off this box (a placed label, a dimension text)."""
@@ -117,6 +118,7 @@ class Obstacles:
         """Keep labels off this filled region and its edges (the material)."""
         rings = [np.asarray(ring, dtype=float) for ring in rings]
         self.regions.append(rings)
+        self._region_edges.append([ring_edges(ring) for ring in rings])
         for ring in rings:
             ends = np.roll(ring, -1, axis=0)
             self.segments.extend(
@@ -143,47 +145,4 @@ class Obstacles:
         if _segments_cross_box(box, self._segment_array, self._segment_bounds):
             return True
         x, y = box.center
-        return any(point_in_material(list(rings), x, y) for rings in self.regions)
-
-
-def place_label(
-    obstacles: Obstacles,
-    anchor: Point,
-    direction: Point,
-    text: str,
-    *,
-    size: float = FONT_SIZE,
-    gap: float = 2.0,
-    turns: Sequence[float] = _TURNS_DEGREES,
-    distances: Sequence[float] = _DISTANCES,
-) -> tuple[Point, bool]:
-    """The centre for ``text`` near ``anchor``, and whether it sits far enough to need a leader.
-
-    The box is registered as an obstacle, so later labels keep clear of it.
-    """
-    length = math.hypot(*direction)
-    base = math.atan2(direction[1], direction[0]) if length > 0 else -math.pi / 2
-    width, height = text_width(text, size), size
-    first: tuple[Point, Box] | None = None
-    for distance in distances:
-        for turn in turns:
-            angle = base + math.radians(turn)
-            ux, uy = math.cos(angle), math.sin(angle)
-            # The box's nearest corner or edge goes to the candidate spot, as a drafter
-            # sets a label beside, above or diagonally off a point.
-            side_x = 0.0 if abs(ux) < _CENTRED else math.copysign(1.0, ux)
-            side_y = 0.0 if abs(uy) < _CENTRED else math.copysign(1.0, uy)
-            reach = distance + gap
-            center = (
-                anchor[0] + ux * reach + side_x * width / 2,
-                anchor[1] + uy * reach + side_y * height / 2,
-            )
-            box = text_box(center, text, size)
-            if first is None:
-                first = (center, box)
-            if not obstacles.blocks(box.padded(1.0)):
-                obstacles.add_box(box)
-                return center, distance > _DISTANCES[1]
-    assert first is not None
-    obstacles.add_box(first[1])
-    return first[0], False
+        return any(point_in_edges(edges, x, y) for edges in self._region_edges)

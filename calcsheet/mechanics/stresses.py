@@ -108,10 +108,19 @@ MEASURES: dict[str, str] = {
 
 def point_in_material(rings: list[Array], x: float, y: float) -> bool:
     """Even-odd ray test: is (x, y) inside the outline (holes excluded)?"""
+    return point_in_edges([ring_edges(ring) for ring in rings], x, y)
+
+
+def ring_edges(ring: Array) -> tuple[Array, Array, Array, Array]:
+    """A closed ring's edges as arrays x0, y0, x1, y1 (for many tests of one outline)."""
+    x0, y0 = ring[:, 0], ring[:, 1]
+    return x0, y0, np.roll(x0, -1), np.roll(y0, -1)
+
+
+def point_in_edges(rings: list[tuple[Array, Array, Array, Array]], x: float, y: float) -> bool:
+    """:func:`point_in_material` over rings already given as :func:`ring_edges`."""
     inside = False
-    for ring in rings:
-        x0, y0 = ring[:, 0], ring[:, 1]
-        x1, y1 = np.roll(x0, -1), np.roll(y0, -1)
+    for x0, y0, x1, y1 in rings:
         crosses = (y0 > y) != (y1 > y)
         with np.errstate(divide="ignore", invalid="ignore"):
             x_cross = x0 + (y - y0) * (x1 - x0) / (y1 - y0)
