@@ -219,3 +219,22 @@ def test_check_of_the_column_demo_names_what_it_needs(capsys) -> None:
     captured = capsys.readouterr()
     assert "Traceback" not in captured.err
     assert status in (0, 1) and "PC-3: " in captured.out
+
+
+def test_build_writes_the_jobs_calc_package_when_asked(tmp_path: Path, capsys) -> None:
+    job = _write(
+        tmp_path,
+        "job.toml",
+        STARTER.replace('stations = ["0 in"]', 'stations = ["0 in", "24 in"]').replace(
+            "package = false", "package = true"
+        ),
+    )
+    assert main(["build", str(job)]) == 0
+    out = capsys.readouterr().out
+    for name in ("DA-1-revA-z24in.pdf", "DA-1-revA-package.pdf", "DA-1-revA-package.json"):
+        assert f"wrote {tmp_path / 'out' / name}" in out
+    bad = _write(tmp_path, "bad.toml", STARTER.replace("package = false", 'package = "yes"'))
+    assert main(["build", str(bad), "--out", str(tmp_path / "bad")]) == 2
+    error = capsys.readouterr().err
+    assert "output.package: expected true or false" in error and "(got 'yes')" in error
+    assert "Traceback" not in error and not (tmp_path / "bad").exists()

@@ -447,8 +447,28 @@ class DistributedSpec(_Table):
     ey: Length = "0 in"
 
 
+def _true_or_false(value: Any) -> Any:
+    """A TOML boolean; the words ``true`` and ``false`` also as text (a batch's CSV cell).
+
+    pydantic would also take "yes", "on", "1" and the like: a switch that decides what is
+    written is given plainly or refused.
+    """
+    if isinstance(value, bool):
+        return value
+    if value in ("true", "false"):
+        return value == "true"
+    raise ValueError("expected true or false (a TOML boolean, without quotes)")
+
+
 class OutputSpec(_Table):
-    """Where the sheet goes; not part of the inputs hash."""
+    """Where the sheet goes and what is written; not part of the inputs hash.
+
+    ``folder`` (inside the job's folder), ``stem`` (file names; empty: the member's name),
+    ``paper`` ("letter" or "a4"), ``formats`` (any of pdf, html, json). ``package = true``
+    also writes the job's calc package beside the sheets: one PDF with a cover, the
+    contents, a summary and every station's sheet numbered through, and its JSON
+    (``<stem>-rev<R>-package.pdf``/``.json``; calc number from the title block).
+    """
 
     folder: str = "out"
     stem: str = ""
@@ -456,6 +476,7 @@ class OutputSpec(_Table):
     formats: list[Literal["pdf", "html", "json"]] = Field(
         default_factory=lambda: ["pdf", "html", "json"], min_length=1
     )
+    package: Annotated[bool, BeforeValidator(_true_or_false)] = False
 
 
 class Job(_Table):

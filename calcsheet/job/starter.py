@@ -114,4 +114,5 @@ folder = "out"               # inside this job's folder
 stem = ""                    # file names; empty: the member name (+ revision)
 paper = "letter"             # or "a4"
 formats = ["pdf", "html", "json"]
+package = false              # true: also one calc package PDF (cover, contents, every sheet)
 """

@@ -627,14 +627,6 @@ def summary_sheet(outcomes: list[MemberOutcome], *, title: str = "Batch summary"
     return sheet
 
 
-# Why a package is ONE Typst document (the members' markup set one after another) rather
-# than the members' PDFs joined: one document has one PDF/A-2b metadata stream and one
-# bookmark outline, and Typst's page counter numbers the sheets through the package by
-# itself; PDFs joined afterwards would need a PDF library at run time and their PDF/A
-# metadata and outlines rebuilt by hand.
-PACKAGE_LABEL = "calcsheet-member-{index}"
-
-
 @dataclass(frozen=True)
 class PackageFiles:
     """The files of a calc package and what it holds."""
@@ -642,13 +634,6 @@ class PackageFiles:
     paths: tuple[Path, ...]
     members: int  # members whose sheets are in it
     left_out: int  # members skipped (their line in the contents says why)
-
-
-def _shared(entries: list[PackageEntry], key: str) -> str:
-    """The title-block value every member shares, else the distinct values joined."""
-    values = [dict(entry.title_block).get(key, "") for entry in entries]
-    distinct = list(dict.fromkeys(value for value in values if value))
-    return ", ".join(distinct)
 
 
 def write_package(
@@ -661,31 +646,18 @@ def write_package(
     waiting: Callable[[str], None] | None = None,
 ) -> PackageFiles:
     """Write the calc package of a batch: one PDF/A-2b with a cover, the contents, the
-    summary and every member's sheets numbered through, and a JSON saying what is in it.
+    summary and every member's sheets numbered through, and a JSON saying what is in it
+    (:func:`calcsheet.pipeline.package.render_package`, a part per member).
 
     ``outcomes`` come from :func:`run_batch` with ``package=True``. The package's inputs
     hash covers every member's; an issued package of the same name and revision is
     replaced only by the same inputs, or with ``replace_issued`` (as a member's files).
     Raises :class:`JobError` when no member could be built.
     """
-    import datetime
-    import hashlib
-    import json
+    from calcsheet.export.files import folder_lock, make_folder, write_all_atomically
+    from calcsheet.pipeline.package import PackagePart, PackageSummary, render_package
 
-    from calcsheet import __version__
-    from calcsheet.engine import CAUTIONS
-    from calcsheet.export.files import (
-        compile_pdf,
-        folder_lock,
-        make_folder,
-        package_markup,
-        write_all_atomically,
-    )
-    from calcsheet.pipeline.run import refuse_replacing, safe_stem
-    from calcsheet.render.typst import typst_paper
-
-    built = [outcome for outcome in outcomes if outcome.ok and outcome.package is not None]
-    entries = [outcome.package for outcome in built if outcome.package is not None]
+    entries = [outcome.package for outcome in outcomes if outcome.ok and outcome.package]
     if not entries:
         raise JobError(
             source,
@@ -698,78 +670,35 @@ def write_package(
                 )
             ],
         )
-    revision = _shared(entries, "revision") or "0"
-    calc_number = calc_number.strip() or f"{Path(source).stem} package"
-    fingerprint = "\n".join(
-        [calc_number, revision]
-        + [
-            f"{outcome.name}\t{outcome.status}\t{outcome.package.inputs if outcome.package else ''}"
-            for outcome in outcomes
-        ]
-    )
-    inputs = hashlib.sha256(fingerprint.encode("utf-8")).hexdigest()[:12]
-    trace = f"inputs {inputs} · rev. {revision}"
-    labels = {
-        outcome.name: PACKAGE_LABEL.format(index=index) for index, outcome in enumerate(built)
-    }
-    summary_rows = list(csv.reader(io.StringIO(summary_csv(outcomes))))
-    contents = [
-        {
-            "name": outcome.name,
-            "section": outcome.section,
-            "utilization": f"{outcome.utilization:.3f}" if outcome.utilization is not None else "",
-            "status": outcome.status,
-            "note": outcome.governing if outcome.ok else outcome.reason,
-            "label": labels.get(outcome.name, ""),
-        }
+    parts = [
+        PackagePart(
+            name=outcome.name,
+            section=outcome.section,
+            utilization=outcome.utilization,
+            status=outcome.status,
+            note=outcome.governing if outcome.ok else outcome.reason,
+            inputs=outcome.package.inputs if outcome.package else None,
+            markups=outcome.package.markups if outcome.ok and outcome.package else (),
+        )
         for outcome in outcomes
     ]
-    members = [
-        {"name": outcome.name, "label": labels[outcome.name], "markups": outcome.package.markups}
-        for outcome in built
-        if outcome.package is not None
-    ]
-    project = _shared(entries, "project")
-    title_items = [
-        ("Project", project),
-        ("Project no.", _shared(entries, "project_number")),
-        ("Calc no.", calc_number),
-        ("Revision", revision),
-        ("Members", f"{len(built)} of {len(outcomes)} ({source})"),
-        ("Prepared by", _shared(entries, "prepared_by")),
-        ("Checked by", _shared(entries, "checked_by")),
-        ("Checked on", _shared(entries, "checked_date")),
-    ]
-    markup = package_markup(
-        {
-            "paper": typst_paper(entries[0].paper),
-            "title": f"Calc package {calc_number}",
-            "title_items": title_items,
-            "project": project,
-            "project_number": _shared(entries, "project_number"),
-            "calc_number": calc_number,
-            "revision": revision,
-            "tool_version": __version__,
-            "trace": trace,
-            "cautions": CAUTIONS,
-            "contents": contents,
-            "counts": _counts(outcomes) + ".",
-            "summary_columns": summary_rows[0],
-            "summary_rows": summary_rows[1:],
-            "members": members,
-            "authors": [_shared(entries, "prepared_by")] if _shared(entries, "prepared_by") else [],
-            "description": f"{project}: calc package {calc_number}, {_counts(outcomes)}",
-            "keywords": [calc_number, f"rev. {revision}", trace],
-            "date": max(datetime.date.fromisoformat(entry.issued) for entry in entries),
-        }
+    summary_rows = list(csv.reader(io.StringIO(summary_csv(outcomes))))
+    summary = PackageSummary(
+        heading="Batch summary",
+        columns=summary_rows[0],
+        rows=summary_rows[1:],
+        counts=_counts(outcomes),
+        part_heading="Member",
+        holds=("Members", f"{len(entries)} of {len(outcomes)} ({source})"),
     )
-    pdf = compile_pdf(markup)
-    manifest = {
-        "package": calc_number,
-        "revision": revision,
-        "trace": trace,
-        "source": source,
-        "members": [
+    package = render_package(
+        parts,
+        entries,
+        folder,
+        source=source,
+        calc_number=calc_number.strip() or f"{Path(source).stem} package",
+        summary=summary,
+        manifest_members=[
             {
                 "name": outcome.name,
                 "status": outcome.status,
@@ -778,28 +707,15 @@ def write_package(
             }
             for outcome in outcomes
         ],
-    }
-    stem = f"{safe_stem(calc_number, fallback='package')}-rev{safe_stem(revision, fallback='0')}"
-    files = [
-        (folder / f"{stem}.pdf", pdf),
-        (
-            folder / f"{stem}.json",
-            (json.dumps(manifest, indent=2, ensure_ascii=False) + "\n").encode(),
-        ),
-    ]
+    )
     make_folder(folder)
     with folder_lock(folder, waiting=waiting):
         if not replace_issued:
-            refuse_replacing(
-                folder,
-                [stem],
-                inputs,
-                revision=revision,
-                source=source,
-                command="calcsheet batch --package --replace-issued",
+            package.refuse_replacing(
+                folder, source=source, command="calcsheet batch --package --replace-issued"
             )
-        write_all_atomically(files)
-    return PackageFiles(tuple(path for path, _ in files), len(built), len(outcomes) - len(built))
+        write_all_atomically(package.files)
+    return PackageFiles(package.paths, len(entries), len(outcomes) - len(entries))
 
 
 SUMMARY_NAME = "summary"

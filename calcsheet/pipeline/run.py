@@ -64,6 +64,7 @@ class BuildResult:
     hash: str
     sheets: list[BuiltSheet]
     source: str = "job"
+    stem: str = ""  # the start of every output's file name: member (or output.stem), revision
 
     @property
     def all_pass(self) -> bool:
@@ -157,7 +158,9 @@ def build_sheets(job: Job, *, source: str = "job") -> BuildResult:
             stem += "-z" + safe_stem(f"{station.magnitude:g}{station.units:~}")
             label = f"z = {station.magnitude:g} {station.units:~}"
         sheets.append(BuiltSheet(sheet, stem, station=label))
-    return BuildResult(job, job.member.name, inputs_hash(job), sheets, source)
+    return BuildResult(
+        job, job.member.name, inputs_hash(job), sheets, source, stem=f"{base}-rev{revision}"
+    )
 
 
 def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str) -> Sheet:
@@ -222,6 +225,7 @@ def _placed(source: str, index: int | None, error: InputError) -> JobError:
 
 
 OUTPUT_SUFFIXES = (".pdf", ".html", ".json")
+REPLACE_ISSUED_COMMAND = "calcsheet build --replace-issued"
 
 
 def write_outputs(
@@ -237,6 +241,8 @@ def write_outputs(
     station) are replaced only if they were built from the same inputs, or with
     ``replace_issued``; otherwise :class:`JobError` asks for a new revision and
     nothing is written. ``waiting`` is told when another build holds the folder.
+    With ``[output] package = true`` the job's calc package is written with its
+    sheets, in the same atomic set and under the same rule.
     """
     # Imported here: rendering and the PDF engine are only needed when writing.
     from calcsheet.export.files import folder_lock, make_folder, write_all_atomically
@@ -246,11 +252,21 @@ def write_outputs(
     for built in result.sheets:
         with _each_figure_drawn_once(built.sheet):
             rendered += _rendered(built, folder, formats, result.job.output.paper)
+    package = None
+    if result.job.output.package:
+        from calcsheet.pipeline.package import job_package  # it sets the sheets' markup
+
+        package = job_package(result, folder)
+        rendered += package.files
     make_folder(folder)
     # The check and the writes under one lock: a build that waited sees what the other wrote.
     with folder_lock(folder, waiting=waiting):
         if not replace_issued:
             refuse_replacing_issued(result, folder)
+            if package is not None:
+                package.refuse_replacing(
+                    folder, source=result.source, command=REPLACE_ISSUED_COMMAND
+                )
         write_all_atomically(rendered)
     written = [path for path, _ in rendered]
     for built in result.sheets:
@@ -347,7 +363,7 @@ def refuse_replacing_issued(result: BuildResult, folder: Path) -> None:
         result.hash,
         revision=revision,
         source=result.source,
-        command="calcsheet build --replace-issued",
+        command=REPLACE_ISSUED_COMMAND,
     )
 
 
@@ -386,7 +402,8 @@ def refuse_replacing(
 class PackageEntry:
     """What a calc package needs of one member: its sheets' markup and its title block.
 
-    Made in the process that built the member (a batch worker), so the package is set
+    Made in the process that built the member (a batch worker, or the build of a job that
+    asks for its package), so the package is set
     from the very markup the member's own PDF was compiled from, without building again.
     """
 

@@ -5,16 +5,19 @@ block; a bookmark per member; issued packages protected as a member's files are.
 from __future__ import annotations
 
 import dataclasses
+import json
 import re
 import tomllib
 from pathlib import Path
 
+import jsonschema
 import pypdf
 import pytest
 
 from calcsheet.job import JobError
 from calcsheet.job.starter import STARTER
 from calcsheet.pipeline.batch import members_from_csv, run_batch, write_package
+from calcsheet.pipeline.package import package_schema
 
 # Invented demo members: one passes, one fails its checks (200 kip on a W8X18), one names
 # a section no table has (W8X19) and is skipped.
@@ -99,6 +102,18 @@ def test_the_package_is_pdf_a_2b_with_a_bookmark_per_member(
              if not isinstance(item, list)}  # fmt: skip
     assert "Davit arm P1" in reader.pages[pages["P1"]].extract_text()
     assert "Davit arm P2" in reader.pages[pages["P2"]].extract_text()
+
+
+def test_the_packages_json_fits_the_shipped_schema(package: tuple[Path, pypdf.PdfReader]) -> None:
+    path, _ = package
+    manifest = json.loads(path.with_suffix(".json").read_text(encoding="utf-8"))
+    jsonschema.Draft202012Validator(package_schema()).validate(manifest)
+    assert [member["status"] for member in manifest["members"]] == [
+        "OK",
+        "NOT OK",
+        "SKIPPED (bad input)",
+    ]
+    assert manifest["members"][2]["inputs"] is None
 
 
 def test_an_issued_package_is_replaced_only_by_the_same_inputs(
