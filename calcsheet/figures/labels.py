@@ -146,3 +146,46 @@ class Obstacles:
             return True
         x, y = box.center
         return any(point_in_edges(edges, x, y) for edges in self._region_edges)
+
+
+def place_label(
+    obstacles: Obstacles,
+    anchor: Point,
+    direction: Point,
+    text: str,
+    *,
+    size: float = FONT_SIZE,
+    gap: float = 2.0,
+    turns: Sequence[float] = _TURNS_DEGREES,
+    distances: Sequence[float] = _DISTANCES,
+) -> tuple[Point, bool]:
+    """The centre for ``text`` near ``anchor``, and whether it sits far enough to need a leader.
+
+    The box is registered as an obstacle, so later labels keep clear of it.
+    """
+    length = math.hypot(*direction)
+    base = math.atan2(direction[1], direction[0]) if length > 0 else -math.pi / 2
+    width, height = text_width(text, size), size
+    first: tuple[Point, Box] | None = None
+    for distance in distances:
+        for turn in turns:
+            angle = base + math.radians(turn)
+            ux, uy = math.cos(angle), math.sin(angle)
+            # The box's nearest corner or edge goes to the candidate spot, as a drafter
+            # sets a label beside, above or diagonally off a point.
+            side_x = 0.0 if abs(ux) < _CENTRED else math.copysign(1.0, ux)
+            side_y = 0.0 if abs(uy) < _CENTRED else math.copysign(1.0, uy)
+            reach = distance + gap
+            center = (
+                anchor[0] + ux * reach + side_x * width / 2,
+                anchor[1] + uy * reach + side_y * height / 2,
+            )
+            box = text_box(center, text, size)
+            if first is None:
+                first = (center, box)
+            if not obstacles.blocks(box.padded(1.0)):
+                obstacles.add_box(box)
+                return center, distance > _DISTANCES[1]
+    assert first is not None
+    obstacles.add_box(first[1])
+    return first[0], False
