@@ -322,8 +322,8 @@ def export_sheet(sheet: Sheet, folder: Path, stem: str, *, paper: str = "letter"
 
 def package_markup(context: dict[str, Any]) -> str:
     """A calc package (``templates/package.typ.j2``) as Typst markup: the cover, contents
-    and summary, then every member's sheet markup, in one document (see ``write_package``
-    in :mod:`calcsheet.pipeline.batch` for what ``context`` holds)."""
+    and summary, then every member's sheet markup, in one document (see ``render_package``
+    in :mod:`calcsheet.pipeline.package` for what ``context`` holds)."""
     from calcsheet.render.templates import typst_environment
 
     return typst_environment().get_template("package.typ.j2").render(**context)
