@@ -7,6 +7,7 @@ the new values, exactly like the steps.
 
 from __future__ import annotations
 
+import weakref
 from collections.abc import Callable, Sequence
 
 import pint
@@ -90,9 +91,20 @@ def member_drawing(
     return draw
 
 
+# A sheet rebuilt after a change of load draws the same section again: drawn once per
+# section object (forgotten with it), a few ms of every rebuild of the form's preview.
+_SECTION_DRAWINGS: weakref.WeakKeyDictionary[Section, dict[tuple, str]] = (
+    weakref.WeakKeyDictionary()
+)
+
+
 def section_drawing(section: Section, points: Sequence[tuple[str, float, float]], unit: str) -> str:
     """The section with its dimensions and the numbered stress points (fixed geometry)."""
-    return section_figure(section, points, unit=unit)
+    drawn = _SECTION_DRAWINGS.setdefault(section, {})
+    key = (tuple(points), unit)
+    if key not in drawn:
+        drawn[key] = section_figure(section, points, unit=unit)
+    return drawn[key]
 
 
 def stress_drawing(section: Section, stress_unit: str) -> Callable[[Sheet], str]:
