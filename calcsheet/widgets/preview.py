@@ -121,10 +121,12 @@ class Preview:
 
     def __init__(self) -> None:
         self.key_results = widgets.HTML()
+        self.key_results.add_class("calcsheet-key-results")
         self.note = widgets.HTML()
         self.sheet_view = widgets.HTML(
             layout=widgets.Layout(border="1px solid #d0d4da", padding="0.5em")
         )
+        self.sheet_view.add_class("calcsheet-sheet-view")
         self.box = widgets.VBox([self.key_results, self.note, self.sheet_view])
         self._shown_result: BuildResult | None = None
         self._shown_key_results: tuple[BuildResult, bool] | None = None
