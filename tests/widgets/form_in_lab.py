@@ -33,6 +33,7 @@ from typing import Any
 from urllib.error import URLError
 from urllib.request import urlopen
 
+from calcsheet.widgets.preview import KEY_RESULTS_CLASS, SHEET_VIEW_CLASS
 from tests.jupyter_env import isolated_jupyter
 
 ROOT = Path(__file__).resolve().parents[2]
@@ -52,8 +53,8 @@ CHROMIUM_FLAGS = [
     "--no-default-browser-check",
     "--metrics-recording-only",
 ]
-KEY_RESULTS_SELECTOR = ".calcsheet-key-results"
-SHEET_SELECTOR = ".calcsheet-sheet-view"
+KEY_RESULTS_SELECTOR = f".{KEY_RESULTS_CLASS}"
+SHEET_SELECTOR = f".{SHEET_VIEW_CLASS}"
 # A person typing an entry: about 8 keys a second (a key every 120 ms; common practice,
 # no source). The form's pause must be longer, or it would rebuild at every key.
 TYPING_DELAY_MS = 120
