@@ -6,7 +6,9 @@ kilobytes of the sheet travel to the browser only when the sheet changed.
 
 The key results go first: they are sent to the browser as soon as the build is done,
 and the sheet is printed and sent after them, so a person sees the new utilization
-while the sheet is still on its way.
+while the sheet is still on its way. The sheet is sent whole: a change of a load
+changes about two thirds of it (every step downstream), and in chromium replacing
+only the blocks that changed took as long to lay out as replacing all of them.
 """
 
 from __future__ import annotations
