@@ -185,32 +185,29 @@ _WATCH = """
     if (view === null) watch.problem = `no ${name} view in the page`;
     else if (view.textContent === expected) watch.problem = `${name} already shows the result`;
   }
-  const look = () => {
-    const now = performance.now();
-    if (watch.lastKey === null) return;
-    for (const [name, [view, expected]] of Object.entries(views)) {
-      if (name in watch.shown || view.textContent !== expected) continue;
+  // Each view is looked at only when something in it changed: the page does no other work.
+  const observers = Object.entries(views).map(([name, [view, expected]]) => {
+    const observer = new MutationObserver(() => {
+      const now = performance.now();
+      if (watch.lastKey === null || name in watch.shown || view.textContent !== expected) return;
       watch.shown[name] = now;
       // After the frame that lays the change out: a task queued from the frame callback.
       requestAnimationFrame(() => setTimeout(() => { watch.painted[name] = performance.now(); }));
-    }
-  };
-  const observer = new MutationObserver(look);
-  for (const [view] of Object.values(views)) {
+    });
     if (view !== null) {
       observer.observe(view, {childList: true, subtree: true, characterData: true});
     }
-  }
+    return observer;
+  });
   watch.done = new Promise((resolve) => {
     const started = performance.now();
     const poll = () => {
-      look();
       const finished = Object.keys(watch.painted).length === 2;
       if (finished || watch.problem || performance.now() - started > timeoutMs) {
-        observer.disconnect();
+        observers.forEach((observer) => observer.disconnect());
         resolve();
       } else {
-        setTimeout(poll, 50);
+        setTimeout(poll, 100);
       }
     };
     poll();
@@ -220,10 +217,13 @@ _WATCH = """
 }
 """
 
+# Every key typed into the box notes the time in the current watch (one listener a box).
 _MARK_KEYS = """
-(box) => box.addEventListener("input", () => {
-  window.__calcsheetWatch.lastKey = performance.now();
-})
+(box) => {
+  if (box.dataset.calcsheetTimed) return;
+  box.dataset.calcsheetTimed = "yes";
+  box.addEventListener("input", () => { window.__calcsheetWatch.lastKey = performance.now(); });
+}
 """
 
 _RESULT = """
