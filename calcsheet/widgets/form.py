@@ -81,7 +81,7 @@ from calcsheet.widgets.rows import (
     RevisionRow,
     RowList,
 )
-from calcsheet.widgets.schedule import Debouncer
+from calcsheet.widgets.schedule import Debouncer, on_the_kernel_loop
 from calcsheet.widgets.section import SectionPicker
 
 # The pause after the last change before the sheet is rebuilt. Issue 17 asks for the
@@ -96,6 +96,11 @@ DEBOUNCE_SECONDS = 0.15
 # at a time and read only when complete ("4.8 k" is not a force yet): marked at the
 # short pause, a slow typist would see a warning flash between keys.
 PROBLEM_PAUSE_SECONDS = 0.6
+# After opening, in a kernel, the job is built once more while the person reads the
+# form: the engine compiles a step's arithmetic the second time it evaluates it
+# (``engine/evaluate.py``), and that second build takes some 0.2 s more than later
+# ones. Done then, the person's first change is as quick as the others.
+WARM_UP_SECONDS = 1.0
 TITLE_BLOCK_LABELS = {
     "project": "project",
     "project_number": "project no.",
@@ -166,6 +171,7 @@ class MemberForm:
         self._results: BuildResult | None = None
         self._errors: dict[str, str] = {}
         self._timer = Debouncer(self._pause_ended, debounce or 0.0)
+        self._warm_up: Any = None  # the build done ahead after opening, while it waits
         # Started when the pause ends with an entry that does not read; counted from the
         # last change, like the first.
         self._problem_timer = Debouncer(
@@ -174,6 +180,7 @@ class MemberForm:
         self._build_widgets(str(job_path))
         self._fill(job if job is not None else parse_job(STARTER, source="starter job"))
         self.refresh()
+        self._warm_up = on_the_kernel_loop(self._build_ahead, WARM_UP_SECONDS) if debounce else None
 
     # -- opening ------------------------------------------------------------------------
 
@@ -552,10 +559,23 @@ class MemberForm:
         if self._filling or self.debounce is None:
             return
         self._problem_timer.cancel()  # the entry changed again: it is still being typed
+        if self._warm_up is not None:  # the change's own build does the same
+            self._warm_up.cancel()
+            self._warm_up = None
         if self.debounce <= 0:
             self._refresh_quietly()
         else:
             self._timer.poke()
+
+    def _build_ahead(self) -> None:
+        """Build the entries once more, showing nothing (see WARM_UP_SECONDS)."""
+        self._warm_up = None
+        with self._lock:
+            if self._errors or self._results is None:
+                return
+            # Only work done ahead: a problem is said by the next build, which meets it too.
+            with contextlib.suppress(Exception):
+                build_sheets(self.to_job(), source="form")
 
     def _pause_ended(self) -> None:
         """Typing paused: rebuild now if every entry reads, else mark them after the longer pause.

@@ -11,6 +11,7 @@ expected.
 
 from __future__ import annotations
 
+import asyncio
 from pathlib import Path
 
 import pytest
@@ -109,3 +110,34 @@ def test_refresh_runs_at_once_and_drops_both_waits(form: MemberForm) -> None:
     form.refresh()
     assert not form._timer.pending and not form._problem_timer.pending
     assert MAGNITUDE in form.errors
+
+
+# -- the build done ahead after opening ----------------------------------------------------
+
+
+def test_outside_a_kernel_nothing_is_built_ahead(tmp_path: Path) -> None:
+    form = MemberForm.from_job_file(DEMO, folder=tmp_path)
+    assert form._warm_up is None
+
+
+def test_in_a_kernel_the_job_is_built_ahead_until_the_first_change(tmp_path: Path) -> None:
+    async def open_and_change() -> tuple[bool, bool]:
+        # Inside a running loop, as in a Jupyter kernel; the loop never reaches the call.
+        form = MemberForm.from_job_file(DEMO, debounce=NEVER, folder=tmp_path)
+        waiting = form._warm_up is not None
+        form.set_value(MAGNITUDE, "4.8 kip")
+        form._timer.cancel()
+        return waiting, form._warm_up is None
+
+    waiting, dropped = asyncio.run(open_and_change())
+    assert waiting and dropped
+
+
+def test_the_build_ahead_shows_nothing_and_keeps_the_result(form: MemberForm) -> None:
+    result, sheet = form.results, form.preview.sheet_view.value
+    form._build_ahead()
+    assert form.results is result and form.preview.sheet_view.value == sheet
+    form.set_value(MAGNITUDE, "6.5 in")
+    form.refresh()
+    form._build_ahead()  # entries with problems: nothing to build ahead
+    assert form.results is result and MAGNITUDE in form.errors
