@@ -55,8 +55,8 @@ CHROMIUM_FLAGS = [
 ]
 KEY_RESULTS_SELECTOR = f".{KEY_RESULTS_CLASS}"
 SHEET_SELECTOR = f".{SHEET_VIEW_CLASS}"
-# A person typing an entry: about 8 keys a second (a key every 120 ms; common practice,
-# no source). The form's pause must be longer, or it would rebuild at every key.
+# A quick typist: about 8 keys a second, a key every 120 ms (from memory). The form's
+# pause (calcsheet.widgets.form.DEBOUNCE_SECONDS) is longer, so typing does not rebuild.
 TYPING_DELAY_MS = 120
 
 
