@@ -145,6 +145,9 @@ def main() -> None:
     bench_torsion_stresses()
     bench_form()
     bench_batch()
+    from form_browser import bench_form_browser  # bench/ is this script's folder
+
+    bench_form_browser()  # a real JupyterLab and chromium; skipped, saying why, without them
 
 
 def _installed_environment() -> dict[str, str]:

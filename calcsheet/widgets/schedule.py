@@ -60,3 +60,18 @@ class Debouncer:
         with self._lock:
             self._pending = None
         self.action()
+
+
+def on_the_kernel_loop(action: Callable[[], None], delay: float) -> _Cancellable | None:
+    """Call ``action`` once, ``delay`` seconds from now, on the running event loop; cancellable.
+
+    For work done ahead while a person reads the form: it runs only in a Jupyter
+    kernel (a running loop), between widget updates. Outside one (a script, a test)
+    nothing is scheduled and None is returned: a thread would run the work beside the
+    caller's own.
+    """
+    try:
+        loop = asyncio.get_running_loop()
+    except RuntimeError:
+        return None
+    return loop.call_later(delay, action)
