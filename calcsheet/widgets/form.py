@@ -263,6 +263,7 @@ class MemberForm:
         self.out_stem = TextField("file name", placeholder="empty: the member name", width="26em")
         self.paper = ChoiceField("paper", [("letter", "letter"), ("A4", "a4")], "letter")
         self.formats = ManyChoiceField("formats", ["pdf", "html", "json"], ["pdf", "html", "json"])
+        self.package = CheckField("also a calc package PDF (cover, contents, every sheet)", False)
         self.general = MessageSlot("the form")
         simple: list[Field] = [
             self.title,
@@ -281,6 +282,7 @@ class MemberForm:
             self.out_stem,
             self.paper,
             self.formats,
+            self.package,
         ]
         for field in simple:
             field.observe(changed)
@@ -353,6 +355,7 @@ class MemberForm:
                 self.out_stem.box,
                 self.paper.box,
                 self.formats.box,
+                self.package.box,
                 self.buttons["export"],
                 self.status,
                 self.links,
@@ -424,6 +427,7 @@ class MemberForm:
             self.out_stem.set(job.output.stem)
             self.paper.set(job.output.paper)
             self.formats.set(list(job.output.formats))
+            self.package.set(job.output.package)
             for field in self._quantity_fields():
                 field._before_switch = None  # a new job: nothing to switch back to
 
@@ -462,6 +466,7 @@ class MemberForm:
             "output.stem": self.out_stem,
             "output.paper": self.paper,
             "output.formats": self.formats,
+            "output.package": self.package,
         }
         return found
 
@@ -519,6 +524,7 @@ class MemberForm:
             "stem": self.out_stem.value,
             "paper": self.paper.value,
             "formats": self.formats.value,
+            "package": self.package.value,
         }
         return data
 

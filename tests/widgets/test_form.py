@@ -339,6 +339,20 @@ def test_saved_job_file_loads_back_to_the_same_job_and_the_same_hash(
     assert again.results.hash == form.results.hash
 
 
+def test_a_job_asking_for_its_calc_package_keeps_asking_after_a_save(
+    form: MemberForm, tmp_path: Path
+) -> None:
+    """[output] package = true is an entry of the form: loaded, saved and loaded back."""
+    form.set_value("output.package", True)
+    form.refresh()
+    assert form.errors == {}
+    saved = read_job(form.save("packaged.toml"))
+    assert saved.output.package is True
+    again = MemberForm.from_job_file(tmp_path / "packaged.toml", debounce=None, folder=tmp_path)
+    assert again.value("output.package") is True
+    assert again.to_job().output.package is True
+
+
 def test_load_replaces_the_entries(demo_form: MemberForm, tmp_path: Path) -> None:
     form = demo_form
     path = form.save("demo-copy.toml")
