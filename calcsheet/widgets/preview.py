@@ -159,7 +159,14 @@ class Preview:
             return  # the sheet of this result is already shown
         self._shown_result = result
         # Printed only now, after the key results went out: they do not wait for it.
-        _replace(self.sheet_view, render_fragment(governing_sheet(result)))
+        _replace(self.sheet_view, SHEET_FRAME.format(render_fragment(governing_sheet(result))))
+
+
+# The widget sizes its content to the sheet's narrowest possible layout (a wide table or
+# equation), which ran past the preview's column and cut the sheet's right edge off. A
+# frame of no intrinsic width (CSS size containment) fills the column instead; what is
+# wider than the column scrolls inside the sheet.
+SHEET_FRAME = '<div style="contain: inline-size; overflow-x: auto">{}</div>'
 
 
 def _replace(widget: widgets.HTML, value: str) -> None:
