@@ -23,6 +23,7 @@ import pytest
 from tests.widgets.form_in_lab import (
     KEY_RESULTS_SELECTOR,
     ROOT,
+    SHEET_SELECTOR,
     entry_box,
     lab_server,
     launch_chromium,
@@ -69,6 +70,17 @@ def test_the_form_runs_in_jupyterlab_and_the_preview_follows_an_entry(lab: str) 
             page = open_demo_form(browser, lab)
             key_results = page.locator(KEY_RESULTS_SELECTOR)
             assert "OK" in key_results.inner_text()
+            # The sheet fits its column: only a table or equation wider than the column
+            # scrolls, inside the sheet (its right edge was once cut off).
+            widths = page.evaluate(
+                """(view) => {
+                  const box = document.querySelector(view);
+                  const sheet = box.querySelector('.calcsheet');
+                  return [box.getBoundingClientRect().right, sheet.getBoundingClientRect().right];
+                }""",
+                SHEET_SELECTOR,
+            )
+            assert widths[1] <= widths[0] + 1, widths
 
             # The first load's magnitude (the second load is given by components), typed a
             # key at a time: the key results and then the whole sheet show exactly what a
