@@ -81,7 +81,7 @@ from calcsheet.calcs.member_figures import member_drawing, section_drawing, stre
 from calcsheet.calcs.member_rebuild import rebuild_on_change
 from calcsheet.calcs.points import section_terms, write_point_inputs
 from calcsheet.calcs.round_section import write_round_point_stresses
-from calcsheet.engine import Check, Sheet, TitleBlock
+from calcsheet.engine import Check, Sheet, TitleBlock, escape_marks
 from calcsheet.engine.functions import cos, sin
 from calcsheet.engine.procedure import SheetWriter
 from calcsheet.errors import InputError
@@ -520,7 +520,8 @@ def _draw_force_diagrams(
             loads_m=marks,
             governing_name=named,
         ),
-        f"Internal forces along the member under {named} (line and fill) and the envelope "
+        f"Internal forces along the member under {escape_marks(named)} (line and fill) and the "
+        "envelope "
         "of every combination (band), from the member's statics with the support "
         "reactions of the direct stiffness analysis; the sign convention is written under "
         "the diagrams.",
@@ -614,7 +615,8 @@ def _write_basis(
         held = (
             name
             + "; ".join(
-                f"{item.name} ({support_kind(item)}) at z = {_length_text(item.z)} restrains "
+                f"{escape_marks(item.name)} ({support_kind(item)}) at z = "
+                f"{_length_text(item.z)} restrains "
                 f"{describe_motions(item)}"
                 for item in layout.supports
             )
@@ -638,7 +640,7 @@ def _write_basis(
         "Plane sections remain plane; normal stress by the (unsymmetric) bending formula.",
         "Transverse shear {V}·{Q}/({I}·{b}) as the average over each cut through a point.",
         _torsion_assumption(torsion),
-        f"Section {section.name}: properties as sourced beside each value.",
+        f"Section {escape_marks(section.name)}: properties as sourced beside each value.",
     )
     if torsion is not None and torsion.warping:
         sheet.add_reference(
@@ -729,7 +731,7 @@ def _write_inputs(
         beyond = id(load) in free_ids
         kind = types[number - 1]
         if isinstance(load, PointLoad):
-            sheet.heading(f"Load {number}: {load.name} (type {kind})", level=2)
+            sheet.heading(f"Load {number}: {escape_marks(load.name)} (type {kind})", level=2)
             record = _write_point_load(sheet, number, load, beyond, length_unit, kind, cantilever)
             if beyond:
                 record.a = sheet.step(
@@ -739,7 +741,10 @@ def _write_inputs(
                     unit=length_unit,
                 )
         else:
-            sheet.heading(f"Load {number}: {load.name} (concentrated couple, type {kind})", level=2)
+            sheet.heading(
+                f"Load {number}: {escape_marks(load.name)} (concentrated couple, type {kind})",
+                level=2,
+            )
             record = _write_couple(sheet, number, load, beyond, length_unit, kind, cantilever)
         written.append(record)
     return symbols, written
@@ -763,7 +768,9 @@ def _write_point_load(
             f"toward the {direction.toward_axis} axis: cos θ along {direction.from_axis}, sin θ "
             f"along {direction.toward_axis}."
         )
-        magnitude = sheet.input(f"P_{suffix}", load.magnitude, f"Magnitude of {load.name}")
+        magnitude = sheet.input(
+            f"P_{suffix}", load.magnitude, f"Magnitude of {escape_marks(load.name)}"
+        )
         angle = sheet.input(
             f"theta_{suffix}", load.direction.angle, "Angle of the force", dimension="angle"
         )
@@ -782,7 +789,7 @@ def _write_point_load(
         for axis in AXES:
             name = f"F_{axis}{suffix}"
             force[axis] = sheet.input(
-                name, load.component(axis), f"Component of {load.name} along {axis}"
+                name, load.component(axis), f"Component of {escape_marks(load.name)} along {axis}"
             )
     z = _write_position(sheet, suffix, load.z, beyond, length_unit, cantilever)
     e_x = sheet.input(
@@ -905,7 +912,7 @@ def _sum_step(
     parts = []
     for number, first in enumerate(range(0, len(terms), size), start=1):
         chunk = terms[first : first + size]
-        sources = ", ".join(dict.fromkeys(source for source, _ in chunk))
+        sources = ", ".join(dict.fromkeys(escape_marks(source) for source, _ in chunk))
         parts.append(
             sheet.step(
                 f"{name}_p{number}", sp.Add(*(term for _, term in chunk)),
@@ -997,7 +1004,8 @@ def _write_supports(
         symbols[f"z_{item.name}"] = sheet.input(
             f"z_{item.name}",
             item.z,
-            f"Support {item.name} ({support_kind(item)}), restrains {describe_motions(item)}",
+            f"Support {escape_marks(item.name)} ({support_kind(item)}), "
+            f"restrains {describe_motions(item)}",
             unit=length_unit,
             fixed=LAYOUT,
         )
@@ -1031,7 +1039,7 @@ def _write_distributed(
     """
     tag = f"w{number}"
     label = f"distributed load {tag}"
-    sheet.heading(f"Distributed load {tag}: {load.name} (type {kind})", level=2)
+    sheet.heading(f"Distributed load {tag}: {escape_marks(load.name)} (type {kind})", level=2)
     unit = load.q_start[0].units
     start = {axis: float(value.to(unit).m) for axis, value in zip(AXES, load.q_start, strict=True)}
     end = {axis: float(value.to(unit).m) for axis, value in zip(AXES, load.q_end, strict=True)}
@@ -1235,13 +1243,15 @@ def _write_reactions(
             if position < 3:
                 force[axis] = sheet.input(
                     f"R_{axis}{item.name}", Quantity(value, "N").to(preset["force"]),
-                    f"Reaction force along {axis} at {item.name}", reference=SOLVER_REFERENCE,
+                    f"Reaction force along {axis} at {escape_marks(item.name)}",
+                    reference=SOLVER_REFERENCE,
                     fixed=REACTIONS_AT_BUILD,
                 )  # fmt: skip
             else:
                 couple[axis] = sheet.input(
                     f"M_{axis}{item.name}", Quantity(value, "N*m").to(preset["moment"]),
-                    f"Reaction couple about {axis} at {item.name}", reference=SOLVER_REFERENCE,
+                    f"Reaction couple about {axis} at {escape_marks(item.name)}",
+                    reference=SOLVER_REFERENCE,
                     fixed=REACTIONS_AT_BUILD,
                 )  # fmt: skip
         beyond = cut.carries(item.z, reaction=True)
@@ -1273,7 +1283,8 @@ def _write_reactions(
         if record.beyond and record.force:
             record.a = sheet.step(
                 f"a_{record.name}", record.z - symbols["z_s"],
-                f"Lever arm of {record.name} beyond the station", unit=preset["length"],
+                f"Lever arm of {escape_marks(record.name)} beyond the station",
+                unit=preset["length"],
             )  # fmt: skip
     return written
 
@@ -1428,7 +1439,8 @@ def _write_section_properties(
 ) -> dict[str, sp.Symbol | None]:
     sheet.heading("Section properties used")
     sheet.text(
-        f"Section: {section.name} ({family_title(section.family)}). Each property's source "
+        f"Section: {escape_marks(section.name)} ({family_title(section.family)}). "
+        "Each property's source "
         "is given beside it. Stress points are the labelled points of the section outline, "
         "with the centroid added where it lies in the material and, on open sections, points "
         "on the walls where transverse shear peaks."
@@ -1512,7 +1524,8 @@ def _write_point_data(sheet: Sheet, section: Section, model: StressModel) -> lis
             [(point.number, model.x[i], model.y[i]) for i, point in enumerate(data)],
             unit,
         ),
-        f"Section {section.name} to scale, with the stress points numbered as in the table.",
+        f"Section {escape_marks(section.name)} to scale, with the stress points numbered as "
+        "in the table.",
     )
     # One table of the points and their cuts: a row per point, read across.
     dash = "—"
@@ -1900,7 +1913,8 @@ def _write_torsion(
     )
     combination = "the governing combination" if torsion.governing else "the loads"
     sheet.text(
-        f"Derivatives of the twist at the station under {combination}, from the closed-form "
+        f"Derivatives of the twist at the station under {escape_marks(combination)}, from "
+        "the closed-form "
         "solution of G·J·φ′ − E·C_w·φ‴ = T for the concentrated torques of the point loads "
         "and couples and the uniform torques of the distributed loads about the shear "
         "centre: {phi_1} = φ′, {phi_2} = φ″, {phi_3} = φ‴."

@@ -45,6 +45,7 @@ import pint
 import sympy as sp
 
 from calcsheet.engine.functions import Abs, Max, Piecewise, sqrt
+from calcsheet.engine.marked_text import escape_marks
 from calcsheet.engine.parts import Check, Input
 from calcsheet.engine.sheet import Sheet
 from calcsheet.errors import DefinitionError
@@ -223,6 +224,12 @@ class SheetWriter:
         """A name or text that depends on a decision (arrays: ``when_false``)."""
         return when_true if flag else when_false
 
+    @staticmethod
+    def literal(text: object) -> str:
+        """Text a user typed (a load's name) for a description or heading: shown as typed,
+        its braces never read as symbol marks (:func:`~calcsheet.engine.escape_marks`)."""
+        return escape_marks(text)
+
     def smallest(
         self, name: str, candidates: Sequence[Candidate], description: str, unit: str | None
     ) -> Value:
@@ -381,6 +388,10 @@ class ArrayWriter:
     @staticmethod
     def label(flag: Flag, when_true: str, when_false: str) -> str:
         return when_false
+
+    @staticmethod
+    def literal(text: object) -> str:
+        return str(text)
 
     def quietly(self) -> ArrayWriter:
         return self

@@ -500,19 +500,23 @@ def _write_load_inputs(
     for number, load in enumerate(loads, start=1):
         tag = f"d{number}"
         a = w.input(
-            f"a_{tag}", load.z.to(unit), f"Distance of {load.name} from the support",
+            f"a_{tag}", load.z.to(unit), f"Distance of {w.literal(load.name)} from the support",
             dimension="length",
         )  # fmt: skip
         if isinstance(load, AppliedMoment):
             C = {
-                axis: w.input(f"C_{axis}_{tag}", value, f"Couple of {load.name} about {axis}")
+                axis: w.input(
+                    f"C_{axis}_{tag}", value, f"Couple of {w.literal(load.name)} about {axis}"
+                )
                 for axis, value in (("x", load.Mx), ("y", load.My))
                 if value.m != 0
             }
             written.append(LoadTerms(load.name, a, C_x=C.get("x"), C_y=C.get("y")))
             continue
         F = {
-            axis: w.input(f"F_{axis}_{tag}", load.component(axis), f"{load.name} along {axis}")
+            axis: w.input(
+                f"F_{axis}_{tag}", load.component(axis), f"{w.literal(load.name)} along {axis}"
+            )
             for axis in "xyz"
             if load.component(axis).m != 0
         }
@@ -521,8 +525,8 @@ def _write_load_inputs(
             for axis, value in (("x", load.ex), ("y", load.ey)):
                 if value.m != 0:
                     e[axis] = w.input(
-                        f"e_{axis}_{tag}", value.to(unit), f"Offset of {load.name} in {axis}",
-                        dimension="length",
+                        f"e_{axis}_{tag}", value.to(unit),
+                        f"Offset of {w.literal(load.name)} in {axis}", dimension="length",
                     )  # fmt: skip
         written.append(
             LoadTerms(

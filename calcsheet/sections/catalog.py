@@ -27,7 +27,7 @@ import difflib
 import importlib.util
 import re
 from dataclasses import dataclass
-from functools import lru_cache
+from functools import cache, lru_cache
 from pathlib import Path
 
 import pint
@@ -137,7 +137,7 @@ def _shape_files() -> Path:
     return Path(next(iter(spec.submodule_search_locations))) / "shape files"
 
 
-@lru_cache(maxsize=None)
+@cache
 def _family_entries(key: str) -> dict[str, CatalogEntry]:
     """The entries of one AISC family's table by normalised designation, read once."""
     family = FAMILIES[key]
@@ -184,7 +184,7 @@ def _named_family_entries(key: str) -> dict[str, CatalogEntry]:
     return _entries_of_letters(re.match(r"[A-Z]*", key).group(0))
 
 
-@lru_cache(maxsize=None)
+@cache
 def _entries_of_letters(letters: str) -> dict[str, CatalogEntry]:
     found: dict[str, CatalogEntry] = {}
     for family in FAMILIES.values():

@@ -26,7 +26,7 @@ import numpy as np
 import pint
 import sympy as sp
 
-from calcsheet.engine import Check, Sheet, as_written
+from calcsheet.engine import Check, Sheet, as_written, escape_marks
 from calcsheet.engine.procedure import SheetWriter, Writer
 from calcsheet.errors import DefinitionError, InputError
 from calcsheet.sections import Section
@@ -153,7 +153,10 @@ def write_aisc_checks(
             )
     w = SheetWriter(sheet, chosen)
     sheet.add_basis("Codes and editions", f"{SPECIFICATION_TITLE}, {chosen}.")
-    sheet.add_basis("Material", f"{inputs.grade}: F_y, E (and G) as listed in the inputs.")
+    sheet.add_basis(
+        "Material",
+        f"{escape_marks(inputs.grade)}: {{F_y}}, {{E}} (and {{G}}) as listed in the inputs.",
+    )
     sheet.add_reference(SPECIFICATION_TITLE)
     with as_written():
         sheet.heading(f"Member strength to AISC 360-22 ({chosen})")
@@ -188,7 +191,7 @@ def aisc_member_procedure(
     both given, not a cantilever).
     """
     _write_member_inputs(w, inputs, kind, second_order, bracing or LateralBracing())
-    w.heading(f"Section {name}".strip(), 2)
+    w.heading(f"Section {w.literal(name)}".strip(), 2)
     write_section_values(w, values)
     strengths = _WRITERS[kind](w)
     _write_demand_side(w, kind, strengths, demands, second_order)
@@ -252,7 +255,7 @@ def _write_member_inputs(
     w.input(
         "F_y",
         inputs.F_y,
-        f"Specified minimum yield stress ({inputs.grade})",
+        f"Specified minimum yield stress ({w.literal(inputs.grade)})",
         dimension="stress",
         fixed=MATERIAL_FIXED,
     )

@@ -813,8 +813,8 @@ class _Procedure:
         w, steel, factors, member = self.w, self.member.steel, self.member.factors, self.member
         w.heading("Material, partial factors and section", 2)
         w.input(
-            "f_y", steel.f_y, f"Yield strength, {steel.grade}", dimension="stress", unit="MPa",
-            reference=steel.source, fixed=MATERIAL_FIXED,
+            "f_y", steel.f_y, f"Yield strength, {w.literal(steel.grade)}", dimension="stress",
+            unit="MPa", reference=steel.source, fixed=MATERIAL_FIXED,
         )  # fmt: skip
         w.input(
             "E", steel.E, "Modulus of elasticity", dimension="stress", unit="MPa",
