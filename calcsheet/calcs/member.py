@@ -1244,15 +1244,13 @@ def _write_reactions(
                 force[axis] = sheet.input(
                     f"R_{axis}{item.name}", Quantity(value, "N").to(preset["force"]),
                     f"Reaction force along {axis} at {escape_marks(item.name)}",
-                    reference=SOLVER_REFERENCE,
-                    fixed=REACTIONS_AT_BUILD,
+                    reference=SOLVER_REFERENCE, fixed=REACTIONS_AT_BUILD, computed=True,
                 )  # fmt: skip
             else:
                 couple[axis] = sheet.input(
                     f"M_{axis}{item.name}", Quantity(value, "N*m").to(preset["moment"]),
                     f"Reaction couple about {axis} at {escape_marks(item.name)}",
-                    reference=SOLVER_REFERENCE,
-                    fixed=REACTIONS_AT_BUILD,
+                    reference=SOLVER_REFERENCE, fixed=REACTIONS_AT_BUILD, computed=True,
                 )  # fmt: skip
         beyond = cut.carries(item.z, reaction=True)
         z = symbols[f"z_{item.name}"]
@@ -1420,11 +1418,11 @@ def _write_deflection_along(
     delta = sheet.input(
         "delta_max", Quantity(worst.deflection, "m").to(length_unit),
         f"Largest deflection, {worst.kind} {worst.between}, at z = {shown(worst.at)}",
-        reference=DEFLECTION_METHOD, fixed=REACTIONS_AT_BUILD,
+        reference=DEFLECTION_METHOD, fixed=REACTIONS_AT_BUILD, computed=True,
     )  # fmt: skip
     span = sheet.input(
         "L_d", Quantity(worst.length, "m").to(length_unit),
-        f"Length of the {worst.kind} {worst.between}", fixed=LAYOUT,
+        f"Length of the {worst.kind} {worst.between}", fixed=LAYOUT, computed=True,
     )  # fmt: skip
     n_lim = sheet.input(
         "n_lim", n, "Deflection limit ratio, δ ≤ L_d/n", dimension="dimensionless",
@@ -1491,6 +1489,7 @@ def _write_section_properties(
             Quantity(rule.enclosed_area, f"{unit}**2"),
             "Area inside the wall mid-line, (B − t)·(H − t), square corners",
             reference="section dimensions",
+            computed=True,
         )
     elif rule.kind == "open" and not (torsion is not None and torsion.warping):
         props["t_max"] = sheet.input(
@@ -1636,10 +1635,11 @@ def _write_point_warping(
         values = PointWarping(
             sheet.input(
                 f"W_n_{n}", Quantity(float(warped.Wn_midline[index]), f"{unit}**2"),
-                listed=False,
+                listed=False, computed=True,
             ),
             sheet.input(
-                f"S_w_{n}", Quantity(float(warped.Sw[index]), f"{unit}**4"), listed=False
+                f"S_w_{n}", Quantity(float(warped.Sw[index]), f"{unit}**4"), listed=False,
+                computed=True,
             ),
             sheet.input(
                 f"t_w_{n}", Quantity(float(warped.thickness[index]), unit), listed=False
@@ -1839,7 +1839,7 @@ def _plan_torsion(
         f"{twist.reason}. At the station the St Venant shear G·t·φ′, the warping "
         "shear −E·S_w·φ‴/t and the warping normal stress E·W_n·φ″ are added at every point.",
         twist,
-        np.asarray(derivatives, dtype=float),
+        twist.without_round_off(derivatives),
         governing,
     )
 
@@ -1866,11 +1866,11 @@ def _write_torsion(
         unit = warping.length_unit
         x_s = sheet.input(
             "x_s", Quantity(warping.x_s, unit), "Shear centre from the centroid, x",
-            reference=SHEAR_CENTRE_SOURCE,
+            reference=SHEAR_CENTRE_SOURCE, computed=True,
         )  # fmt: skip
         y_s = sheet.input(
             "y_s", Quantity(warping.y_s, unit), "Shear centre from the centroid, y",
-            reference=SHEAR_CENTRE_SOURCE,
+            reference=SHEAR_CENTRE_SOURCE, computed=True,
         )  # fmt: skip
         twisting["T"] = sheet.step(
             "T_s",
@@ -1929,6 +1929,7 @@ def _write_torsion(
             description,
             reference=WARPING_REFERENCE,
             fixed=TWIST_AT_BUILD,
+            computed=True,
         )
         for power, (name, description, value) in enumerate(
             zip(names, words, values, strict=True), start=1

@@ -109,8 +109,10 @@ class SheetWriter:
         dimension: str | None = None,
         fixed: str = "",
         unit: str | None = None,
+        computed: bool = False,
     ) -> sp.Symbol:
-        """Define an input, or reuse the sheet's input of that name when it has this value."""
+        """Define an input, or reuse the sheet's input of that name when it has this value
+        (``computed``: see :meth:`Sheet.input`)."""
         try:
             existing = self.sheet[name]
         except KeyError:
@@ -124,6 +126,7 @@ class SheetWriter:
                 dimension=dimension,
                 fixed=fixed,
                 unit=unit,
+                computed=computed,
             )
         elif isinstance(existing, Input) and _same(existing.value, value):
             if fixed and not existing.fixed:
@@ -308,6 +311,7 @@ class ArrayWriter:
         dimension: str | None = None,
         fixed: str = "",
         unit: str | None = None,
+        computed: bool = False,
     ) -> Any:
         """The given array of that name, or the value in SI base units."""
         result = self.given_values[name] if name in self.given_values else _si(value, dimension)

@@ -181,7 +181,10 @@ def write_bracing_inputs(w: Writer, inputs: MemberInputs, bracing: LateralBracin
             if bracing.Lb_given
             else "defaulted (from the member length L)"
         )
-        w.input("L_b", inputs.L_b, f"Laterally unbraced length: {source}", dimension="length")
+        w.input(
+            "L_b", inputs.L_b, f"Laterally unbraced length: {source}", dimension="length",
+            computed=bool(bracing.Lb_source),
+        )  # fmt: skip
         if w.prints:
             _warn_length(w, inputs, bracing)
     _write_cb(w, inputs, bracing)
@@ -237,6 +240,7 @@ def _write_cb(w: Writer, inputs: MemberInputs, bracing: LateralBracing) -> Value
         description,
         reference="AISC 360-22 Section F1" + (f"; {COMMENTARY_F1}" if bracing.cantilever else ""),
         dimension="dimensionless",
+        computed=bool(bracing.Cb_source),
     )
     if w.prints and bracing.cantilever and inputs.C_b > 1.0:
         w.text(
