@@ -140,17 +140,17 @@ SIGN_TEXT = (
 AXIS_TEXT_SUPPORTED = (
     "Axes: the member runs along z from the end z = 0 to the end z = L. The cross-section "
     "lies in the x-y plane with x horizontal to the right and y vertical upward, origin at "
-    "the centroid; x, y, z are right-handed. Load offsets e_x, e_y are measured from the "
+    "the centroid; x, y, z are right-handed. Load offsets {e_x}, {e_y} are measured from the "
     "centroid; supports act on the member axis."
 )
 SIGN_TEXT_SUPPORTED = (
     "Signs: internal forces are those on the cut face whose outward normal is +z "
     "(the face of the part from z = 0 to the cut), about the centroid of the cut. By "
     "equilibrium of the part beyond the cut they equal the resultant of the loads and "
-    "reactions on it: N = ΣF_z (tension positive), V_x = ΣF_x, V_y = ΣF_y, and the moments "
-    "of those forces about the cut centroid by the right-hand rule, with lever arm "
-    "a = z − z_s. Reactions are the forces and couples the supports apply to the member. "
-    "Positive M_x puts the top (+y) fibres in tension; positive M_y puts the left (−x) "
+    "reactions on it: {N} = Σ{F_z} (tension positive), {V_x} = Σ{F_x}, {V_y} = Σ{F_y}, and the "
+    "moments of those forces about the cut centroid by the right-hand rule, with lever arm "
+    "{a} = {z} − {z_s}. Reactions are the forces and couples the supports apply to the member. "
+    "Positive {M_x} puts the top (+y) fibres in tension; positive {M_y} puts the left (−x) "
     "fibres in tension. Normal stress is positive in tension."
 )
 # How much of the point-by-point derivation a member sheet writes out.
@@ -892,6 +892,14 @@ def _statics_terms(
 _TERMS_PER_LINE = 4
 
 
+def _sentence_inside(description: str) -> str:
+    """A description continued inside a sentence: "Axial force" -> "axial force"; a symbol
+    or a sign that starts it ("Σ{F_x} of ...", "{N} = ...") stays as written."""
+    if description[:1].isupper() and description[1:2].islower():
+        return description[0].lower() + description[1:]
+    return description
+
+
 def _sum_step(
     sheet: Sheet,
     name: str,
@@ -916,7 +924,7 @@ def _sum_step(
         parts.append(
             sheet.step(
                 f"{name}_p{number}", sp.Add(*(term for _, term in chunk)),
-                f"Part {number} of {description[0].lower()}{description[1:]}: {sources}",
+                f"Part {number} of {_sentence_inside(description)}: {sources}",
                 unit=unit, reference=reference,
             )
         )  # fmt: skip
@@ -946,7 +954,7 @@ def _write_internal_forces(
     if just_beyond:
         sheet.text(
             "The cut is taken just beyond the station, where the check governs: the loads "
-            "and supports at z_s act on the part behind it."
+            "and supports at {z_s} act on the part behind it."
         )
     carried = [load for load in carried if load.beyond]
     terms = _statics_terms(carried, factors)
@@ -1125,7 +1133,8 @@ def _write_distributed(
             triangle = {
                 axis: sheet.step(
                     f"W_{axis}t{number}", (q_b[axis] - q_a[axis]) * l_w / 2,
-                    f"Resultant along {axis} of the triangular part, (q_b − q_a)·l/2",
+                    f"Resultant along {axis} of the triangular part, "
+                    f"({{q_{axis}b{number}}} − {{q_{axis}a{number}}})·{{l_{tag}}}/2",
                 )
                 for axis in present
             }  # fmt: skip
@@ -1167,7 +1176,9 @@ def _write_distributed(
             )
             for axis in present
         }  # fmt: skip
-        a_near = sheet.step(f"a_uc{number}", l_c / 2, "Its lever arm, l_c/2", unit=length_unit)
+        a_near = sheet.step(
+            f"a_uc{number}", l_c / 2, f"Its lever arm, {{l_c{number}}}/2", unit=length_unit
+        )
         record.beyond.append(part(near, None, a_near))
         if not uniform:
             far = {
@@ -1178,7 +1189,10 @@ def _write_distributed(
                 for axis in present
             }  # fmt: skip
             a_far = sheet.step(
-                f"a_tc{number}", 2 * l_c / 3, "Its lever arm, 2·l_c/3", unit=length_unit
+                f"a_tc{number}",
+                2 * l_c / 3,
+                f"Its lever arm, 2·{{l_c{number}}}/3",
+                unit=length_unit,
             )
             record.beyond.append(part(far, None, a_far))
     return record
@@ -1225,7 +1239,8 @@ def _write_reactions(
     combo = analysis.combos[governing].name if analysis.combos else "the loads as given"
     sheet.text(
         "The member is solved by the direct stiffness method with 3-D frame elements "
-        f"(E = {modulus}, G = {shear}, {shear_source}; A, I_x, I_y, I_xy and J of the "
+        f"({{E}} = {modulus}, {{G}} = {shear}, {shear_source}; {{A}}, {{I_x}}, {{I_y}}, {{I_xy}} "
+        "and {J} of the "
         "section below), one load case per load type; the load factors of a combination "
         f"combine them. The reactions below are those of {combo}, forces and couples the "
         "supports apply to the member, at each support on the member axis."
@@ -1263,7 +1278,7 @@ def _write_reactions(
     free = "—"
     sheet.table(
         # Plain text headers as engineers write them (a header is not math).
-        ["Support", "Rx", "Ry", "Rz", "Mx", "My", "Mz"],
+        ["Support", "{R_x}", "{R_y}", "{R_z}", "{M_x}", "{M_y}", "{M_z}"],
         [
             [
                 record.name,
@@ -1288,12 +1303,12 @@ def _write_reactions(
 
 
 _EQUILIBRIUM = (
-    ("Sigma_Fx", "V_x", "ΣF_x of the loads and reactions", "force"),
-    ("Sigma_Fy", "V_y", "ΣF_y of the loads and reactions", "force"),
-    ("Sigma_Fz", "N", "ΣF_z of the loads and reactions", "force"),
-    ("Sigma_Mx", "M_x", "ΣM_x about z = 0 of the loads and reactions", "moment"),
-    ("Sigma_My", "M_y", "ΣM_y about z = 0 of the loads and reactions", "moment"),
-    ("Sigma_Mz", "T", "ΣM_z about the member axis of the loads and reactions", "moment"),
+    ("Sigma_Fx", "V_x", "Σ{F_x} of the loads and reactions", "force"),
+    ("Sigma_Fy", "V_y", "Σ{F_y} of the loads and reactions", "force"),
+    ("Sigma_Fz", "N", "Σ{F_z} of the loads and reactions", "force"),
+    ("Sigma_Mx", "M_x", "Σ{M_x} about z = 0 of the loads and reactions", "moment"),
+    ("Sigma_My", "M_y", "Σ{M_y} about z = 0 of the loads and reactions", "moment"),
+    ("Sigma_Mz", "T", "Σ{M_z} about the member axis of the loads and reactions", "moment"),
 )
 
 
@@ -1425,7 +1440,7 @@ def _write_deflection_along(
         f"Length of the {worst.kind} {worst.between}", fixed=LAYOUT, computed=True,
     )  # fmt: skip
     n_lim = sheet.input(
-        "n_lim", n, "Deflection limit ratio, δ ≤ L_d/n", dimension="dimensionless",
+        "n_lim", n, "Deflection limit ratio, {delta} ≤ {L_d}/{n_lim}", dimension="dimensionless",
         reference=LIMIT_SOURCE,
     )  # fmt: skip
     allowed = sheet.step("delta_allow", span / n_lim, "Deflection limit", unit=length_unit)
@@ -1834,10 +1849,11 @@ def _plan_torsion(
         "non-uniform torsion of a thin-walled open section (St Venant and warping)",
         "An open section (I, channel, tee or angle) warps when it twists, and where warping "
         "is restrained its flanges bend: the twist φ(z) is solved along the member from the "
-        "torsion differential equation G·J·φ′ − E·C_w·φ‴ = T in closed form (AISC Design "
+        "torsion differential equation {G}·{J}·φ′ − {E}·{C_w}·φ‴ = {T} in closed form (AISC Design "
         "Guide 9, Torsional Analysis of Structural Steel Members), with the member "
-        f"{twist.reason}. At the station the St Venant shear G·t·φ′, the warping "
-        "shear −E·S_w·φ‴/t and the warping normal stress E·W_n·φ″ are added at every point.",
+        f"{twist.reason}. At the station the St Venant shear {{G}}·{{t}}·φ′, the warping "
+        "shear −{E}·{S_w}·φ‴/{t} and the warping normal stress {E}·{W_n}·φ″ are added at every "
+        "point.",
         twist,
         twist.without_round_off(derivatives),
         governing,
@@ -1914,9 +1930,9 @@ def _write_torsion(
     combination = "the governing combination" if torsion.governing else "the loads"
     sheet.text(
         f"Derivatives of the twist at the station under {escape_marks(combination)}, from "
-        "the closed-form "
-        "solution of G·J·φ′ − E·C_w·φ‴ = T for the concentrated torques of the point loads "
-        "and couples and the uniform torques of the distributed loads about the shear "
+        "the closed-form solution of {G}·{J}·φ′ − {E}·{C_w}·φ‴ = {T} for the concentrated "
+        "torques of the point loads and couples and the uniform torques of the distributed "
+        "loads about the shear "
         "centre: {phi_1} = φ′, {phi_2} = φ″, {phi_3} = φ‴."
     )
     values = torsion.derivatives

@@ -187,7 +187,7 @@ def bracing_defaults(
         float(smallest[0]),
         f"the longest laterally unbraced segment between supports and brace points, {where}",
         "the smallest Eq. F1-1 value over the unbraced segments and every combination's "
-        "M_x diagram, AISC 360-22 Section F1",
+        "{M_x} diagram, AISC 360-22 Section F1",
     )
 
 
