@@ -81,7 +81,7 @@ from calcsheet.calcs.member_figures import member_drawing, section_drawing, stre
 from calcsheet.calcs.member_rebuild import rebuild_on_change
 from calcsheet.calcs.points import section_terms, write_point_inputs
 from calcsheet.calcs.round_section import write_round_point_stresses
-from calcsheet.engine import Check, Sheet, TitleBlock
+from calcsheet.engine import Check, Sheet, TitleBlock, escape_marks
 from calcsheet.engine.functions import cos, sin
 from calcsheet.engine.procedure import SheetWriter
 from calcsheet.errors import InputError
@@ -140,17 +140,17 @@ SIGN_TEXT = (
 AXIS_TEXT_SUPPORTED = (
     "Axes: the member runs along z from the end z = 0 to the end z = L. The cross-section "
     "lies in the x-y plane with x horizontal to the right and y vertical upward, origin at "
-    "the centroid; x, y, z are right-handed. Load offsets e_x, e_y are measured from the "
+    "the centroid; x, y, z are right-handed. Load offsets {e_x}, {e_y} are measured from the "
     "centroid; supports act on the member axis."
 )
 SIGN_TEXT_SUPPORTED = (
     "Signs: internal forces are those on the cut face whose outward normal is +z "
     "(the face of the part from z = 0 to the cut), about the centroid of the cut. By "
     "equilibrium of the part beyond the cut they equal the resultant of the loads and "
-    "reactions on it: N = ΣF_z (tension positive), V_x = ΣF_x, V_y = ΣF_y, and the moments "
-    "of those forces about the cut centroid by the right-hand rule, with lever arm "
-    "a = z − z_s. Reactions are the forces and couples the supports apply to the member. "
-    "Positive M_x puts the top (+y) fibres in tension; positive M_y puts the left (−x) "
+    "reactions on it: {N} = Σ{F_z} (tension positive), {V_x} = Σ{F_x}, {V_y} = Σ{F_y}, and the "
+    "moments of those forces about the cut centroid by the right-hand rule, with lever arm "
+    "{a} = {z} − {z_s}. Reactions are the forces and couples the supports apply to the member. "
+    "Positive {M_x} puts the top (+y) fibres in tension; positive {M_y} puts the left (−x) "
     "fibres in tension. Normal stress is positive in tension."
 )
 # How much of the point-by-point derivation a member sheet writes out.
@@ -520,7 +520,8 @@ def _draw_force_diagrams(
             loads_m=marks,
             governing_name=named,
         ),
-        f"Internal forces along the member under {named} (line and fill) and the envelope "
+        f"Internal forces along the member under {escape_marks(named)} (line and fill) and the "
+        "envelope "
         "of every combination (band), from the member's statics with the support "
         "reactions of the direct stiffness analysis; the sign convention is written under "
         "the diagrams.",
@@ -614,7 +615,8 @@ def _write_basis(
         held = (
             name
             + "; ".join(
-                f"{item.name} ({support_kind(item)}) at z = {_length_text(item.z)} restrains "
+                f"{escape_marks(item.name)} ({support_kind(item)}) at z = "
+                f"{_length_text(item.z)} restrains "
                 f"{describe_motions(item)}"
                 for item in layout.supports
             )
@@ -638,7 +640,7 @@ def _write_basis(
         "Plane sections remain plane; normal stress by the (unsymmetric) bending formula.",
         "Transverse shear {V}·{Q}/({I}·{b}) as the average over each cut through a point.",
         _torsion_assumption(torsion),
-        f"Section {section.name}: properties as sourced beside each value.",
+        f"Section {escape_marks(section.name)}: properties as sourced beside each value.",
     )
     if torsion is not None and torsion.warping:
         sheet.add_reference(
@@ -729,7 +731,7 @@ def _write_inputs(
         beyond = id(load) in free_ids
         kind = types[number - 1]
         if isinstance(load, PointLoad):
-            sheet.heading(f"Load {number}: {load.name} (type {kind})", level=2)
+            sheet.heading(f"Load {number}: {escape_marks(load.name)} (type {kind})", level=2)
             record = _write_point_load(sheet, number, load, beyond, length_unit, kind, cantilever)
             if beyond:
                 record.a = sheet.step(
@@ -739,7 +741,10 @@ def _write_inputs(
                     unit=length_unit,
                 )
         else:
-            sheet.heading(f"Load {number}: {load.name} (concentrated couple, type {kind})", level=2)
+            sheet.heading(
+                f"Load {number}: {escape_marks(load.name)} (concentrated couple, type {kind})",
+                level=2,
+            )
             record = _write_couple(sheet, number, load, beyond, length_unit, kind, cantilever)
         written.append(record)
     return symbols, written
@@ -763,7 +768,9 @@ def _write_point_load(
             f"toward the {direction.toward_axis} axis: cos θ along {direction.from_axis}, sin θ "
             f"along {direction.toward_axis}."
         )
-        magnitude = sheet.input(f"P_{suffix}", load.magnitude, f"Magnitude of {load.name}")
+        magnitude = sheet.input(
+            f"P_{suffix}", load.magnitude, f"Magnitude of {escape_marks(load.name)}"
+        )
         angle = sheet.input(
             f"theta_{suffix}", load.direction.angle, "Angle of the force", dimension="angle"
         )
@@ -782,7 +789,7 @@ def _write_point_load(
         for axis in AXES:
             name = f"F_{axis}{suffix}"
             force[axis] = sheet.input(
-                name, load.component(axis), f"Component of {load.name} along {axis}"
+                name, load.component(axis), f"Component of {escape_marks(load.name)} along {axis}"
             )
     z = _write_position(sheet, suffix, load.z, beyond, length_unit, cantilever)
     e_x = sheet.input(
@@ -885,6 +892,14 @@ def _statics_terms(
 _TERMS_PER_LINE = 4
 
 
+def _sentence_inside(description: str) -> str:
+    """A description continued inside a sentence: "Axial force" -> "axial force"; a symbol
+    or a sign that starts it ("Σ{F_x} of ...", "{N} = ...") stays as written."""
+    if description[:1].isupper() and description[1:2].islower():
+        return description[0].lower() + description[1:]
+    return description
+
+
 def _sum_step(
     sheet: Sheet,
     name: str,
@@ -905,11 +920,11 @@ def _sum_step(
     parts = []
     for number, first in enumerate(range(0, len(terms), size), start=1):
         chunk = terms[first : first + size]
-        sources = ", ".join(dict.fromkeys(source for source, _ in chunk))
+        sources = ", ".join(dict.fromkeys(escape_marks(source) for source, _ in chunk))
         parts.append(
             sheet.step(
                 f"{name}_p{number}", sp.Add(*(term for _, term in chunk)),
-                f"Part {number} of {description[0].lower()}{description[1:]}: {sources}",
+                f"Part {number} of {_sentence_inside(description)}: {sources}",
                 unit=unit, reference=reference,
             )
         )  # fmt: skip
@@ -939,7 +954,7 @@ def _write_internal_forces(
     if just_beyond:
         sheet.text(
             "The cut is taken just beyond the station, where the check governs: the loads "
-            "and supports at z_s act on the part behind it."
+            "and supports at {z_s} act on the part behind it."
         )
     carried = [load for load in carried if load.beyond]
     terms = _statics_terms(carried, factors)
@@ -997,7 +1012,8 @@ def _write_supports(
         symbols[f"z_{item.name}"] = sheet.input(
             f"z_{item.name}",
             item.z,
-            f"Support {item.name} ({support_kind(item)}), restrains {describe_motions(item)}",
+            f"Support {escape_marks(item.name)} ({support_kind(item)}), "
+            f"restrains {describe_motions(item)}",
             unit=length_unit,
             fixed=LAYOUT,
         )
@@ -1031,7 +1047,7 @@ def _write_distributed(
     """
     tag = f"w{number}"
     label = f"distributed load {tag}"
-    sheet.heading(f"Distributed load {tag}: {load.name} (type {kind})", level=2)
+    sheet.heading(f"Distributed load {tag}: {escape_marks(load.name)} (type {kind})", level=2)
     unit = load.q_start[0].units
     start = {axis: float(value.to(unit).m) for axis, value in zip(AXES, load.q_start, strict=True)}
     end = {axis: float(value.to(unit).m) for axis, value in zip(AXES, load.q_end, strict=True)}
@@ -1117,7 +1133,8 @@ def _write_distributed(
             triangle = {
                 axis: sheet.step(
                     f"W_{axis}t{number}", (q_b[axis] - q_a[axis]) * l_w / 2,
-                    f"Resultant along {axis} of the triangular part, (q_b − q_a)·l/2",
+                    f"Resultant along {axis} of the triangular part, "
+                    f"({{q_{axis}b{number}}} − {{q_{axis}a{number}}})·{{l_{tag}}}/2",
                 )
                 for axis in present
             }  # fmt: skip
@@ -1159,7 +1176,9 @@ def _write_distributed(
             )
             for axis in present
         }  # fmt: skip
-        a_near = sheet.step(f"a_uc{number}", l_c / 2, "Its lever arm, l_c/2", unit=length_unit)
+        a_near = sheet.step(
+            f"a_uc{number}", l_c / 2, f"Its lever arm, {{l_c{number}}}/2", unit=length_unit
+        )
         record.beyond.append(part(near, None, a_near))
         if not uniform:
             far = {
@@ -1170,7 +1189,10 @@ def _write_distributed(
                 for axis in present
             }  # fmt: skip
             a_far = sheet.step(
-                f"a_tc{number}", 2 * l_c / 3, "Its lever arm, 2·l_c/3", unit=length_unit
+                f"a_tc{number}",
+                2 * l_c / 3,
+                f"Its lever arm, 2·{{l_c{number}}}/3",
+                unit=length_unit,
             )
             record.beyond.append(part(far, None, a_far))
     return record
@@ -1217,7 +1239,8 @@ def _write_reactions(
     combo = analysis.combos[governing].name if analysis.combos else "the loads as given"
     sheet.text(
         "The member is solved by the direct stiffness method with 3-D frame elements "
-        f"(E = {modulus}, G = {shear}, {shear_source}; A, I_x, I_y, I_xy and J of the "
+        f"({{E}} = {modulus}, {{G}} = {shear}, {shear_source}; {{A}}, {{I_x}}, {{I_y}}, {{I_xy}} "
+        "and {J} of the "
         "section below), one load case per load type; the load factors of a combination "
         f"combine them. The reactions below are those of {combo}, forces and couples the "
         "supports apply to the member, at each support on the member axis."
@@ -1235,14 +1258,14 @@ def _write_reactions(
             if position < 3:
                 force[axis] = sheet.input(
                     f"R_{axis}{item.name}", Quantity(value, "N").to(preset["force"]),
-                    f"Reaction force along {axis} at {item.name}", reference=SOLVER_REFERENCE,
-                    fixed=REACTIONS_AT_BUILD,
+                    f"Reaction force along {axis} at {escape_marks(item.name)}",
+                    reference=SOLVER_REFERENCE, fixed=REACTIONS_AT_BUILD, computed=True,
                 )  # fmt: skip
             else:
                 couple[axis] = sheet.input(
                     f"M_{axis}{item.name}", Quantity(value, "N*m").to(preset["moment"]),
-                    f"Reaction couple about {axis} at {item.name}", reference=SOLVER_REFERENCE,
-                    fixed=REACTIONS_AT_BUILD,
+                    f"Reaction couple about {axis} at {escape_marks(item.name)}",
+                    reference=SOLVER_REFERENCE, fixed=REACTIONS_AT_BUILD, computed=True,
                 )  # fmt: skip
         beyond = cut.carries(item.z, reaction=True)
         z = symbols[f"z_{item.name}"]
@@ -1255,7 +1278,7 @@ def _write_reactions(
     free = "—"
     sheet.table(
         # Plain text headers as engineers write them (a header is not math).
-        ["Support", "Rx", "Ry", "Rz", "Mx", "My", "Mz"],
+        ["Support", "{R_x}", "{R_y}", "{R_z}", "{M_x}", "{M_y}", "{M_z}"],
         [
             [
                 record.name,
@@ -1273,18 +1296,19 @@ def _write_reactions(
         if record.beyond and record.force:
             record.a = sheet.step(
                 f"a_{record.name}", record.z - symbols["z_s"],
-                f"Lever arm of {record.name} beyond the station", unit=preset["length"],
+                f"Lever arm of {escape_marks(record.name)} beyond the station",
+                unit=preset["length"],
             )  # fmt: skip
     return written
 
 
 _EQUILIBRIUM = (
-    ("Sigma_Fx", "V_x", "ΣF_x of the loads and reactions", "force"),
-    ("Sigma_Fy", "V_y", "ΣF_y of the loads and reactions", "force"),
-    ("Sigma_Fz", "N", "ΣF_z of the loads and reactions", "force"),
-    ("Sigma_Mx", "M_x", "ΣM_x about z = 0 of the loads and reactions", "moment"),
-    ("Sigma_My", "M_y", "ΣM_y about z = 0 of the loads and reactions", "moment"),
-    ("Sigma_Mz", "T", "ΣM_z about the member axis of the loads and reactions", "moment"),
+    ("Sigma_Fx", "V_x", "Σ{F_x} of the loads and reactions", "force"),
+    ("Sigma_Fy", "V_y", "Σ{F_y} of the loads and reactions", "force"),
+    ("Sigma_Fz", "N", "Σ{F_z} of the loads and reactions", "force"),
+    ("Sigma_Mx", "M_x", "Σ{M_x} about z = 0 of the loads and reactions", "moment"),
+    ("Sigma_My", "M_y", "Σ{M_y} about z = 0 of the loads and reactions", "moment"),
+    ("Sigma_Mz", "T", "Σ{M_z} about the member axis of the loads and reactions", "moment"),
 )
 
 
@@ -1409,14 +1433,14 @@ def _write_deflection_along(
     delta = sheet.input(
         "delta_max", Quantity(worst.deflection, "m").to(length_unit),
         f"Largest deflection, {worst.kind} {worst.between}, at z = {shown(worst.at)}",
-        reference=DEFLECTION_METHOD, fixed=REACTIONS_AT_BUILD,
+        reference=DEFLECTION_METHOD, fixed=REACTIONS_AT_BUILD, computed=True,
     )  # fmt: skip
     span = sheet.input(
         "L_d", Quantity(worst.length, "m").to(length_unit),
-        f"Length of the {worst.kind} {worst.between}", fixed=LAYOUT,
+        f"Length of the {worst.kind} {worst.between}", fixed=LAYOUT, computed=True,
     )  # fmt: skip
     n_lim = sheet.input(
-        "n_lim", n, "Deflection limit ratio, δ ≤ L_d/n", dimension="dimensionless",
+        "n_lim", n, "Deflection limit ratio, {delta} ≤ {L_d}/{n_lim}", dimension="dimensionless",
         reference=LIMIT_SOURCE,
     )  # fmt: skip
     allowed = sheet.step("delta_allow", span / n_lim, "Deflection limit", unit=length_unit)
@@ -1428,7 +1452,8 @@ def _write_section_properties(
 ) -> dict[str, sp.Symbol | None]:
     sheet.heading("Section properties used")
     sheet.text(
-        f"Section: {section.name} ({family_title(section.family)}). Each property's source "
+        f"Section: {escape_marks(section.name)} ({family_title(section.family)}). "
+        "Each property's source "
         "is given beside it. Stress points are the labelled points of the section outline, "
         "with the centroid added where it lies in the material and, on open sections, points "
         "on the walls where transverse shear peaks."
@@ -1479,6 +1504,7 @@ def _write_section_properties(
             Quantity(rule.enclosed_area, f"{unit}**2"),
             "Area inside the wall mid-line, (B − t)·(H − t), square corners",
             reference="section dimensions",
+            computed=True,
         )
     elif rule.kind == "open" and not (torsion is not None and torsion.warping):
         props["t_max"] = sheet.input(
@@ -1512,7 +1538,8 @@ def _write_point_data(sheet: Sheet, section: Section, model: StressModel) -> lis
             [(point.number, model.x[i], model.y[i]) for i, point in enumerate(data)],
             unit,
         ),
-        f"Section {section.name} to scale, with the stress points numbered as in the table.",
+        f"Section {escape_marks(section.name)} to scale, with the stress points numbered as "
+        "in the table.",
     )
     # One table of the points and their cuts: a row per point, read across.
     dash = "—"
@@ -1623,10 +1650,11 @@ def _write_point_warping(
         values = PointWarping(
             sheet.input(
                 f"W_n_{n}", Quantity(float(warped.Wn_midline[index]), f"{unit}**2"),
-                listed=False,
+                listed=False, computed=True,
             ),
             sheet.input(
-                f"S_w_{n}", Quantity(float(warped.Sw[index]), f"{unit}**4"), listed=False
+                f"S_w_{n}", Quantity(float(warped.Sw[index]), f"{unit}**4"), listed=False,
+                computed=True,
             ),
             sheet.input(
                 f"t_w_{n}", Quantity(float(warped.thickness[index]), unit), listed=False
@@ -1821,12 +1849,13 @@ def _plan_torsion(
         "non-uniform torsion of a thin-walled open section (St Venant and warping)",
         "An open section (I, channel, tee or angle) warps when it twists, and where warping "
         "is restrained its flanges bend: the twist φ(z) is solved along the member from the "
-        "torsion differential equation G·J·φ′ − E·C_w·φ‴ = T in closed form (AISC Design "
+        "torsion differential equation {G}·{J}·φ′ − {E}·{C_w}·φ‴ = {T} in closed form (AISC Design "
         "Guide 9, Torsional Analysis of Structural Steel Members), with the member "
-        f"{twist.reason}. At the station the St Venant shear G·t·φ′, the warping "
-        "shear −E·S_w·φ‴/t and the warping normal stress E·W_n·φ″ are added at every point.",
+        f"{twist.reason}. At the station the St Venant shear {{G}}·{{t}}·φ′, the warping "
+        "shear −{E}·{S_w}·φ‴/{t} and the warping normal stress {E}·{W_n}·φ″ are added at every "
+        "point.",
         twist,
-        np.asarray(derivatives, dtype=float),
+        twist.without_round_off(derivatives),
         governing,
     )
 
@@ -1853,11 +1882,11 @@ def _write_torsion(
         unit = warping.length_unit
         x_s = sheet.input(
             "x_s", Quantity(warping.x_s, unit), "Shear centre from the centroid, x",
-            reference=SHEAR_CENTRE_SOURCE,
+            reference=SHEAR_CENTRE_SOURCE, computed=True,
         )  # fmt: skip
         y_s = sheet.input(
             "y_s", Quantity(warping.y_s, unit), "Shear centre from the centroid, y",
-            reference=SHEAR_CENTRE_SOURCE,
+            reference=SHEAR_CENTRE_SOURCE, computed=True,
         )  # fmt: skip
         twisting["T"] = sheet.step(
             "T_s",
@@ -1900,9 +1929,10 @@ def _write_torsion(
     )
     combination = "the governing combination" if torsion.governing else "the loads"
     sheet.text(
-        f"Derivatives of the twist at the station under {combination}, from the closed-form "
-        "solution of G·J·φ′ − E·C_w·φ‴ = T for the concentrated torques of the point loads "
-        "and couples and the uniform torques of the distributed loads about the shear "
+        f"Derivatives of the twist at the station under {escape_marks(combination)}, from "
+        "the closed-form solution of {G}·{J}·φ′ − {E}·{C_w}·φ‴ = {T} for the concentrated "
+        "torques of the point loads and couples and the uniform torques of the distributed "
+        "loads about the shear "
         "centre: {phi_1} = φ′, {phi_2} = φ″, {phi_3} = φ‴."
     )
     values = torsion.derivatives
@@ -1915,6 +1945,7 @@ def _write_torsion(
             description,
             reference=WARPING_REFERENCE,
             fixed=TWIST_AT_BUILD,
+            computed=True,
         )
         for power, (name, description, value) in enumerate(
             zip(names, words, values, strict=True), start=1

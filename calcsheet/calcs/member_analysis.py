@@ -187,7 +187,7 @@ def bracing_defaults(
         float(smallest[0]),
         f"the longest laterally unbraced segment between supports and brace points, {where}",
         "the smallest Eq. F1-1 value over the unbraced segments and every combination's "
-        "M_x diagram, AISC 360-22 Section F1",
+        "{M_x} diagram, AISC 360-22 Section F1",
     )
 
 
@@ -574,6 +574,11 @@ def force_diagrams(
 
 # A linearly varying distributed load's torque is taken as this many uniform pieces.
 _TORQUE_PIECES = 16
+# A twist derivative below this fraction of its largest magnitude along the member is
+# the round-off of a zero (MemberTwist.without_round_off); the closed form leaves ~1e-16.
+ROUND_OFF_OF_ZERO = 1e-8
+# Stations along the member at which that largest magnitude is taken.
+_SCALE_STATIONS = 97
 
 
 @dataclass(frozen=True, eq=False)
@@ -618,6 +623,24 @@ class MemberTwist:
         combined = self.solution.combined(self.weights)
         values = combined.derivatives(stations, "before" if side == "station" else "after")
         return np.moveaxis(values[..., 1:, :], -2, -1)
+
+    def without_round_off(self, values: ArrayLike) -> NDArray[np.float64]:
+        """``values`` (φ′, φ″, φ‴ in the last axis, 1/m, 1/m², 1/m³) with each that is the
+        round-off of a zero set to 0.
+
+        A derivative a boundary condition makes zero (φ′ at a fixed end, φ″ at a fork)
+        comes out of the closed form as ~1e-16 of its size elsewhere. The rule: below
+        :data:`ROUND_OFF_OF_ZERO` of the largest magnitude the same derivative takes
+        along the member under any load type, a value is zero; a value a checker should
+        see is a sizeable fraction of that.
+        """
+        assert self.solution is not None
+        grid = np.linspace(0.0, self.solution.length, _SCALE_STATIONS)
+        along = [self.derivatives(grid, side) for side in ("station", "right")]
+        scale = np.max(np.abs(np.concatenate(along, axis=1)), axis=(0, 1))  # (3,)
+        found = np.array(values, dtype=float)
+        found[np.abs(found) < ROUND_OFF_OF_ZERO * scale] = 0.0
+        return found
 
     def columns(self, stations: ArrayLike, side: str) -> NDArray[np.float64]:
         """The twist columns of a row of forces: G·φ′, E·φ″, E·φ‴ (Pa/m, Pa/m², Pa/m³),

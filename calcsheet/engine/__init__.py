@@ -6,6 +6,7 @@ Public API for calc authors (built-in calcs use nothing else)::
     from calcsheet.engine.functions import sqrt, sin, cos, tan, Min, Max, Abs, Piecewise
 """
 
+from calcsheet.engine.marked_text import escape_marks
 from calcsheet.engine.parts import (
     CAUTIONS,
     Check,
@@ -42,5 +43,6 @@ __all__ = [
     "Table",
     "TitleBlock",
     "as_written",
+    "escape_marks",
     "title_block_items",
 ]

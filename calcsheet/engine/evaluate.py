@@ -186,6 +186,34 @@ def _compiled(
     return (function, factors, (result.units, to_units))
 
 
+# A sum whose value lies below this fraction of its largest term is the round-off of a
+# sum that closes to zero: values carry 12 figures, so such a sum is left with ~1e-11 of
+# its terms, while a residual a checker must see (a lost load, a wrong sign) is a
+# sizeable fraction of a term.
+ROUND_OFF_OF_ZERO = 1e-8
+
+
+def sum_closes_to_zero(
+    expr: sp.Basic, total: pint.Quantity, values: Mapping[sp.Symbol, pint.Quantity]
+) -> bool:
+    """Whether ``total``, the value of the sum ``expr``, is the round-off of zero: not
+    zero itself, and below :data:`ROUND_OFF_OF_ZERO` of the sum's largest term."""
+    magnitude = abs(float(total.magnitude))
+    if not isinstance(expr, sp.Add) or magnitude == 0 or not math.isfinite(magnitude):
+        return False
+    try:
+        terms = [_walk(term, values) for term in expr.args]
+        largest = max(
+            abs(float(term.to(total.units).magnitude))
+            if isinstance(term, pint.Quantity)
+            else abs(float(Quantity(term, "").to(total.units).magnitude))
+            for term in terms
+        )
+    except (_ClashError, pint.DimensionalityError, ArithmeticError, ValueError, TypeError):
+        return False
+    return magnitude < ROUND_OFF_OF_ZERO * largest
+
+
 def chosen_branch(
     expr: sp.Piecewise, values: Mapping[sp.Symbol, pint.Quantity], *, step: str
 ) -> int:

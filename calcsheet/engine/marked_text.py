@@ -6,6 +6,10 @@ and every plain output (JSON, the command line, plain text) ``"Term from M_x"``.
 valid symbol name (see :mod:`calcsheet.engine.names`) between braces is a mark: other
 braces are text. The words between marks are escaped for the target, so a mark can
 never smuggle in markup.
+
+Text a user typed (a load's name, a combination's) is put into marked text through
+:func:`escape_marks`, so it always shows as typed: ``\\{``, ``\\}`` and ``\\\\`` stand for
+a literal brace and backslash, and every output turns them back.
 """
 
 from __future__ import annotations
@@ -18,24 +22,40 @@ from calcsheet.engine.names import GREEK_LETTERS, parse_symbol_name
 from calcsheet.engine.printers import PRINTERS
 from calcsheet.engine.typst_literal import typst_string
 
-_MARK = re.compile(r"\{([A-Za-z][A-Za-z0-9]*(?:_[A-Za-z0-9]+)*)\}")
+# An escaped brace or backslash (group 1), or a mark (group 2).
+_TOKEN = re.compile(r"\\([\\{}])|\{([A-Za-z][A-Za-z0-9]*(?:_[A-Za-z0-9]+)*)\}")
 
-__all__ = ["marked_pieces", "plain_text", "rich_text"]
+__all__ = ["escape_marks", "marked_pieces", "plain_text", "rich_text"]
+
+
+def escape_marks(text: object) -> str:
+    """``text`` (typed by a user) for a place that reads marks: it shows literally,
+    ``"beam {M_x}"`` as those characters and never as a symbol."""
+    return str(text).replace("\\", "\\\\").replace("{", "\\{").replace("}", "\\}")
 
 
 def marked_pieces(text: str) -> list[tuple[bool, str]]:
     """``text`` as (is a symbol, content) pieces in order; empty words are left out."""
+    if "{" not in text and "\\" not in text:  # most words: no mark, nothing escaped
+        return [(False, text)] if text else []
     pieces: list[tuple[bool, str]] = []
+    words: list[str] = []  # the text since the last mark, escapes resolved
     position = 0
-    for found in _MARK.finditer(text):
-        if len(found[1]) > 32:  # longer than any symbol name: text
+    for found in _TOKEN.finditer(text):
+        if found[2] is not None and len(found[2]) > 32:  # longer than any symbol name: text
             continue
-        if found.start() > position:
-            pieces.append((False, text[position : found.start()]))
-        pieces.append((True, found[1]))
+        words.append(text[position : found.start()])
         position = found.end()
-    if position < len(text):
-        pieces.append((False, text[position:]))
+        if found[1] is not None:
+            words.append(found[1])
+            continue
+        if "".join(words):
+            pieces.append((False, "".join(words)))
+        words = []
+        pieces.append((True, found[2]))
+    words.append(text[position:])
+    if "".join(words):
+        pieces.append((False, "".join(words)))
     return pieces
 
 

@@ -142,11 +142,15 @@ class Input(_Defined):
     ``listed`` False keeps it out of the inputs table (a table of the sheet
     shows it instead). A non-empty ``fixed`` says why the value cannot change
     without building the sheet again (it decided which steps the sheet has).
+    ``computed``: the value is a result the calc brings in (a reaction of the
+    analysis), printed to the sheet's figures for results; otherwise it is what the
+    engineer typed and prints as typed.
     """
 
     dimension: str | None = None
     listed: bool = True
     fixed: str = ""
+    computed: bool = False
 
 
 @dataclass(eq=False)

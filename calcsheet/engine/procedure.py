@@ -45,6 +45,7 @@ import pint
 import sympy as sp
 
 from calcsheet.engine.functions import Abs, Max, Piecewise, sqrt
+from calcsheet.engine.marked_text import escape_marks
 from calcsheet.engine.parts import Check, Input
 from calcsheet.engine.sheet import Sheet
 from calcsheet.errors import DefinitionError
@@ -108,8 +109,10 @@ class SheetWriter:
         dimension: str | None = None,
         fixed: str = "",
         unit: str | None = None,
+        computed: bool = False,
     ) -> sp.Symbol:
-        """Define an input, or reuse the sheet's input of that name when it has this value."""
+        """Define an input, or reuse the sheet's input of that name when it has this value
+        (``computed``: see :meth:`Sheet.input`)."""
         try:
             existing = self.sheet[name]
         except KeyError:
@@ -123,6 +126,7 @@ class SheetWriter:
                 dimension=dimension,
                 fixed=fixed,
                 unit=unit,
+                computed=computed,
             )
         elif isinstance(existing, Input) and _same(existing.value, value):
             if fixed and not existing.fixed:
@@ -223,6 +227,12 @@ class SheetWriter:
         """A name or text that depends on a decision (arrays: ``when_false``)."""
         return when_true if flag else when_false
 
+    @staticmethod
+    def literal(text: object) -> str:
+        """Text a user typed (a load's name) for a description or heading: shown as typed,
+        its braces never read as symbol marks (:func:`~calcsheet.engine.escape_marks`)."""
+        return escape_marks(text)
+
     def smallest(
         self, name: str, candidates: Sequence[Candidate], description: str, unit: str | None
     ) -> Value:
@@ -301,6 +311,7 @@ class ArrayWriter:
         dimension: str | None = None,
         fixed: str = "",
         unit: str | None = None,
+        computed: bool = False,
     ) -> Any:
         """The given array of that name, or the value in SI base units."""
         result = self.given_values[name] if name in self.given_values else _si(value, dimension)
@@ -381,6 +392,10 @@ class ArrayWriter:
     @staticmethod
     def label(flag: Flag, when_true: str, when_false: str) -> str:
         return when_false
+
+    @staticmethod
+    def literal(text: object) -> str:
+        return str(text)
 
     def quietly(self) -> ArrayWriter:
         return self

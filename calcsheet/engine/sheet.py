@@ -25,7 +25,7 @@ from functools import lru_cache
 import pint
 import sympy as sp
 
-from calcsheet.engine.evaluate import chosen_branch, evaluate
+from calcsheet.engine.evaluate import chosen_branch, evaluate, sum_closes_to_zero
 from calcsheet.engine.functions import Max, Min
 from calcsheet.engine.names import parse_symbol_name
 from calcsheet.engine.parts import (
@@ -228,6 +228,7 @@ class Sheet:
         reference: str = "",
         listed: bool = True,
         fixed: str = "",
+        computed: bool = False,
     ) -> sp.Symbol:
         """Add an input; returns its symbol for use in later steps.
 
@@ -237,6 +238,11 @@ class Sheet:
         out of the inputs table because a table of the sheet shows it. ``fixed``
         is the reason the input cannot be changed with :meth:`set_input` (it
         decided the layout of the sheet); build the sheet again instead.
+
+        An input prints as it was typed (15°, Ω = 1.67, 0.9 kip); ``computed=True``
+        marks a value the calc computed elsewhere (an analysis's reaction, a value from
+        a solution), which prints to the sheet's significant figures as results do
+        (0.900 kip): its figures are the number's precision, not the engineer's words.
         """
         symbol = self._new_symbol(name, "input")
         quantity = parse_quantity(value, field=f"input {name}", dimension=dimension)
@@ -250,6 +256,7 @@ class Sheet:
             dimension=dimension,
             listed=bool(listed),
             fixed=str(fixed),
+            computed=bool(computed),
         )
         self._store(part, quantity)
         return symbol
@@ -395,6 +402,8 @@ class Sheet:
             elif isinstance(part, Check):
                 checks.append((part, self._check_values(part, values)))
         self._values = values
+        for name in changes:  # now a value the engineer typed, printed as typed
+            self._defined[name].computed = False
         for check, (demand, capacity, utilization) in checks:
             check.demand_value, check.capacity_value, check.utilization = (
                 demand,
@@ -627,8 +636,12 @@ class Sheet:
     def _shown_value(self, symbol: sp.Symbol) -> Quantityish:
         shown = self._shown.get(symbol)
         if shown is None:
-            typed = isinstance(self._defined.get(symbol.name), Input)
-            shown = self._shown[symbol] = self._format(self._values[symbol], typed=typed)
+            part = self._defined.get(symbol.name)
+            typed = isinstance(part, Input) and not part.computed
+            quantity = self._values[symbol]
+            if isinstance(part, Step) and sum_closes_to_zero(part.expr, quantity, self._values):
+                quantity = quantity * 0  # ΣF = 5.9e-12 kip of 10 kip terms prints as 0 kip
+            shown = self._shown[symbol] = self._format(quantity, typed=typed)
         return shown
 
     def _format(self, quantity: pint.Quantity, *, typed: bool = False) -> Quantityish:

@@ -73,11 +73,12 @@ CHECK_TITLE = "Tip deflection"
 _ZERO_IXY = 1e-9
 _INTRO = (
     "Elastic, small deflections, shear deformation neglected; loads unfactored. Standard "
-    "cantilever cases (AISC Manual Table 3-23), a from the support: "
-    "a point load P gives P·a²·(3L − a)/(6EI) at the tip, a couple C gives "
-    "C·a·(2L − a)/(2EI). An axial force F_z at offsets e_x, e_y acts as the couples "
-    "e_y·F_z about x and −e_x·F_z about y at its station. v is the deflection along +y, "
-    "u along +x; a couple C_x > 0 deflects the tip toward −y. Components that are zero "
+    "cantilever cases (AISC Manual Table 3-23), {a} from the support: "
+    "a point load {P} gives {P}·{a}²·(3{L} − {a})/(6{E}{I}) at the tip, a couple {C} gives "
+    "{C}·{a}·(2{L} − {a})/(2{E}{I}). An axial force {F_z} at offsets {e_x}, {e_y} acts as the "
+    "couples {e_y}·{F_z} about x and −{e_x}·{F_z} about y at its station. {v} is the "
+    "deflection along +y, {u} along +x; a couple {C_x} > 0 deflects the tip toward −y. "
+    "Components that are zero "
     "are left out of the sums."
 )
 
@@ -189,13 +190,13 @@ def tip_deflection_procedure(
             delta = w.step("delta_tip", w.absolute(planes[0]), "Tip deflection")
     else:
         w.text(
-            "I_xy ≠ 0: the load terms are summed per plane (Φ_v for forces along y and "
-            "couples about x, Φ_u for the others) and combined by the unsymmetric formulas."
+            "{I_xy} ≠ 0: the load terms are summed per plane ({Phi_v} for forces along y and "
+            "couples about x, {Phi_u} for the others) and combined by the unsymmetric formulas."
         )
         # A plane without load terms drops out of both formulas (its Φ is zero).
         phi_v = w.step("Phi_v", _total(terms_v), "Load terms, v") if terms_v else None
         phi_u = w.step("Phi_u", _total(terms_u), "Load terms, u") if terms_u else None
-        D = w.step("D_I", I_x * I_y - I_xy**2, "I_x·I_y − I_xy²")
+        D = w.step("D_I", I_x * I_y - I_xy**2, "{I_x}·{I_y} − {I_xy}²")
         v_parts = [phi_v * I_y] if phi_v is not None else []
         u_parts = [phi_u * I_x] if phi_u is not None else []
         if phi_u is not None:
@@ -500,19 +501,23 @@ def _write_load_inputs(
     for number, load in enumerate(loads, start=1):
         tag = f"d{number}"
         a = w.input(
-            f"a_{tag}", load.z.to(unit), f"Distance of {load.name} from the support",
+            f"a_{tag}", load.z.to(unit), f"Distance of {w.literal(load.name)} from the support",
             dimension="length",
         )  # fmt: skip
         if isinstance(load, AppliedMoment):
             C = {
-                axis: w.input(f"C_{axis}_{tag}", value, f"Couple of {load.name} about {axis}")
+                axis: w.input(
+                    f"C_{axis}_{tag}", value, f"Couple of {w.literal(load.name)} about {axis}"
+                )
                 for axis, value in (("x", load.Mx), ("y", load.My))
                 if value.m != 0
             }
             written.append(LoadTerms(load.name, a, C_x=C.get("x"), C_y=C.get("y")))
             continue
         F = {
-            axis: w.input(f"F_{axis}_{tag}", load.component(axis), f"{load.name} along {axis}")
+            axis: w.input(
+                f"F_{axis}_{tag}", load.component(axis), f"{w.literal(load.name)} along {axis}"
+            )
             for axis in "xyz"
             if load.component(axis).m != 0
         }
@@ -521,8 +526,8 @@ def _write_load_inputs(
             for axis, value in (("x", load.ex), ("y", load.ey)):
                 if value.m != 0:
                     e[axis] = w.input(
-                        f"e_{axis}_{tag}", value.to(unit), f"Offset of {load.name} in {axis}",
-                        dimension="length",
+                        f"e_{axis}_{tag}", value.to(unit),
+                        f"Offset of {w.literal(load.name)} in {axis}", dimension="length",
                     )  # fmt: skip
         written.append(
             LoadTerms(

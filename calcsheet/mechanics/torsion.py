@@ -144,7 +144,7 @@ def torsion_rule(
     A section without wall dimensions takes its farthest point as the thickness.
     """
     if section.family in ROUND_FAMILIES:
-        return TorsionRule("round", "τ = T·r/J (round section)")
+        return TorsionRule("round", "{tau} = {T}·{r}/{J} (round section)")
     if section.family in CLOSED_RECTANGULAR_FAMILIES:
         (height,) = _dimension(section, ("H", "Ht"), unit)
         (width,) = _dimension(section, ("B",), unit)
@@ -152,7 +152,7 @@ def torsion_rule(
         enclosed = (width - wall) * (height - wall)
         return TorsionRule(
             "closed",
-            "τ = T/(2·A_m·t) (thin closed wall, Bredt)",
+            "{tau} = {T}/(2·{A_m}·{t}) (thin closed wall, Bredt)",
             thickness=wall,
             enclosed_area=enclosed,
         )
@@ -165,6 +165,6 @@ def torsion_rule(
     wall = max(walls)
     return TorsionRule(
         "open",
-        "τ = T·t_max/J (thin open walls, thickest wall)",
+        "{tau} = {T}·{t_max}/{J} (thin open walls, thickest wall)",
         thickness=wall,
     )

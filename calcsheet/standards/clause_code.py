@@ -26,16 +26,16 @@ def _014350b74fb2e48aa90f(N_c, A, M, W_el, h, c):
     return numpy.select([numpy.greater(N_c/A, -c*abs(M)/(W_el*h)),True], [(-c*abs(M)/(W_el*h) + N_c/A)/(c*abs(M)/(W_el*h) + N_c/A),-1], default=numpy.nan)
 
 
-def _019b0ae401412499e00e(w_z, w_y, C_mz, lambda_max, n_pl, c_LT, W_el_z, W_pl_z):
-    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term C_yz
-    # expression 7b94e6b1d46ab495aec2
-    return functools.reduce(numpy.maximum, [0.6*W_el_z*numpy.sqrt(w_z/w_y)/W_pl_z, (-c_LT + n_pl*(-14*C_mz**2*lambda_max**2/w_z**5 + 2))*(w_z - 1) + 1])
-
-
 def _027b898f729662e1ec84(E, F_y):
     # AISC 360-22 Table B4.1b Case 20: Limit λp, round HSS, flexure
     # expression 6b6def47ce058e80922e
     return 0.07*E/F_y
+
+
+def _02d03cf6ab306ddea859(C_my, a_LT, lambda_0, lambda_0_lim, r_z, r_T):
+    # EN 1993-1-1 Annex A, Table A.2: Equivalent uniform moment factor {C_mLT}
+    # expression 6944a5828cc6dd0cc29a
+    return numpy.select([numpy.less_equal(lambda_0, lambda_0_lim),numpy.greater((1 - r_T)*(1 - r_z), 0),True], [1,functools.reduce(numpy.maximum, [1, C_my**2*a_LT/numpy.sqrt((1 - r_T)*(1 - r_z))]),1], default=numpy.nan)
 
 
 def _035c0d914bb25ec7f5ce(E, F_y, L_v, D, D_t):
@@ -68,16 +68,28 @@ def _089986e6cbb4712a4c06(lam_r, lam, F_y):
     return 2.2201*F_y*lam_r**2/lam**2
 
 
+def _08d7dc40d9f8eccf5cb2(w_z, C_mz, lambda_max, n_pl, e_LT, W_el_z, W_pl_z):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term {C_zz}
+    # expression ccc0b0e200afd0c59bce
+    return functools.reduce(numpy.maximum, [W_el_z/W_pl_z, (-e_LT + n_pl*(-1.6*C_mz**2*lambda_max**2/w_z - 1.6*C_mz**2*lambda_max/w_z + 2))*(w_z - 1) + 1])
+
+
 def _099f5a92aad7b72b802a(E, nu):
     # EN 1993-1-1 3.2.6(1): Shear modulus
     # expression 0d48632a2ae683840ed3
     return E/(2*nu + 2)
 
 
-def _0d2c4b35e90672429701(N_Ed, N_cr):
-    # EN 1993-1-1 Annex A, Table A.1: Critical force ratio r = N_Ed/N_cr
-    # expression 7b5a09dd4e484fe07baf
-    return N_Ed/N_cr
+def _0abcf4569f948ff63b67(C_my, C_mLT, mu_y, r_y, C_yy, section_class):
+    # EN 1993-1-1 Annex A, Table A.1: Interaction factor {k_yy} (Method 1)
+    # expression e1fc3dc267f4757b97dc
+    return numpy.select([numpy.less_equal(section_class, 2),True], [C_mLT*C_my*mu_y/(C_yy*(1 - r_y)),C_mLT*C_my*mu_y/(1 - r_y)], default=numpy.nan)
+
+
+def _0adf476e694febdd65ef(psi, r):
+    # EN 1993-1-1 Annex A, Table A.2: {C_mi_0} for end moments (ψ) or a uniform moment (ψ = 1)
+    # expression 3a12862e9a711196a587
+    return 0.21*psi + r*(0.36*psi - 0.1188) + 0.79
 
 
 def _1065ebafe9d0406926f1(M_p, F_y, S, lam, lam_rf, E, S_e):
@@ -120,6 +132,12 @@ def _18093701ba6af73f1e51(M_pl_y_Rd, n, a):
     # EN 1993-1-1 Eq. (6.36): Reduced major-axis plastic moment of an I-section
     # expression 347d64da819a5807c838
     return functools.reduce(numpy.minimum, [M_pl_y_Rd, M_pl_y_Rd*(1 - n)/(1 - 1/2*a)])
+
+
+def _1bac423d00a775e682c5(f_235, f_y):
+    # EN 1993-1-1 Table 5.2: ε = √(235/{f_y})
+    # expression 515b0aec15468072be21
+    return numpy.sqrt(f_235/f_y)
 
 
 def _1c2783bbded1c5ead865(F_y, S):
@@ -182,10 +200,10 @@ def _23171e67a033b3a49780(A, b, t_f, t_w, r, h_w, eta):
     return functools.reduce(numpy.maximum, [eta*h_w*t_w, A - 2*b*t_f + t_f*(2*r + t_w)])
 
 
-def _2381b275e0a8f30c5bed(k_c):
-    # EN 1993-1-1 Annex A, Table A.2: Factor C1 = k_c⁻²
-    # expression 24f86a2a37775dd2b3ad
-    return k_c**(-2.0)
+def _258848dbdc25a51bdbfe(k_zz, section_class):
+    # EN 1993-1-1 Annex B, Table B.1: Interaction factor {k_yz}
+    # expression 0d139d9445353a67bbb9
+    return numpy.select([numpy.less_equal(section_class, 2),True], [0.6*k_zz,k_zz], default=numpy.nan)
 
 
 def _271cee536b13a0021df0(A_v, f_y, gamma_M0):
@@ -206,6 +224,12 @@ def _2849cee110596e703bb8(A, f_y, N_cr):
     return numpy.sqrt(A*f_y/N_cr)
 
 
+def _2a3a4952d025e541bc8c(C_mz, mu_z, r_z, C_zz, section_class):
+    # EN 1993-1-1 Annex A, Table A.1: Interaction factor {k_zz} (Method 1)
+    # expression 4889372fd95577256d94
+    return numpy.select([numpy.less_equal(section_class, 2),True], [C_mz*mu_z/(C_zz*(1 - r_z)),C_mz*mu_z/(1 - r_z)], default=numpy.nan)
+
+
 def _2b12a2220bce94c6e2e6(E, F_y, D_t, A_g):
     # AISC 360-22 Eq. E7-6: Effective area of a round HSS
     # expression acb9fcfde25855bca109
@@ -216,6 +240,12 @@ def _2b716ad4aa8ffaa35003(Phi_LT, lambda_LT, beta):
     # EN 1993-1-1 Eq. (6.57): Reduction factor for lateral-torsional buckling, rolled
     # expression 2b99b3f4bea66a8ae504
     return functools.reduce(numpy.minimum, [1, lambda_LT**(-2.0), (Phi_LT + numpy.sqrt(Phi_LT**2 - beta*lambda_LT**2))**(-1.0)])
+
+
+def _2bb71fcd792abc81cc33(C_mz, lambda_z, n_z, section_class):
+    # EN 1993-1-1 Annex B, Table B.1: Interaction factor {k_zz}, hollow section
+    # expression b18a461b65e9665f3856
+    return numpy.select([numpy.less_equal(section_class, 2),True], [C_mz*functools.reduce(numpy.minimum, [0.8*n_z + 1, n_z*(lambda_z - 0.2) + 1]),C_mz*functools.reduce(numpy.minimum, [0.6*n_z + 1, 0.6*lambda_z*n_z + 1])], default=numpy.nan)
 
 
 def _2bde56bed6e23b72e999(F_cr, A_e):
@@ -246,6 +276,12 @@ def _2fca0588d8c734e7a6ad(W_pl_y, W_el_y, section_class):
     # EN 1993-1-1 6.3.2.2(1): Section modulus for lateral-torsional buckling
     # expression cafc46190d87a4080415
     return numpy.select([numpy.less_equal(section_class, 2),numpy.less_equal(section_class, 3)], [W_pl_y,W_el_y], default=numpy.nan)
+
+
+def _3078f856876962e622f0(C_my, lambda_y, n_y, section_class):
+    # EN 1993-1-1 Annex B, Table B.1: Interaction factor {k_yy}
+    # expression 8e668b6cdfc43e3298c0
+    return numpy.select([numpy.less_equal(section_class, 2),True], [C_my*functools.reduce(numpy.minimum, [0.8*n_y + 1, n_y*(lambda_y - 0.2) + 1]),C_my*functools.reduce(numpy.minimum, [0.6*n_y + 1, 0.6*lambda_y*n_y + 1])], default=numpy.nan)
 
 
 def _30e18a8c76376011cf84(F_u, A_e):
@@ -284,12 +320,6 @@ def _34d36e5b7ebacfd877bc(eps):
     return 42*eps
 
 
-def _3639662b79ee84ccc5a3(alpha_LT, lambda_LT):
-    # EN 1993-1-1 6.3.2.2(1): Value to determine χ_LT, general case
-    # expression 49f3f66d56fc53a12c4e
-    return (1/2)*alpha_LT*(lambda_LT - 0.2) + (1/2)*lambda_LT**2 + 1/2
-
-
 def _3652991feed9a791d723(E, F_y):
     # AISC 360-22 Table B4.1a Case 6: Limit λr, wall of a rectangular HSS, axial compression
     # expression 8ff5794b5c1fb26fd139
@@ -314,16 +344,22 @@ def _3a79fb2edff5bd0b68de(h_tw, k_v, E, F_y):
     return numpy.select([numpy.less_equal(h_tw, 1.1*numpy.sqrt(E*k_v/F_y)),numpy.less_equal(h_tw, 1.37*numpy.sqrt(E*k_v/F_y)),True], [1,1.1*numpy.sqrt(E*k_v/F_y)/h_tw,1.51*E*k_v/(F_y*h_tw**2)], default=numpy.nan)
 
 
+def _3ac74121876738f136bf(C_my, C_mLT, mu_z, r_y, C_zy, w_y, w_z, section_class):
+    # EN 1993-1-1 Annex A, Table A.1: Interaction factor {k_zy} (Method 1)
+    # expression ac61001bff5ddfb4353c
+    return numpy.select([numpy.less_equal(section_class, 2),True], [0.6*C_mLT*C_my*mu_z*numpy.sqrt(w_y/w_z)/(C_zy*(1 - r_y)),C_mLT*C_my*mu_z/(1 - r_y)], default=numpy.nan)
+
+
+def _3c09c6f13ec3b00d1c77(a_LT, lambda_0, lambda_z, M_y_Ed, C_my, chi_LT, M_pl_y_Rd, M_z_Ed, C_mz, M_pl_z_Rd):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term {d_LT}
+    # expression 4406c4c7f0c37849579c
+    return 2*a_LT*lambda_0*abs(M_y_Ed)*abs(M_z_Ed)/(C_my*C_mz*M_pl_y_Rd*M_pl_z_Rd*chi_LT*(lambda_z**4 + 0.1))
+
+
 def _3c7ebd3189d3c028c5f5(eps):
     # EN 1993-1-1 Table 5.2 (sheet 1): Class 2 limit of an internal part in compression
     # expression 21f8d3b1de72b1f48061
     return 38*eps
-
-
-def _3c805c9fdf7acd6195d4(r):
-    # EN 1993-1-1 Annex A, Table A.2: C_mi,0 for a central point load
-    # expression e81119fa9125bdc416f1
-    return 0.03*r + 1
 
 
 def _3ed5b3bc7cf73a850e6e(d, t_f):
@@ -356,6 +392,12 @@ def _44856750aab618fce045(N_Ed, N_Rd, M_y_Ed, M_y_Rd, M_z_Ed, M_z_Rd):
     return abs(N_Ed)/N_Rd + abs(M_z_Ed)/M_z_Rd + abs(M_y_Ed)/M_y_Rd
 
 
+def _45f91c8b2282b65bb33a(k_c):
+    # EN 1993-1-1 Annex A, Table A.2: Factor C1 = {k_c}⁻²
+    # expression 24f86a2a37775dd2b3ad
+    return k_c**(-2.0)
+
+
 def _46da740437d2a0e6081c(M_pl_Rd, n, a):
     # EN 1993-1-1 Eq. (6.39), (6.40): Reduced plastic moment of an RHS
     # expression ada8a6e7d995f3b785a2
@@ -368,22 +410,16 @@ def _48cf1504573184e3e7c3(L_c, r):
     return L_c/r
 
 
-def _4a71c28a87eed589b99d(C_my, lambda_y, n_y, section_class):
-    # EN 1993-1-1 Annex B, Table B.1: Interaction factor k_yy
-    # expression 8e668b6cdfc43e3298c0
-    return numpy.select([numpy.less_equal(section_class, 2),True], [C_my*functools.reduce(numpy.minimum, [0.8*n_y + 1, n_y*(lambda_y - 0.2) + 1]),C_my*functools.reduce(numpy.minimum, [0.6*n_y + 1, 0.6*lambda_y*n_y + 1])], default=numpy.nan)
+def _4c04d8ff8d3aeb264672(I_t, I_y):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term {a_LT}
+    # expression b941de2eb4708831fe61
+    return functools.reduce(numpy.maximum, [0, -I_t/I_y + 1])
 
 
 def _4c572a4a891be19ac5bf(b_f):
     # AISC 360-22 Section B4.1a: Flange half-width, b = bf/2 (rolled I-shape)
     # expression ef6a6b665d0c53b41b48
     return (1/2)*b_f
-
-
-def _4d1a197468d145163f09(d, k_des):
-    # AISC 360-22 Section B4.1b: Web height, h = d − 2·k_des (rolled shape, fillets excluded)
-    # expression 547046bc175cd02c08d0
-    return d - 2*k_des
 
 
 def _4d310390b2d67881c8e4(M_y):
@@ -396,12 +432,6 @@ def _4d33f7a11b29c455b519(n_z, k_zy, M_y_Ed, chi_LT, M_y_Rk, k_zz, M_z_Ed, M_z_R
     # EN 1993-1-1 Eq. (6.62): Bending and axial compression, buckling about z-z
     # expression d06027cd009b3c69ea06
     return n_z + gamma_M1*k_zz*abs(M_z_Ed)/M_z_Rk + gamma_M1*k_zy*abs(M_y_Ed)/(M_y_Rk*chi_LT)
-
-
-def _4ec718cba79e8b37b591(psi, r):
-    # EN 1993-1-1 Annex A, Table A.2: C_mi,0 for end moments (ψ) or a uniform moment (ψ = 1)
-    # expression 3a12862e9a711196a587
-    return 0.21*psi + r*(0.36*psi - 0.1188) + 0.79
 
 
 def _50e61967187a168d41ce(r_y, E, F_y):
@@ -446,16 +476,22 @@ def _55203b5f614e26ba2a23(n, section_class):
     return numpy.select([numpy.less_equal(section_class, 2),True], [functools.reduce(numpy.maximum, [1, 5*n]),1], default=numpy.nan)
 
 
-def _585c402d6710eb4c9b13(C_mz, mu_z, r_z, C_zz, section_class):
-    # EN 1993-1-1 Annex A, Table A.1: Interaction factor k_zz (Method 1)
-    # expression 4889372fd95577256d94
-    return numpy.select([numpy.less_equal(section_class, 2),True], [C_mz*mu_z/(C_zz*(1 - r_z)),C_mz*mu_z/(1 - r_z)], default=numpy.nan)
+def _589d0ad57d94b60f4c8c(A, b, t):
+    # EN 1993-1-1 6.2.9.1(5): Web area ratio {a_w} of an RHS
+    # expression aa29a9e86ac8598d7feb
+    return functools.reduce(numpy.minimum, [0.5, (A - 2*b*t)/A])
 
 
 def _598ba5e37cc8e3e61a98(C_1, C_2, z_g, E, I_z, I_w, G, I_t, L_LT):
     # NCCI SN003a-EN-EU (Access Steel), Elastic critical moment for lateral torsional buckling: three-factor formula, k = k_w: Elastic critical moment for lateral-torsional buckling
     # expression a52c8a43208c508b2c9d
     return numpy.pi**2*C_1*E*I_z*(-C_2*z_g + numpy.sqrt(C_2**2*z_g**2 + I_w/I_z + G*I_t*L_LT**2/(numpy.pi**2*E*I_z)))/L_LT**2
+
+
+def _5a523d462bc085a715c9(a_LT, lambda_0, lambda_z, M_y_Ed, C_my, chi_LT, M_pl_y_Rd):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term {e_LT}
+    # expression adeba23d3423b09471da
+    return 1.7*a_LT*lambda_0*abs(M_y_Ed)/(C_my*M_pl_y_Rd*chi_LT*(lambda_z**4 + 0.1))
 
 
 def _601dfd4344d06680c615(M_y, M_cr):
@@ -500,10 +536,10 @@ def _66a39b40f967fff16a4f(E, F_y):
     return 0.54*numpy.sqrt(E/F_y)
 
 
-def _67335d2d056bcf32bf6a(a_LT, lambda_0, lambda_z, M_y_Ed, C_my, chi_LT, M_pl_y_Rd):
-    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term c_LT
-    # expression b800764b2b4f7e736507
-    return 10*a_LT*lambda_0**2*abs(M_y_Ed)/(C_my*M_pl_y_Rd*chi_LT*(lambda_z**4 + 5))
+def _6717a9cc3d66fbede095(w_y, w_z, C_my, lambda_max, n_pl, d_LT, W_el_y, W_pl_y):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term {C_zy}
+    # expression b74aa1bdb1a71561356b
+    return functools.reduce(numpy.maximum, [0.6*W_el_y*numpy.sqrt(w_y/w_z)/W_pl_y, (-d_LT + n_pl*(-14*C_my**2*lambda_max**2/w_y**5 + 2))*(w_y - 1) + 1])
 
 
 def _69e42f02943e8bb4e4ba(sigma_x, sigma_z, tau, f_y, gamma_M0):
@@ -512,16 +548,22 @@ def _69e42f02943e8bb4e4ba(sigma_x, sigma_z, tau, f_y, gamma_M0):
     return gamma_M0**2*sigma_x**2/f_y**2 - gamma_M0**2*sigma_x*sigma_z/f_y**2 + gamma_M0**2*sigma_z**2/f_y**2 + 3*gamma_M0**2*tau**2/f_y**2
 
 
-def _6ad56a60640c932ca1f6(w_y, w_z, C_my, lambda_max, n_pl, d_LT, W_el_y, W_pl_y):
-    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term C_zy
-    # expression b74aa1bdb1a71561356b
-    return functools.reduce(numpy.maximum, [0.6*W_el_y*numpy.sqrt(w_y/w_z)/W_pl_y, (-d_LT + n_pl*(-14*C_my**2*lambda_max**2/w_y**5 + 2))*(w_y - 1) + 1])
-
-
 def _6b59ee406761b4ca5566(E, F_y):
     # AISC 360-22 Table B4.1b Case 20: Limit λr, round HSS, flexure
     # expression ba60d3ef0bfee0b95f40
     return 0.31*E/F_y
+
+
+def _6c14c7afc0b04bc53981(W_pl, W_el):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term w = {W_pl}/{W_el} ≤ 1.5
+    # expression f4f697ca1c4a14df697a
+    return functools.reduce(numpy.minimum, [1.5, W_pl/W_el])
+
+
+def _6f1b5550e44f0984e61d(w_y, C_my, lambda_max, n_pl, b_LT, W_el_y, W_pl_y):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term {C_yy}
+    # expression 759f4c42562f49eb798d
+    return functools.reduce(numpy.maximum, [W_el_y/W_pl_y, (-b_LT + n_pl*(-1.6*C_my**2*lambda_max**2/w_y - 1.6*C_my**2*lambda_max/w_y + 2))*(w_y - 1) + 1])
 
 
 def _72354d9a1abc03a1830f(lam_r, lam, F_y):
@@ -540,12 +582,6 @@ def _75c4563aad20d6a60e7e(C_b, E, L_b, r_ts, J, c, S_x, h_o):
     # AISC 360-22 Eq. F2-4: Critical stress for lateral-torsional buckling
     # expression 11c913d3ba6c08a6f16f
     return numpy.pi**2*C_b*E*r_ts**2*numpy.sqrt(0.078*J*L_b**2*c/(S_x*h_o*r_ts**2) + 1)/L_b**2
-
-
-def _76225f3627a2ecf3c047(a_LT, lambda_0, M_y_Ed, chi_LT, M_pl_y_Rd, M_z_Ed, M_pl_z_Rd):
-    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term b_LT
-    # expression 9e2817142db9818ebb5d
-    return (1/2)*a_LT*lambda_0**2*abs(M_y_Ed)*abs(M_z_Ed)/(M_pl_y_Rd*M_pl_z_Rd*chi_LT)
 
 
 def _7706b88a8c1199acc1fb(N_Ed, N_pl_Rd):
@@ -572,18 +608,6 @@ def _7b4656f4ad858bdda0b9(F_y):
     return F_y
 
 
-def _7bd6d61e146e7989f175(f_235, f_y):
-    # EN 1993-1-1 Table 5.2: ε = √(235/f_y)
-    # expression 515b0aec15468072be21
-    return numpy.sqrt(f_235/f_y)
-
-
-def _7e43753793b6314a1e7e(N_Ed, A, f_y, gamma_M1):
-    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term n_pl
-    # expression 8cb77420f6b79da407bf
-    return N_Ed*gamma_M1/(A*f_y)
-
-
 def _815c301704bf0d8e1cd5(E, F_y):
     # AISC 360-22 Table B4.1b Case 19: Limit λp, web of a rectangular HSS, flexure
     # expression 3a3fe7cc1dbd0f233257
@@ -596,12 +620,6 @@ def _81e10ae4b43b376ab6b4(F_y, b_f, t_f, C_v2):
     return 1.2*C_v2*F_y*b_f*t_f
 
 
-def _8265540d33c1c74714f1(w_y, C_my, lambda_max, n_pl, b_LT, W_el_y, W_pl_y):
-    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term C_yy
-    # expression 759f4c42562f49eb798d
-    return functools.reduce(numpy.maximum, [W_el_y/W_pl_y, (-b_LT + n_pl*(-1.6*C_my**2*lambda_max**2/w_y - 1.6*C_my**2*lambda_max/w_y + 2))*(w_y - 1) + 1])
-
-
 def _835c5007267a8446fffb(F_y, Z_y, S_y):
     # AISC 360-22 Eq. F6-1: Nominal flexural strength, yielding (minor axis)
     # expression eb77fc16745bc940ff21
@@ -612,6 +630,12 @@ def _83ef9733f5073f1f1857(E, F_y):
     # AISC 360-22 Table B4.1b Case 15: Limit λr, web of a doubly symmetric I-shape, flexure
     # expression 086ab2f9163d829e242f
     return 5.7*numpy.sqrt(E/F_y)
+
+
+def _8579c9d60769d3a8d29c(N_Ed, N_cr):
+    # EN 1993-1-1 Annex A, Table A.1: Critical force ratio r = {N_Ed}/{N_cr}
+    # expression 7b5a09dd4e484fe07baf
+    return N_Ed/N_cr
 
 
 def _87335147d7601893e884(h_tw):
@@ -656,10 +680,10 @@ def _8b0a3edbcdf2b3e765fd(A, h_load, h_other):
     return A*h_load/(h_load + h_other)
 
 
-def _8d5c40638086fb532e53(C_my_0, lambda_0, lambda_0_lim, M_y_Ed, N_Ed, A, W_el_y, a_LT, r_y):
-    # EN 1993-1-1 Annex A, Table A.2: Equivalent uniform moment factor C_my
-    # expression c65d60e151d3b34f26c1
-    return numpy.select([numpy.less_equal(lambda_0, lambda_0_lim),numpy.less_equal(r_y, 0),True], [C_my_0,1,C_my_0 + a_LT*numpy.sqrt(A/(N_Ed*W_el_y))*(1 - C_my_0)*numpy.sqrt(abs(M_y_Ed))/(a_LT*numpy.sqrt(A/(N_Ed*W_el_y))*numpy.sqrt(abs(M_y_Ed)) + 1)], default=numpy.nan)
+def _8d744ebacd65536bc32c(d, k_des):
+    # AISC 360-22 Section B4.1b: Web height, {h} = {d} − 2·{k_des} (rolled shape, fillets excluded)
+    # expression 547046bc175cd02c08d0
+    return d - 2*k_des
 
 
 def _8faef24ad81d91963278(E, b, t, C_b, L_b):
@@ -668,28 +692,22 @@ def _8faef24ad81d91963278(E, b, t, C_b, L_b):
     return 0.58*C_b*E*b**4*t*(numpy.sqrt(0.88*L_b**2*t**2/b**4 + 1) - 1)/L_b**2
 
 
-def _8fb1f20cb2acc4c4534d(C_mz, mu_y, r_z, C_yz, w_z, w_y, section_class):
-    # EN 1993-1-1 Annex A, Table A.1: Interaction factor k_yz (Method 1)
-    # expression 705d1c3ce35be1cfc4ca
-    return numpy.select([numpy.less_equal(section_class, 2),True], [0.6*C_mz*mu_y*numpy.sqrt(w_z/w_y)/(C_yz*(1 - r_z)),C_mz*mu_y/(1 - r_z)], default=numpy.nan)
-
-
 def _92567c67f1ace904d72b(eps, alpha):
     # EN 1993-1-1 Table 5.2 (sheet 1): Class 1 limit of an internal part
     # expression 9b9bd93673a09d933586
     return numpy.select([numpy.greater(alpha, 0.5),True], [396*eps/(13*alpha - 1),36*eps/alpha], default=numpy.nan)
 
 
-def _92881d4f8ccdcaeacbea(r):
-    # EN 1993-1-1 Annex A, Table A.2: C_mi,0 for a uniform load
-    # expression d22d3001e283e3415b81
-    return 1 - 0.18*r
-
-
 def _92f6cca6f37c3f85a98d(F_y):
     # AISC 360-22 Eq. H3-8: Nominal stress, shear yielding
     # expression 3531dc15afa1c3c380c1
     return 0.6*F_y
+
+
+def _95241162cab57d594696(alpha_LT, lambda_LT):
+    # EN 1993-1-1 6.3.2.2(1): Value to determine {chi_LT}, general case
+    # expression 49f3f66d56fc53a12c4e
+    return (1/2)*alpha_LT*(lambda_LT - 0.2) + (1/2)*lambda_LT**2 + 1/2
 
 
 def _95f71cf0b5c5f5fc55d1(b, t):
@@ -732,18 +750,6 @@ def _99609295bc094468c016(A, h_w, t_w):
     # EN 1993-1-1 6.2.6(3)e: Shear area of an I-section, load parallel to the flanges
     # expression fc0b86f61b049afe7451
     return A - h_w*t_w
-
-
-def _99b21762da528edc644b(C_my, a_LT, lambda_0, lambda_0_lim, r_z, r_T):
-    # EN 1993-1-1 Annex A, Table A.2: Equivalent uniform moment factor C_mLT
-    # expression 6944a5828cc6dd0cc29a
-    return numpy.select([numpy.less_equal(lambda_0, lambda_0_lim),numpy.greater((1 - r_T)*(1 - r_z), 0),True], [1,functools.reduce(numpy.maximum, [1, C_my**2*a_LT/numpy.sqrt((1 - r_T)*(1 - r_z))]),1], default=numpy.nan)
-
-
-def _99d379be385fc9775b71(alpha_LT, lambda_LT, lambda_LT_0, beta):
-    # EN 1993-1-1 6.3.2.3(1): Value to determine χ_LT, rolled or equivalent welded
-    # expression c0d46e2aec8bb27ba4f4
-    return (1/2)*alpha_LT*(lambda_LT - lambda_LT_0) + (1/2)*beta*lambda_LT**2 + 1/2
 
 
 def _9a57fb3ce9b2d0889950(N_Ed, A, M_y_Ed, W_el_y, M_z_Ed, W_el_z):
@@ -794,16 +800,16 @@ def _a53ff0c576f5e3706dc2(A_g, b_1, b_e1, b_2, b_e2, t):
     return A_g - t*(b_1 - b_e1) - t*(b_2 - b_e2)
 
 
+def _abcd62f588d858168019(r):
+    # EN 1993-1-1 Annex A, Table A.2: {C_mi_0} for a uniform load
+    # expression d22d3001e283e3415b81
+    return 1 - 0.18*r
+
+
 def _ac130d50381924e62236(K, L):
     # AISC 360-22 Section E2: Effective length, Lc = K·L
     # expression 92199254275541027b3b
     return K*L
-
-
-def _ac22d7bf1f572636b028(C_mz, lambda_z, n_z, section_class):
-    # EN 1993-1-1 Annex B, Table B.1: Interaction factor k_zz, I-section
-    # expression fb39b8bb1c1a0ae7453f
-    return numpy.select([numpy.less_equal(section_class, 2),True], [C_mz*functools.reduce(numpy.minimum, [1.4*n_z + 1, n_z*(2*lambda_z - 0.6) + 1]),C_mz*functools.reduce(numpy.minimum, [0.6*n_z + 1, 0.6*lambda_z*n_z + 1])], default=numpy.nan)
 
 
 def _ac2cce500bb9f9473b01(r, chi):
@@ -812,16 +818,22 @@ def _ac2cce500bb9f9473b01(r, chi):
     return (1 - r)/(-chi*r + 1)
 
 
+def _ad53b22d8e0b08f7ff1a(w_z, w_y, C_mz, lambda_max, n_pl, c_LT, W_el_z, W_pl_z):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term {C_yz}
+    # expression 7b94e6b1d46ab495aec2
+    return functools.reduce(numpy.maximum, [0.6*W_el_z*numpy.sqrt(w_z/w_y)/W_pl_z, (-c_LT + n_pl*(-14*C_mz**2*lambda_max**2/w_z**5 + 2))*(w_z - 1) + 1])
+
+
 def _adf237c4ca007462e211(h_w, t_w, eta):
     # EN 1993-1-1 6.2.6(3)d: Shear area of a welded I-section, load parallel to the web
     # expression e33f93f62e06bad49456
     return eta*h_w*t_w
 
 
-def _ae1d613b4853658c0eaf(a_LT, lambda_0, lambda_z, M_y_Ed, C_my, chi_LT, M_pl_y_Rd):
-    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term e_LT
-    # expression adeba23d3423b09471da
-    return 1.7*a_LT*lambda_0*abs(M_y_Ed)/(C_my*M_pl_y_Rd*chi_LT*(lambda_z**4 + 0.1))
+def _ae9ef52d2817878b2e18(a_LT, lambda_0, M_y_Ed, chi_LT, M_pl_y_Rd, M_z_Ed, M_pl_z_Rd):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term {b_LT}
+    # expression 9e2817142db9818ebb5d
+    return (1/2)*a_LT*lambda_0**2*abs(M_y_Ed)*abs(M_z_Ed)/(M_pl_y_Rd*M_pl_z_Rd*chi_LT)
 
 
 def _af7659c74651c5b9bd4c(section_class):
@@ -830,16 +842,16 @@ def _af7659c74651c5b9bd4c(section_class):
     return numpy.select([numpy.less_equal(section_class, 2),True], [2,1], default=numpy.nan)
 
 
+def _af961b31dcfe5cdaec58(N_Ed, chi, A, f_y, gamma_M1):
+    # EN 1993-1-1 Eq. (6.61), (6.62): Axial force ratio for buckling, n = {N_Ed}/{N_b_Rd}
+    # expression ccc1468ea91a9d7409b9
+    return N_Ed*gamma_M1/(A*chi*f_y)
+
+
 def _b1f4e73d2c6f47dfbf0a(F_y, S_c, lam, lam_r, E):
     # AISC 360-22 Eq. F10-6, F10-7, F10-8: Nominal flexural strength, leg local buckling
     # expression b26d990aa331a1150fd8
     return numpy.select([numpy.less_equal(lam, lam_r),True], [F_y*S_c*(-1.72*lam*numpy.sqrt(F_y/E) + 2.43),0.71*E*S_c/lam**2], default=numpy.nan)
-
-
-def _b2a85c70f13ebd5b2987(w_z, C_mz, lambda_max, n_pl, e_LT, W_el_z, W_pl_z):
-    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term C_zz
-    # expression ccc0b0e200afd0c59bce
-    return functools.reduce(numpy.maximum, [W_el_z/W_pl_z, (-e_LT + n_pl*(-1.6*C_mz**2*lambda_max**2/w_z - 1.6*C_mz**2*lambda_max/w_z + 2))*(w_z - 1) + 1])
 
 
 def _b4363fd7287a59f6797d(P_r, P_c, M_rx, M_cx, M_ry, M_cy, v_ratio, T_r, T_c, eta_H1):
@@ -884,6 +896,12 @@ def _ba4ca434718b6d9e923b(eps, psi):
     return numpy.select([numpy.greater(psi, -1),True], [42*eps/(0.33*psi + 0.67),62*eps*numpy.sqrt(-psi)*(1 - psi)], default=numpy.nan)
 
 
+def _bc452a7cd30d6d519593(N_Ed, A, f_y, gamma_M1):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term {n_pl}
+    # expression 8cb77420f6b79da407bf
+    return N_Ed*gamma_M1/(A*f_y)
+
+
 def _bd93fd2bc7eff38e5fe7(alpha, lambda_rel):
     # EN 1993-1-1 6.3.1.2(1): Value to determine the reduction factor χ
     # expression 7beaf44b036bf7c0a6b6
@@ -894,12 +912,6 @@ def _c032b3011077b89fa653(M_pl_z_Rd, n, a):
     # EN 1993-1-1 Eq. (6.37), (6.38): Reduced minor-axis plastic moment of an I-section
     # expression a7577ca2a7988b0f4528
     return numpy.select([numpy.greater_equal(a, n),True], [M_pl_z_Rd,M_pl_z_Rd*(1 - (-a + n)**2/(1 - a)**2)], default=numpy.nan)
-
-
-def _c0b7eebd49a820f4dc3a(a_LT, lambda_0, lambda_z, M_y_Ed, C_my, chi_LT, M_pl_y_Rd, M_z_Ed, C_mz, M_pl_z_Rd):
-    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term d_LT
-    # expression 4406c4c7f0c37849579c
-    return 2*a_LT*lambda_0*abs(M_y_Ed)*abs(M_z_Ed)/(C_my*C_mz*M_pl_y_Rd*M_pl_z_Rd*chi_LT*(lambda_z**4 + 0.1))
 
 
 def _c0f6e5e77cdcb251f7cd(E, F_y):
@@ -944,12 +956,6 @@ def _c6e176136677cf461d73(C_m, alpha, P_r, P_e1):
     return numpy.select([numpy.greater_equal(P_r/P_e1, 0),numpy.less(alpha*abs(P_r), P_e1)], [1,functools.reduce(numpy.maximum, [1, C_m/(1 - alpha*abs(P_r)/P_e1)])], default=numpy.nan)
 
 
-def _c70d3566cccccd2d2e95(A, h, t):
-    # EN 1993-1-1 6.2.9.1(5): Flange area ratio a_f of an RHS
-    # expression 547eb829b8d846322511
-    return functools.reduce(numpy.minimum, [0.5, (A - 2*h*t)/A])
-
-
 def _c79722bdf79a3591bc10(W_pl, W_el, f_y, gamma_M0, section_class):
     # EN 1993-1-1 Eq. (6.13), (6.14): Bending resistance for the section class
     # expression 0ef822dbee9a4e6e5af3
@@ -974,16 +980,22 @@ def _cdd01aabd4c18f908303(F_y, Z):
     return F_y*Z
 
 
+def _ced9f646bfb9306d6188(C_mz, mu_y, r_z, C_yz, w_z, w_y, section_class):
+    # EN 1993-1-1 Annex A, Table A.1: Interaction factor {k_yz} (Method 1)
+    # expression 705d1c3ce35be1cfc4ca
+    return numpy.select([numpy.less_equal(section_class, 2),True], [0.6*C_mz*mu_y*numpy.sqrt(w_z/w_y)/(C_yz*(1 - r_z)),C_mz*mu_y/(1 - r_z)], default=numpy.nan)
+
+
 def _d13bbe9b922aeab20ddc(F_y, A_w, C_v2):
     # AISC 360-22 Eq. G4-1: Nominal shear strength of a rectangular HSS
     # expression 5e91245b7b98f766f926
     return 0.6*A_w*C_v2*F_y
 
 
-def _d2514eb80ba7ce392fad(N_Ed, chi, A, f_y, gamma_M1):
-    # EN 1993-1-1 Eq. (6.61), (6.62): Axial force ratio for buckling, n = N_Ed/N_b,Rd
-    # expression ccc1468ea91a9d7409b9
-    return N_Ed*gamma_M1/(A*chi*f_y)
+def _d45bbac482182b0ed550(k_yy, section_class):
+    # EN 1993-1-1 Annex B, Table B.1: Interaction factor {k_zy}, no torsional deformation
+    # expression bc0c5d3b767b25173efd
+    return numpy.select([numpy.less_equal(section_class, 2),True], [0.6*k_yy,0.8*k_yy], default=numpy.nan)
 
 
 def _d489e538056e9cf36996(eps):
@@ -1034,10 +1046,10 @@ def _db95a24dcf7cb0f4f617(E, F_y, D_t, Z, S):
     return numpy.select([numpy.less_equal(D_t, 0.07*E/F_y),numpy.less_equal(D_t, 0.31*E/F_y),True], [F_y*Z,S*(F_y + 0.021*E/D_t),0.33*E*S/D_t], default=numpy.nan)
 
 
-def _dd4c718f36942006d222(W_pl, W_el):
-    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term w = W_pl/W_el ≤ 1.5
-    # expression f4f697ca1c4a14df697a
-    return functools.reduce(numpy.minimum, [1.5, W_pl/W_el])
+def _dc49fe9512f63d09a07c(C_my_0, lambda_0, lambda_0_lim, M_y_Ed, N_Ed, A, W_el_y, a_LT, r_y):
+    # EN 1993-1-1 Annex A, Table A.2: Equivalent uniform moment factor {C_my}
+    # expression c65d60e151d3b34f26c1
+    return numpy.select([numpy.less_equal(lambda_0, lambda_0_lim),numpy.less_equal(r_y, 0),True], [C_my_0,1,C_my_0 + a_LT*numpy.sqrt(A/(N_Ed*W_el_y))*(1 - C_my_0)*numpy.sqrt(abs(M_y_Ed))/(a_LT*numpy.sqrt(A/(N_Ed*W_el_y))*numpy.sqrt(abs(M_y_Ed)) + 1)], default=numpy.nan)
 
 
 def _dd7cbefdb56bddcc1a12(M_p, C_b, F_y, S_x, L_b, L_p, L_r, F_cr):
@@ -1058,16 +1070,28 @@ def _de654250a912c31dbf0f(f_y, gamma_M0):
     return (1/3)*numpy.sqrt(3)*f_y/gamma_M0
 
 
+def _e09cce2008cc484b0d6a(C_mz, lambda_z, n_z, section_class):
+    # EN 1993-1-1 Annex B, Table B.1: Interaction factor {k_zz}, I-section
+    # expression fb39b8bb1c1a0ae7453f
+    return numpy.select([numpy.less_equal(section_class, 2),True], [C_mz*functools.reduce(numpy.minimum, [1.4*n_z + 1, n_z*(2*lambda_z - 0.6) + 1]),C_mz*functools.reduce(numpy.minimum, [0.6*n_z + 1, 0.6*lambda_z*n_z + 1])], default=numpy.nan)
+
+
+def _e0aa9fd8c02541de0735(E, f_y):
+    # EN 1993-1-1 6.3.1.3(1): Slenderness at which the Euler stress equals {f_y}
+    # expression 00c8dea2b6d2c695a39b
+    return numpy.pi*numpy.sqrt(E/f_y)
+
+
+def _e0d84e9e2ffca6d42559(alpha_LT, lambda_LT, lambda_LT_0, beta):
+    # EN 1993-1-1 6.3.2.3(1): Value to determine {chi_LT}, rolled or equivalent welded
+    # expression c0d46e2aec8bb27ba4f4
+    return (1/2)*alpha_LT*(lambda_LT - lambda_LT_0) + (1/2)*beta*lambda_LT**2 + 1/2
+
+
 def _e297097c1afbaa101426(n, section_class):
     # EN 1993-1-1 6.2.9.1(6): Exponents α = β of the biaxial criterion, RHS
     # expression 693b6aa468da87845f2e
     return numpy.select([numpy.greater(section_class, 2),numpy.less_equal(n, 0.8),True], [1,functools.reduce(numpy.minimum, [6, 1.66/(1 - 1.13*n**2)]),6], default=numpy.nan)
-
-
-def _e3d910070a0e90d6b35d(k_yy, section_class):
-    # EN 1993-1-1 Annex B, Table B.1: Interaction factor k_zy, no torsional deformation
-    # expression bc0c5d3b767b25173efd
-    return numpy.select([numpy.less_equal(section_class, 2),True], [0.6*k_yy,0.8*k_yy], default=numpy.nan)
 
 
 def _e53db178f0df8aa8bf1e(E, L, D, D_t):
@@ -1076,16 +1100,22 @@ def _e53db178f0df8aa8bf1e(E, L, D, D_t):
     return 1.23*E/(D_t**(5/4)*numpy.sqrt(L/D))
 
 
-def _e5d78b945cf05f43cbed(I_t, I_y):
-    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term a_LT
-    # expression b941de2eb4708831fe61
-    return functools.reduce(numpy.maximum, [0, -I_t/I_y + 1])
+def _e587df3d3f21d639f524(A, h, t):
+    # EN 1993-1-1 6.2.9.1(5): Flange area ratio {a_f} of an RHS
+    # expression 547eb829b8d846322511
+    return functools.reduce(numpy.minimum, [0.5, (A - 2*h*t)/A])
 
 
 def _e63a2886bfd78dd3914d(F_cr, A_g):
     # AISC 360-22 Eq. E3-1: Nominal compressive strength, flexural buckling
     # expression 770850eca8da6495e97c
     return A_g*F_cr
+
+
+def _e890ca6105179489bc6d(C_mLT, lambda_z, n_z, section_class):
+    # EN 1993-1-1 Annex B, Table B.2: Interaction factor {k_zy}, torsional deformation
+    # expression aed897c6603e1a9b5064
+    return numpy.select([numpy.greater(section_class, 2),numpy.less(lambda_z, 0.4),True], [functools.reduce(numpy.maximum, [-0.05*n_z/(C_mLT - 0.25) + 1, -0.05*lambda_z*n_z/(C_mLT - 0.25) + 1]),functools.reduce(numpy.minimum, [lambda_z + 0.6, -0.1*lambda_z*n_z/(C_mLT - 0.25) + 1]),functools.reduce(numpy.maximum, [-0.1*n_z/(C_mLT - 0.25) + 1, -0.1*lambda_z*n_z/(C_mLT - 0.25) + 1])], default=numpy.nan)
 
 
 def _e9005154ba1cc20e7f9d(Phi, lambda_rel):
@@ -1104,12 +1134,6 @@ def _edbb1cf778d17c809671(E, I, L_cr):
     # EN 1993-1-1 6.3.1.2(1): Elastic critical force for flexural buckling
     # expression d5fc9885df801ff972ed
     return numpy.pi**2*E*I/L_cr**2
-
-
-def _ee0b0136d680d3d4d69e(C_mLT, lambda_z, n_z, section_class):
-    # EN 1993-1-1 Annex B, Table B.2: Interaction factor k_zy, torsional deformation
-    # expression aed897c6603e1a9b5064
-    return numpy.select([numpy.greater(section_class, 2),numpy.less(lambda_z, 0.4),True], [functools.reduce(numpy.maximum, [-0.05*n_z/(C_mLT - 0.25) + 1, -0.05*lambda_z*n_z/(C_mLT - 0.25) + 1]),functools.reduce(numpy.minimum, [lambda_z + 0.6, -0.1*lambda_z*n_z/(C_mLT - 0.25) + 1]),functools.reduce(numpy.maximum, [-0.1*n_z/(C_mLT - 0.25) + 1, -0.1*lambda_z*n_z/(C_mLT - 0.25) + 1])], default=numpy.nan)
 
 
 def _ee94078680be5d47a4c4(M_p, F_y, S_x, lam, lam_pf, lam_rf, E, k_c):
@@ -1136,10 +1160,10 @@ def _f0a86e9b98d8941a37cd(A_net, f_u, gamma_M2):
     return 0.9*A_net*f_u/gamma_M2
 
 
-def _f23ae6340eae8d57ffc0(E, f_y):
-    # EN 1993-1-1 6.3.1.3(1): Slenderness at which the Euler stress equals f_y
-    # expression 00c8dea2b6d2c695a39b
-    return numpy.pi*numpy.sqrt(E/f_y)
+def _f11f4de17926e2ed99c3(r):
+    # EN 1993-1-1 Annex A, Table A.2: {C_mi_0} for a central point load
+    # expression e81119fa9125bdc416f1
+    return 0.03*r + 1
 
 
 def _f4d44b74cf6db0627141(rho, f_y):
@@ -1148,28 +1172,10 @@ def _f4d44b74cf6db0627141(rho, f_y):
     return f_y*(1 - rho)
 
 
-def _f53a9100a2b642fb5bad(A, b, t):
-    # EN 1993-1-1 6.2.9.1(5): Web area ratio a_w of an RHS
-    # expression aa29a9e86ac8598d7feb
-    return functools.reduce(numpy.minimum, [0.5, (A - 2*b*t)/A])
-
-
-def _f5c268c3b9a11ba33777(C_mz, lambda_z, n_z, section_class):
-    # EN 1993-1-1 Annex B, Table B.1: Interaction factor k_zz, hollow section
-    # expression b18a461b65e9665f3856
-    return numpy.select([numpy.less_equal(section_class, 2),True], [C_mz*functools.reduce(numpy.minimum, [0.8*n_z + 1, n_z*(lambda_z - 0.2) + 1]),C_mz*functools.reduce(numpy.minimum, [0.6*n_z + 1, 0.6*lambda_z*n_z + 1])], default=numpy.nan)
-
-
-def _f62384cbcdef339cbbc8(C_my, C_mLT, mu_z, r_y, C_zy, w_y, w_z, section_class):
-    # EN 1993-1-1 Annex A, Table A.1: Interaction factor k_zy (Method 1)
-    # expression ac61001bff5ddfb4353c
-    return numpy.select([numpy.less_equal(section_class, 2),True], [0.6*C_mLT*C_my*mu_z*numpy.sqrt(w_y/w_z)/(C_zy*(1 - r_y)),C_mLT*C_my*mu_z/(1 - r_y)], default=numpy.nan)
-
-
-def _f64beecc1ddcb971299b(C_my, C_mLT, mu_y, r_y, C_yy, section_class):
-    # EN 1993-1-1 Annex A, Table A.1: Interaction factor k_yy (Method 1)
-    # expression e1fc3dc267f4757b97dc
-    return numpy.select([numpy.less_equal(section_class, 2),True], [C_mLT*C_my*mu_y/(C_yy*(1 - r_y)),C_mLT*C_my*mu_y/(1 - r_y)], default=numpy.nan)
+def _f5de8a058e2decb30845(a_LT, lambda_0, lambda_z, M_y_Ed, C_my, chi_LT, M_pl_y_Rd):
+    # EN 1993-1-1 Annex A, Table A.1: Auxiliary term {c_LT}
+    # expression b800764b2b4f7e736507
+    return 10*a_LT*lambda_0**2*abs(M_y_Ed)/(C_my*M_pl_y_Rd*chi_LT*(lambda_z**4 + 5))
 
 
 def _f6b02223669d6f75c5f3(E, r_y, J, A_g, M_p):
@@ -1208,12 +1214,6 @@ def _fb56059f97a8bceaa33b(B, H, t):
     return -t**3*(18.0 - 4.5*numpy.pi) + t*(2*B - 2*t)*(H - t)
 
 
-def _fc19d24fd533b04f9f1e(k_zz, section_class):
-    # EN 1993-1-1 Annex B, Table B.1: Interaction factor k_yz
-    # expression 0d139d9445353a67bbb9
-    return numpy.select([numpy.less_equal(section_class, 2),True], [0.6*k_zz,k_zz], default=numpy.nan)
-
-
 def _fd106af85ef5085d0867(W_y, f_y, M_cr):
     # EN 1993-1-1 6.3.2.2(1): Non-dimensional slenderness for lateral-torsional buckling
     # expression 5dbf5128df6ef63fee29
@@ -1229,15 +1229,17 @@ def _ff2749f70c667f0eac44(V_rx, V_ry):
 FUNCTIONS = {
     "00a0df0414000edad7d0": _00a0df0414000edad7d0,
     "014350b74fb2e48aa90f": _014350b74fb2e48aa90f,
-    "019b0ae401412499e00e": _019b0ae401412499e00e,
     "027b898f729662e1ec84": _027b898f729662e1ec84,
+    "02d03cf6ab306ddea859": _02d03cf6ab306ddea859,
     "035c0d914bb25ec7f5ce": _035c0d914bb25ec7f5ce,
     "051314e3339b1ec40ef1": _051314e3339b1ec40ef1,
     "064757b2a5030b696d34": _064757b2a5030b696d34,
     "06cfbc34383808f9918d": _06cfbc34383808f9918d,
     "089986e6cbb4712a4c06": _089986e6cbb4712a4c06,
+    "08d7dc40d9f8eccf5cb2": _08d7dc40d9f8eccf5cb2,
     "099f5a92aad7b72b802a": _099f5a92aad7b72b802a,
-    "0d2c4b35e90672429701": _0d2c4b35e90672429701,
+    "0abcf4569f948ff63b67": _0abcf4569f948ff63b67,
+    "0adf476e694febdd65ef": _0adf476e694febdd65ef,
     "1065ebafe9d0406926f1": _1065ebafe9d0406926f1,
     "10dd47ff3bf0334c5f98": _10dd47ff3bf0334c5f98,
     "12de56c4824687d6344b": _12de56c4824687d6344b,
@@ -1245,6 +1247,7 @@ FUNCTIONS = {
     "162bff335d15c64dd5ec": _162bff335d15c64dd5ec,
     "16d2e3a76315b11b035a": _16d2e3a76315b11b035a,
     "18093701ba6af73f1e51": _18093701ba6af73f1e51,
+    "1bac423d00a775e682c5": _1bac423d00a775e682c5,
     "1c2783bbded1c5ead865": _1c2783bbded1c5ead865,
     "1c9f1650b76e484a0dca": _1c9f1650b76e484a0dca,
     "1decd329c05d71bf5d0d": _1decd329c05d71bf5d0d,
@@ -1255,43 +1258,45 @@ FUNCTIONS = {
     "22e53b0c6d167e7635c4": _22e53b0c6d167e7635c4,
     "22f0a22a1d412da352e1": _22f0a22a1d412da352e1,
     "23171e67a033b3a49780": _23171e67a033b3a49780,
-    "2381b275e0a8f30c5bed": _2381b275e0a8f30c5bed,
+    "258848dbdc25a51bdbfe": _258848dbdc25a51bdbfe,
     "271cee536b13a0021df0": _271cee536b13a0021df0,
     "27dc689f173292b711f5": _27dc689f173292b711f5,
     "2849cee110596e703bb8": _2849cee110596e703bb8,
+    "2a3a4952d025e541bc8c": _2a3a4952d025e541bc8c,
     "2b12a2220bce94c6e2e6": _2b12a2220bce94c6e2e6,
     "2b716ad4aa8ffaa35003": _2b716ad4aa8ffaa35003,
+    "2bb71fcd792abc81cc33": _2bb71fcd792abc81cc33,
     "2bde56bed6e23b72e999": _2bde56bed6e23b72e999,
     "2c7e1059e879939c46c6": _2c7e1059e879939c46c6,
     "2e20ca5d1ad280b112be": _2e20ca5d1ad280b112be,
     "2f017dc2a0409eaf832f": _2f017dc2a0409eaf832f,
     "2fca0588d8c734e7a6ad": _2fca0588d8c734e7a6ad,
+    "3078f856876962e622f0": _3078f856876962e622f0,
     "30e18a8c76376011cf84": _30e18a8c76376011cf84,
     "31083cd2ee307a6fc2f0": _31083cd2ee307a6fc2f0,
     "31e534460627237d0901": _31e534460627237d0901,
     "3291f1c639f3b2629103": _3291f1c639f3b2629103,
     "34505fae50ead40a6ebb": _34505fae50ead40a6ebb,
     "34d36e5b7ebacfd877bc": _34d36e5b7ebacfd877bc,
-    "3639662b79ee84ccc5a3": _3639662b79ee84ccc5a3,
     "3652991feed9a791d723": _3652991feed9a791d723,
     "384f6e71f7f7fe21646e": _384f6e71f7f7fe21646e,
     "39a0063a170918b115d2": _39a0063a170918b115d2,
     "3a79fb2edff5bd0b68de": _3a79fb2edff5bd0b68de,
+    "3ac74121876738f136bf": _3ac74121876738f136bf,
+    "3c09c6f13ec3b00d1c77": _3c09c6f13ec3b00d1c77,
     "3c7ebd3189d3c028c5f5": _3c7ebd3189d3c028c5f5,
-    "3c805c9fdf7acd6195d4": _3c805c9fdf7acd6195d4,
     "3ed5b3bc7cf73a850e6e": _3ed5b3bc7cf73a850e6e,
     "408dd13706027d1a8a74": _408dd13706027d1a8a74,
     "43b926b1519038a96584": _43b926b1519038a96584,
     "44665f0069b4b12e97fe": _44665f0069b4b12e97fe,
     "44856750aab618fce045": _44856750aab618fce045,
+    "45f91c8b2282b65bb33a": _45f91c8b2282b65bb33a,
     "46da740437d2a0e6081c": _46da740437d2a0e6081c,
     "48cf1504573184e3e7c3": _48cf1504573184e3e7c3,
-    "4a71c28a87eed589b99d": _4a71c28a87eed589b99d,
+    "4c04d8ff8d3aeb264672": _4c04d8ff8d3aeb264672,
     "4c572a4a891be19ac5bf": _4c572a4a891be19ac5bf,
-    "4d1a197468d145163f09": _4d1a197468d145163f09,
     "4d310390b2d67881c8e4": _4d310390b2d67881c8e4,
     "4d33f7a11b29c455b519": _4d33f7a11b29c455b519,
-    "4ec718cba79e8b37b591": _4ec718cba79e8b37b591,
     "50e61967187a168d41ce": _50e61967187a168d41ce,
     "514514abf910387e709d": _514514abf910387e709d,
     "519cd80a4246de1e3c56": _519cd80a4246de1e3c56,
@@ -1299,8 +1304,9 @@ FUNCTIONS = {
     "5259b436203124c10c93": _5259b436203124c10c93,
     "533bc9d5fdbcd0e261e8": _533bc9d5fdbcd0e261e8,
     "55203b5f614e26ba2a23": _55203b5f614e26ba2a23,
-    "585c402d6710eb4c9b13": _585c402d6710eb4c9b13,
+    "589d0ad57d94b60f4c8c": _589d0ad57d94b60f4c8c,
     "598ba5e37cc8e3e61a98": _598ba5e37cc8e3e61a98,
+    "5a523d462bc085a715c9": _5a523d462bc085a715c9,
     "601dfd4344d06680c615": _601dfd4344d06680c615,
     "618cfafff2ca199e5f53": _618cfafff2ca199e5f53,
     "624f39d77712b8a7a38f": _624f39d77712b8a7a38f,
@@ -1308,25 +1314,23 @@ FUNCTIONS = {
     "639c5e4d319ab4fb24e2": _639c5e4d319ab4fb24e2,
     "6498b7fab63f89a9851e": _6498b7fab63f89a9851e,
     "66a39b40f967fff16a4f": _66a39b40f967fff16a4f,
-    "67335d2d056bcf32bf6a": _67335d2d056bcf32bf6a,
+    "6717a9cc3d66fbede095": _6717a9cc3d66fbede095,
     "69e42f02943e8bb4e4ba": _69e42f02943e8bb4e4ba,
-    "6ad56a60640c932ca1f6": _6ad56a60640c932ca1f6,
     "6b59ee406761b4ca5566": _6b59ee406761b4ca5566,
+    "6c14c7afc0b04bc53981": _6c14c7afc0b04bc53981,
+    "6f1b5550e44f0984e61d": _6f1b5550e44f0984e61d,
     "72354d9a1abc03a1830f": _72354d9a1abc03a1830f,
     "727e3cad30667bd7502f": _727e3cad30667bd7502f,
     "75c4563aad20d6a60e7e": _75c4563aad20d6a60e7e,
-    "76225f3627a2ecf3c047": _76225f3627a2ecf3c047,
     "7706b88a8c1199acc1fb": _7706b88a8c1199acc1fb,
     "787f9f09962f2d316ef5": _787f9f09962f2d316ef5,
     "7891655c24b497d7b0b5": _7891655c24b497d7b0b5,
     "7b4656f4ad858bdda0b9": _7b4656f4ad858bdda0b9,
-    "7bd6d61e146e7989f175": _7bd6d61e146e7989f175,
-    "7e43753793b6314a1e7e": _7e43753793b6314a1e7e,
     "815c301704bf0d8e1cd5": _815c301704bf0d8e1cd5,
     "81e10ae4b43b376ab6b4": _81e10ae4b43b376ab6b4,
-    "8265540d33c1c74714f1": _8265540d33c1c74714f1,
     "835c5007267a8446fffb": _835c5007267a8446fffb,
     "83ef9733f5073f1f1857": _83ef9733f5073f1f1857,
+    "8579c9d60769d3a8d29c": _8579c9d60769d3a8d29c,
     "87335147d7601893e884": _87335147d7601893e884,
     "879c54f807c51e5b74f0": _879c54f807c51e5b74f0,
     "87b62a9aad812fcaffa0": _87b62a9aad812fcaffa0,
@@ -1334,12 +1338,11 @@ FUNCTIONS = {
     "8ac035390de41c3926bb": _8ac035390de41c3926bb,
     "8afc53eed18ffccc9c02": _8afc53eed18ffccc9c02,
     "8b0a3edbcdf2b3e765fd": _8b0a3edbcdf2b3e765fd,
-    "8d5c40638086fb532e53": _8d5c40638086fb532e53,
+    "8d744ebacd65536bc32c": _8d744ebacd65536bc32c,
     "8faef24ad81d91963278": _8faef24ad81d91963278,
-    "8fb1f20cb2acc4c4534d": _8fb1f20cb2acc4c4534d,
     "92567c67f1ace904d72b": _92567c67f1ace904d72b,
-    "92881d4f8ccdcaeacbea": _92881d4f8ccdcaeacbea,
     "92f6cca6f37c3f85a98d": _92f6cca6f37c3f85a98d,
+    "95241162cab57d594696": _95241162cab57d594696,
     "95f71cf0b5c5f5fc55d1": _95f71cf0b5c5f5fc55d1,
     "96a0e1910a0ca2e6b47c": _96a0e1910a0ca2e6b47c,
     "97ae6723f6e395407bd4": _97ae6723f6e395407bd4,
@@ -1347,8 +1350,6 @@ FUNCTIONS = {
     "97f5c5ec9cbed96c94cc": _97f5c5ec9cbed96c94cc,
     "98bda609bd77f4f3ad7d": _98bda609bd77f4f3ad7d,
     "99609295bc094468c016": _99609295bc094468c016,
-    "99b21762da528edc644b": _99b21762da528edc644b,
-    "99d379be385fc9775b71": _99d379be385fc9775b71,
     "9a57fb3ce9b2d0889950": _9a57fb3ce9b2d0889950,
     "9ce49b98ae83701bade0": _9ce49b98ae83701bade0,
     "9e4af35594526d778540": _9e4af35594526d778540,
@@ -1357,14 +1358,15 @@ FUNCTIONS = {
     "a01ca54322030a0235f1": _a01ca54322030a0235f1,
     "a4981c67240bce03cc81": _a4981c67240bce03cc81,
     "a53ff0c576f5e3706dc2": _a53ff0c576f5e3706dc2,
+    "abcd62f588d858168019": _abcd62f588d858168019,
     "ac130d50381924e62236": _ac130d50381924e62236,
-    "ac22d7bf1f572636b028": _ac22d7bf1f572636b028,
     "ac2cce500bb9f9473b01": _ac2cce500bb9f9473b01,
+    "ad53b22d8e0b08f7ff1a": _ad53b22d8e0b08f7ff1a,
     "adf237c4ca007462e211": _adf237c4ca007462e211,
-    "ae1d613b4853658c0eaf": _ae1d613b4853658c0eaf,
+    "ae9ef52d2817878b2e18": _ae9ef52d2817878b2e18,
     "af7659c74651c5b9bd4c": _af7659c74651c5b9bd4c,
+    "af961b31dcfe5cdaec58": _af961b31dcfe5cdaec58,
     "b1f4e73d2c6f47dfbf0a": _b1f4e73d2c6f47dfbf0a,
-    "b2a85c70f13ebd5b2987": _b2a85c70f13ebd5b2987,
     "b4363fd7287a59f6797d": _b4363fd7287a59f6797d,
     "b60f3b3772f0c207f24e": _b60f3b3772f0c207f24e,
     "b6b2229bc2f2f642d8ca": _b6b2229bc2f2f642d8ca,
@@ -1372,9 +1374,9 @@ FUNCTIONS = {
     "b84177f2dc6d2a3733ae": _b84177f2dc6d2a3733ae,
     "ba1433fc51b94a3f5966": _ba1433fc51b94a3f5966,
     "ba4ca434718b6d9e923b": _ba4ca434718b6d9e923b,
+    "bc452a7cd30d6d519593": _bc452a7cd30d6d519593,
     "bd93fd2bc7eff38e5fe7": _bd93fd2bc7eff38e5fe7,
     "c032b3011077b89fa653": _c032b3011077b89fa653,
-    "c0b7eebd49a820f4dc3a": _c0b7eebd49a820f4dc3a,
     "c0f6e5e77cdcb251f7cd": _c0f6e5e77cdcb251f7cd,
     "c10d63b98496badca91a": _c10d63b98496badca91a,
     "c183c7febd0abbaa2526": _c183c7febd0abbaa2526,
@@ -1382,13 +1384,13 @@ FUNCTIONS = {
     "c4e29e702f9204e918de": _c4e29e702f9204e918de,
     "c660ff90829afe01e978": _c660ff90829afe01e978,
     "c6e176136677cf461d73": _c6e176136677cf461d73,
-    "c70d3566cccccd2d2e95": _c70d3566cccccd2d2e95,
     "c79722bdf79a3591bc10": _c79722bdf79a3591bc10,
     "cac2c12a2910e5a71328": _cac2c12a2910e5a71328,
     "cc63d99051ca0078d356": _cc63d99051ca0078d356,
     "cdd01aabd4c18f908303": _cdd01aabd4c18f908303,
+    "ced9f646bfb9306d6188": _ced9f646bfb9306d6188,
     "d13bbe9b922aeab20ddc": _d13bbe9b922aeab20ddc,
-    "d2514eb80ba7ce392fad": _d2514eb80ba7ce392fad,
+    "d45bbac482182b0ed550": _d45bbac482182b0ed550,
     "d489e538056e9cf36996": _d489e538056e9cf36996,
     "d616960ce50a32281973": _d616960ce50a32281973,
     "d6c1b26e7d309b505739": _d6c1b26e7d309b505739,
@@ -1397,36 +1399,34 @@ FUNCTIONS = {
     "db4c3cbc3242f2d66706": _db4c3cbc3242f2d66706,
     "db61c54a10a0b86b8021": _db61c54a10a0b86b8021,
     "db95a24dcf7cb0f4f617": _db95a24dcf7cb0f4f617,
-    "dd4c718f36942006d222": _dd4c718f36942006d222,
+    "dc49fe9512f63d09a07c": _dc49fe9512f63d09a07c,
     "dd7cbefdb56bddcc1a12": _dd7cbefdb56bddcc1a12,
     "ddae9f88d66fb4c939c7": _ddae9f88d66fb4c939c7,
     "de654250a912c31dbf0f": _de654250a912c31dbf0f,
+    "e09cce2008cc484b0d6a": _e09cce2008cc484b0d6a,
+    "e0aa9fd8c02541de0735": _e0aa9fd8c02541de0735,
+    "e0d84e9e2ffca6d42559": _e0d84e9e2ffca6d42559,
     "e297097c1afbaa101426": _e297097c1afbaa101426,
-    "e3d910070a0e90d6b35d": _e3d910070a0e90d6b35d,
     "e53db178f0df8aa8bf1e": _e53db178f0df8aa8bf1e,
-    "e5d78b945cf05f43cbed": _e5d78b945cf05f43cbed,
+    "e587df3d3f21d639f524": _e587df3d3f21d639f524,
     "e63a2886bfd78dd3914d": _e63a2886bfd78dd3914d,
+    "e890ca6105179489bc6d": _e890ca6105179489bc6d,
     "e9005154ba1cc20e7f9d": _e9005154ba1cc20e7f9d,
     "e91f01b2d900bb4a7585": _e91f01b2d900bb4a7585,
     "edbb1cf778d17c809671": _edbb1cf778d17c809671,
-    "ee0b0136d680d3d4d69e": _ee0b0136d680d3d4d69e,
     "ee94078680be5d47a4c4": _ee94078680be5d47a4c4,
     "eeca7a3d7b6567fb4b98": _eeca7a3d7b6567fb4b98,
     "ef34a82ac99a69aef98c": _ef34a82ac99a69aef98c,
     "f0a86e9b98d8941a37cd": _f0a86e9b98d8941a37cd,
-    "f23ae6340eae8d57ffc0": _f23ae6340eae8d57ffc0,
+    "f11f4de17926e2ed99c3": _f11f4de17926e2ed99c3,
     "f4d44b74cf6db0627141": _f4d44b74cf6db0627141,
-    "f53a9100a2b642fb5bad": _f53a9100a2b642fb5bad,
-    "f5c268c3b9a11ba33777": _f5c268c3b9a11ba33777,
-    "f62384cbcdef339cbbc8": _f62384cbcdef339cbbc8,
-    "f64beecc1ddcb971299b": _f64beecc1ddcb971299b,
+    "f5de8a058e2decb30845": _f5de8a058e2decb30845,
     "f6b02223669d6f75c5f3": _f6b02223669d6f75c5f3,
     "f7864ccbfd7183e7d6e3": _f7864ccbfd7183e7d6e3,
     "f917ea69bfb89b1e45ea": _f917ea69bfb89b1e45ea,
     "fa84d9109a5d7b77b12c": _fa84d9109a5d7b77b12c,
     "faf673a8242788c3c8cd": _faf673a8242788c3c8cd,
     "fb56059f97a8bceaa33b": _fb56059f97a8bceaa33b,
-    "fc19d24fd533b04f9f1e": _fc19d24fd533b04f9f1e,
     "fd106af85ef5085d0867": _fd106af85ef5085d0867,
     "ff2749f70c667f0eac44": _ff2749f70c667f0eac44,
 }

@@ -228,7 +228,7 @@ def half_flange_width(b_f: sp.Basic) -> sp.Expr:
     return b_f / 2
 
 
-@clause_b41("Section B4.1b", "Web height, h = d − 2·k_des (rolled shape, fillets excluded)")
+@clause_b41("Section B4.1b", "Web height, {h} = {d} − 2·{k_des} (rolled shape, fillets excluded)")
 def rolled_web_height(d: sp.Basic, k_des: sp.Basic) -> sp.Expr:
     """h = d − 2·k_des: the clear distance between flanges less the fillets (Section B4.1b)."""
     return d - 2 * k_des

@@ -63,7 +63,7 @@ FLEXURE = LimitStateFactors("flexure", 0.90, 1.67, "AISC 360-22 Section F1", "b"
 # G2.1(a): webs of rolled I-shapes with h/tw <= 2.24 sqrt(E/Fy); every other case
 # of Chapter G (G1) takes 0.90 / 1.67.
 SHEAR_ROLLED_I_WEB = LimitStateFactors(
-    "shear, web of a rolled I-shape with h/t_w <= 2.24 sqrt(E/F_y)",
+    "shear, web of a rolled I-shape with {h}/{t_w} ≤ 2.24·√({E}/{F_y})",
     1.00,
     1.50,
     "AISC 360-22 Section G2.1(a)",

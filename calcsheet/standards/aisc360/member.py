@@ -26,7 +26,7 @@ import numpy as np
 import pint
 import sympy as sp
 
-from calcsheet.engine import Check, Sheet, as_written
+from calcsheet.engine import Check, Sheet, as_written, escape_marks
 from calcsheet.engine.procedure import SheetWriter, Writer
 from calcsheet.errors import DefinitionError, InputError
 from calcsheet.sections import Section
@@ -153,14 +153,18 @@ def write_aisc_checks(
             )
     w = SheetWriter(sheet, chosen)
     sheet.add_basis("Codes and editions", f"{SPECIFICATION_TITLE}, {chosen}.")
-    sheet.add_basis("Material", f"{inputs.grade}: F_y, E (and G) as listed in the inputs.")
+    sheet.add_basis(
+        "Material",
+        f"{escape_marks(inputs.grade)}: {{F_y}}, {{E}} (and {{G}}) as listed in the inputs.",
+    )
     sheet.add_reference(SPECIFICATION_TITLE)
     with as_written():
         sheet.heading(f"Member strength to AISC 360-22 ({chosen})")
         sheet.text(
-            "Required strengths: P_r axial (tension positive), M_rx and M_ry about x and y, "
-            f"V_rx and V_ry along x and y, already {'factored' if chosen == 'LRFD' else 'combined'}"
-            f" for {chosen}. {_torsion_scope(kind, demands)} Connections are not checked here."
+            "Required strengths: {P_r} axial (tension positive), {M_rx} and {M_ry} about x and "
+            "y, {V_rx} and {V_ry} along x and y, already "
+            f"{'factored' if chosen == 'LRFD' else 'combined'} for {chosen}. "
+            f"{_torsion_scope(kind, demands)} Connections are not checked here."
         )
         aisc_member_procedure(
             w, kind, values, inputs, demands, second_order, name=section.name, bracing=bracing
@@ -188,7 +192,7 @@ def aisc_member_procedure(
     both given, not a cantilever).
     """
     _write_member_inputs(w, inputs, kind, second_order, bracing or LateralBracing())
-    w.heading(f"Section {name}".strip(), 2)
+    w.heading(f"Section {w.literal(name)}".strip(), 2)
     write_section_values(w, values)
     strengths = _WRITERS[kind](w)
     _write_demand_side(w, kind, strengths, demands, second_order)
@@ -214,10 +218,10 @@ def _torsion_scope(kind: str, demands: Demands) -> str:
     if kind in HSS_KINDS:
         if demands.T_r is None:
             return "Torsion (H3) is not checked here."
-        return "Torsion: H3.1 and H3.2 with the torque T_r."
+        return "Torsion: H3.1 and H3.2 with the torque {T_r}."
     if demands.stresses is None or demands.T_r is None:
         return "Torsion (H3) is not checked here."
-    return "Torsion: H3.3 with the point stresses of the section under the torque T_r."
+    return "Torsion: H3.3 with the point stresses of the section under the torque {T_r}."
 
 
 def _check_scope(kind: str, values: dict, inputs: MemberInputs, name: str) -> None:
@@ -252,7 +256,7 @@ def _write_member_inputs(
     w.input(
         "F_y",
         inputs.F_y,
-        f"Specified minimum yield stress ({inputs.grade})",
+        f"Specified minimum yield stress ({w.literal(inputs.grade)})",
         dimension="stress",
         fixed=MATERIAL_FIXED,
     )
@@ -285,7 +289,7 @@ def _write_demand_side(
     P_c = w.branch(
         "P_c",
         [(strengths.P_c_t, P_r / strengths.P_c_t >= 0), (strengths.P_c_c, True)],
-        "Available axial strength: tension when P_r >= 0, compression otherwise",
+        "Available axial strength: tension when {P_r} ≥ 0, compression otherwise",
         unit=force,
         reference="AISC 360-22 Sections D2, E1",
     )
@@ -373,10 +377,11 @@ def _write_b1(w: Writer, strengths: Strengths, demands: Demands) -> tuple:
     force, moment = w.unit("force"), w.unit("moment")
     w.heading("Second-order effects (AISC 360-22 Appendix 8)", 2)
     w.text(
-        "B1 amplifies each first-order moment for P-δ (Eq. A-8-3), with Pe1 from EI* = EI and "
-        "Lc1 = K·L (the effective length method, K as above). B1 = 1 in tension. B1 exists "
-        "only while α·P_r stays below Pe1, checked below for each axis. Moments from a "
-        "second-order analysis need no B1: build the checks with second_order=False."
+        "{B_1} amplifies each first-order moment for P-δ (Eq. A-8-3), with {P_e1} from "
+        "EI* = EI and {L_c1} = {K}·{L} (the effective length method, {K} as above). {B_1} = 1 "
+        "in tension. {B_1} exists only while {alpha}·{P_r} stays below {P_e1}, checked below "
+        "for each axis. Moments from a second-order analysis need no {B_1}: build the checks "
+        "without the amplification."
     )
     alpha = w.input(
         "alpha",
@@ -409,8 +414,8 @@ def _write_b1(w: Writer, strengths: Strengths, demands: Demands) -> tuple:
             # B1 has no value: the member buckles under the load (the check above
             # fails); the moments stay first-order.
             w.text(
-                f"α·P_r ≥ P_e1 about {axis}: the member buckles under the axial load and B1 "
-                "is undefined. NOT OK: choose a stiffer section or a shorter member."
+                f"{{alpha}}·{{P_r}} ≥ {{P_e1}} about {axis}: the member buckles under the axial "
+                "load and {B_1} is undefined. NOT OK: choose a stiffer section or a shorter member."
             )
             return M_r
 

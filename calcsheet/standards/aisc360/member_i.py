@@ -47,7 +47,7 @@ def write_i_shape(w: Writer) -> Strengths:
     P_c_t = write_tension(w)
 
     w.heading("Compression (AISC 360-22 Chapter E)", 2)
-    w.text("Flexural buckling about y governs over x (r_y < r_x, the same Lc about both).")
+    w.text("Flexural buckling about y governs over x ({r_y} < {r_x}, the same {L_c} about both).")
     F_cr = write_flexural_buckling(w, w["r_y"], torsional=True)
     slender = w.either(flange_c.slender(w), web_c.slender(w))
 

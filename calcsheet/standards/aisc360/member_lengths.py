@@ -166,12 +166,12 @@ def write_bracing_inputs(w: Writer, inputs: MemberInputs, bracing: LateralBracin
         if w.prints:
             w.sheet.add_reference(SSRC_GUIDE)
             w.text(
-                "Caution: Lb is the effective length of a cantilever built in at its support, "
+                "Caution: {L_b} is the effective length of a cantilever built in at its support, "
                 f"for a load on the {bracing.height} with the tip {bracing.tip} "
                 f"(k = {bracing.factor:g}; the SSRC Guide, Chapter 5, after Nethercot), "
-                "used in Chapter F with Cb = 1.0. The factors assume full lateral, torsional "
+                "used in Chapter F with {C_b} = 1.0. The factors assume full lateral, torsional "
                 "and warping restraint at the support; a support that lets the member twist or "
-                "move sideways needs a much longer effective length. Give L_b to override."
+                "move sideways needs a much longer effective length. Give {L_b} to override."
             )
     else:
         source = (
@@ -181,7 +181,10 @@ def write_bracing_inputs(w: Writer, inputs: MemberInputs, bracing: LateralBracin
             if bracing.Lb_given
             else "defaulted (from the member length L)"
         )
-        w.input("L_b", inputs.L_b, f"Laterally unbraced length: {source}", dimension="length")
+        w.input(
+            "L_b", inputs.L_b, f"Laterally unbraced length: {source}", dimension="length",
+            computed=bool(bracing.Lb_source),
+        )  # fmt: skip
         if w.prints:
             _warn_length(w, inputs, bracing)
     _write_cb(w, inputs, bracing)
@@ -196,16 +199,16 @@ def _factor_description(bracing: LateralBracing) -> str:
 def _warn_length(w: Writer, inputs: MemberInputs, bracing: LateralBracing) -> None:
     if bracing.Lb_given and not bracing.Lb_source and inputs.L_b > inputs.length:
         w.text(
-            "WARNING: the given Lb is longer than the member length L. Check the input: an "
+            "WARNING: the given {L_b} is longer than the member length {L}. Check the input: an "
             "unbraced length longer than the member is an effective length, which Chapter F "
             "does not define."
         )
     if bracing.cantilever and bracing.flanged and not bracing.Lb_given:
         w.text(
-            "Caution: on a cantilever, Lb = L is unconservative for a load applied on the top "
-            "flange of an I-shape (the SSRC Guide, Chapter 5, gives effective lengths up to "
-            "1.4·L for a built-in cantilever with a free tip). Give the load height and the tip "
-            "restraint, or L_b."
+            "Caution: on a cantilever, {L_b} = {L} is unconservative for a load applied on the "
+            "top flange of an I-shape (the SSRC Guide, Chapter 5, gives effective lengths up to "
+            "1.4·{L} for a built-in cantilever with a free tip). Give the load height and the "
+            "tip restraint, or {L_b}."
         )
 
 
@@ -237,11 +240,13 @@ def _write_cb(w: Writer, inputs: MemberInputs, bracing: LateralBracing) -> Value
         description,
         reference="AISC 360-22 Section F1" + (f"; {COMMENTARY_F1}" if bracing.cantilever else ""),
         dimension="dimensionless",
+        computed=bool(bracing.Cb_source),
     )
     if w.prints and bracing.cantilever and inputs.C_b > 1.0:
         w.text(
-            f"WARNING: Cb = {inputs.C_b:g} > 1.0 on a cantilever. The AISC 360-22 Commentary to "
-            "Section F1 takes Cb = 1.0 for cantilevers with an unbraced free end; a larger Cb "
-            "needs a justification for this member (bracing of the tip, a published solution)."
+            f"WARNING: {{C_b}} = {inputs.C_b:g} > 1.0 on a cantilever. The AISC 360-22 "
+            "Commentary to Section F1 takes {C_b} = 1.0 for cantilevers with an unbraced free "
+            "end; a larger {C_b} needs a justification for this member (bracing of the tip, a "
+            "published solution)."
         )
     return C_b

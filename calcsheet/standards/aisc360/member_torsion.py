@@ -30,7 +30,7 @@ TORSION_TITLES = {
     "torsion_buckling": "Torsion: compressive normal stress, buckling",
 }
 WARPING_NOTE = (
-    "The point stresses include St Venant torsion (T·t/J on an open section); warping "
+    "The point stresses include St Venant torsion ({T}·{t}/{J} on an open section); warping "
     "normal and shear stresses are included only where the member's torsion model says so "
     "in its stress steps above."
 )
@@ -115,23 +115,23 @@ def write_hss_torsion(
         v_ratio = w.step(
             "v_ratio",
             w.root(terms.V_rx**2 + terms.V_ry**2) / strengths.V_c_x,
-            "Shear ratio Vr/Vc, on the resultant shear",
+            "Shear ratio {V_r}/{V_c}, on the resultant shear",
             reference="AISC 360-22 Section H3.2",
         )
     else:
         v_ratio = w.step(
             "v_ratio",
             w.absolute(terms.V_rx) / strengths.V_c_x + w.absolute(terms.V_ry) / strengths.V_c_y,
-            "Shear ratio Vr/Vc, both directions added (conservative)",
+            "Shear ratio {V_r}/{V_c}, both directions added (conservative)",
             reference="AISC 360-22 Section H3.2",
         )
     if w.prints:
         above = w.holds(T_abs, ">", torsion.TORSION_RATIO_LIMIT * T_c)
         w.text(
-            "Eq. H3-6 applies when Tr > 0.2·Tc; below it torsion is neglected and the "
-            "interaction is that of Chapter H1 written above (η_H1). Mr/Mc is the sum over "
-            "both axes (conservative for biaxial bending). Here Tr "
-            + ("> 0.2·Tc: Eq. H3-6 applies." if above else "≤ 0.2·Tc: torsion is neglected.")
+            "Eq. H3-6 applies when {T_r} > 0.2·{T_c}; below it torsion is neglected and the "
+            "interaction is that of Chapter H1 written above ({eta_H1}). {M_r}/{M_c} is the sum "
+            "over both axes (conservative for biaxial bending). Here {T_r} "
+            + ("> 0.2·{T_c}: Eq. H3-6 applies." if above else "≤ 0.2·{T_c}: torsion is neglected.")
         )
     w.clause(
         torsion.torsion_interaction,
@@ -166,21 +166,24 @@ def write_open_section_stresses(
     F_y = w["F_y"]
     w.heading("Torsion and combined stress (AISC 360-22 Section H3.3)", 2)
     w.text(
-        "A non-HSS member under torsion: the required normal stress fn and shear stress fv "
-        "are the largest over the stress points of the section from the elastic analysis "
-        "above (N, M_x, M_y, shear V·Q/(I·b) and torsion). " + WARPING_NOTE + " The section "
-        "applies to members subjected to torsion: without a torque (|T_r| ≤ 10⁻⁹·(|M_rx| + "
-        "|M_ry|), the round-off of statics) the demands below are zero and Chapters E to H1 "
+        "A non-HSS member under torsion: the required normal stress {f_n} and shear stress "
+        "{f_v} are the largest over the stress points of the section from the elastic "
+        "analysis above ({N}, {M_x}, {M_y}, shear {V}·{Q}/({I}·{b}) and torsion). "
+        + WARPING_NOTE
+        + " The section applies to members subjected to torsion: without a torque "
+        "(|{T_r}| ≤ 10⁻⁹·(|{M_rx}| + |{M_ry}|), the round-off of statics) the demands below "
+        "are zero and Chapters E to H1 "
         "above govern alone."
     )
     if w.prints:
         w.text(
-            "Buckling (H3.3(c), Fn = Fcr, Eq. H3-9) leaves Fcr to analysis. Here the "
+            "Buckling (H3.3(c), {F_n} = {F_cr}, Eq. H3-9) leaves {F_cr} to analysis. Here the "
             "compressive normal stress at the worst point is split into the stress of the "
-            "axial force fa, taken to the available compressive stress of Chapter E "
-            "(Fca = P_c/A_g, flexural or torsional buckling as written above), and the rest fb "
-            "(flexure and torsion), taken to the available flexural stress of Chapter F "
-            "(Fcb = M_c/S, the smaller of the two axes: lateral-torsional and local buckling); "
+            "axial force {f_na}, taken to the available compressive stress of Chapter E "
+            "({F_c_Ta} = {P_c}/{A_g}, flexural or torsional buckling as written above), and "
+            "the rest {f_nb} (flexure and torsion), taken to the available flexural stress of "
+            "Chapter F ({F_c_Tb} = {M_c}/{S}, the smaller of the two axes: lateral-torsional "
+            "and local buckling); "
             "their ratios are added as in Eq. H2-1. The lightest-section search, where asked "
             "for, does not repeat these stress checks for each catalog section."
         )
@@ -250,7 +253,7 @@ def write_open_section_stresses(
                 lambda axis=axis: w.step(
                     f"F_c_Tb_{axis}",
                     getattr(strengths, f"M_c_{axis}") / w[f"S_{axis}"],
-                    f"Available flexural stress about {axis}, M_c/S (Chapter F)",
+                    f"Available flexural stress about {axis}, {{M_c}}/{{S}} (Chapter F)",
                     unit=stress,
                     reference="AISC 360-22 Sections F1, H3.3(c)",
                 ),

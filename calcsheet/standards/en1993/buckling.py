@@ -33,7 +33,7 @@ def relative_slenderness(A, f_y, N_cr):
     return sqrt(A * f_y / N_cr)
 
 
-@clause("EN 1993-1-1 6.3.1.3(1)", "Slenderness at which the Euler stress equals f_y")
+@clause("EN 1993-1-1 6.3.1.3(1)", "Slenderness at which the Euler stress equals {f_y}")
 def slenderness_limit(E, f_y):
     """λ₁ = π·√(E/f_y) = 93.9ε."""
     return pi * sqrt(E / f_y)
@@ -111,23 +111,23 @@ def buckling_curve(
     if kind == "welded I":
         thin = flange <= 40.0
         curve = ("b" if thin else "c") if axis == "y" else ("c" if thin else "d")
-        limit = "t_f ≤ 40 mm" if thin else "t_f > 40 mm"
+        limit = "{t_f} ≤ 40 mm" if thin else "{t_f} > 40 mm"
         return _choice(curve, f"welded I-section, {limit}, buckling about {axis}-{axis}: {curve}")
 
     ratio = _millimetres(h, "h") / _millimetres(b, "b")
     if ratio > 1.2:
         if flange <= 40.0:
-            row, curves = "h/b > 1.2, t_f ≤ 40 mm", {"y": ("a", "a0"), "z": ("b", "a0")}
+            row, curves = "h/b > 1.2, {t_f} ≤ 40 mm", {"y": ("a", "a0"), "z": ("b", "a0")}
         elif flange <= 100.0:
-            row, curves = "h/b > 1.2, 40 mm < t_f ≤ 100 mm", {"y": ("b", "a"), "z": ("c", "a")}
+            row, curves = "h/b > 1.2, 40 mm < {t_f} ≤ 100 mm", {"y": ("b", "a"), "z": ("c", "a")}
         else:
             raise InputError(
                 "t_f", f"{flange:.4g} mm", "at most 100 mm for h/b > 1.2", "outside Table 6.2"
             )
     elif flange <= 100.0:
-        row, curves = "h/b ≤ 1.2, t_f ≤ 100 mm", {"y": ("b", "a"), "z": ("c", "a")}
+        row, curves = "h/b ≤ 1.2, {t_f} ≤ 100 mm", {"y": ("b", "a"), "z": ("c", "a")}
     else:
-        row, curves = "h/b ≤ 1.2, t_f > 100 mm", {"y": ("d", "c"), "z": ("d", "c")}
+        row, curves = "h/b ≤ 1.2, {t_f} > 100 mm", {"y": ("d", "c"), "z": ("d", "c")}
     curve = curves[axis][1 if s460 else 0]
     reason = (
         f"rolled I-section, h/b = {ratio:.3g}: {row}, {column}, "

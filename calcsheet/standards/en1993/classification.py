@@ -21,7 +21,7 @@ from calcsheet.standards.clause import clause
 ALPHA_FLOOR = 0.05
 
 
-@clause("EN 1993-1-1 Table 5.2", "ε = √(235/f_y)")
+@clause("EN 1993-1-1 Table 5.2", "ε = √(235/{f_y})")
 def epsilon(f_235, f_y):
     """Material factor ε of Table 5.2 (sheet 3): ε = √(235/f_y), f_y in N/mm²."""
     return sqrt(f_235 / f_y)

@@ -20,14 +20,14 @@ def characteristic_moment(W_pl, W_el, f_y, section_class):
     return Piecewise((W_pl * f_y, section_class <= 2), (W_el * f_y, section_class <= 3))
 
 
-@clause("EN 1993-1-1 Eq. (6.61), (6.62)", "Axial force ratio for buckling, n = N_Ed/N_b,Rd")
+@clause("EN 1993-1-1 Eq. (6.61), (6.62)", "Axial force ratio for buckling, n = {N_Ed}/{N_b_Rd}")
 def buckling_axial_ratio(N_Ed, chi, A, f_y, gamma_M1):
     """n_y = N_Ed/(χ_y·N_Rk/γM1), n_z = N_Ed/(χ_z·N_Rk/γM1), N_Rk = A·f_y (class 1–3): the
     first term of Eq. (6.61) and (6.62), and n_y, n_z of Annex B."""
     return N_Ed / (chi * A * f_y / gamma_M1)
 
 
-@clause("EN 1993-1-1 Annex B, Table B.1", "Interaction factor k_yy")
+@clause("EN 1993-1-1 Annex B, Table B.1", "Interaction factor {k_yy}")
 def k_yy(C_my, lambda_y, n_y, section_class):
     """Class 1, 2: C_my·(1 + (λ̄_y − 0.2)·n_y) ≤ C_my·(1 + 0.8·n_y);
     class 3: C_my·(1 + 0.6·λ̄_y·n_y) ≤ C_my·(1 + 0.6·n_y) (I-sections and RHS)."""
@@ -37,7 +37,7 @@ def k_yy(C_my, lambda_y, n_y, section_class):
     )
 
 
-@clause("EN 1993-1-1 Annex B, Table B.1", "Interaction factor k_zz, I-section")
+@clause("EN 1993-1-1 Annex B, Table B.1", "Interaction factor {k_zz}, I-section")
 def k_zz_i(C_mz, lambda_z, n_z, section_class):
     """Class 1, 2: C_mz·(1 + (2λ̄_z − 0.6)·n_z) ≤ C_mz·(1 + 1.4·n_z);
     class 3: C_mz·(1 + 0.6·λ̄_z·n_z) ≤ C_mz·(1 + 0.6·n_z)."""
@@ -47,7 +47,7 @@ def k_zz_i(C_mz, lambda_z, n_z, section_class):
     )
 
 
-@clause("EN 1993-1-1 Annex B, Table B.1", "Interaction factor k_zz, hollow section")
+@clause("EN 1993-1-1 Annex B, Table B.1", "Interaction factor {k_zz}, hollow section")
 def k_zz_hollow(C_mz, lambda_z, n_z, section_class):
     """Class 1, 2 (RHS): C_mz·(1 + (λ̄_z − 0.2)·n_z) ≤ C_mz·(1 + 0.8·n_z);
     class 3: C_mz·(1 + 0.6·λ̄_z·n_z) ≤ C_mz·(1 + 0.6·n_z)."""
@@ -57,19 +57,19 @@ def k_zz_hollow(C_mz, lambda_z, n_z, section_class):
     )
 
 
-@clause("EN 1993-1-1 Annex B, Table B.1", "Interaction factor k_yz")
+@clause("EN 1993-1-1 Annex B, Table B.1", "Interaction factor {k_yz}")
 def k_yz(k_zz, section_class):
     """k_yz = 0.6·k_zz for class 1, 2; k_zz for class 3."""
     return Piecewise((0.6 * k_zz, section_class <= 2), (k_zz, True))
 
 
-@clause("EN 1993-1-1 Annex B, Table B.1", "Interaction factor k_zy, no torsional deformation")
+@clause("EN 1993-1-1 Annex B, Table B.1", "Interaction factor {k_zy}, no torsional deformation")
 def k_zy_rigid(k_yy, section_class):
     """k_zy = 0.6·k_yy for class 1, 2; 0.8·k_yy for class 3."""
     return Piecewise((0.6 * k_yy, section_class <= 2), (0.8 * k_yy, True))
 
 
-@clause("EN 1993-1-1 Annex B, Table B.2", "Interaction factor k_zy, torsional deformation")
+@clause("EN 1993-1-1 Annex B, Table B.2", "Interaction factor {k_zy}, torsional deformation")
 def k_zy_torsional(C_mLT, lambda_z, n_z, section_class):
     """Class 1, 2: [1 − 0.1·λ̄_z·n_z/(C_mLT − 0.25)] ≥ [1 − 0.1·n_z/(C_mLT − 0.25)], and
     for λ̄_z < 0.4: k_zy = 0.6 + λ̄_z ≤ 1 − 0.1·λ̄_z·n_z/(C_mLT − 0.25);

@@ -102,7 +102,7 @@ def ltb_slenderness(W_y, f_y, M_cr):
     return sqrt(W_y * f_y / M_cr)
 
 
-@clause("EN 1993-1-1 6.3.2.2(1)", "Value to determine χ_LT, general case")
+@clause("EN 1993-1-1 6.3.2.2(1)", "Value to determine {chi_LT}, general case")
 def ltb_phi_general(alpha_LT, lambda_LT):
     """Φ_LT = 0.5·[1 + α_LT·(λ̄_LT − 0.2) + λ̄_LT²]."""
     return (1 + alpha_LT * (lambda_LT - 0.2) + lambda_LT**2) / 2
@@ -114,7 +114,7 @@ def ltb_reduction_general(Phi_LT, lambda_LT):
     return Min(1 / (Phi_LT + sqrt(Phi_LT**2 - lambda_LT**2)), 1)
 
 
-@clause("EN 1993-1-1 6.3.2.3(1)", "Value to determine χ_LT, rolled or equivalent welded")
+@clause("EN 1993-1-1 6.3.2.3(1)", "Value to determine {chi_LT}, rolled or equivalent welded")
 def ltb_phi_rolled(alpha_LT, lambda_LT, lambda_LT_0, beta):
     """Φ_LT = 0.5·[1 + α_LT·(λ̄_LT − λ̄_LT,0) + β·λ̄_LT²]."""
     return (1 + alpha_LT * (lambda_LT - lambda_LT_0) + beta * lambda_LT**2) / 2

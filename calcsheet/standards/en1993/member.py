@@ -117,8 +117,8 @@ EN_CHECK_TITLES: dict[str, str] = {
 
 AXES_TEXT = (
     "EN 1993-1-1 axes: y-y is the major axis and z-z the minor axis, i.e. calcsheet's "
-    "x-x and y-y. So M_y,Ed is calcsheet's M_x, M_z,Ed its M_y, V_z,Ed (parallel to the "
-    "web or depth) its V_y and V_y,Ed its V_x. N_Ed is positive in tension. Moments and "
+    "x-x and y-y. So {M_y_Ed} is calcsheet's {M_x}, {M_z_Ed} its {M_y}, {V_z_Ed} (parallel to the "
+    "web or depth) its {V_y} and {V_y_Ed} its {V_x}. {N_Ed} is positive in tension. Moments and "
     "shears are checked by magnitude."
 )
 NOT_COVERED_TEXT = (
@@ -128,24 +128,25 @@ NOT_COVERED_TEXT = (
 )
 NOT_COVERED_WITH_TORQUE_TEXT = (
     "Not covered by these checks: warping torsion of open sections (the warping torque "
-    "T_w,Ed and the bimoment B_Ed of EN 1993-1-1 6.2.7(2), (4), and their direct stresses "
+    "{T_w_Ed} and the bimoment {B_Ed} of EN 1993-1-1 6.2.7(2), (4), and their direct stresses "
     "combined with bending), class 4 cross-sections (EN 1993-1-5), intermediate lateral "
     "restraints, local load introduction and connections. They must be verified separately."
 )
 WARPING_TEXT = (
-    "An open section: T_Ed is taken as St Venant torsion throughout (T_t,Ed = T_Ed, "
-    "6.2.7(2)), with τ_t,Ed = T_t,Ed·t/I_t largest in the thickest element. Warping torsion "
-    "(T_w,Ed and the bimoment B_Ed, 6.2.7(2), (4), (7)) is not included in this check; where "
+    "An open section: {T_Ed} is taken as St Venant torsion throughout ({T_t_Ed} = {T_Ed}, "
+    "6.2.7(2)), with {tau_t_Ed} = {T_t_Ed}·t/{I_t} largest in the thickest element. Warping "
+    "torsion ({T_w_Ed} and the bimoment {B_Ed}, 6.2.7(2), (4), (7)) is not included in this "
+    "check; where "
     "the member's stress steps include warping, its stresses appear there, not here."
 )
 CLOSED_TEXT = (
-    "A closed hollow section: warping is neglected (EN 1993-1-1 6.2.7(7)) and T_Ed is "
+    "A closed hollow section: warping is neglected (EN 1993-1-1 6.2.7(7)) and {T_Ed} is "
     "carried as St Venant torsion, the shear stress of the thin wall by Bredt's formula "
-    "τ_t,Ed = T_Ed/(2·A_m·t), A_m the area enclosed by the mid-line of the wall."
+    "{tau_t_Ed} = {T_Ed}/(2·{A_m}·t), {A_m} the area enclosed by the mid-line of the wall."
 )
 NO_TORQUE_TEXT = (
-    "The checks of 6.2.7 apply to a member under torsion: a torque of at most 10⁻⁹·(|M_y,Ed| "
-    "+ |M_z,Ed|), the round-off of statics, is taken as zero."
+    "The checks of 6.2.7 apply to a member under torsion: a torque of at most 10⁻⁹·(|{M_y_Ed}| "
+    "+ |{M_z_Ed}|), the round-off of statics, is taken as zero."
 )
 LTB_FIXED = (
     "follows from the section, the support case, the moment diagram and the load height "
@@ -504,12 +505,12 @@ def member_data(
     values: dict[str, tuple[pint.Quantity, str, str]] = {}
     for name, key, description in (
         ("A", "A", "Area"),
-        ("W_pl_y", "Zx", "Plastic modulus about y-y (calcsheet Z_x)"),
-        ("W_el_y", "Sx", "Elastic modulus about y-y, smaller fibre (calcsheet S_x)"),
-        ("W_pl_z", "Zy", "Plastic modulus about z-z (calcsheet Z_y)"),
-        ("W_el_z", "Sy", "Elastic modulus about z-z, smaller fibre (calcsheet S_y)"),
-        ("i_y", "rx", "Radius of gyration about y-y (calcsheet r_x)"),
-        ("i_z", "ry", "Radius of gyration about z-z (calcsheet r_y)"),
+        ("W_pl_y", "Zx", "Plastic modulus about y-y (calcsheet {Z_x})"),
+        ("W_el_y", "Sx", "Elastic modulus about y-y, smaller fibre (calcsheet {S_x})"),
+        ("W_pl_z", "Zy", "Plastic modulus about z-z (calcsheet {Z_y})"),
+        ("W_el_z", "Sy", "Elastic modulus about z-z, smaller fibre (calcsheet {S_y})"),
+        ("i_y", "rx", "Radius of gyration about y-y (calcsheet {r_x})"),
+        ("i_z", "ry", "Radius of gyration about z-z (calcsheet {r_y})"),
     ):
         values[name] = (props[key], description, sources.get(key, ""))
     labels = {
@@ -549,13 +550,16 @@ def member_data(
         )  # fmt: skip
     if lateral is not None or interaction_method == "A":
         torsion = (
-            ("I_z", "Iy", "Second moment of area about z-z (calcsheet I_y)"),
+            ("I_z", "Iy", "Second moment of area about z-z (calcsheet {I_y})"),
             ("I_t", "J", "Torsion constant"),
             ("I_w", "Cw", "Warping constant"),
         )
         if interaction_method == "A":
             # Named I_yy: a member sheet's own I_y is calcsheet's minor axis.
-            torsion = (("I_yy", "Ix", "Second moment of area about y-y (calcsheet I_x)"), *torsion)
+            torsion = (
+                ("I_yy", "Ix", "Second moment of area about y-y (calcsheet {I_x})"),
+                *torsion,
+            )
         for name, key, description in torsion:
             if key not in props or not math.isfinite(float(props[key].m)):
                 raise InputError(
@@ -813,8 +817,8 @@ class _Procedure:
         w, steel, factors, member = self.w, self.member.steel, self.member.factors, self.member
         w.heading("Material, partial factors and section", 2)
         w.input(
-            "f_y", steel.f_y, f"Yield strength, {steel.grade}", dimension="stress", unit="MPa",
-            reference=steel.source, fixed=MATERIAL_FIXED,
+            "f_y", steel.f_y, f"Yield strength, {w.literal(steel.grade)}", dimension="stress",
+            unit="MPa", reference=steel.source, fixed=MATERIAL_FIXED,
         )  # fmt: skip
         w.input(
             "E", steel.E, "Modulus of elasticity", dimension="stress", unit="MPa",
@@ -861,8 +865,9 @@ class _Procedure:
         if kind == "I":
             w.text(
                 "Flange outstands are classified in uniform compression for every case (exact "
-                "for M_y, on the safe side for M_z); the web under N with M_y, from the plastic "
-                "(α) and elastic (ψ) stress distributions. The web is not stressed by M_z."
+                "for {M_y}, on the safe side for {M_z}); the web under {N} with {M_y}, from the "
+                "plastic (α) and elastic (ψ) stress distributions. The web is not stressed by "
+                "{M_z}."
             )
             w.step(
                 "c_f", (w["b"] - w["t_w"] - 2 * w["r"]) / 2, "Flange outstand width",
@@ -923,7 +928,7 @@ class _Procedure:
         if need_N and w.prints and float(w.value_of(w["class_N"]).m) > 3:
             # The scope test refused class 4 under compression: the member is in tension.
             w.text(
-                "The section is class 4 in compression; a compressive N_Ed would need "
+                "The section is class 4 in compression; a compressive {N_Ed} would need "
                 "effective properties (EN 1993-1-5), which are not covered."
             )
 
@@ -1081,7 +1086,7 @@ class _Procedure:
                 self._torsion_walls()
                 w.input(
                     "k_R", self.member.corner_ratio,
-                    "Mid-line corner radius over the wall thickness, (r_o + r_i)/(2t)",
+                    "Mid-line corner radius over the wall thickness, ({r_o} + {r_i})/(2t)",
                     dimension="dimensionless", reference=self.member.corner_source,
                 )  # fmt: skip
                 R_m = w.step("R_m", w["k_R"] * w["t"], "Mid-line corner radius")
@@ -1106,7 +1111,7 @@ class _Procedure:
         T_t = w.branch(
             "T_t_Ed",
             [(T_abs, present), (0 * T_abs, True)],
-            "St Venant torque, the magnitude of T_Ed (zero within round-off)",
+            "St Venant torque, the magnitude of {T_Ed} (zero within round-off)",
             reference="EN 1993-1-1 6.2.7(2)",
         )
         # The St Venant shear stress in the part that carries each shear force, by axis.
@@ -1117,7 +1122,7 @@ class _Procedure:
                 if self.has(f"V_{axis}_Ed"):
                     if w.prints:
                         carry = "carries" if part == "web" else "carry"
-                        w.text(f"τ_t,Ed in the {part}, which {carry} V_{axis},Ed:")
+                        w.text(f"{{tau_t_Ed}} in the {part}, which {carry} {{V_{axis}_Ed}}:")
                     part_stress[axis] = w.clause(
                         tor.open_section_torsion_stress, f"tau_t_{axis}_Ed", T_t, w[thickness],
                         w["I_t"], unit="MPa",
@@ -1138,12 +1143,12 @@ class _Procedure:
         limit = tor.I_SECTION_TORSION_FACTOR if kind == "I" else 1
         if w.prints:
             w.text(
-                "Where τ_t,Ed reaches "
+                "Where {tau_t_Ed} reaches "
                 + ("1.25·τ_Rd" if kind == "I" else "τ_Rd")
                 + " no shear resistance is left: under a shear force the utilization shown is "
-                "then τ_t,Ed over that stress (1 or more; without one it is 0, and the torsion "
-                "check above has failed already). V_pl,T,Rd also takes the place of V_pl,Rd in the "
-                "reduction for shear of 6.2.8 (6.2.8(4))."
+                "then {tau_t_Ed} over that stress (1 or more; without one it is 0, and the torsion "
+                "check above has failed already). {V_pl_T_Rd} also takes the place of {V_pl_Rd} "
+                "in the reduction for shear of 6.2.8 (6.2.8(4))."
             )
         for axis, tau_part in part_stress.items():
             V_pl_T = w.clause(reduced, f"V_pl_T_{axis}_Rd", tau_part, tau_Rd, w[f"V_pl_{axis}_Rd"])
@@ -1155,8 +1160,8 @@ class _Procedure:
                     (tau_part / (limit * tau_Rd), V_abs / w[f"V_pl_{axis}_Rd"] > 0),
                     (sp.Integer(0), True),
                 ],
-                f"Utilization in shear along {axis} with torsion (τ_t,Ed over its limit where "
-                "V_pl,T,Rd = 0 under a shear force)",
+                f"Utilization in shear along {axis} with torsion ({{tau_t_Ed}} over its limit "
+                "where {V_pl_T_Rd} = 0 under a shear force)",
                 reference=f"{reduced.reference.split(', ')[0]}, Eq. (6.25)",
             )
             key = f"shear_torsion_{axis}"
@@ -1185,8 +1190,8 @@ class _Procedure:
             shown = float(w.value_of(ratio).m)
             limit = float(w.value_of(w["hw_tw_max"]).m)
             w.text(
-                f"h_w/t = {shown:.3g} ≤ 72ε/η = {limit:.3g}: the walls need no shear buckling "
-                "verification (EN 1993-1-1 6.2.6(6), 6.2.7(8)); τ_Rd applies."
+                f"{{h_w}}/t = {shown:.3g} ≤ 72ε/η = {limit:.3g}: the walls need no shear buckling "
+                "verification (EN 1993-1-1 6.2.6(6), 6.2.7(8)); {tau_Rd} applies."
             )
 
     def _shear_area(self, axis: str) -> Value:
@@ -1235,9 +1240,9 @@ class _Procedure:
             shown = float(w.value_of(ratio).m)
             limit = float(w.value_of(w["hw_tw_max"]).m)
             w.text(
-                f"h_w/t_w = {shown:.3g} ≤ 72ε/η = {limit:.3g}: the {what} "
+                f"{{h_w}}/{{t_w}} = {shown:.3g} ≤ 72ε/η = {limit:.3g}: the {what} "
                 f"{'needs' if what == 'web' else 'need'} no shear buckling verification, "
-                "V_pl,Rd applies (EN 1993-1-1 6.2.6(6))."
+                "{V_pl_Rd} applies (EN 1993-1-1 6.2.6(6))."
             )
 
     def _bending(self) -> None:
@@ -1287,7 +1292,7 @@ class _Procedure:
             N_Rd = w.clause(
                 res.plastic_axial_resistance, "N_pl_V_Rd", w["A"], self.strength, w["gamma_M0"]
             )
-            w.text("With shear: N_pl,Rd with the reduced yield strength as well (safe side).")
+            w.text("With shear: {N_pl_Rd} with the reduced yield strength as well (safe side).")
         if member.kind == "CHS" or member.interaction == "linear":
             expr = w.absolute(N_Ed) / N_Rd
             for axis in axes:
@@ -1311,8 +1316,9 @@ class _Procedure:
             governing = w[f"class_{axes[0]}"]
         w.text(
             "Class 1 and 2: reduced plastic moments of 6.2.9.1. Class 3: the largest "
-            "longitudinal stress σx,Ed = N/A + M_y/W_el,y + M_z/W_el,z against f_y/γM0 "
-            "(6.2.9.2, Eq. 6.42); with shear, f_y reduced as above."
+            "longitudinal stress {sigma_x_Ed} = {N}/{A} + {M_y}/{W_el_y} + {M_z}/{W_el_z} against "
+            "{f_y}/{gamma_M0} "
+            "(6.2.9.2, Eq. 6.42); with shear, {f_y} reduced as above."
         )
         if len(axes) == 2:
             sigma = w.clause(
@@ -1358,8 +1364,8 @@ class _Procedure:
         u = w.branch(
             "u_NM",
             [(stress_ratio, governing > 2), (criterion, n < 1), (n, True)],
-            "Utilization under N and M: σx,Ed/(f_y/γM0) for class 3; the plastic criterion "
-            "for class 1 and 2 (n itself when n ≥ 1)",
+            "Utilization under {N} and {M}: {sigma_x_Ed}/({f_y}/{gamma_M0}) for class 3; the "
+            "plastic criterion for class 1 and 2 ({n} itself when {n} ≥ 1)",
             reference=f"{reference}, (6.42)",
         )
         w.check(
@@ -1414,7 +1420,7 @@ class _Procedure:
             shape = "circular" if member.kind == "CHS" else "square"
             w.text(
                 f"A {shape} hollow section is not susceptible to lateral-torsional buckling "
-                "(EN 1993-1-1 6.3.2.1(2)): no verification; χ_LT = 1.0 in 6.3.3."
+                "(EN 1993-1-1 6.3.2.1(2)): no verification; {chi_LT} = 1.0 in 6.3.3."
             )
             return
         support = member.support_case
@@ -1422,8 +1428,8 @@ class _Procedure:
             w.text(
                 f"Member {support}"
                 + (" (fixed-free)" if support == "cantilever" else " (fork supports)")
-                + f", moment diagram: {member.diagram_text}. M_y,Ed of the section checked is "
-                "taken as the largest moment between the supports (check the section where M_y "
+                + f", moment diagram: {member.diagram_text}. {{M_y_Ed}} of the section checked is "
+                "taken as the largest moment between the supports (check the section where {M_y} "
                 "is largest). Curve: "
                 f"{lateral.curve.reason}."
             )
@@ -1453,7 +1459,7 @@ class _Procedure:
         )  # fmt: skip
         if support == "cantilever" and w.prints:
             w.text(
-                "Cantilever: M_cr by the uniform-moment formula (C1 = 1, C2 = 0) over the "
+                "Cantilever: {M_cr} by the uniform-moment formula (C1 = 1, C2 = 0) over the "
                 f"effective length of {lat.CANTILEVER_SOURCE}; the load height chose the "
                 "length (destabilizing above the shear centre)."
             )
@@ -1506,7 +1512,7 @@ class _Procedure:
         axes = [axis for axis in ("y", "z") if self.has(f"M_{axis}_Ed")]
         if w.prints and float(w.value_of(N_Ed).to_base_units().m) > 0:
             w.text(
-                "N_Ed is tension: 6.3.3 (members in bending and axial compression) does not "
+                "{N_Ed} is tension: 6.3.3 (members in bending and axial compression) does not "
                 "apply and Eq. (6.61), (6.62) are taken as 0; the cross-section under N and M "
                 "is verified by 6.2.9 (6.2.1(7)) above."
             )
@@ -1584,7 +1590,7 @@ class _Procedure:
         k: dict[str, Value] = {}
         if "y" in axes:
             w.input(
-                "C_my", diagram.C_my, "Equivalent uniform moment factor, M_y",
+                "C_my", diagram.C_my, "Equivalent uniform moment factor, {M_y}",
                 dimension="dimensionless", reference=diagram.C_m_source, fixed=LTB_FIXED,
             )  # fmt: skip
             k["yy"] = w.clause(
@@ -1608,7 +1614,7 @@ class _Procedure:
                 )  # fmt: skip
         if "z" in axes:
             w.input(
-                "C_mz", diagram.C_mz, "Equivalent uniform moment factor, M_z",
+                "C_mz", diagram.C_mz, "Equivalent uniform moment factor, {M_z}",
                 dimension="dimensionless", reference=diagram.C_m_source, fixed=LTB_FIXED,
             )  # fmt: skip
             k_zz = inter.k_zz_i if member.kind == "I" else inter.k_zz_hollow
@@ -1640,7 +1646,7 @@ class _Procedure:
         w.clause(buck.critical_force, "N_cr_z", E, w["I_z"], w["L_cr_z"])
         # The torsional buckling length is taken as the minor-axis one (common practice,
         # no source): the end conditions for twist follow those for lateral bending.
-        w.text("Torsional buckling length taken as the buckling length about z-z, L_cr,z.")
+        w.text("Torsional buckling length taken as the buckling length about z-z, {L_cr_z}.")
         w.clause(
             annex_a.torsional_critical_force, "N_cr_T", G, w["I_t"], E, w["I_w"], w["L_cr_z"],
             w["i_y"], w["i_z"],
@@ -1663,7 +1669,7 @@ class _Procedure:
         # C_mz,0: the diagram of M_z is not given, so ψ = 1 (uniform moment).
         if w.prints:
             w.text(
-                "C_mi,0 of Table A.2: M_z with ψ = 1 (its diagram is not given); M_y "
+                "{C_mi_0} of Table A.2: {M_z} with ψ = 1 (its diagram is not given); {M_y} "
                 + (
                     "with ψ = 1 (a cantilever: its diagram between restraints is not given)."
                     if member.support_case == "cantilever"
@@ -1673,7 +1679,7 @@ class _Procedure:
         k: dict[str, Value] = {}
         factors: dict[str, Value] = {}
         if has_z:
-            w.input("psi_z", 1.0, "End moment ratio of M_z (not given: uniform)",
+            w.input("psi_z", 1.0, "End moment ratio of {M_z} (not given: uniform)",
                     dimension="dimensionless", fixed=LTB_FIXED)  # fmt: skip
             factors["C_mz"] = w.clause(annex_a.moment_factor_0_linear, "C_mz", w["psi_z"], r["z"])
         if has_y:
@@ -1776,5 +1782,7 @@ class _Procedure:
         if diagram == "central point load":
             return w.clause(annex_a.moment_factor_0_point_load, "C_my_0", r_y)
         psi = member.end_moment_ratio if diagram == "end moments" else 1.0
-        w.input("psi_y", psi, "End moment ratio of M_y", dimension="dimensionless", fixed=LTB_FIXED)
+        w.input(
+            "psi_y", psi, "End moment ratio of {M_y}", dimension="dimensionless", fixed=LTB_FIXED
+        )
         return w.clause(annex_a.moment_factor_0_linear, "C_my_0", w["psi_y"], r_y)

@@ -164,13 +164,13 @@ def reduced_moment_z_i(M_pl_z_Rd, n, a):
     return Piecewise((M_pl_z_Rd, n <= a), (M_pl_z_Rd * (1 - ((n - a) / (1 - a)) ** 2), True))
 
 
-@clause("EN 1993-1-1 6.2.9.1(5)", "Web area ratio a_w of an RHS")
+@clause("EN 1993-1-1 6.2.9.1(5)", "Web area ratio {a_w} of an RHS")
 def web_ratio_rhs(A, b, t):
     """a_w = (A − 2·b·t)/A, but a_w ≤ 0.5 (b the width, across the y-y axis)."""
     return Min((A - 2 * b * t) / A, 0.5)
 
 
-@clause("EN 1993-1-1 6.2.9.1(5)", "Flange area ratio a_f of an RHS")
+@clause("EN 1993-1-1 6.2.9.1(5)", "Flange area ratio {a_f} of an RHS")
 def flange_ratio_rhs(A, h, t):
     """a_f = (A − 2·h·t)/A, but a_f ≤ 0.5 (h the depth)."""
     return Min((A - 2 * h * t) / A, 0.5)

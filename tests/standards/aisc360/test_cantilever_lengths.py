@@ -6,6 +6,7 @@ from __future__ import annotations
 import pytest
 
 from calcsheet.calcs.design import DesignBasis
+from calcsheet.engine.marked_text import plain_text
 from calcsheet.errors import InputError
 from calcsheet.standards.aisc360 import (
     CHECK_TITLES,
@@ -22,7 +23,8 @@ _KEY = {title: key for key, title in CHECK_TITLES.items()}
 
 
 def _texts(sheet) -> str:
-    return "\n".join(part.text for part in sheet.parts if hasattr(part, "text"))
+    """The sheet's words as plain text ({L_b} -> L_b)."""
+    return "\n".join(plain_text(part.text) for part in sheet.parts if hasattr(part, "text"))
 
 
 def _description(sheet, name: str) -> str:
@@ -63,7 +65,7 @@ def test_defaulted_lb_is_the_cantilever_effective_length(height, tip, k) -> None
     assert "defaulted (from the effective length of a cantilever" in _description(sheet, "L_b")
     assert ("defaulted" in _description(sheet, "k_LTB")) == (height is None or tip is None)
     texts = _texts(sheet)
-    assert "Caution: Lb is the effective length of a cantilever" in texts
+    assert "Caution: L_b is the effective length of a cantilever" in texts
     assert any("SSRC Guide to Stability Design Criteria" in ref for ref in sheet.references)
     # The numeric path reads the same length.
     demands = DemandArrays.from_quantities(
@@ -93,7 +95,7 @@ def test_defaulted_lb_without_load_height_is_l_with_a_caution() -> None:
     sheet = member_sheet("W12X26", "LRFD", Mx=20, length="10 ft")
     assert value(sheet, "L_b", "ft") == pytest.approx(10.0)
     assert "defaulted (from the member length L)" in _description(sheet, "L_b")
-    assert "Lb = L is unconservative for a load applied on the top flange" in _texts(sheet)
+    assert "L_b = L is unconservative for a load applied on the top flange" in _texts(sheet)
     # Not for a tube: no flanges, no load height.
     tube = member_sheet("HSS8X6X1/4", "LRFD", Mx=20, length="10 ft")
     assert "unconservative for a load applied on the top flange" not in _texts(tube)
@@ -112,7 +114,7 @@ def test_cb_defaulted_for_a_cantilever_cites_the_commentary() -> None:
 def test_warning_for_cb_above_one_on_a_cantilever() -> None:
     sheet = member_sheet("W12X26", "LRFD", Mx=20, length="10 ft", Cb=2.5)
     texts = _texts(sheet)
-    assert "WARNING: Cb = 2.5 > 1.0 on a cantilever" in texts
+    assert "WARNING: C_b = 2.5 > 1.0 on a cantilever" in texts
     assert _description(sheet, "C_b").endswith(": given")
     assert "(1.0 for a cantilever)" not in _description(sheet, "C_b")
     # Not a cantilever: no warning.
@@ -122,7 +124,7 @@ def test_warning_for_cb_above_one_on_a_cantilever() -> None:
 
 def test_warning_for_lb_longer_than_the_member() -> None:
     sheet = member_sheet("W12X26", "LRFD", Mx=20, length="10 ft", Lb="12 ft")
-    assert "WARNING: the given Lb is longer than the member length L" in _texts(sheet)
+    assert "WARNING: the given L_b is longer than the member length L" in _texts(sheet)
 
 
 @pytest.mark.parametrize("name", ["HSS8X6X1/4", "HSS6.000X0.250", "L4X4X1/2"])

@@ -1,0 +1,97 @@
+"""Results as an engineer writes them on the built demo sheets (issue 17).
+
+- equilibrium sums that close print 0, not the round-off of twelve carried figures;
+- the twist rate φ′ at a warping-fixed end prints 0 (AISC Design Guide 9, Appendix B,
+  cantilever: φ′(0) = 0, typed from memory as in test_member_warping.py);
+- reactions of the analysis print to the sheet's figures (0.900 kip), typed loads as
+  typed (2.5 kip);
+- words outside the equations carry no raw symbol spelling (M_x, σ^2, "alpha"): symbols
+  in words are {marks} typeset as the equations are.
+
+The printing rules are calcsheet's (DEVELOPERS.md, Conventions); the demos' numbers are
+invented.
+"""
+
+from __future__ import annotations
+
+import html
+import re
+from functools import cache
+from pathlib import Path
+
+import pytest
+
+from calcsheet.calcs import member_sheet
+from calcsheet.engine import Sheet
+from calcsheet.engine.names import GREEK_LETTERS
+from calcsheet.job.load import read_job
+from calcsheet.mechanics import point_load
+from calcsheet.pipeline.run import build_sheets
+from calcsheet.render.html import render_html
+from calcsheet.sections import catalog_section
+
+EXAMPLES = Path(__file__).resolve().parents[2] / "examples"
+DEMOS = ("outrigger", "column-bracket", "en-bracket")
+
+
+@cache
+def _sheet(name: str) -> Sheet:
+    return build_sheets(read_job(EXAMPLES / f"{name}.toml")).sheets[0].sheet
+
+
+@cache
+def _html(name: str) -> str:
+    return render_html(_sheet(name))
+
+
+def _words(markup: str) -> str:
+    """The sheet's words: everything outside MathML, SVG and style, entities resolved.
+
+    References are left out: a citation is printed as the source writes it (a file
+    name, a clause's own notation), not typeset."""
+    body = markup.split("<body", 1)[-1]
+    outside = re.sub(r"<(math|svg|style)\b.*?</\1>", "\n", body, flags=re.S)
+    outside = re.sub(r'<span class="ref">.*?</span>', "\n", outside, flags=re.S)
+    outside = re.sub(r'<p class="note">.*?</p>', "\n", outside, flags=re.S)  # shared sources
+    # The Source column of the inputs table (its rows: symbol, words, value, source).
+    outside = re.sub(
+        r"(<tr><td>\s*</td><td>.*?</td><td>\s*</td>)<td>.*?</td></tr>", r"\1</tr>", outside
+    )
+    return html.unescape(re.sub(r"<[^>]+>", "\n", outside))
+
+
+# A subscript or superscript written out (M_x, σ_vm, b^2), or a Greek letter's name.
+_RAW_SYMBOL = re.compile(
+    r"[A-Za-z\u0370-\u03ff]_[A-Za-z0-9]|\^|\b(?:" + "|".join(GREEK_LETTERS) + r")\b"
+)
+
+
+@pytest.mark.parametrize("name", DEMOS)
+def test_no_raw_symbols_in_the_words_of_a_demo_sheet(name: str) -> None:
+    raw = sorted(
+        {line.strip() for line in _words(_html(name)).splitlines() if _RAW_SYMBOL.search(line)}
+    )
+    assert raw == []
+
+
+def test_equilibrium_sums_that_close_print_zero() -> None:
+    sheet = _sheet("column-bracket")
+    sums = [step for step in sheet.steps if re.fullmatch(r"Sigma_[FM][xyz]", step.name)]
+    assert len(sums) == 6
+    for step in sums:
+        shown = sheet.equation(step, "plain").chain()
+        assert re.search(r"= 0 kip(\*ft)?$", shown), shown
+    assert "<msup><mn>10</mn>" not in _html("column-bracket")  # no 5.87 × 10⁻¹² kip
+
+
+def test_reactions_print_as_results_and_typed_loads_as_typed() -> None:
+    words = html.unescape(re.sub(r"<[^>]+>", "", _html("column-bracket")))
+    assert "−0.900kip" in words and "−0.9kip" not in words
+    assert "(−2.5kip)" in words  # the wind load as typed in the job
+
+
+def test_the_twist_rate_at_a_fixed_end_prints_zero() -> None:
+    load = point_load("P", z="96 in", components=("0 kip", "-10 kip", "0 kip"), ex="3 in")
+    sheet = member_sheet(catalog_section("W10x49"), [load], length="96 in")
+    assert sheet.equation(sheet["phi_1"], "plain").chain() == "phi_1 = 0 1/in"
+    assert sheet.value("phi_2").m != 0  # the other derivatives keep their values
