@@ -22,7 +22,7 @@ from pathlib import Path
 from typing import Any
 
 from calcsheet.calcs import member_sheet
-from calcsheet.engine import Sheet
+from calcsheet.engine import Sheet, escape_marks
 from calcsheet.errors import CalcsheetError, InputError
 from calcsheet.job import Job, JobError
 from calcsheet.pipeline.model import MemberModel, member_model
@@ -194,7 +194,8 @@ def _member_sheet(job: Job, model: MemberModel, station, index: int, source: str
     for revision in model.revisions:
         sheet.add_revision(revision.mark, revision.date, revision.description, revision.by)
     if model.notes:  # unusual but possible inputs (a long bracket), for the checker
-        sheet.add_basis("Notes on the inputs", *model.notes)
+        # The notes quote load names as typed: shown literally, never as symbol marks.
+        sheet.add_basis("Notes on the inputs", *(escape_marks(note) for note in model.notes))
     return sheet
 
 

@@ -59,3 +59,20 @@ def test_a_load_name_with_braces_shows_literally_in_html_typst_pdf_and_json():
     assert "arm{M_x}\\{N}}{\\\\" in re.sub(r"\s+", "", pdf_text)
     results = json.dumps(sheet_results(sheet), ensure_ascii=False)
     assert json.dumps(f"Component of {HOSTILE} along y", ensure_ascii=False) in results
+
+
+def test_a_note_quoting_a_load_name_shows_it_literally(tmp_path):
+    """A load far from the centroid gets a note on the design basis quoting its name."""
+    import tomllib
+
+    from calcsheet.job import job_from_data
+    from calcsheet.job.starter import STARTER
+    from calcsheet.pipeline import build_sheets
+
+    data = tomllib.loads(STARTER)
+    data["loads"][0]["name"] = HOSTILE
+    data["loads"][0]["ey"] = "-50 in"  # over 5 times the W8X31 depth: noted, not refused
+    sheet = build_sheets(job_from_data(data, source="test")).sheets[0].sheet
+    words = _words(render_html(sheet))
+    assert "Notes on the inputs" in words
+    assert f"Load {HOSTILE!r} is applied" in words  # the note quotes the name as repr()
