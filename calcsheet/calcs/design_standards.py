@@ -150,7 +150,7 @@ def _generic_write(context: CheckContext) -> list[Check]:
             GENERIC_CHECK_TITLE,
             context.points["sigma_vm_max"],
             F_allow,
-            reference="generic F_y/Ω; not a specification check",
+            reference="generic {F_y}/{Omega}; not a specification check",
         )
     ]
 

@@ -83,6 +83,7 @@ from calcsheet.calcs.points import section_terms, write_point_inputs
 from calcsheet.calcs.round_section import write_round_point_stresses
 from calcsheet.engine import Check, Sheet, TitleBlock, escape_marks
 from calcsheet.engine.functions import cos, sin
+from calcsheet.engine.marked_text import MarkedText
 from calcsheet.engine.procedure import SheetWriter
 from calcsheet.errors import InputError
 from calcsheet.figures.diagrams import force_diagrams, support_marks
@@ -1545,7 +1546,7 @@ def _write_point_data(sheet: Sheet, section: Section, model: StressModel) -> lis
     dash = "—"
     rows = []
     for point in data:
-        row: list[str | sp.Symbol] = [point.number, point.label, point.x, point.y]
+        row: list[str | sp.Symbol] = [point.number, MarkedText(point.label), point.x, point.y]
         for name in (HORIZONTAL_CUT, VERTICAL_CUT):
             cut = point.cuts.get(name)
             if cut is None:
@@ -1700,7 +1701,10 @@ def _write_point_table(sheet: Sheet, points: list[PointRecord], stress: str) -> 
     sheet.table(
         ["Point", *(title for _, title in columns)],
         [
-            [f"{point.number}: {point.label}", *(point.terms[key] for key, _ in columns)]
+            [
+                MarkedText(f"{point.number}: {point.label}"),
+                *(point.terms[key] for key, _ in columns),
+            ]
             for point in points
         ],
         caption="Stress terms with their signs and sums at each point, tension positive",

@@ -25,7 +25,18 @@ from calcsheet.engine.typst_literal import typst_string
 # An escaped brace or backslash (group 1), or a mark (group 2).
 _TOKEN = re.compile(r"\\([\\{}])|\{([A-Za-z][A-Za-z0-9]*(?:_[A-Za-z0-9]+)*)\}")
 
-__all__ = ["escape_marks", "marked_pieces", "plain_text", "rich_text"]
+__all__ = ["MarkedText", "escape_marks", "marked_pieces", "plain_text", "rich_text"]
+
+
+class MarkedText(str):
+    """Words that carry ``{symbol}`` marks, for a place that otherwise shows its text as
+    typed: a table's text cell (``MarkedText("1: peak of {V_x} shear")``). Other cells
+    may hold a user's text (a support's, a combination's name) and print literally."""
+
+    __slots__ = ()
+
+    def __str__(self) -> str:  # ``str(cell)`` keeps the mark that the text is marked
+        return self
 
 
 def escape_marks(text: object) -> str:

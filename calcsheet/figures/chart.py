@@ -9,6 +9,7 @@ from __future__ import annotations
 import itertools
 from collections.abc import Sequence
 
+from calcsheet.engine.marked_text import MarkedText
 from calcsheet.figures.labels import Obstacles, place_label, text_box
 from calcsheet.figures.style import AXIS, DIMENSION, INK, NOTE, SMALL_FONT_SIZE, TENSION
 from calcsheet.figures.svg import Svg, text_width
@@ -86,7 +87,9 @@ def sweep_chart(
     for point, label, upward in marks:
         centre, _ = place_label(obstacles, point, (0.0, 12.0 * upward), label, size=SMALL_FONT_SIZE)
         svg.text(centre, label, size=SMALL_FONT_SIZE, fill=DIMENSION, bold=True)
-    svg.text((WIDTH / 2, HEIGHT + 28), "load angle θ", size=SMALL_FONT_SIZE, fill=NOTE)
+    svg.text(
+        (WIDTH / 2, HEIGHT + 28), MarkedText("load angle {theta}"), size=SMALL_FONT_SIZE, fill=NOTE
+    )
     svg.text((-34, HEIGHT / 2), "utilization", size=SMALL_FONT_SIZE, fill=NOTE, vertical=True)
     return svg.render()
 

@@ -26,6 +26,7 @@ import numpy as np
 import pint
 from numpy.typing import ArrayLike, NDArray
 
+from calcsheet.engine.marked_text import MarkedText, plain_text
 from calcsheet.errors import InputError
 from calcsheet.figures.annotate import unit_text, value_text
 from calcsheet.figures.labels import Box, Obstacles, place_label, text_box
@@ -66,11 +67,15 @@ SUPPORT_KINDS = ("fixed", "pinned", "roller", "support")
 
 SIGN_CONVENTION = (
     "Internal forces on the cut face whose outward normal is +z (the resultant of everything "
-    "beyond the cut): N positive in tension; Vx, Vy positive along +x, +y; T, Mx, My by the "
-    "right-hand rule about +z, +x, +y (positive Mx puts the +y fibres in tension). Positive "
+    "beyond the cut): {N} positive in tension; {V_x}, {V_y} positive along +x, +y; {T}, {M_x}, "
+    "{M_y} by the right-hand rule about +z, +x, +y (positive {M_x} puts the +y fibres in "
+    "tension). Positive "
     "values are drawn above each panel's axis; each panel has its own vertical scale."
 )
-"""The sign convention of the diagrams, as written under the figure (usable as a caption)."""
+"""The sign convention of the diagrams, as written under the figure (marked text, usable as a
+caption)."""
+# Each force's symbol in the panel titles, in the order of FORCE_NAMES.
+_FORCE_SYMBOLS = ("N", "V_x", "V_y", "T", "M_x", "M_y")
 
 _IS_MOMENT = (False, False, False, True, True, True)
 
@@ -159,7 +164,7 @@ def force_diagrams(
     top = _draw_legend(svg, obstacles, top, governing_name) + PANEL_GAP
     peaks: list[tuple[Point, float, float, str, bool]] = []
     for index in shown:
-        panel = _Panel(FORCE_NAMES[index], unit_text(units[index]), top + LABEL_ROOM)
+        panel = _Panel(_FORCE_SYMBOLS[index], unit_text(units[index]), top + LABEL_ROOM)
         panel.scale_values(governing_v[:, index], low_v[:, index], high_v[:, index])
         panel.draw(svg, obstacles, z, x_of, supports)
         peaks.extend(panel.peaks(z, x_of))
@@ -279,7 +284,7 @@ class _Panel:
         _polyline(svg, obstacles, curve, stroke=INK, width=1.5, css_class="governing")
         for z_support, kind in supports:
             _support_symbol(svg, obstacles, (x_of(z_support), self.axis_y), kind, AXIS_SUPPORT_SIZE)
-        title = f"{self.name} ({self.unit})"
+        title = MarkedText(f"{{{self.name}}} ({self.unit})")
         at = (left - 12, self.axis_y)
         svg.text(at, title, size=SMALL_FONT_SIZE, anchor="end", bold=True, css_class="panel-title")
         obstacles.add_box(_box(at, title, "end"))
@@ -521,12 +526,12 @@ def _draw_station_scale(
 def _draw_caption(svg: Svg, obstacles: Obstacles, top: float) -> None:
     """The sign convention under the figure, in lines of a readable length."""
     lines: list[str] = []
-    for word in SIGN_CONVENTION.split():
-        if lines and len(lines[-1]) + 1 + len(word) <= CAPTION_CHARACTERS:
+    for word in SIGN_CONVENTION.split():  # a line's length as read, marks left out
+        if lines and len(plain_text(lines[-1])) + 1 + len(plain_text(word)) <= CAPTION_CHARACTERS:
             lines[-1] += " " + word
         else:
             lines.append(word)
-    for number_of_line, line in enumerate(lines):
+    for number_of_line, line in enumerate(MarkedText(line) for line in lines):
         at = (0.0, top + number_of_line * (SMALL_FONT_SIZE + 3))
         svg.text(at, line, size=SMALL_FONT_SIZE, anchor="start", fill=NOTE, css_class="note")
         obstacles.add_box(_box(at, line, "start"))

@@ -26,6 +26,7 @@ from collections.abc import Sequence
 import numpy as np
 import pint
 
+from calcsheet.engine.marked_text import MarkedText, escape_marks
 from calcsheet.figures.annotate import (
     Frame,
     arrow,
@@ -134,7 +135,12 @@ def member_figure(
         _draw_moment(svg, obstacles, frame, moment, unit)
     _draw_station(svg, obstacles, frame, float(cut.m), d, unit)
     extra_rows = [
-        (float(item.z.to(unit).m), f"{drawn_name(item.name)}: z = {quantity_text(item.z.to(unit))}")
+        (
+            float(item.z.to(unit).m),
+            MarkedText(
+                f"{escape_marks(drawn_name(item.name))}: {{z}} = {quantity_text(item.z.to(unit))}"
+            ),
+        )
         for item in ([] if cantilever else supports)
     ]
     _draw_z_dimensions(svg, obstacles, frame, L, d, float(cut.m), placed, unit, extra_rows)
@@ -312,7 +318,7 @@ def _draw_load(
             obstacles,
             (axis_point, at),
             ((line_x, axis_point[1]), (line_x, at[1])),
-            f"e_y = {quantity_text(Quantity(load.ey, unit))}",
+            MarkedText(f"{{e_y}} = {quantity_text(Quantity(load.ey, unit))}"),
             text_toward=(-1.0, 0.0),
         )
 
@@ -344,11 +350,11 @@ def _draw_moment(
             Box(center[0] - radius, center[1] - radius, center[0] + radius, center[1] + radius)
         )
     parts = [
-        f"{name} = {quantity_text(value)}"
-        for name, value in (("Mx", moment.Mx), ("My", moment.My), ("Mz", moment.Mz))
+        f"{{{name}}} = {quantity_text(value)}"
+        for name, value in (("M_x", moment.Mx), ("M_y", moment.My), ("M_z", moment.Mz))
         if value.m != 0
     ]
-    text = f"{drawn_name(moment.name)}: {', '.join(parts) or '0'}"
+    text = MarkedText(f"{escape_marks(drawn_name(moment.name))}: {', '.join(parts) or '0'}")
     at, _ = place_label(obstacles, center, (0.0, -1.0), text, size=SMALL_FONT_SIZE, gap=radius)
     svg.text(at, text, size=SMALL_FONT_SIZE, css_class="moment-label")
 
@@ -363,7 +369,9 @@ def _draw_station(
     svg.line((x, top), (x, bottom), width=1.2, dash="6 3", css_class="station")
     obstacles.add_line((x, top), (x, bottom))
     # A cut at the support has no dimension row to say where it is, so its label does.
-    name = "cut" if z > 0 else f"cut at the support, z_s = {quantity_text(Quantity(0.0, unit))}"
+    name = MarkedText(
+        "cut" if z > 0 else f"cut at the support, {{z_s}} = {quantity_text(Quantity(0.0, unit))}"
+    )
     upward = (0.0, -1.0) if z > 0 else (0.6, -0.8)  # at the support: off to the right
     center, _ = place_label(obstacles, (x, top), upward, name, size=SMALL_FONT_SIZE)
     svg.text(center, name, size=SMALL_FONT_SIZE, bold=True)
@@ -383,15 +391,15 @@ def _draw_z_dimensions(
     """Baseline dimensions from z = 0: the cut, each load and support position, the length."""
     rows: list[tuple[float, str]] = [(z, text) for z, text in extra if 0 < z < L]
     if station > 0:
-        rows.append((station, f"z_s = {quantity_text(Quantity(station, unit))}"))
+        rows.append((station, MarkedText(f"{{z_s}} = {quantity_text(Quantity(station, unit))}")))
     positions: dict[float, list[str]] = {}
     for load in loads:
         if 0 < load.z < L and not math.isclose(load.z, station):
-            positions.setdefault(load.z, []).append(drawn_name(load.name))
+            positions.setdefault(load.z, []).append(escape_marks(drawn_name(load.name)))
     for z in sorted(positions):
         names = ", ".join(positions[z])
-        rows.append((z, f"{names}: z = {quantity_text(Quantity(z, unit))}"))
-    rows.append((L, f"L = {quantity_text(Quantity(L, unit))}"))
+        rows.append((z, MarkedText(f"{names}: {{z}} = {quantity_text(Quantity(z, unit))}")))
+    rows.append((L, MarkedText(f"{{L}} = {quantity_text(Quantity(L, unit))}")))
     rows.sort(key=lambda row: row[0])
     base = frame.point(0, -d / 2)
     first_row = svg.y_max + 18
@@ -475,11 +483,11 @@ def _draw_end_view(
         at = frame.point(ex, ey)
         if ex != 0:
             foot = frame.point(0.0, ey)
-            text = f"e_x = {quantity_text(Quantity(ex, unit))}"
+            text = MarkedText(f"{{e_x}} = {quantity_text(Quantity(ex, unit))}")
             linear_dimension(svg, obstacles, (foot, at), (foot, at), text, text_toward=(0.0, -1.0))
         if ey != 0:
             foot = frame.point(ex, 0.0)
-            text = f"e_y = {quantity_text(Quantity(ey, unit))}"
+            text = MarkedText(f"{{e_y}} = {quantity_text(Quantity(ey, unit))}")
             linear_dimension(svg, obstacles, (foot, at), (foot, at), text, text_toward=(1.0, 0.0))
     title_y = origin[1] - reach - 16 - FONT_SIZE
     title = "End view from the free end"
@@ -620,13 +628,14 @@ def _draw_distributed(
         if first.m == 0 and last.to(unit_q).m == 0:
             continue
         if math.isclose(float(first.to(unit_q).m), float(last.to(unit_q).m)):
-            parts.append(f"q{axis} = {quantity_text(first)}")
+            parts.append(f"{{q_{axis}}} = {quantity_text(first)}")
         else:
-            parts.append(f"q{axis} = {quantity_text(first)} to {quantity_text(last.to(unit_q))}")
+            shown = f"{quantity_text(first)} to {quantity_text(last.to(unit_q))}"
+            parts.append(f"{{q_{axis}}} = {shown}")
     return (
         right,
         (top + min(y for _, y in outline)) / 2,
-    ), f"{drawn_name(load.name)}: {', '.join(parts)}"
+    ), MarkedText(f"{escape_marks(drawn_name(load.name))}: {', '.join(parts)}")
 
 
 def _draw_brace(svg: Svg, obstacles: Obstacles, frame: Frame, z: float, d: float) -> None:

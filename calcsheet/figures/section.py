@@ -14,6 +14,7 @@ from collections.abc import Sequence
 
 import numpy as np
 
+from calcsheet.engine.marked_text import MarkedText
 from calcsheet.figures.annotate import (
     Frame,
     axis_label,
@@ -52,7 +53,13 @@ ROUND = ROUND_TUBES | {"round bar"}
 # wall "tdes" and rectangular HSS height "Ht" print as the usual t and H.
 _DEPTH_NAMES = ("d", "Ht", "H", "OD", "D")
 _WIDTH_NAMES = ("bf", "bf_bottom", "B", "b", "OD", "D")
-_SHOWN_AS = {"Ht": "H", "tdes": "t"}
+# Each dimension as the figure writes it: a symbol as the sheet's inputs set it (b_f,
+# t_w), OD as the tables write it.
+_SHOWN_AS = {
+    "Ht": "{H}", "tdes": "{t}", "bf": "{b_f}", "bf_bottom": "{b_f_bottom}", "tf": "{t_f}",
+    "tf_bottom": "{t_f_bottom}", "tw": "{t_w}", "d": "{d}", "H": "{H}", "B": "{B}", "b": "{b}",
+    "D": "{D}", "t": "{t}",
+}  # fmt: skip
 
 
 def section_figure(
@@ -199,7 +206,7 @@ def _named(section: Section, extent: float, names: Sequence[str], unit: str) -> 
         if value is not None and math.isclose(
             float(value.to(section.length_unit).m), extent, rel_tol=1e-6
         ):
-            return f"{_SHOWN_AS.get(name, name)} = {quantity_text(length, unit)}"
+            return MarkedText(f"{_SHOWN_AS.get(name, name)} = {quantity_text(length, unit)}")
     return quantity_text(length, unit)
 
 
@@ -263,7 +270,7 @@ def _draw_thicknesses(
     middle = 0.5 * (x_min + x_max)
 
     def text(name: str, value: float) -> str:
-        return f"{name} = {quantity_text(Quantity(value, section.length_unit), unit)}"
+        return MarkedText(f"{name} = {quantity_text(Quantity(value, section.length_unit), unit)}")
 
     def flange_at_tip(tip_x: float, thickness: tuple[str, float]) -> None:
         # Extension lines carry both faces of the flange out to the right of its tip.

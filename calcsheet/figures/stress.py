@@ -16,6 +16,7 @@ from collections.abc import Sequence
 import numpy as np
 import pint
 
+from calcsheet.engine.marked_text import MarkedText
 from calcsheet.figures.annotate import (
     Frame,
     axis_label,
@@ -92,18 +93,20 @@ def normal_stress_figure(
     _label_extremes(svg, obstacles, frame, section, vertices, values, stress_unit)
     _draw_legend(svg, levels, scale, stress_unit)
 
-    forces = ", ".join(
-        (
-            f"N = {quantity_text(axial, signed=True)}",
-            f"Mx = {quantity_text(moment_x, signed=True)}",
-            f"My = {quantity_text(moment_y, signed=True)}",
+    forces = MarkedText(
+        ", ".join(
+            (
+                f"{{N}} = {quantity_text(axial, signed=True)}",
+                f"{{M_x}} = {quantity_text(moment_x, signed=True)}",
+                f"{{M_y}} = {quantity_text(moment_y, signed=True)}",
+            )
         )
     )
     top, middle_x = svg.y_min, 0.5 * (svg.x_min + svg.x_max)
     svg.text((middle_x, top - 4 - SMALL_FONT_SIZE / 2), forces, size=SMALL_FONT_SIZE, fill=NOTE)
     svg.text((middle_x, top - 10 - 1.5 * SMALL_FONT_SIZE - FONT_SIZE / 2), section.name, bold=True)
     bottom = svg.y_max
-    for number, note in enumerate([*notes, "σ positive in tension"]):
+    for number, note in enumerate([*notes, MarkedText("{sigma} positive in tension")]):
         at = (middle_x, bottom + 6 + (number + 0.5) * (SMALL_FONT_SIZE + 4))
         svg.text(at, note, size=SMALL_FONT_SIZE, fill=NOTE, css_class="note")
     return svg.render()
@@ -258,7 +261,7 @@ def _draw_neutral_axis(
 ) -> list[str]:
     """Draw σ = 0 across the section when it crosses it; else return the note saying why not."""
     if high <= 0 and low >= 0:
-        return ["no normal stress: N, Mx and My are all zero"]
+        return [MarkedText("no normal stress: {N}, {M_x} and {M_y} are all zero")]
     if low >= 0:
         return ["no neutral axis in the section: all tension"]
     if high <= 0:
@@ -330,15 +333,15 @@ def _label_extremes(
     high, low = float(values[high_index]), float(values[low_index])
     spread = high - low
     if spread <= 1e-9 * max(abs(high), abs(low), 1e-300):
-        marks = [(high_index, f"σ = {value_text(high, signed=True)} {unit} (uniform)")]
+        marks = [(high_index, f"{{sigma}} = {value_text(high, signed=True)} {unit} (uniform)")]
     else:
         marks = []
         if high > 0:
-            marks.append((high_index, f"σmax = {value_text(high, signed=True)} {unit}"))
+            marks.append((high_index, f"{{sigma_max}} = {value_text(high, signed=True)} {unit}"))
         if low < 0:
-            marks.append((low_index, f"σmin = {value_text(low, signed=True)} {unit}"))
+            marks.append((low_index, f"{{sigma_min}} = {value_text(low, signed=True)} {unit}"))
         if not marks:  # neither tension nor compression anywhere: label the larger end
-            marks.append((high_index, f"σ = {value_text(high, signed=True)} {unit}"))
+            marks.append((high_index, f"{{sigma}} = {value_text(high, signed=True)} {unit}"))
     centroid = frame.point(0.0, 0.0)
     dots = []
     for index, _ in marks:
@@ -346,7 +349,8 @@ def _label_extremes(
         svg.circle(at, 3.0, fill=INK, css_class="extreme")
         obstacles.add_box(Box(at[0] - 3, at[1] - 3, at[0] + 3, at[1] + 3))
         dots.append(at)
-    for (index, text), at in zip(marks, dots, strict=True):
+    for (index, words), at in zip(marks, dots, strict=True):
+        text = MarkedText(words)
         outward = outward_direction(section.outline.rings, *vertices[index])
         direction = (outward[0], -outward[1]) if outward else unit_vector(centroid, at)
         center, far = place_label(obstacles, at, direction, text, size=SMALL_FONT_SIZE)
@@ -370,7 +374,12 @@ def _draw_legend(svg: Svg, levels: Sequence[float], scale: float, stress_unit: s
     bands = len(levels) - 1
     middle_y = 0.5 * (svg.y_min + svg.y_max)
     top = middle_y - 0.5 * bands * SWATCH
-    svg.text((left, top - 12), f"σ, {unit_text(stress_unit)}", anchor="start", bold=True)
+    svg.text(
+        (left, top - 12),
+        MarkedText(f"{{sigma}}, {unit_text(stress_unit)}"),
+        anchor="start",
+        bold=True,
+    )
     for row in range(bands):
         upper, lower = levels[-1 - row], levels[-2 - row]
         y = top + row * SWATCH

@@ -15,7 +15,10 @@ import html
 import math
 import re
 from collections.abc import Iterable, Sequence
+from typing import NamedTuple
 
+from calcsheet.engine.marked_text import MarkedText, marked_pieces
+from calcsheet.engine.names import NamePart, parse_symbol_name
 from calcsheet.figures.style import FONT_FAMILY, FONT_SIZE, INK
 
 SVG_NAMESPACE = "http://www.w3.org/2000/svg"
@@ -44,9 +47,78 @@ def clean_text(text: object) -> str:
     return _NOT_XML.sub("", str(text))
 
 
+# A symbol's subscript as the sheet's math sets it: smaller, below the baseline.
+SUBSCRIPT_SCALE = 0.72
+SUBSCRIPT_DROP = 0.3  # em of the label's size
+
+
 def text_width(text: str, size: float = FONT_SIZE) -> float:
-    """Estimated width of ``text`` at ``size`` px, for layout and the bounding box."""
-    return CHARACTER_WIDTH * size * len(text)
+    """Estimated width of ``text`` at ``size`` px as drawn (a :class:`MarkedText`'s
+    subscripts smaller), for layout and the bounding box."""
+    return sum(
+        CHARACTER_WIDTH * size * (SUBSCRIPT_SCALE if run.subscript else 1.0) * len(run.text)
+        for run in text_runs(text)
+    )
+
+
+class Run(NamedTuple):
+    """A stretch of a label drawn in one style."""
+
+    text: str
+    italic: bool = False
+    subscript: bool = False
+
+
+def text_runs(text: str) -> list[Run]:
+    """A label as runs: plain text is one run, shown as it is; a :class:`MarkedText`
+    draws each ``{symbol}`` as the sheet's equations set it (a letter italic, a word
+    upright, the subscripts smaller and lowered: ``{e_y}`` is e with subscript y)."""
+    if not isinstance(text, MarkedText):
+        return [Run(clean_text(text))] if text else []
+    runs: list[Run] = []
+    for is_symbol, content in marked_pieces(text):
+        if not is_symbol:
+            runs.append(Run(content))
+            continue
+        name = parse_symbol_name(content)
+        runs.append(_symbol_run(name.base))
+        for index, part in enumerate(name.subscripts):
+            if index:
+                runs.append(Run(",", subscript=True))
+            runs.append(_symbol_run(part, subscript=True))
+    return runs
+
+
+def _symbol_run(part: NamePart, *, subscript: bool = False) -> Run:
+    if part.greek is not None:
+        return Run(part.greek, italic=True, subscript=subscript)
+    italic = not part.upright and not part.text.isdigit()
+    return Run(part.text, italic=italic, subscript=subscript)
+
+
+def _text_content(runs: list[Run], size: float) -> str:
+    """The runs as the character data of one ``<text>``: plain runs as they are, others
+    in ``<tspan>``s; a subscript moves down by ``dy`` and the run after it back up (``dy``
+    rather than ``baseline-shift``, which not every SVG renderer honours)."""
+    drop = SUBSCRIPT_DROP * size
+    out = []
+    lowered = False
+    for run in runs:
+        attributes = {}
+        if run.subscript != lowered:
+            attributes["dy"] = number(drop if run.subscript else -drop)
+            lowered = run.subscript
+        if run.subscript:
+            attributes["font-size"] = number(SUBSCRIPT_SCALE * size)
+        if run.italic:
+            attributes["font-style"] = "italic"
+        content = escape(clean_text(run.text))
+        if not attributes:
+            out.append(content)
+            continue
+        attrs = "".join(f' {name}="{value}"' for name, value in attributes.items())
+        out.append(f"<tspan{attrs}>{content}</tspan>")
+    return "".join(out)
 
 
 def escape(text: str) -> str:
@@ -252,13 +324,14 @@ class Svg:
         vertical: bool = False,
         css_class: str | None = None,
     ) -> None:
-        """Text whose vertical centre is at ``position`` (``vertical`` reads bottom to top).
+        """Text whose vertical centre is at ``position`` (``vertical`` reads bottom to top);
+        ``content`` shows as it is, a :class:`MarkedText` with its symbols typeset.
 
         The baseline is placed from the font size rather than with
         ``dominant-baseline``, which not every SVG renderer honours.
         """
         x, y = position
-        content = clean_text(content)
+        runs = text_runs(content)
         width = text_width(content, size)
         start = {"start": 0.0, "middle": -width / 2, "end": -width}[anchor]
         if vertical:  # turned -90° about (x, y): the text runs upward, centred on x
@@ -280,7 +353,7 @@ class Svg:
                 "fill": fill,
                 "transform": transform,
             },
-            escape(content),
+            _text_content(runs, size),
         )
 
     # --- document -----------------------------------------------------------------

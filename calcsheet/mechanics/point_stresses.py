@@ -68,8 +68,8 @@ COMBINED_TEXT = (
     "stress {sigma_vm} = √({sigma}² + 3·{tau}²) (shown below)."
 )
 ROUND_FIBRES = (
-    ("extreme fibre on the tension side of M_r", 1),
-    ("extreme fibre on the compression side of M_r", -1),
+    ("extreme fibre on the tension side of {M_r}", 1),
+    ("extreme fibre on the compression side of {M_r}", -1),
 )
 
 
@@ -283,7 +283,7 @@ def point_stress_procedure(
             tau_T = w.step(
                 f"tau_T_{n}",
                 formulas.torsion_stress_round(forces.T, r, section.J),
-                "Torsion, T·r/J",
+                "Torsion, {T}·{r}/{J}",
                 unit=stress,
             )
         else:
@@ -452,7 +452,7 @@ def round_stress_procedure(
         "V_res", formulas.resultant(w, forces.V_x, forces.V_y), "Resultant transverse shear"
     )
     sigma_N = w.step(
-        "sigma_N", formulas.axial_stress(forces.N, section.A), "Axial term, N/A", unit=stress
+        "sigma_N", formulas.axial_stress(forces.N, section.A), "Axial term, {N}/{A}", unit=stress
     )
     # Bending about the diameter normal to M_r (a principal axis), at the fibre y = R_o.
     sigma_b = w.step(
@@ -471,7 +471,7 @@ def round_stress_procedure(
     tau_T = w.step(
         "tau_T",
         formulas.torsion_stress_round(forces.T, R_o, section.J),
-        "Torsion at the outside radius, T·R_o/J",
+        "Torsion at the outside radius, {T}·{R_o}/{J}",
         unit=stress,
     )
     # One transverse term: |τ_V| + |τ_T| (τ_V is not negative).

@@ -617,10 +617,10 @@ def wall_shear(numbers: SectionNumbers, wall: Wall, directions: Array) -> WallSh
 def _direction_label(direction: float) -> str:
     degrees = round(float(np.degrees(direction)), 1) % 180.0
     if degrees == 0.0:
-        return "peak of V_x shear"
+        return "peak of {V_x} shear"
     if degrees == 90.0:
-        return "peak of V_y shear"
-    return f"peak shear for V along {degrees:g}° (or {degrees + 180:g}°) from +x"
+        return "peak of {V_y} shear"
+    return f"peak shear for {{V}} along {degrees:g}° (or {degrees + 180:g}°) from +x"
 
 
 def wall_peak_points(numbers: SectionNumbers) -> list[tuple[str, float, float]]:

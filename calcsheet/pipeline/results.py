@@ -131,7 +131,7 @@ def check_data(sheet: Sheet, check: Check) -> dict[str, Any]:
     cases = check.cases
     return {
         "description": check.description,
-        "reference": check.reference,
+        "reference": plain_text(check.reference),
         "utilization": _number(check.worst_utilization),
         "written_utilization": _number(check.utilization),
         "status": check.status,
@@ -147,7 +147,7 @@ def check_data(sheet: Sheet, check: Check) -> dict[str, Any]:
         "capacity": (
             quantity_data(check.capacity_value) if check.capacity_value is not None else None
         ),
-        "at": sheet.check_location(check),
+        "at": plain_text(sheet.check_location(check)),
     }
 
 
@@ -216,7 +216,7 @@ def points_data(sheet: Sheet) -> list[dict[str, Any]]:
         result.append(
             {
                 "number": number,
-                "label": labels.get(number, ""),
+                "label": plain_text(labels.get(number, "")),
                 **coordinates,
                 "stresses": {
                     term: {"step": step.name, **quantity_data(step.value)}
@@ -247,9 +247,13 @@ def sheet_results(sheet: Sheet) -> dict[str, Any]:
             {
                 "name": part.name,
                 "description": plain_text(part.description),
-                "reference": part.reference,
+                "reference": plain_text(part.reference),
                 **quantity_data(part.value),
-                **({"governs_at": sheet.governing_label(part)} if part.candidates else {}),
+                **(
+                    {"governs_at": plain_text(sheet.governing_label(part))}
+                    if part.candidates
+                    else {}
+                ),
             }
             for part in sheet.steps
         ],

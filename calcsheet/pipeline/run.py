@@ -23,6 +23,7 @@ from typing import Any
 
 from calcsheet.calcs import member_sheet
 from calcsheet.engine import Sheet, escape_marks
+from calcsheet.engine.marked_text import plain_text
 from calcsheet.errors import CalcsheetError, InputError
 from calcsheet.job import Job, JobError
 from calcsheet.pipeline.model import MemberModel, member_model
@@ -94,7 +95,7 @@ class BuildResult:
         if found is None:
             return ""
         built, check = found
-        at = built.sheet.check_location(check)
+        at = plain_text(built.sheet.check_location(check))  # marked words, as plain text
         where = f", at {at}" if at else ""
         # The case names its own station when the check was scanned along the member.
         named = check.cases is not None and check.cases.station is not None

@@ -26,6 +26,7 @@ from calcsheet.engine import (
     Table,
     title_block_items,
 )
+from calcsheet.engine.marked_text import MarkedText, escape_marks
 from calcsheet.engine.names import GREEK_LETTERS
 
 # Characters of the plain-text chain above which a step is printed one piece per line,
@@ -176,7 +177,7 @@ class _ViewBuilder:
             tuple(
                 (True, self.sheet.cell_text(part, cell, self.target))
                 if isinstance(cell, sp.Symbol)
-                else (False, cell)
+                else (False, _cell_words(cell))
                 for cell in row
             )
             for row in part.rows
@@ -244,6 +245,12 @@ class _ViewBuilder:
         if id(part) not in self._check_views:
             self._check_views[id(part)] = _check_view(self.sheet, part, self.target)
         return self._check_views[id(part)]
+
+
+def _cell_words(cell: str) -> str:
+    """A table's text cell as marked text (the templates print it ``rich``): a cell made
+    :class:`MarkedText` keeps its marks, any other shows as typed."""
+    return cell if isinstance(cell, MarkedText) else escape_marks(cell)
 
 
 def _result_fits_beside(plain: Equation) -> bool:

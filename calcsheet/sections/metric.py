@@ -256,9 +256,11 @@ def rectangular_hollow_torsion(
 
 
 def corner_rule(wall: float, forming: str) -> str:
-    """The corner radii of a hollow section in words: "r_o = 2t, r_i = t" (wall in mm)."""
+    """The corner radii of a hollow section in marked words (a source on the sheet):
+    "{r_o} = 2{t}, {r_i} = {t}" (wall in mm)."""
     outer, inner = corner_radii(wall, forming)
-    return f"r_o = {outer / wall:g}t, r_i = {'t' if inner == wall else f'{inner / wall:g}t'}"
+    inside = "{t}" if inner == wall else f"{inner / wall:g}{{t}}"
+    return f"{{r_o}} = {outer / wall:g}{{t}}, {{r_i}} = {inside}"
 
 
 def rolled_i_torsion(depth: float, width: float, web: float, flange: float, root: float) -> float:
@@ -308,7 +310,7 @@ def metric_section(row: MetricRow) -> Section:
             torsion_note="computed: flanges, web and root-fillet junctions (El Darwish and "
             "Johnston, J. Struct. Div. ASCE 91(ST1), 1965)",
             warping_constant=rolled_i_warping(h, b, tf),
-            warping_note="computed: I_w = t_f·b³·(h − t_f)²/24 (flanges only)",
+            warping_note="computed: {I_w} = {t_f}·{b}³·({h} − {t_f})²/24 (flanges only)",
         )
         dimensions = {"d": h, "bf": b, "tw": tw, "tf": tf, "r": r}
         computed = f"computed from {family.standard} dimensions, root fillets included"
@@ -319,7 +321,9 @@ def metric_section(row: MetricRow) -> Section:
         outline = replace(
             outline,
             torsion_constant=rectangular_hollow_torsion(h, b, t, outer, inner),
-            torsion_note=f"computed: {family.standard} Annex B, I_t = t³·h/3 + 2·K·A_h",
+            torsion_note=(
+                f"computed: {family.standard} Annex B, {{I_t}} = {{t}}³·{{h}}/3 + 2·{{K}}·{{A_h}}"
+            ),
         )
         dimensions = {"H": h, "B": b, "t": t}
         computed = (

@@ -362,6 +362,12 @@ def _3c7ebd3189d3c028c5f5(eps):
     return 38*eps
 
 
+def _3cd33a9bd738ee808e76(C_1, C_2, z_g, E, I_z, I_w, G, I_t, L_LT):
+    # NCCI SN003a-EN-EU (Access Steel), Elastic critical moment for lateral torsional buckling: three-factor formula, {k} = {k_w}: Elastic critical moment for lateral-torsional buckling
+    # expression a52c8a43208c508b2c9d
+    return numpy.pi**2*C_1*E*I_z*(-C_2*z_g + numpy.sqrt(C_2**2*z_g**2 + I_w/I_z + G*I_t*L_LT**2/(numpy.pi**2*E*I_z)))/L_LT**2
+
+
 def _3ed5b3bc7cf73a850e6e(d, t_f):
     # AISC 360-22 Section F2.2: Distance between flange centroids, ho = d − tf
     # expression 0839fff909ccaabe4193
@@ -480,12 +486,6 @@ def _589d0ad57d94b60f4c8c(A, b, t):
     # EN 1993-1-1 6.2.9.1(5): Web area ratio {a_w} of an RHS
     # expression aa29a9e86ac8598d7feb
     return functools.reduce(numpy.minimum, [0.5, (A - 2*b*t)/A])
-
-
-def _598ba5e37cc8e3e61a98(C_1, C_2, z_g, E, I_z, I_w, G, I_t, L_LT):
-    # NCCI SN003a-EN-EU (Access Steel), Elastic critical moment for lateral torsional buckling: three-factor formula, k = k_w: Elastic critical moment for lateral-torsional buckling
-    # expression a52c8a43208c508b2c9d
-    return numpy.pi**2*C_1*E*I_z*(-C_2*z_g + numpy.sqrt(C_2**2*z_g**2 + I_w/I_z + G*I_t*L_LT**2/(numpy.pi**2*E*I_z)))/L_LT**2
 
 
 def _5a523d462bc085a715c9(a_LT, lambda_0, lambda_z, M_y_Ed, C_my, chi_LT, M_pl_y_Rd):
@@ -1285,6 +1285,7 @@ FUNCTIONS = {
     "3ac74121876738f136bf": _3ac74121876738f136bf,
     "3c09c6f13ec3b00d1c77": _3c09c6f13ec3b00d1c77,
     "3c7ebd3189d3c028c5f5": _3c7ebd3189d3c028c5f5,
+    "3cd33a9bd738ee808e76": _3cd33a9bd738ee808e76,
     "3ed5b3bc7cf73a850e6e": _3ed5b3bc7cf73a850e6e,
     "408dd13706027d1a8a74": _408dd13706027d1a8a74,
     "43b926b1519038a96584": _43b926b1519038a96584,
@@ -1305,7 +1306,6 @@ FUNCTIONS = {
     "533bc9d5fdbcd0e261e8": _533bc9d5fdbcd0e261e8,
     "55203b5f614e26ba2a23": _55203b5f614e26ba2a23,
     "589d0ad57d94b60f4c8c": _589d0ad57d94b60f4c8c,
-    "598ba5e37cc8e3e61a98": _598ba5e37cc8e3e61a98,
     "5a523d462bc085a715c9": _5a523d462bc085a715c9,
     "601dfd4344d06680c615": _601dfd4344d06680c615,
     "618cfafff2ca199e5f53": _618cfafff2ca199e5f53,

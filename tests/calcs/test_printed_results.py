@@ -6,7 +6,9 @@
 - reactions of the analysis print to the sheet's figures (0.900 kip), typed loads as
   typed (2.5 kip);
 - words outside the equations carry no raw symbol spelling (M_x, σ^2, "alpha"): symbols
-  in words are {marks} typeset as the equations are.
+  in words are {marks} typeset as the equations are. That holds for prose, captions,
+  table headers and cells, references, the inputs' sources and the labels drawn in the
+  figures (subscripts drawn as subscripts).
 
 The printing rules are calcsheet's (DEVELOPERS.md, Conventions); the demos' numbers are
 invented.
@@ -45,19 +47,20 @@ def _html(name: str) -> str:
 
 
 def _words(markup: str) -> str:
-    """The sheet's words: everything outside MathML, SVG and style, entities resolved.
-
-    References are left out: a citation is printed as the source writes it (a file
-    name, a clause's own notation), not typeset."""
+    """The sheet's words: everything outside MathML, SVG and style, entities resolved;
+    references, the inputs' sources, their notes and table cells included."""
     body = markup.split("<body", 1)[-1]
     outside = re.sub(r"<(math|svg|style)\b.*?</\1>", "\n", body, flags=re.S)
-    outside = re.sub(r'<span class="ref">.*?</span>', "\n", outside, flags=re.S)
-    outside = re.sub(r'<p class="note">.*?</p>', "\n", outside, flags=re.S)  # shared sources
-    # The Source column of the inputs table (its rows: symbol, words, value, source).
-    outside = re.sub(
-        r"(<tr><td>\s*</td><td>.*?</td><td>\s*</td>)<td>.*?</td></tr>", r"\1</tr>", outside
-    )
-    return html.unescape(re.sub(r"<[^>]+>", "\n", outside))
+    words = html.unescape(re.sub(r"<[^>]+>", "\n", outside))
+    # A data file a source names is spelled as it is on disk (en10365_i_h_sections.csv).
+    return re.sub(r"[\w.-]+\.(?:csv|toml|json)\b", "", words)
+
+
+def _figure_words(markup: str) -> list[str]:
+    """The text of each label drawn in the sheet's figures (SVG ``<text>``, its
+    ``<tspan>`` pieces joined), entities resolved."""
+    texts = re.findall(r"<text\b[^>]*>(.*?)</text>", markup, flags=re.S)
+    return [html.unescape(re.sub(r"<[^>]+>", "", text)) for text in texts]
 
 
 # A subscript or superscript written out (M_x, σ_vm, b^2), or a Greek letter's name.
@@ -72,6 +75,13 @@ def test_no_raw_symbols_in_the_words_of_a_demo_sheet(name: str) -> None:
         {line.strip() for line in _words(_html(name)).splitlines() if _RAW_SYMBOL.search(line)}
     )
     assert raw == []
+
+
+@pytest.mark.parametrize("name", DEMOS)
+def test_no_raw_symbols_in_the_figures_of_a_demo_sheet(name: str) -> None:
+    labels = _figure_words(_html(name))
+    assert labels  # the demos draw figures with labels
+    assert sorted({label for label in labels if _RAW_SYMBOL.search(label)}) == []
 
 
 def test_equilibrium_sums_that_close_print_zero() -> None:

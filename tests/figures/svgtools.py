@@ -39,8 +39,19 @@ def line_ends(element: ET.Element) -> tuple[tuple[float, float], tuple[float, fl
 
 
 def texts(root: ET.Element) -> list[str]:
-    """The content of every <text>, in order."""
-    return [element.text or "" for element in root.iter(f"{SVG}text")]
+    """The words of every <text> (a symbol's <tspan> pieces joined: "ey = 2 in"), in order."""
+    return ["".join(element.itertext()) for element in root.iter(f"{SVG}text")]
+
+
+def drawn_width(element: ET.Element) -> float:
+    """The width of a <text> as the figure code estimates it: each piece (a <tspan>, a
+    symbol's smaller subscript) at its own font size."""
+    size = float(element.get("font-size", "0"))
+    width = text_width(element.text or "", size)
+    for piece in element.iter(f"{SVG}tspan"):
+        width += text_width(piece.text or "", float(piece.get("font-size", size)))
+        width += text_width(piece.tail or "", size)
+    return width
 
 
 def text_boxes(root: ET.Element) -> list[tuple[str, Box]]:
@@ -53,7 +64,7 @@ def text_boxes(root: ET.Element) -> list[tuple[str, Box]]:
             continue
         words = "".join(element.itertext())
         size = float(element.get("font-size", "0"))
-        width = text_width(words, size)
+        width = drawn_width(element)
         x, middle = float(element.get("x", "0")), float(element.get("y", "0")) - 0.35 * size
         start = {"start": 0.0, "middle": -width / 2, "end": -width}[
             element.get("text-anchor", "start")

@@ -140,7 +140,7 @@ def test_angle_shear_at_the_long_leg_peak_against_fe() -> None:
     ours = angle("6 in", "4 in", "0.5 in")
     fe = _fe(angle_section(d=6, b=4, t=0.5, r_r=0, r_t=0, n_r=1), 0.05)
     model = stress_model(ours)
-    peak = model.labels.index("vertical leg, peak of V_y shear")
+    peak = model.labels.index("vertical leg, peak of {V_y} shear")
     Vy = -4.0
     only_vy = model.stresses(np.array([0, 0, Vy, 0, 0, 0]))
     cx, cy = fe.get_c()

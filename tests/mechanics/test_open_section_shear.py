@@ -167,7 +167,7 @@ def test_equal_angle_peak_against_the_thin_wall_formula() -> None:
     # per kip, 6.9 % below this: this assertion failed before the wall scan.
     assert np.abs(stresses.tau_zy).max() == pytest.approx(thin_wall_peak, rel=0.03)
     assert stresses.tau.max() == pytest.approx(thin_wall_peak, rel=0.03)
-    peak = model.labels.index("vertical leg, peak of V_y shear")
+    peak = model.labels.index("vertical leg, peak of {V_y} shear")
     midline_heel_y = model.y[model.labels.index("heel")] + t / 2
     assert model.y[peak] - midline_heel_y == pytest.approx(2 * a / 5, abs=0.05)
 

@@ -40,7 +40,7 @@ def test_shs_100x100x5_cf_against_the_product_tables() -> None:
     assert p["Zx"].to("cm**3").m == pytest.approx(64.6, rel=0.005)
     assert p["J"].to("cm**4").m == pytest.approx(441, rel=0.01)
     assert find_entry("SHS 100x100x5 CF").values["mass_kg_per_m"] == pytest.approx(14.4, abs=0.05)
-    assert "EN 10219-2" in section.sources["A"] and "r_o = 2t" in section.sources["A"]
+    assert "EN 10219-2" in section.sources["A"] and "{r_o} = 2{t}" in section.sources["A"]
 
 
 @pytest.mark.parametrize(

@@ -70,7 +70,7 @@ def shear_modulus(E, nu):
 
 
 @clause(
-    f"{SN003}: three-factor formula, k = k_w",
+    f"{SN003}: three-factor formula, {{k}} = {{k_w}}",
     "Elastic critical moment for lateral-torsional buckling",
 )
 def critical_moment(C_1, C_2, z_g, E, I_z, I_w, G, I_t, L_LT):
@@ -201,13 +201,13 @@ def moment_diagram_factors(support: str, diagram: str, psi: float = 1.0) -> Diag
         return DiagramFactors(
             1.0, 0.0, 1.0, 0.9, 0.9, 1.0,
             f"uniform-moment formula over the effective length of {CANTILEVER_SOURCE}",
-            "EN 1993-1-1 Table 6.6 has no cantilever row: k_c = 1.0 (f = 1)",
-            "EN 1993-1-1 Table B.3, note: sway buckling mode (C_my, C_mz); C_mLT = 1.0, "
+            "EN 1993-1-1 Table 6.6 has no cantilever row: {k_c} = 1.0 ({f} = 1)",
+            "EN 1993-1-1 Table B.3, note: sway buckling mode ({C_my}, {C_mz}); {C_mLT} = 1.0, "
             "the uniform-moment value, as the diagram between restraints is not given",
         )  # fmt: skip
     # Simply supported (fork supports, k = k_w = 1). C_mz = 1.0: the diagram of M_z is
     # not given, and the uniform-moment value is the largest of Table B.3.
-    m_note = "EN 1993-1-1 Table B.3 (C_mz = 1.0: the M_z diagram is not given, uniform value)"
+    m_note = "EN 1993-1-1 Table B.3 ({C_mz} = 1.0: the {M_z} diagram is not given, uniform value)"
     if diagram == "uniform":
         return DiagramFactors(
             1.0, 0.0, 1.0, 1.0, 1.0, 1.0, f"{SN003}: uniform moment (ψ = 1)",
@@ -218,7 +218,7 @@ def moment_diagram_factors(support: str, diagram: str, psi: float = 1.0) -> Diag
         return DiagramFactors(
             _c1_end_moments(psi), 0.0, 1 / (1.33 - 0.33 * psi), c_m, 1.0, c_m,
             f"{SN003}: end moments, ψ = {psi:.3g} (linear between the tabulated ψ)",
-            f"EN 1993-1-1 Table 6.6 (ψ = {psi:.3g}): k_c = 1/(1.33 − 0.33ψ)",
+            f"EN 1993-1-1 Table 6.6 (ψ = {psi:.3g}): {{k_c}} = 1/(1.33 − 0.33ψ)",
             m_note,
         )  # fmt: skip
     # SN003's table for transverse loads (from memory): uniform load C1 = 1.127, C2 = 0.454;

@@ -599,9 +599,11 @@ def _corner_ratio(geometry: _Geometry) -> tuple[float, str]:
     wall = float(geometry.dims["t"].to("mm").m)
     outer, inner = corner_radii(wall, geometry.fabrication)
     if geometry.fabrication == "hot-finished":
-        source = "EN 10210-2:2006 Annex B: r_o = 1.5t, r_i = t"
+        source = "EN 10210-2:2006 Annex B: {r_o} = 1.5{t}, {r_i} = {t}"
     else:
-        source = f"EN 10219-2:2006 Annex B: r_o = {outer / wall:.3g}t, r_i = r_o − t"
+        source = (
+            f"EN 10219-2:2006 Annex B: {{r_o}} = {outer / wall:.3g}{{t}}, {{r_i}} = {{r_o}} − {{t}}"
+        )
     return (outer + inner) / (2 * wall), source
 
 
@@ -642,7 +644,7 @@ def _lateral(
         loading = "destabilizing" if destabilizing else "normal"
         k_source = f"{lat.CANTILEVER_SOURCE}: {loading} loading"
     else:
-        k_LT, k_source = 1.0, f"{lat.SN003}: fork supports, k = k_w = 1"
+        k_LT, k_source = 1.0, f"{lat.SN003}: fork supports, {{k}} = {{k_w}} = 1"
     return LateralData(chosen, curve, z_g, source, k_LT, k_source)
 
 
@@ -724,7 +726,7 @@ def _geometry(section: Section, fabrication: str | None) -> _Geometry:
         elif k_design is not None:
             # The AISC tables give k_des = t_f + fillet; the fillet radius is the difference.
             r = (k_design - dims["tf"]).to(unit)
-            reference = "k_des − t_f of the AISC tables"
+            reference = "{k_des} − {t_f} of the AISC tables"
         else:
             r = Quantity(0.0, unit)
             reference = "no fillet in the outline (section drawn from plates)"
