@@ -238,7 +238,7 @@ def point_stress_procedure(
     sigma_N = w.step(
         "sigma_N",
         formulas.axial_stress(forces.N, section.A),
-        "Axial term, N/A (same at every point)",
+        "Axial term, {N}/{A} (same at every point)",
         unit=stress,
     )
     tau_T_common = None if twist is not None else _common_torsion(w, forces.T, section, stress)

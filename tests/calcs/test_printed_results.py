@@ -28,6 +28,7 @@ from calcsheet.engine import Sheet
 from calcsheet.engine.names import GREEK_LETTERS
 from calcsheet.job.load import read_job
 from calcsheet.mechanics import point_load
+from calcsheet.pipeline.results import sheet_results
 from calcsheet.pipeline.run import build_sheets
 from calcsheet.render.html import render_html
 from calcsheet.sections import catalog_section
@@ -105,3 +106,39 @@ def test_the_twist_rate_at_a_fixed_end_prints_zero() -> None:
     sheet = member_sheet(catalog_section("W10x49"), [load], length="96 in")
     assert sheet.equation(sheet["phi_1"], "plain").chain() == "phi_1 = 0 1/in"
     assert sheet.value("phi_2").m != 0  # the other derivatives keep their values
+
+
+@pytest.mark.parametrize(
+    ("section", "label"),
+    [
+        ("L6X4X1/2", "vertical leg, peak of V_y shear"),
+        ("HSS6.000X0.500", "extreme fibre on the tension side of M_r"),
+    ],
+)
+def test_stress_point_labels_are_typeset_on_the_sheet_and_plain_in_json(
+    section: str, label: str
+) -> None:
+    """A point named after a symbol (the peak of V_y shear on an angle's leg, the tension
+    side of M_r on a round tube) prints the symbol as math in the tables, the point
+    headings and "Governs at", and as plain text in the JSON file (calcsheet's own
+    names, common practice, no source)."""
+    load = point_load("P", z="48 in", components=("0.5 kip", "-2 kip", "0 kip"), ex="1 in")
+    sheet = member_sheet(catalog_section(section), [load], length="48 in")
+    markup = render_html(sheet)
+    raw = sorted({line.strip() for line in _words(markup).splitlines() if _RAW_SYMBOL.search(line)})
+    assert raw == []
+    assert label in [point["label"] for point in sheet_results(sheet)["points"]]
+
+
+@pytest.mark.parametrize("name", DEMOS)
+def test_references_and_locations_are_plain_text_in_json(name: str) -> None:
+    """The JSON file gives references and where a step or check governs as plain text
+    (k = k_w, not marks), as a program reads them."""
+    results = sheet_results(_sheet(name))
+    texts = [step["reference"] for step in results["steps"]]
+    texts += [step.get("governs_at", "") for step in results["steps"]]
+    texts += [check["reference"] for check in results["checks"]]
+    texts += [check["at"] for check in results["checks"]]
+    texts += [point["label"] for point in results["points"]]
+    assert any(texts)
+    assert [text for text in texts if "{" in text or "}" in text] == []
