@@ -494,6 +494,12 @@ def _5a523d462bc085a715c9(a_LT, lambda_0, lambda_z, M_y_Ed, C_my, chi_LT, M_pl_y
     return 1.7*a_LT*lambda_0*abs(M_y_Ed)/(C_my*M_pl_y_Rd*chi_LT*(lambda_z**4 + 0.1))
 
 
+def _5bc1ed79f22254e3c72a(E, I_z, I_w, G, I_t, L_LT):
+    # EN 1993-1-1 Annex A, Table A.2: Elastic critical moment under uniform moment (for {lambda_0})
+    # expression ad1124a63ccf9db69b73
+    return numpy.pi**2*E*I_z*numpy.sqrt(I_w/I_z + G*I_t*L_LT**2/(numpy.pi**2*E*I_z))/L_LT**2
+
+
 def _601dfd4344d06680c615(M_y, M_cr):
     # AISC 360-22 Eq. F10-2, F10-3: Nominal flexural strength, lateral-torsional buckling
     # expression 6f4216d75cf039ef8c09
@@ -654,12 +660,6 @@ def _87b62a9aad812fcaffa0(P_r, P_c, M_rx, M_cx, M_ry, M_cy):
     # AISC 360-22 Eq. H1-1a, H1-1b: Interaction of axial force and flexure
     # expression deedddcb16058df1ab71
     return numpy.select([numpy.greater_equal(P_r/P_c, 0.2),True], [P_r/P_c + (8/9)*M_ry/M_cy + (8/9)*M_rx/M_cx,(1/2)*P_r/P_c + M_ry/M_cy + M_rx/M_cx], default=numpy.nan)
-
-
-def _8827f6d9a61539e8bdf0(C_1, r_z, r_T):
-    # EN 1993-1-1 Annex A, Table A.2: Slenderness limit of λ̄_0 below which torsion is not considered
-    # expression af9849b67255cd834e28
-    return 0.2*numpy.sqrt(C_1)*functools.reduce(numpy.maximum, [0, (1 - r_T)*(1 - r_z)])**0.25
 
 
 def _8ac035390de41c3926bb(M_p, F_y, S, lam_w, E):
@@ -872,12 +872,6 @@ def _b6b2229bc2f2f642d8ca(M_y):
     return 1.5*M_y
 
 
-def _b6c6041562495b515c42(E, I_z, I_w, G, I_t, L_LT):
-    # EN 1993-1-1 Annex A, Table A.2: Elastic critical moment under uniform moment (for λ̄_0)
-    # expression ad1124a63ccf9db69b73
-    return numpy.pi**2*E*I_z*numpy.sqrt(I_w/I_z + G*I_t*L_LT**2/(numpy.pi**2*E*I_z))/L_LT**2
-
-
 def _b84177f2dc6d2a3733ae(A, b, t_f):
     # EN 1993-1-1 6.2.9.1(5): Web area ratio a of an I-section
     # expression 62b2c72e231a54c2cdd9
@@ -1068,6 +1062,12 @@ def _de654250a912c31dbf0f(f_y, gamma_M0):
     # EN 1993-1-1 6.2.7(5), 6.2.1(5) Eq. (6.1): Design shear strength, yield criterion
     # expression c4686c0f0c10319639ef
     return (1/3)*numpy.sqrt(3)*f_y/gamma_M0
+
+
+def _df95e87b0b0e11d6d85f(C_1, r_z, r_T):
+    # EN 1993-1-1 Annex A, Table A.2: Slenderness limit of {lambda_0} below which torsion is not considered
+    # expression af9849b67255cd834e28
+    return 0.2*numpy.sqrt(C_1)*functools.reduce(numpy.maximum, [0, (1 - r_T)*(1 - r_z)])**0.25
 
 
 def _e09cce2008cc484b0d6a(C_mz, lambda_z, n_z, section_class):
@@ -1307,6 +1307,7 @@ FUNCTIONS = {
     "55203b5f614e26ba2a23": _55203b5f614e26ba2a23,
     "589d0ad57d94b60f4c8c": _589d0ad57d94b60f4c8c,
     "5a523d462bc085a715c9": _5a523d462bc085a715c9,
+    "5bc1ed79f22254e3c72a": _5bc1ed79f22254e3c72a,
     "601dfd4344d06680c615": _601dfd4344d06680c615,
     "618cfafff2ca199e5f53": _618cfafff2ca199e5f53,
     "624f39d77712b8a7a38f": _624f39d77712b8a7a38f,
@@ -1334,7 +1335,6 @@ FUNCTIONS = {
     "87335147d7601893e884": _87335147d7601893e884,
     "879c54f807c51e5b74f0": _879c54f807c51e5b74f0,
     "87b62a9aad812fcaffa0": _87b62a9aad812fcaffa0,
-    "8827f6d9a61539e8bdf0": _8827f6d9a61539e8bdf0,
     "8ac035390de41c3926bb": _8ac035390de41c3926bb,
     "8afc53eed18ffccc9c02": _8afc53eed18ffccc9c02,
     "8b0a3edbcdf2b3e765fd": _8b0a3edbcdf2b3e765fd,
@@ -1370,7 +1370,6 @@ FUNCTIONS = {
     "b4363fd7287a59f6797d": _b4363fd7287a59f6797d,
     "b60f3b3772f0c207f24e": _b60f3b3772f0c207f24e,
     "b6b2229bc2f2f642d8ca": _b6b2229bc2f2f642d8ca,
-    "b6c6041562495b515c42": _b6c6041562495b515c42,
     "b84177f2dc6d2a3733ae": _b84177f2dc6d2a3733ae,
     "ba1433fc51b94a3f5966": _ba1433fc51b94a3f5966,
     "ba4ca434718b6d9e923b": _ba4ca434718b6d9e923b,
@@ -1403,6 +1402,7 @@ FUNCTIONS = {
     "dd7cbefdb56bddcc1a12": _dd7cbefdb56bddcc1a12,
     "ddae9f88d66fb4c939c7": _ddae9f88d66fb4c939c7,
     "de654250a912c31dbf0f": _de654250a912c31dbf0f,
+    "df95e87b0b0e11d6d85f": _df95e87b0b0e11d6d85f,
     "e09cce2008cc484b0d6a": _e09cce2008cc484b0d6a,
     "e0aa9fd8c02541de0735": _e0aa9fd8c02541de0735,
     "e0d84e9e2ffca6d42559": _e0d84e9e2ffca6d42559,

@@ -64,9 +64,9 @@ def _figure_words(markup: str) -> list[str]:
     return [html.unescape(re.sub(r"<[^>]+>", "", text)) for text in texts]
 
 
-# A subscript or superscript written out (M_x, σ_vm, b^2), or a Greek letter's name.
+# A subscript or superscript written out (M_x, σ_vm, λ̄_0, b^2), or a Greek letter's name.
 _RAW_SYMBOL = re.compile(
-    r"[A-Za-z\u0370-\u03ff]_[A-Za-z0-9]|\^|\b(?:" + "|".join(GREEK_LETTERS) + r")\b"
+    r"[A-Za-z\u0370-\u03ff][\u0300-\u036f]?_[A-Za-z0-9]|\^|\b(?:" + "|".join(GREEK_LETTERS) + r")\b"
 )
 
 

@@ -53,7 +53,7 @@ def torsion_ratio(I_t, I_y):
     return Max(1 - I_t / I_y, 0)
 
 
-@clause(TABLE_A2, "Elastic critical moment under uniform moment (for λ̄_0)")
+@clause(TABLE_A2, "Elastic critical moment under uniform moment (for {lambda_0})")
 def critical_moment_uniform(E, I_z, I_w, G, I_t, L_LT):
     """M_cr,0 = π²·E·I_z/L²·√(I_w/I_z + L²·G·I_t/(π²·E·I_z)): ψ_y = 1, load at the shear
     centre (the three-factor formula of SN003a-EN-EU with C1 = 1)."""
@@ -66,7 +66,7 @@ def c1_from_kc(k_c):
     return 1 / k_c**2
 
 
-@clause(TABLE_A2, "Slenderness limit of λ̄_0 below which torsion is not considered")
+@clause(TABLE_A2, "Slenderness limit of {lambda_0} below which torsion is not considered")
 def lambda_0_limit(C_1, r_z, r_T):
     """0.2·√C1·⁴√[(1 − N_Ed/N_cr,z)(1 − N_Ed/N_cr,TF)] (N_cr,TF = N_cr,T for a doubly
     symmetric section); taken as 0 when N_Ed exceeds either critical force."""

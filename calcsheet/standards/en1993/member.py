@@ -1481,7 +1481,8 @@ class _Procedure:
             chi = w.clause(lat.ltb_reduction_general, "chi_LT", phi, lam)
         else:
             w.input(
-                "lambda_LT_0", LAMBDA_LT_0, "Plateau length λ̄_LT,0", dimension="dimensionless",
+                "lambda_LT_0", LAMBDA_LT_0, "Plateau length {lambda_LT_0}",
+                dimension="dimensionless",
                 reference="EN 1993-1-1 6.3.2.3(1) (recommended value)",
             )  # fmt: skip
             w.input(
@@ -1666,7 +1667,7 @@ class _Procedure:
         a_LT = w.clause(annex_a.torsion_ratio, "a_LT", w["I_t"], w["I_yy"])
         lam_max = w.largest(
             "lambda_max", [("y-y", w["lambda_rel_y"]), ("z-z", w["lambda_rel_z"])],
-            "Larger flexural slenderness λ̄_max",
+            "Larger flexural slenderness {lambda_max}",
         )  # fmt: skip
         # C_mz,0: the diagram of M_z is not given, so ψ = 1 (uniform moment).
         if w.prints:
@@ -1766,7 +1767,7 @@ class _Procedure:
         w, member = self.w, self.member
         if member.ltb is None:
             return w.input(
-                "lambda_0", 0.0, "Not susceptible to lateral-torsional buckling: λ̄_0 = 0",
+                "lambda_0", 0.0, "Not susceptible to lateral-torsional buckling: {lambda_0} = 0",
                 dimension="dimensionless", reference="EN 1993-1-1 6.3.2.1(2)",
             )  # fmt: skip
         M_cr_0 = w.clause(
