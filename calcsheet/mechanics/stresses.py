@@ -212,7 +212,11 @@ class PointStresses:
         return np.argmax(chosen >= largest - _TIE * scale, axis=-1)
 
     def governing_label(self, measure: str) -> str:
-        """Label of the governing point of a single load case."""
+        """Label of the governing point of a single load case.
+
+        Point labels are words with ``{symbol}`` marks (``"web, peak of {V_x} shear"``),
+        as the sheet typesets them; ``calcsheet.engine.marked_text.plain_text`` gives
+        the plain words (``"web, peak of V_x shear"``)."""
         index = self.governing_index(measure)
         if np.ndim(index) != 0:
             raise ValueError("governing_label needs the stresses of one load case")
