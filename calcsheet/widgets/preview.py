@@ -18,6 +18,7 @@ import html
 import ipywidgets as widgets
 
 from calcsheet.engine import Sheet
+from calcsheet.engine.marked_text import rich_text
 from calcsheet.pipeline import BuildResult
 from calcsheet.render.html import render_fragment
 
@@ -72,7 +73,7 @@ def key_results_html(result: BuildResult, *, stale: bool = False) -> str:
             rows.append("<tr>" + _cells("td", where, "", "no checks", "") + "</tr>")
             continue
         location = built.sheet.check_location(governing)
-        at = f" at {html.escape(location)}" if location else ""
+        at = f" at {rich_text(location, 'mathml')}" if location else ""  # marks typeset
         cells = _cells(
             "td",
             where,
