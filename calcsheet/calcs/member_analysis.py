@@ -33,7 +33,7 @@ from calcsheet.calcs.design import DesignBasis, forces_by_type
 from calcsheet.errors import InputError
 from calcsheet.mechanics.distributed import DistributedLoad, check_distributed_on_member
 from calcsheet.mechanics.distributed import self_weight as self_weight_load
-from calcsheet.mechanics.frame import FrameResult, member_stiffness, solve_frame
+from calcsheet.mechanics.frame import FrameResult, member_stiffness, solve_frame, sorted_distinct
 from calcsheet.mechanics.loads import (
     AppliedMoment,
     PointLoad,
@@ -165,7 +165,7 @@ def bracing_defaults(
     supports = [held.z.to(unit) for held in analysis.supports if "rz" in held.restrains]
     segments = unbraced_segments(length, supports, list(braces))
     result = analysis.result
-    stations = np.unique(
+    stations = sorted_distinct(
         np.concatenate(
             [np.linspace(0.0, result.length, 401), result.candidate_stations(analysis.factors)]
         )
@@ -409,7 +409,7 @@ def scan_stations(
         low = scan.stations[max(at - 1, 0)]
         high = scan.stations[min(at + 1, len(scan.stations) - 1)]
         finer.append(np.linspace(low, high, _REFINE))
-    return _scan(analysis, section, basis, Fy, length, np.unique(np.concatenate(finer)))
+    return _scan(analysis, section, basis, Fy, length, sorted_distinct(np.concatenate(finer)))
 
 
 # Stations between a check's worst candidate and its neighbours, when refining.
@@ -517,7 +517,7 @@ def deflection_segments(analysis: MemberAnalysis, points: int = 401) -> list[Def
     candidates = result.candidate_stations(analysis.service_factors)
     segments = []
     for kind, a, b, between in pieces:
-        stations = np.unique(
+        stations = sorted_distinct(
             np.concatenate(
                 [np.linspace(a, b, points), candidates[(candidates >= a) & (candidates <= b)]]
             )
@@ -557,7 +557,7 @@ def force_diagrams(
 ) -> ForceDiagrams:
     """The stations and the governing and envelope force arrays (SI) along the member."""
     result = analysis.result
-    stations = np.unique(
+    stations = sorted_distinct(
         np.concatenate(
             [np.linspace(0.0, result.length, grid + 1), result.candidate_stations(analysis.factors)]
         )

@@ -639,3 +639,15 @@ def test_other_bad_entries_are_named() -> None:
             J="1 in^4",
             Ixy="1 in^4",
         )
+
+
+def test_sorted_distinct_is_numpy_unique_for_stations() -> None:
+    """sorted_distinct stands in for np.unique on station arrays (numpy's own result is the
+    reference: its documented behaviour for a flat float array)."""
+    from calcsheet.mechanics.frame import sorted_distinct
+
+    rng = np.random.default_rng(11)
+    for _ in range(500):
+        values = rng.choice(np.round(rng.uniform(-5, 10, 15), 1), size=rng.integers(0, 40))
+        values = np.append(values, [0.0, -0.0])
+        np.testing.assert_array_equal(sorted_distinct(values), np.unique(values))
