@@ -8,8 +8,9 @@ take angles in any angle unit; inverse ones return radians.
 
 from __future__ import annotations
 
+import contextlib
 import math
-from collections.abc import Callable, Mapping
+from collections.abc import Callable, Iterator, Mapping
 
 import pint
 import sympy as sp
@@ -41,12 +42,36 @@ def evaluate(
     SI base units, checked once against the pint result; anything unusual there (a
     non-finite value, a domain error) falls back to the pint walk and its message.
     """
-    fast = _fast_value(expr, values)
-    if fast is not None:
-        return fast
+    if _plans_wanted:
+        fast = _fast_value(expr, values)
+        if fast is not None:
+            return fast
     result = _evaluate_with_units(expr, values, step=step)
-    _learn(expr, values, result)
+    if _plans_wanted:
+        _learn(expr, values, result)
     return _carried(result.magnitude, result.units)
+
+
+# Compiled plans pay where a sheet is evaluated again (the form, a rebuilt sheet, a batch
+# of members sharing steps). A process that builds each sheet once and ends (``calcsheet
+# build``) turns them off: counting and compiling there was time spent for nothing.
+_plans_wanted = True
+
+
+@contextlib.contextmanager
+def compiled_plans(wanted: bool) -> Iterator[None]:
+    """Within the block, whether evaluations learn and use compiled float plans (on by
+    default; the setting before comes back after).
+
+    Results are the same either way (every plan is checked against the pint walk
+    before use, and values are carried to 12 figures): only the time differs.
+    """
+    global _plans_wanted
+    before, _plans_wanted = _plans_wanted, bool(wanted)
+    try:
+        yield
+    finally:
+        _plans_wanted = before
 
 
 # Values are carried to 12 significant figures, far beyond any engineering use, so

@@ -55,3 +55,16 @@ def test_a_value_the_float_path_cannot_take_gives_the_pint_message() -> None:
         evaluate(root, {A: Quantity(12, "in**2"), B: Quantity(10, "in**2")}, step="r")
     with pytest.raises(EvaluationError, match="step 'r'"):
         evaluate(root, {A: Quantity(8, "in**2"), B: Quantity(10, "in**2")}, step="r")
+
+
+def test_without_compiled_plans_the_values_are_the_same_and_the_setting_comes_back() -> None:
+    """A one-shot command (calcsheet build) evaluates without plans: same numbers."""
+    from calcsheet.engine import evaluate as evaluation
+
+    with_plans = [evaluate(EXPR, _values(load), step="f") for load in ("1.1 kip",) * 3]
+    with evaluation.compiled_plans(False):
+        assert not evaluation._plans_wanted
+        without = [evaluate(EXPR, _values(load), step="f") for load in ("1.1 kip",) * 3]
+    assert evaluation._plans_wanted
+    assert [q.m for q in without] == [q.m for q in with_plans]
+    assert {q.units for q in without} == {q.units for q in with_plans}
