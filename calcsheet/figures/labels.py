@@ -80,6 +80,8 @@ def _segments_cross_box(box: Box, segments: np.ndarray, bounds: np.ndarray | Non
         if not near.any():
             return False
         segments = segments[near]
+    if len(segments) <= _FEW_SEGMENTS:
+        return any(_segment_crosses_box(box, *row) for row in segments.tolist())
     x0, y0, x1, y1 = segments.T
     dx, dy = x1 - x0, y1 - y0
     t_enter, t_leave = np.zeros_like(x0), np.ones_like(x0)
@@ -92,6 +94,26 @@ def _segments_cross_box(box: Box, segments: np.ndarray, bounds: np.ndarray | Non
         t_enter = np.where(~parallel & (p < 0), np.maximum(t_enter, ratio), t_enter)
         t_leave = np.where(~parallel & (p > 0), np.minimum(t_leave, ratio), t_leave)
     return bool(np.any(possible & (t_enter <= t_leave)))
+
+
+# Up to this many segments near a box are clipped one by one: numpy's fixed cost per
+# operation is more than the arithmetic of a few segments.
+_FEW_SEGMENTS = 16
+
+
+def _segment_crosses_box(box: Box, x0: float, y0: float, x1: float, y1: float) -> bool:
+    """Liang-Barsky clipping of one segment against ``box`` (as the array form above)."""
+    dx, dy = x1 - x0, y1 - y0
+    t_enter, t_leave = 0.0, 1.0
+    for p, q in ((-dx, x0 - box.x0), (dx, box.x1 - x0), (-dy, y0 - box.y0), (dy, box.y1 - y0)):
+        if p == 0:
+            if q < 0:
+                return False
+        elif p < 0:
+            t_enter = max(t_enter, q / p)
+        else:
+            t_leave = min(t_leave, q / p)
+    return t_enter <= t_leave
 
 
 @dataclass
