@@ -31,6 +31,7 @@ Coordinates and signs
 from __future__ import annotations
 
 import math
+import weakref
 from collections.abc import Mapping
 from dataclasses import dataclass, field
 from types import MappingProxyType
@@ -204,8 +205,18 @@ class Section:
     # --- numeric view -----------------------------------------------------------------
 
     def numeric(self, length_unit: str | None = None) -> SectionNumbers:
-        """All properties as floats in ``length_unit`` (default: the section's own unit)."""
+        """All properties as floats in ``length_unit`` (default: the section's own unit).
+
+        Made once per section and unit (a rebuilt sheet asked for it some eighty times,
+        each a few dozen unit conversions); its arrays are read-only, as it is shared.
+        """
         unit = length_unit or self.length_unit
+        made = _NUMBERS.setdefault(self, {})
+        if unit not in made:
+            made[unit] = self._numbers_in(unit)
+        return made[unit]
+
+    def _numbers_in(self, unit: str) -> SectionNumbers:
         scale = float(Quantity(1.0, self.length_unit).to(unit).magnitude)
         values = {}
         for name, power in LENGTH_POWERS.items():
@@ -217,12 +228,23 @@ class Section:
             length_unit=unit,
             alpha=float(self.alpha.to("radian").magnitude),
             point_labels=tuple(point.label for point in self.points),
-            point_x=np.array([point.x.to(unit).magnitude for point in self.points]),
-            point_y=np.array([point.y.to(unit).magnitude for point in self.points]),
+            point_x=_read_only(np.array([point.x.to(unit).magnitude for point in self.points])),
+            point_y=_read_only(np.array([point.y.to(unit).magnitude for point in self.points])),
             outline=self.outline if scale == 1.0 else self.outline.scaled(scale),
             walls=tuple(wall.moved(0.0, 0.0, scale) for wall in self.walls),
             **values,
         )
+
+
+# Each section's numeric views by length unit, held as long as the section is.
+_NUMBERS: weakref.WeakKeyDictionary[Section, dict[str, SectionNumbers]] = (
+    weakref.WeakKeyDictionary()
+)
+
+
+def _read_only(array: np.ndarray) -> np.ndarray:
+    array.setflags(write=False)
+    return array
 
 
 def build_section(
