@@ -1086,16 +1086,20 @@ def _write_distributed(
         for axis in present:
             if uniform:
                 q_a[axis] = q_b[axis] = sheet.input(
-                    f"q_{axis}a{number}", load.q_start[AXES.index(axis)], f"q along {axis}"
+                    f"q_{axis}a{number}",
+                    load.q_start[AXES.index(axis)],
+                    f"Line load {{q}} along {axis}",
                 )
             else:
                 q_a[axis] = sheet.input(
                     f"q_{axis}a{number}",
                     load.q_start[AXES.index(axis)],
-                    f"q along {axis} at the start",
+                    f"Line load {{q}} along {axis} at the start",
                 )
                 q_b[axis] = sheet.input(
-                    f"q_{axis}b{number}", load.q_end[AXES.index(axis)], f"q along {axis} at the end"
+                    f"q_{axis}b{number}",
+                    load.q_end[AXES.index(axis)],
+                    f"Line load {{q}} along {axis} at the end",
                 )
     # An offset that is zero adds no terms to the statics, so it is left out (a change of
     # it rebuilds the sheet, which brings its terms in).
@@ -1121,8 +1125,8 @@ def _write_distributed(
         uniform_part = {
             axis: sheet.step(
                 f"W_{axis}u{number}", q_a[axis] * l_w,
-                f"Resultant along {axis} of the uniform part, q·l" if not uniform
-                else f"Resultant along {axis}, q·l",
+                f"Resultant along {axis} of the uniform part, {{q}}·{{l}}" if not uniform
+                else f"Resultant along {axis}, {{q}}·{{l}}",
             )
             for axis in present
         }  # fmt: skip
@@ -1165,7 +1169,7 @@ def _write_distributed(
             q_c = {
                 axis: sheet.step(
                     f"q_{axis}c{number}", q_a[axis] + (q_b[axis] - q_a[axis]) * (z_s - z_a) / l_w,
-                    f"q along {axis} at the station",
+                    f"Line load {{q}} along {axis} at the station",
                 )
                 for axis in present
             }  # fmt: skip
@@ -1503,7 +1507,7 @@ def _write_section_properties(
         props["A_m"] = sheet.input(
             "A_m",
             Quantity(rule.enclosed_area, f"{unit}**2"),
-            "Area inside the wall mid-line, (B − t)·(H − t), square corners",
+            "Area inside the wall mid-line, ({B} − {t})·({H} − {t}), square corners",
             reference="section dimensions",
             computed=True,
         )

@@ -40,7 +40,7 @@ CHORDS_PER_QUARTER_CIRCLE = 32
 POINTS_AROUND_ROUND = 24
 
 ZERO_WARPING = "taken as zero (closed or solid section: warping is negligible)"
-THIN_WALLED_J = "computed: thin-walled open section, J = Σ b·t³/3 (no fillets)"
+THIN_WALLED_J = "computed: thin-walled open section, {J} = Σ{b}·{t}³/3 (no fillets)"
 THIN_WALLED_CW = "computed: thin-walled approximation (no fillets)"
 
 
@@ -234,7 +234,7 @@ def round_bar(diameter: float, unit: str) -> ShapeOutline:
         Outline([_circle(radius, radius, radius)]),
         _round_points(radius, radius),
         math.pi * diameter**4 / 32.0,
-        "computed: solid circle, J = π·D⁴/32",
+        "computed: solid circle, {J} = π·{D}⁴/32",
         0.0,
         ZERO_WARPING,
     )
@@ -252,7 +252,7 @@ def round_tube(outside_diameter: float, wall: float, unit: str) -> ShapeOutline:
         Outline(rings),
         _round_points(radius, radius),
         math.pi * (outside_diameter**4 - inside**4) / 32.0,
-        "computed: circular tube, J = π·(OD⁴ − ID⁴)/32",
+        "computed: circular tube, {J} = π·({OD}⁴ − {ID}⁴)/32",
         0.0,
         ZERO_WARPING,
     )
@@ -296,7 +296,7 @@ def rectangular_tube(
         Outline([outer, inner]),
         points,
         4 * enclosed**2 * wall / perimeter,
-        "computed: Bredt, J = 4·Am²·t/p on the wall mid-line "
+        "computed: Bredt, {J} = 4·{A_m}²·{t}/{p} on the wall mid-line "
         f"(corner radius {midline_radius / wall:g}t)",
         0.0,
         ZERO_WARPING,
@@ -394,7 +394,12 @@ def i_shape(
     # Guide 9, from memory).
     warping = flange_distance**2 * top_inertia * bottom_inertia / (top_inertia + bottom_inertia)
     return ShapeOutline(
-        Outline([ring]), points, torsion, THIN_WALLED_J, warping, THIN_WALLED_CW + ", h0²·I1·I2/ΣI"
+        Outline([ring]),
+        points,
+        torsion,
+        THIN_WALLED_J,
+        warping,
+        THIN_WALLED_CW + ", {h_0}²·{I_1}·{I_2}/Σ{I}",
     )
 
 
