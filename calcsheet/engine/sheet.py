@@ -51,6 +51,7 @@ from calcsheet.units import (
     format_as_typed,
     format_count,
     format_number,
+    linear_factor,
     parse_quantity,
     parse_unit,
     unit_factors,
@@ -766,23 +767,13 @@ def _known_unit(text: str) -> pint.Unit | None:
         return None
 
 
-@lru_cache(maxsize=1024)
-def _display_factor(units: pint.Unit, unit: pint.Unit | None) -> float | None:
-    """The factor from ``units`` to a display unit; None for a unit with an offset (°C),
-    converted by pint each time. Found once per pair: a rebuilt sheet shows some two
-    hundred values in a dozen units, and pint's conversion was a tenth of the rebuild."""
-    target = unit if unit is not None else "dimensionless"
-    one, zero = ureg.Quantity(1.0, units).to(target), ureg.Quantity(0.0, units).to(target)
-    return float(one.magnitude) if float(zero.magnitude) == 0.0 else None
-
-
 def _to_display(quantity: pint.Quantity, unit: pint.Unit | None, where: str) -> pint.Quantity:
+    shown = unit if unit is not None else ureg.dimensionless
     try:
-        factor = _display_factor(quantity.units, unit)
+        factor = linear_factor(quantity.units, shown)
         if factor is None:
-            converted = quantity.to(unit) if unit is not None else quantity.to("dimensionless")
+            converted = quantity.to(shown)
         else:
-            shown = unit if unit is not None else ureg.dimensionless
             converted = ureg.Quantity(quantity.magnitude * factor, shown)
     except pint.DimensionalityError:
         raise DimensionError(

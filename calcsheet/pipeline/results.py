@@ -20,7 +20,7 @@ import pint
 from calcsheet import __version__
 from calcsheet.engine import Check, Heading, Sheet, Step
 from calcsheet.engine.marked_text import plain_text
-from calcsheet.units import ureg
+from calcsheet.units import linear_factor, ureg
 
 # 1: files of calcsheet 0.1.0 (the trace line under "stamp"); 2: "trace", "points",
 # and per check the combination, station, demand and capacity.
@@ -56,6 +56,7 @@ def _power(symbol: str, exponent: float) -> str:
     return symbol + (text.translate(_SUPERSCRIPTS) if text.isdigit() else f"^{text}")
 
 
+@lru_cache(maxsize=512)
 def unit_name(unit: pint.Unit) -> str:
     """A unit as an engineer writes it: ``kip·ft``, ``in⁴``, ``kN/m``, ``ksi``.
 
@@ -72,22 +73,32 @@ def unit_name(unit: pint.Unit) -> str:
     return text
 
 
-def si_quantity(quantity: pint.Quantity) -> tuple[float, str]:
-    """The value in the SI unit of its kind and that unit's written name.
+@lru_cache(maxsize=512)
+def _si_unit(units: pint.Unit) -> tuple[pint.Unit, str]:
+    """The SI unit a value in ``units`` is written in, and that unit's written name.
 
     Angles in rad, plain numbers with no unit (``""``); a kind of quantity not in the
     list falls back on SI base units, written the same way.
     """
-    base = quantity.to_base_units()
-    if base.units == ureg.radian:
-        return float(base.magnitude), "rad"
+    base = ureg.Quantity(1.0, units).to_base_units().units
+    if base == ureg.radian:
+        return base, "rad"
     if base.dimensionless:
-        return float(base.magnitude), ""
-    named = _si_by_dimension().get(quantity.dimensionality)
+        return base, ""
+    named = _si_by_dimension().get(units.dimensionality)
     if named is None:
-        return float(base.magnitude), unit_name(base.units)
+        return base, unit_name(base)
     name, unit = named
-    return float(quantity.to(unit).magnitude), name
+    return unit, name
+
+
+def si_quantity(quantity: pint.Quantity) -> tuple[float, str]:
+    """The value in the SI unit of its kind and that unit's written name."""
+    unit, name = _si_unit(quantity.units)
+    factor = linear_factor(quantity.units, unit)
+    if factor is None:  # a unit with an offset: pint's own conversion
+        return float(quantity.to(unit).magnitude), name
+    return float(quantity.magnitude) * factor, name
 
 
 def _number(value: float | None) -> float | None:
@@ -97,26 +108,12 @@ def _number(value: float | None) -> float | None:
     return float(value)
 
 
-@lru_cache(maxsize=512)
-def _unit_forms(units: pint.Unit) -> tuple[str, float | None, str]:
-    """A unit's written name, the factor to the SI unit of its kind and that unit's name.
-
-    Found once per unit: a sheet writes a few thousand values in a few dozen units, and
-    asking pint each time was a fifth of a batch member's time. The factor is None for
-    a unit with an offset (degrees Celsius), converted the long way.
-    """
-    one, zero = si_quantity(ureg.Quantity(1.0, units)), si_quantity(ureg.Quantity(0.0, units))
-    return unit_name(units), (one[0] if zero[0] == 0.0 else None), one[1]
-
-
 def quantity_data(quantity: pint.Quantity) -> dict[str, Any]:
     """``value`` and ``unit`` as the sheet shows them; ``si_value`` and ``si_unit``."""
-    written, factor, si_unit = _unit_forms(quantity.units)
-    magnitude = float(quantity.magnitude)
-    si_value = magnitude * factor if factor is not None else si_quantity(quantity)[0]
+    si_value, si_unit = si_quantity(quantity)
     return {
-        "value": _number(magnitude),
-        "unit": written,
+        "value": _number(float(quantity.magnitude)),
+        "unit": unit_name(quantity.units),
         "si_value": _number(si_value),
         "si_unit": si_unit,
     }
