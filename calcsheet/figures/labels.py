@@ -61,48 +61,26 @@ def text_box(center: Point, text: str, size: float = FONT_SIZE) -> Box:
     )
 
 
-def _segments_cross_box(box: Box, segments: np.ndarray, bounds: np.ndarray | None = None) -> bool:
-    """Liang-Barsky clipping of many segments (rows x0, y0, x1, y1) against one box.
+def _segments_cross_box(box: Box, segments: np.ndarray, bounds: np.ndarray) -> bool:
+    """Whether any of the segments (rows x0, y0, x1, y1) crosses ``box``.
 
-    ``bounds`` (rows min x, min y, max x, max y of each segment), when given, first drops
-    the segments whose own box misses ``box``: most do, and a figure tries hundreds of
-    label spots (clipping them all was a tenth of a rebuilt sheet's time).
+    ``bounds`` (rows min x, min y, max x, max y of each segment) first drops the segments
+    whose own box misses ``box``: most do, and a figure tries hundreds of label spots. The
+    few left are clipped one by one (numpy's cost per call is more than their arithmetic).
     """
     if segments.size == 0:
         return False
-    if bounds is not None:
-        near = (
-            (bounds[:, 0] <= box.x1)
-            & (bounds[:, 2] >= box.x0)
-            & (bounds[:, 1] <= box.y1)
-            & (bounds[:, 3] >= box.y0)
-        )
-        if not near.any():
-            return False
-        segments = segments[near]
-    if len(segments) <= _FEW_SEGMENTS:
-        return any(_segment_crosses_box(box, *row) for row in segments.tolist())
-    x0, y0, x1, y1 = segments.T
-    dx, dy = x1 - x0, y1 - y0
-    t_enter, t_leave = np.zeros_like(x0), np.ones_like(x0)
-    possible = np.ones_like(x0, dtype=bool)
-    for p, q in ((-dx, x0 - box.x0), (dx, box.x1 - x0), (-dy, y0 - box.y0), (dy, box.y1 - y0)):
-        parallel = p == 0
-        possible &= ~(parallel & (q < 0))
-        with np.errstate(divide="ignore", invalid="ignore"):
-            ratio = np.where(parallel, 0.0, q / np.where(parallel, 1.0, p))
-        t_enter = np.where(~parallel & (p < 0), np.maximum(t_enter, ratio), t_enter)
-        t_leave = np.where(~parallel & (p > 0), np.minimum(t_leave, ratio), t_leave)
-    return bool(np.any(possible & (t_enter <= t_leave)))
-
-
-# Up to this many segments near a box are clipped one by one: numpy's fixed cost per
-# operation is more than the arithmetic of a few segments.
-_FEW_SEGMENTS = 16
+    near = (
+        (bounds[:, 0] <= box.x1)
+        & (bounds[:, 2] >= box.x0)
+        & (bounds[:, 1] <= box.y1)
+        & (bounds[:, 3] >= box.y0)
+    )
+    return any(_segment_crosses_box(box, *row) for row in segments[near].tolist())
 
 
 def _segment_crosses_box(box: Box, x0: float, y0: float, x1: float, y1: float) -> bool:
-    """Liang-Barsky clipping of one segment against ``box`` (as the array form above)."""
+    """Liang-Barsky clipping of one segment against ``box``."""
     dx, dy = x1 - x0, y1 - y0
     t_enter, t_leave = 0.0, 1.0
     for p, q in ((-dx, x0 - box.x0), (dx, box.x1 - x0), (-dy, y0 - box.y0), (dy, box.y1 - y0)):
